@@ -1,0 +1,96 @@
+package org.holdpoint.stats;
+
+/**
+ * An equivalence margin (L, U) for the difference after − before, in the characteristic's unit.
+ * Either bound may be absent: only L is a non-inferiority margin ("may drop by at most |L|"), only U
+ * its mirror ("may rise by at most U"). A present L must be &lt; 0 and a present U &gt; 0.
+ *
+ * @param lower L, or null when only an upper margin is set
+ * @param upper U, or null when only a lower margin is set
+ */
+public record Margin(Double lower, Double upper) {
+
+    /** Validates the margin. */
+    public Margin {
+        if (lower == null && upper == null) {
+            throw new StatsException("a margin needs a lower bound, an upper bound or both");
+        }
+        if (lower != null && !(lower < 0 && Double.isFinite(lower))) {
+            throw new StatsException("the lower margin must be negative and finite (the margin must contain 0), got %s",
+                    lower);
+        }
+        if (upper != null && !(upper > 0 && Double.isFinite(upper))) {
+            throw new StatsException("the upper margin must be positive and finite (the margin must contain 0), got %s",
+                    upper);
+        }
+    }
+
+    /**
+     * The two-sided margin (L, U), asymmetric allowed.
+     *
+     * @param lower L &lt; 0
+     * @param upper U &gt; 0
+     * @return the margin
+     */
+    public static Margin of(double lower, double upper) {
+        return new Margin(lower, upper);
+    }
+
+    /**
+     * The symmetric margin (−D, D).
+     *
+     * @param d D &gt; 0
+     * @return the margin
+     */
+    public static Margin symmetric(double d) {
+        if (!(d > 0)) {
+            throw new StatsException("a symmetric margin must be positive, got %s", d);
+        }
+        return new Margin(-d, d);
+    }
+
+    /**
+     * A margin as percentages of the tolerance width: L = −pL·(USL − LSL)/100, U = pU·(USL − LSL)/100.
+     *
+     * @param percentLower pL &gt; 0, or NaN for no lower bound
+     * @param percentUpper pU &gt; 0, or NaN for no upper bound
+     * @param lsl          lower specification limit
+     * @param usl          upper specification limit, &gt; LSL
+     * @return the margin in the characteristic's unit
+     */
+    public static Margin percentOfTolerance(double percentLower, double percentUpper, double lsl, double usl) {
+        if (!(usl > lsl) || !Double.isFinite(usl - lsl)) {
+            throw new StatsException("a margin in percent of tolerance needs LSL < USL, got LSL = %s, USL = %s", lsl,
+                    usl);
+        }
+        double width = usl - lsl;
+        Double lo = Double.isNaN(percentLower) ? null : -checkPercent(percentLower) * width / 100;
+        Double hi = Double.isNaN(percentUpper) ? null : checkPercent(percentUpper) * width / 100;
+        return new Margin(lo, hi);
+    }
+
+    private static double checkPercent(double p) {
+        if (p > 0 && p < 1000) {
+            return p;
+        }
+        throw new StatsException("a margin in percent of tolerance must be positive, got %s", p);
+    }
+
+    /** @return the kind of claim this margin supports */
+    public Claim claim() {
+        if (lower != null && upper != null) {
+            return Claim.EQUIVALENCE;
+        }
+        return lower != null ? Claim.NON_INFERIORITY : Claim.NON_SUPERIORITY;
+    }
+
+    /** The claim a margin supports. */
+    public enum Claim {
+        /** L &lt; δ &lt; U. */
+        EQUIVALENCE,
+        /** δ &gt; L only (a drop of at most |L|). */
+        NON_INFERIORITY,
+        /** δ &lt; U only (a rise of at most U). */
+        NON_SUPERIORITY
+    }
+}

@@ -1,0 +1,210 @@
+package org.holdpoint.stats;
+
+import java.math.BigDecimal;
+import java.util.Arrays;
+
+/**
+ * One group's measured values in their input (run) order, immutable.
+ *
+ * <p>Each value is the correctly rounded binary64 of its decimal text. When the decimals are known
+ * exactly (as unscaled integers at one common scale) the sample keeps them too, so that moments can
+ * be computed from exact decimal residuals (see {@link Descriptives}); otherwise only the doubles are
+ * kept. −0.0 is normalised to 0.0 and NaN or infinite values are rejected.
+ */
+public final class Sample {
+    private static final long MAX_EXACT = 1L << 53;
+    private static final double[] POW10 = new double[23];
+
+    static {
+        double p = 1;
+        for (int i = 0; i < POW10.length; i++) {
+            POW10[i] = p;
+            p *= 10;
+        }
+    }
+
+    private final double[] values;
+    private final long[] unscaled;
+    private final int scale;
+
+    private Sample(double[] values, long[] unscaled, int scale) {
+        this.values = values;
+        this.unscaled = unscaled;
+        this.scale = scale;
+    }
+
+    /**
+     * A sample of binary64 values (no exact decimals known).
+     *
+     * @param values the values in run order; copied
+     * @return the sample
+     * @throws StatsException if a value is NaN or infinite
+     */
+    public static Sample of(double... values) {
+        double[] copy = new double[values.length];
+        for (int i = 0; i < values.length; i++) {
+            copy[i] = checkFinite(values[i], i) + 0.0;
+        }
+        return new Sample(copy, null, 0);
+    }
+
+    /**
+     * A sample parsed from decimal texts; the exact decimals are kept when they fit a common scale.
+     *
+     * @param texts decimal numbers such as {@code "10000000.2"} or {@code "-1.5E-3"}
+     * @return the sample
+     * @throws StatsException if a text is not a finite decimal number
+     */
+    public static Sample ofDecimals(String... texts) {
+        BigDecimal[] decimals = new BigDecimal[texts.length];
+        for (int i = 0; i < texts.length; i++) {
+            try {
+                decimals[i] = new BigDecimal(texts[i].trim());
+            } catch (NumberFormatException e) {
+                throw new StatsException("value %d (\"%s\") is not a decimal number", i + 1, texts[i]);
+            }
+        }
+        return ofDecimals(decimals);
+    }
+
+    /**
+     * A sample of exact decimals; the doubles are their correctly rounded values.
+     *
+     * @param decimals the values in run order
+     * @return the sample
+     */
+    public static Sample ofDecimals(BigDecimal... decimals) {
+        int commonScale = 0;
+        for (BigDecimal d : decimals) {
+            commonScale = Math.max(commonScale, d.scale());
+        }
+        double[] doubles = new double[decimals.length];
+        long[] units = commonScale <= 18 ? new long[decimals.length] : null;
+        for (int i = 0; i < decimals.length; i++) {
+            doubles[i] = checkFinite(decimals[i].doubleValue(), i) + 0.0;
+            if (units != null) {
+                try {
+                    units[i] = decimals[i].setScale(commonScale).unscaledValue().longValueExact();
+                } catch (ArithmeticException e) {
+                    units = null;
+                }
+            }
+        }
+        return new Sample(doubles, units, units == null ? 0 : commonScale);
+    }
+
+    /**
+     * A sample of exact decimals given as unscaled integers at one scale (value = unscaled·10^−scale),
+     * the fast door used by the importers; the doubles are computed correctly rounded.
+     *
+     * @param unscaled the unscaled integers, copied
+     * @param scale    the common number of decimal places, 0..18
+     * @return the sample
+     */
+    public static Sample ofUnscaled(long[] unscaled, int scale) {
+        if (scale < 0 || scale > 18) {
+            throw new StatsException("decimal scale must lie in 0..18, got %d", scale);
+        }
+        long[] units = unscaled.clone();
+        double[] doubles = new double[units.length];
+        for (int i = 0; i < units.length; i++) {
+            doubles[i] = toDouble(units[i], scale) + 0.0;
+        }
+        return new Sample(doubles, units, scale);
+    }
+
+    /**
+     * The correctly rounded double of unscaled·10^−scale: one IEEE division of exact operands when
+     * |unscaled| &lt; 2⁵³ (Clinger 1990, the fast path), otherwise through {@link BigDecimal}.
+     */
+    static double toDouble(long unscaled, int scale) {
+        if (Math.abs(unscaled) < MAX_EXACT && scale < POW10.length) {
+            return scale == 0 ? (double) unscaled : (double) unscaled / POW10[scale];
+        }
+        return BigDecimal.valueOf(unscaled, scale).doubleValue();
+    }
+
+    private static double checkFinite(double v, int index) {
+        if (Double.isNaN(v) || Double.isInfinite(v)) {
+            throw new StatsException("value %d is not a finite number (%s)", index + 1, v);
+        }
+        return v;
+    }
+
+    /** @return the number of values */
+    public int size() {
+        return values.length;
+    }
+
+    /**
+     * @param i the 0-based position in run order
+     * @return the value at that position
+     */
+    public double value(int i) {
+        return values[i];
+    }
+
+    /** @return a copy of the values in run order */
+    public double[] values() {
+        return values.clone();
+    }
+
+    /** @return the values without copying; callers in this package must not modify them */
+    double[] raw() {
+        return values;
+    }
+
+    /** @return whether exact decimals are known for every value */
+    public boolean hasExactDecimals() {
+        return unscaled != null;
+    }
+
+    /** @return the unscaled decimals (not copied) or null; package use only */
+    long[] unscaled() {
+        return unscaled;
+    }
+
+    /** @return the common decimal scale of {@link #unscaled()} */
+    int scale() {
+        return scale;
+    }
+
+    /**
+     * The sample without the values at the given 0-based positions (for user exclusions).
+     *
+     * @param excluded positions to leave out
+     * @return a new sample, run order kept
+     */
+    public Sample without(int... excluded) {
+        boolean[] drop = new boolean[values.length];
+        for (int i : excluded) {
+            if (i < 0 || i >= values.length) {
+                throw new StatsException("position %d is outside the sample of %d values", i, values.length);
+            }
+            drop[i] = true;
+        }
+        int kept = 0;
+        for (boolean d : drop) {
+            kept += d ? 0 : 1;
+        }
+        double[] v = new double[kept];
+        long[] u = unscaled == null ? null : new long[kept];
+        int k = 0;
+        for (int i = 0; i < values.length; i++) {
+            if (!drop[i]) {
+                v[k] = values[i];
+                if (u != null) {
+                    u[k] = unscaled[i];
+                }
+                k++;
+            }
+        }
+        return new Sample(v, u, scale);
+    }
+
+    @Override
+    public String toString() {
+        return "Sample" + Arrays.toString(values.length > 10 ? Arrays.copyOf(values, 10) : values)
+                + (values.length > 10 ? "… (" + values.length + ")" : "");
+    }
+}

@@ -1,0 +1,52 @@
+package org.holdpoint.study;
+
+/**
+ * The criteria for one characteristic; any field may be null (not set). Settings are merged:
+ * {@link #overriddenBy(CharacteristicSettings)} takes every field the other sets.
+ *
+ * @param unit                  unit of measure
+ * @param spec                  specification limits (fields individually nullable)
+ * @param margin                the equivalence margin as entered
+ * @param sdGrowthLimit         the largest acceptable σ_after/σ_before, or null
+ * @param capabilityRequirement the minimum acceptable capability index (judged on the lower bound), or null
+ * @param paired                whether the same units were measured before and after, or null (from layout)
+ */
+public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
+        Double capabilityRequirement, Boolean paired) {
+    /** Nothing set. */
+    public static final CharacteristicSettings EMPTY = new CharacteristicSettings(null, SpecLimits.NONE, null, null,
+            null, null);
+
+    /** Normalises a null spec to {@link SpecLimits#NONE}. */
+    public CharacteristicSettings {
+        spec = spec == null ? SpecLimits.NONE : spec;
+        if (sdGrowthLimit != null && !(sdGrowthLimit > 0)) {
+            throw new org.holdpoint.stats.StatsException("the sd-growth limit must be positive, got %s", sdGrowthLimit);
+        }
+        if (capabilityRequirement != null && !(capabilityRequirement > 0)) {
+            throw new org.holdpoint.stats.StatsException("the capability requirement must be positive, got %s",
+                    capabilityRequirement);
+        }
+    }
+
+    /**
+     * These settings with every field that {@code other} sets taken from {@code other}.
+     *
+     * @param other the settings that win
+     * @return the merged settings
+     */
+    public CharacteristicSettings overriddenBy(CharacteristicSettings other) {
+        if (other == null) {
+            return this;
+        }
+        SpecLimits s = new SpecLimits(pick(other.spec.lsl(), spec.lsl()), pick(other.spec.nominal(), spec.nominal()),
+                pick(other.spec.usl(), spec.usl()));
+        return new CharacteristicSettings(pick(other.unit, unit), s, pick(other.margin, margin),
+                pick(other.sdGrowthLimit, sdGrowthLimit), pick(other.capabilityRequirement, capabilityRequirement),
+                pick(other.paired, paired));
+    }
+
+    private static <T> T pick(T preferred, T fallback) {
+        return preferred != null ? preferred : fallback;
+    }
+}

@@ -1,0 +1,68 @@
+package org.holdpoint.study;
+
+import org.holdpoint.stats.Margin;
+
+/**
+ * An equivalence margin as the user entered it: in the characteristic's unit, or as percentages of
+ * the tolerance width USL − LSL. Either side may be absent (a one-sided margin).
+ *
+ * @param kind  how the numbers are meant
+ * @param lower L (negative, in units) or the lower percentage (positive), or null
+ * @param upper U (positive, in units) or the upper percentage (positive), or null
+ */
+public record MarginSpec(Kind kind, Double lower, Double upper) {
+
+    /** How a margin was entered. */
+    public enum Kind {
+        /** In the characteristic's unit. */
+        ABSOLUTE,
+        /** As a percentage of the tolerance width USL − LSL. */
+        PERCENT_OF_TOLERANCE
+    }
+
+    /** Validates the spec. */
+    public MarginSpec {
+        if (kind == null) {
+            throw new IllegalArgumentException("margin kind is required");
+        }
+        if (lower == null && upper == null) {
+            throw new IllegalArgumentException("a margin needs at least one bound");
+        }
+    }
+
+    /**
+     * The margin in the characteristic's unit.
+     *
+     * @param spec the specification limits (used for percentages)
+     * @return the margin
+     * @throws org.holdpoint.stats.StatsException if the margin does not contain 0 or percentages lack limits
+     */
+    public Margin resolve(SpecLimits spec) {
+        if (kind == Kind.ABSOLUTE) {
+            return new Margin(lower, upper);
+        }
+        if (spec == null || spec.lsl() == null || spec.usl() == null) {
+            throw new org.holdpoint.stats.StatsException(
+                    "a margin in percent of tolerance needs both LSL and USL; set them or give the margin in units");
+        }
+        return Margin.percentOfTolerance(lower == null ? Double.NaN : lower, upper == null ? Double.NaN : upper,
+                spec.lsl(), spec.usl());
+    }
+
+    /** @return how the margin was set, in words, e.g. "±10 % of tolerance" */
+    public String describe() {
+        String unit = kind == Kind.ABSOLUTE ? "" : " % of tolerance";
+        if (lower != null && upper != null) {
+            return kind == Kind.ABSOLUTE ? "(" + fmt(lower) + ", " + fmt(upper) + ") in units"
+                    : "-" + fmt(lower) + unit + " / +" + fmt(upper) + unit;
+        }
+        if (lower != null) {
+            return "lower only: " + (kind == Kind.ABSOLUTE ? fmt(lower) + " in units" : "-" + fmt(lower) + unit);
+        }
+        return "upper only: " + (kind == Kind.ABSOLUTE ? fmt(upper) + " in units" : "+" + fmt(upper) + unit);
+    }
+
+    private static String fmt(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
+    }
+}
