@@ -1,0 +1,290 @@
+package org.holdpoint.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.holdpoint.importer.ImportRequest;
+import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.Exclusion;
+import org.holdpoint.study.Layout;
+import org.holdpoint.study.MarginSpec;
+import org.holdpoint.study.SpecLimits;
+import org.holdpoint.workflow.AnalysisOutcome;
+import org.holdpoint.workflow.AnalyzeUseCase;
+import org.holdpoint.workflow.ConsoleProgress;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code holdpoint analyze}: import before/after data, compare every characteristic, give the verdict. */
+@Command(name = "analyze", mixinStandardHelpOptions = true, sortOptions = false, usageHelpAutoWidth = true,
+        header = "Compare before and after samples of every characteristic and give the verdict.",
+        description = {
+            "Reads FILE (CSV, TSV, TXT, XLSX or XLS), or a before file and an after file, detects the layout "
+                    + "(stacked, side by side, wide or paired) unless told, and for every characteristic reports "
+                    + "descriptives, the difference test (Welch by default), equivalence by two one-sided tests "
+                    + "against the margin, and the spread checks.",
+            "Per-characteristic criteria come from --settings FILE or from NAME.settings.csv (or .json) beside "
+                    + "the data file. Options given here apply to every characteristic and override that file.",
+            "Without a margin the difference tests still run and the output says that equivalence was not "
+                    + "assessed."},
+        footer = {"", "Examples:", "  holdpoint analyze sample-data/boring-bar-insert.csv",
+            "  holdpoint analyze data.xlsx --sheet Results --margin 0.01 --json result.json",
+            "  holdpoint analyze --before old.csv --after new.xlsx --margin-percent 10 --lsl 24.98 --usl 25.02",
+            "", "Exit codes: 0 analysed, 2 bad input (the message names the file, sheet and cell)."})
+final class AnalyzeCommand implements Callable<Integer> {
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE", description = "The data file holding both groups.")
+    Path file;
+
+    @CommandLine.ArgGroup(exclusive = false, heading = "%nInput%n", order = 1)
+    InputOptions input = new InputOptions();
+
+    @CommandLine.ArgGroup(exclusive = false, heading = "%nCriteria (apply to every characteristic)%n", order = 2)
+    CriteriaOptions criteria = new CriteriaOptions();
+
+    @CommandLine.ArgGroup(exclusive = false, heading = "%nMethod%n", order = 3)
+    MethodOptions method = new MethodOptions();
+
+    @CommandLine.ArgGroup(exclusive = false, heading = "%nOutput%n", order = 4)
+    OutputOptions output = new OutputOptions();
+
+    static final class InputOptions {
+        @Option(names = "--before", paramLabel = "FILE", description = "File of the before group (with --after).")
+        Path before;
+        @Option(names = "--after", paramLabel = "FILE", description = "File of the after group (with --before).")
+        Path after;
+        @Option(names = "--sheet", paramLabel = "NAME|INDEX", description = "Sheet to read (default: the first "
+                + "sheet that holds data).")
+        String sheet;
+        @Option(names = "--before-sheet", paramLabel = "NAME|INDEX", description = "Sheet of the before file.")
+        String beforeSheet;
+        @Option(names = "--after-sheet", paramLabel = "NAME|INDEX", description = "Sheet of the after file.")
+        String afterSheet;
+        @Option(names = "--layout", paramLabel = "LAYOUT", description = "stacked, side-by-side, wide or paired "
+                + "(default: detected and stated in the output).", converter = LayoutConverter.class)
+        Layout layout;
+        @Option(names = "--paired", description = "The same units were measured before and after: match the "
+                + "before and after values by unit id and use the paired tests.")
+        boolean paired;
+        @Option(names = "--group-column", paramLabel = "COLUMN", description = "Header of the column that says "
+                + "before or after.")
+        String groupColumn;
+        @Option(names = "--value-column", paramLabel = "COLUMN", description = "Header of the value column.")
+        String valueColumn;
+        @Option(names = {"--characteristic-column", "--characteristic"}, paramLabel = "COLUMN",
+                description = "Header of the column naming the characteristic (stacked layout).")
+        String characteristicColumn;
+        @Option(names = "--before-column", paramLabel = "COLUMN", description = "Header of the before column.")
+        String beforeColumn;
+        @Option(names = "--after-column", paramLabel = "COLUMN", description = "Header of the after column.")
+        String afterColumn;
+        @Option(names = "--before-label", paramLabel = "TEXT", description = "Group label of before rows "
+                + "(default: before).")
+        String beforeLabel;
+        @Option(names = "--after-label", paramLabel = "TEXT", description = "Group label of after rows "
+                + "(default: after).")
+        String afterLabel;
+        @Option(names = "--unit-column", paramLabel = "COLUMN", description = "Header of the part unit or serial "
+                + "id column (default: unit, when present).")
+        String unitColumn;
+        @Option(names = "--lot-column", paramLabel = "COLUMN", description = "Header of the lot or batch column.")
+        String lotColumn;
+        @Option(names = "--subgroup-column", paramLabel = "COLUMN", description = "Header of the subgroup column.")
+        String subgroupColumn;
+        @Option(names = "--sequence-column", paramLabel = "COLUMN", description = "Header of the sequence or "
+                + "timestamp column.")
+        String sequenceColumn;
+        @Option(names = "--delimiter", paramLabel = "CHAR", description = "Field delimiter of a text file "
+                + "(default: detected). Use 'tab' for a tab.")
+        String delimiter;
+        @Option(names = "--decimal", paramLabel = "CHAR", description = "Decimal separator of a text file: . or , "
+                + "(default: detected).")
+        Character decimal;
+        @Option(names = "--header-row", paramLabel = "ROW", description = "1-based row of the header (default: "
+                + "detected).")
+        Integer headerRow;
+        @Option(names = "--settings", paramLabel = "FILE", description = "Per-characteristic criteria file (CSV "
+                + "or JSON).")
+        Path settings;
+    }
+
+    static final class CriteriaOptions {
+        @Option(names = "--margin", paramLabel = "D", description = "Symmetric equivalence margin (-D, D) in the "
+                + "characteristic's unit.")
+        Double margin;
+        @Option(names = "--margin-lower", paramLabel = "L", description = "Lower margin L < 0 (alone: "
+                + "non-inferiority, the difference may drop by at most |L|).")
+        Double marginLower;
+        @Option(names = "--margin-upper", paramLabel = "U", description = "Upper margin U > 0 (alone: the "
+                + "difference may rise by at most U).")
+        Double marginUpper;
+        @Option(names = "--margin-percent", paramLabel = "P", description = "Symmetric margin as P %% of the "
+                + "tolerance width USL - LSL.")
+        Double marginPercent;
+        @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
+        Double lsl;
+        @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
+        Double nominal;
+        @Option(names = "--usl", paramLabel = "X", description = "Upper specification limit.")
+        Double usl;
+        @Option(names = "--unit", paramLabel = "TEXT", description = "Unit of measure, e.g. mm.")
+        String unit;
+        @Option(names = "--sd-growth-limit", paramLabel = "R", description = "Largest acceptable "
+                + "sd(after)/sd(before); judged on its upper confidence bound.")
+        Double sdGrowthLimit;
+    }
+
+    static final class MethodOptions {
+        @Option(names = "--alpha", paramLabel = "A", defaultValue = "0.05", description = "Significance level, "
+                + "0 < A < 0.5 (default: ${DEFAULT-VALUE}). Difference intervals are (1-A), equivalence "
+                + "intervals (1-2A).")
+        double alpha = 0.05;
+        @Option(names = "--equal-variances", description = "Assert equal variances: the pooled tests decide "
+                + "instead of Welch's.")
+        boolean equalVariances;
+        @Option(names = "--holm", description = "Holm-adjust the difference p-values across characteristics.")
+        boolean holm;
+        @Option(names = "--exclude", paramLabel = "CELL=REASON", description = "Leave out the value at CELL "
+                + "(e.g. C12 or Data!C12) for the stated reason; repeatable. The reason is recorded.")
+        List<String> exclude = new ArrayList<>();
+    }
+
+    static final class OutputOptions {
+        @Option(names = "--json", paramLabel = "FILE", description = "Also write the machine-readable result.")
+        Path json;
+        @Option(names = {"-q", "--quiet"}, description = "Print only the verdict and the cautions.")
+        boolean quiet;
+    }
+
+    /** Converts layout names such as side-by-side. */
+    static final class LayoutConverter implements CommandLine.ITypeConverter<Layout> {
+        @Override
+        public Layout convert(String value) {
+            String v = value.trim().toLowerCase(java.util.Locale.ROOT).replace('-', '_').replace(' ', '_');
+            for (Layout l : Layout.values()) {
+                if (l.name().toLowerCase(java.util.Locale.ROOT).equals(v) && l != Layout.SEPARATE) {
+                    return l;
+                }
+            }
+            throw new CommandLine.TypeConversionException("'" + value + "' is not a layout; use stacked, "
+                    + "side-by-side, wide or paired");
+        }
+    }
+
+    @Override
+    public Integer call() throws IOException {
+        ImportRequest request = importRequest();
+        AnalysisSettings settings = settings();
+        AnalysisOutcome outcome = new AnalyzeUseCase().run(request, input.settings, settings,
+                new ConsoleProgress(spec.commandLine().getErr(), false));
+        TextOutput text = new TextOutput(spec.commandLine().getOut());
+        text.print(outcome.data(), outcome.settings(), outcome.result());
+        if (output.json != null) {
+            try {
+                AnalyzeUseCase.writeJson(outcome, output.json);
+            } catch (IOException e) {
+                throw new UserInputException("cannot write the JSON result to %s (%s); check the folder exists and "
+                        + "is writable", output.json, e.getMessage());
+            }
+        }
+        return ExitCodes.OK;
+    }
+
+    ImportRequest importRequest() {
+        InputOptions in = input;
+        if (file == null && (in.before == null || in.after == null)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "give a data FILE, or both --before FILE and --after FILE");
+        }
+        if (file != null && (in.before != null || in.after != null)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "give either a data FILE or --before/--after files, not both");
+        }
+        for (Path p : new Path[] {file, in.before, in.after}) {
+            if (p != null && !Files.exists(p)) {
+                throw new UserInputException("%s: file not found; check the path", p);
+            }
+        }
+        Character delim = null;
+        if (in.delimiter != null) {
+            String d = in.delimiter.equalsIgnoreCase("tab") ? "\t" : in.delimiter;
+            if (d.length() != 1) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--delimiter must be one character or 'tab', got '" + in.delimiter + "'");
+            }
+            delim = d.charAt(0);
+        }
+        if (in.decimal != null && in.decimal != '.' && in.decimal != ',') {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--decimal must be . or ,");
+        }
+        return new ImportRequest(file, in.before, in.after, in.sheet, in.beforeSheet, in.afterSheet, in.layout,
+                in.paired, in.groupColumn, in.valueColumn, in.characteristicColumn, in.beforeColumn, in.afterColumn,
+                in.beforeLabel, in.afterLabel, in.unitColumn, in.lotColumn, in.subgroupColumn, in.sequenceColumn, delim,
+                in.decimal, in.headerRow);
+    }
+
+    AnalysisSettings settings() {
+        if (!(method.alpha > 0 && method.alpha < 0.5)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--alpha must lie strictly between 0 and 0.5, got " + method.alpha);
+        }
+        CriteriaOptions c = criteria;
+        MarginSpec margin = marginSpec(c);
+        CharacteristicSettings overrides = new CharacteristicSettings(c.unit, new SpecLimits(c.lsl, c.nominal, c.usl),
+                margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null);
+        List<Exclusion> exclusions = new ArrayList<>();
+        for (String e : method.exclude) {
+            int eq = e.indexOf('=');
+            if (eq <= 0 || eq == e.length() - 1) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--exclude needs CELL=REASON (a reason is required), got '" + e + "'");
+            }
+            exclusions.add(new Exclusion(null, e.substring(0, eq).trim(), e.substring(eq + 1).trim()));
+        }
+        return new AnalysisSettings(method.alpha, method.equalVariances, method.holm, null, null, overrides,
+                exclusions);
+    }
+
+    private MarginSpec marginSpec(CriteriaOptions c) {
+        int given = (c.margin != null ? 1 : 0) + (c.marginLower != null || c.marginUpper != null ? 1 : 0)
+                + (c.marginPercent != null ? 1 : 0);
+        if (given > 1) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "give one kind of margin: --margin, or --margin-lower/--margin-upper, or --margin-percent");
+        }
+        if (c.margin != null) {
+            if (!(c.margin > 0)) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--margin must be positive (the margin is (-D, D)), got " + c.margin);
+            }
+            return new MarginSpec(MarginSpec.Kind.ABSOLUTE, -c.margin, c.margin);
+        }
+        if (c.marginLower != null || c.marginUpper != null) {
+            if (c.marginLower != null && !(c.marginLower < 0)) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--margin-lower must be negative (the margin must contain 0), got " + c.marginLower);
+            }
+            if (c.marginUpper != null && !(c.marginUpper > 0)) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--margin-upper must be positive (the margin must contain 0), got " + c.marginUpper);
+            }
+            return new MarginSpec(MarginSpec.Kind.ABSOLUTE, c.marginLower, c.marginUpper);
+        }
+        if (c.marginPercent != null) {
+            if (!(c.marginPercent > 0)) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--margin-percent must be positive, got " + c.marginPercent);
+            }
+            return new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, c.marginPercent, c.marginPercent);
+        }
+        return null;
+    }
+}

@@ -1,0 +1,60 @@
+package org.holdpoint.cli;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.concurrent.Callable;
+import org.holdpoint.importer.ImportRequest;
+import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.workflow.AnalysisOutcome;
+import org.holdpoint.workflow.AnalyzeUseCase;
+import org.holdpoint.workflow.ConsoleProgress;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** {@code holdpoint demo}: the whole job on the bundled, invented sample study. */
+@Command(name = "demo", mixinStandardHelpOptions = true, usageHelpAutoWidth = true,
+        header = "Analyse the bundled demo study (an invented boring-bar insert supplier change).",
+        description = {"Copies the bundled sample data into the output folder, analyses it with the criteria "
+                + "in its settings file, prints the result and writes result.json there."})
+final class DemoCommand implements Callable<Integer> {
+    static final String STUDY = "boring-bar-insert";
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = "holdpoint-demo",
+            description = "Folder for the demo's data and outputs (default: ${DEFAULT-VALUE}).")
+    Path out;
+
+    @Override
+    public Integer call() throws IOException {
+        Files.createDirectories(out);
+        Path data = extract(STUDY + ".csv");
+        extract(STUDY + ".settings.csv");
+        AnalysisOutcome outcome = new AnalyzeUseCase().run(ImportRequest.of(data), null,
+                AnalysisSettings.defaultSettings(), new ConsoleProgress(spec.commandLine().getErr(), false));
+        new TextOutput(spec.commandLine().getOut()).print(outcome.data(), outcome.settings(), outcome.result());
+        Path json = out.resolve("result.json");
+        AnalyzeUseCase.writeJson(outcome, json);
+        spec.commandLine().getOut().printf("%nWrote %s%n", json);
+        spec.commandLine().getOut().flush();
+        return ExitCodes.OK;
+    }
+
+    private Path extract(String name) throws IOException {
+        Path target = out.resolve(name);
+        try (InputStream in = DemoCommand.class.getResourceAsStream("/org/holdpoint/sample-data/" + name)) {
+            if (in == null) {
+                throw new UserInputException("the bundled sample file %s is missing from this build", name);
+            }
+            Path tmp = Files.createTempFile(out, "." + name, ".part");
+            Files.copy(in, tmp, StandardCopyOption.REPLACE_EXISTING);
+            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        }
+        return target;
+    }
+}

@@ -1,0 +1,49 @@
+package org.holdpoint.cli;
+
+import org.holdpoint.workflow.Version;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The root command {@code holdpoint}; its subcommands do the work. */
+@Command(name = "holdpoint", mixinStandardHelpOptions = true, versionProvider = HoldpointCommand.VersionInfo.class,
+        sortOptions = false, usageHelpAutoWidth = true,
+        header = "Verify a manufacturing process change from before and after samples.",
+        description = {
+            "Holdpoint compares a before and an after sample of every critical characteristic, proves "
+                    + "equivalence against an agreed margin with two one-sided tests, checks spread against an "
+                    + "optional limit, and gives one verdict per characteristic and for the change.",
+            "",
+            "Difference = after - before. A statistical result supports, never replaces, the site's "
+                    + "change-control procedures and engineering judgement."},
+        subcommands = {AnalyzeCommand.class, DemoCommand.class, CommandLine.HelpCommand.class},
+        footer = {"", "Exit codes: 0 analysed, 1 altered (verify), 2 bad input, 3 internal error.",
+            "Run 'holdpoint demo' for a finished example on bundled sample data."})
+public final class HoldpointCommand implements Runnable {
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** Supplies {@code --version}. */
+    public static final class VersionInfo implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"holdpoint " + Version.get(), "Java " + System.getProperty("java.version")};
+        }
+    }
+
+    /**
+     * The configured command line: output through its writers, exit codes mapped.
+     *
+     * @return the command line
+     */
+    public static CommandLine create() {
+        CommandLine cl = new CommandLine(new HoldpointCommand());
+        cl.setExecutionExceptionHandler(new Failures());
+        cl.setParameterExceptionHandler(new Failures());
+        return cl;
+    }
+}

@@ -1,0 +1,183 @@
+package org.holdpoint.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import org.holdpoint.stats.Descriptives;
+import org.holdpoint.stats.EquivalenceResult;
+import org.holdpoint.stats.TTestResult;
+import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.Cautions;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.study.Dataset;
+import org.holdpoint.study.ImportReport;
+import org.holdpoint.study.InputInfo;
+import org.holdpoint.study.StudyResult;
+import org.holdpoint.study.Verdict;
+import org.holdpoint.workflow.Format;
+import org.holdpoint.workflow.Version;
+
+/** The readable text result of {@code holdpoint analyze}: a summary table, details, verdict, cautions. */
+final class TextOutput {
+    private final PrintWriter out;
+
+    TextOutput(PrintWriter out) {
+        this.out = out;
+    }
+
+    /** The mark shown beside a status, so that no verdict relies on colour. */
+    static String mark(Verdict.Status s) {
+        return switch (s) {
+            case PASSED -> "[=]";
+            case FAILED -> "[x]";
+            case INCONCLUSIVE -> "[?]";
+            case NOT_ASSESSED -> "[-]";
+        };
+    }
+
+    void print(Dataset data, AnalysisSettings settings, StudyResult result) {
+        out.printf(Locale.ROOT, "Holdpoint %s - change study analysis%n", Version.get());
+        for (InputInfo in : data.inputs()) {
+            out.printf(Locale.ROOT, "%s: %s%s, layout %s, SHA-256 %s%n", cap(in.role()), in.file(),
+                    in.sheet() == null ? "" : " (sheet " + in.sheet() + ")",
+                    in.layout() == null ? "?" : in.layout().words(), in.sha256());
+        }
+        printImport(data.report());
+        out.printf(Locale.ROOT, "Difference = after - before; variance ratio = var(after)/var(before). Difference "
+                + "intervals %s, equivalence intervals %s (two one-sided tests, each at alpha = %s).%n",
+                Format.percent(1 - settings.alpha()), Format.percent(1 - 2 * settings.alpha()),
+                Format.num(settings.alpha()));
+        out.println();
+        printTable(result.characteristics());
+        for (CharacteristicResult r : result.characteristics()) {
+            out.println();
+            printDetail(r, settings);
+        }
+        out.println();
+        out.println(result.summary());
+        for (String f : result.failing()) {
+            out.println("  - " + f);
+        }
+        out.println("The overall claim needs every characteristic to pass (intersection-union principle, "
+                + "Berger 1982), so it needs no multiplicity adjustment.");
+        out.println();
+        out.println("Cautions:");
+        for (String c : Cautions.TEXT) {
+            out.println("  * " + c);
+        }
+        out.flush();
+    }
+
+    private void printImport(ImportReport report) {
+        out.printf(Locale.ROOT, "Import: %d values used, %d cells not used", report.valuesUsed(),
+                report.skippedTotal());
+        if (report.skippedTotal() > 0) {
+            StringBuilder sb = new StringBuilder(" (");
+            report.skipCounts().forEach((k, v) -> sb.append(sb.length() > 2 ? ", " : "").append(k.words())
+                    .append(": ").append(v));
+            out.print(sb.append(")"));
+        }
+        out.println();
+        for (String m : report.messages()) {
+            out.println("  " + m);
+        }
+        int shown = 0;
+        for (var cell : report.firstSkipped()) {
+            if (shown++ >= 5) {
+                out.printf(Locale.ROOT, "  ... see the JSON import block for up to %d listed cells%n",
+                        ImportReport.MAX_LISTED);
+                break;
+            }
+            out.printf(Locale.ROOT, "  not used: %s - %s%s%n", cell.origin().describe(), cell.reason().words(),
+                    cell.text() == null || cell.text().isEmpty() ? "" : " (\"" + cell.text() + "\")");
+        }
+    }
+
+    private void printTable(List<CharacteristicResult> results) {
+        String fmt = "%-3s %-24s %-6s %-9s %13s %13s %12s %-26s %-24s %s%n";
+        out.printf(Locale.ROOT, fmt, "", "Characteristic", "Unit", "n bef/aft", "Mean before", "Mean after",
+                "Difference", "Equivalence interval", "Margin", "Conclusion");
+        for (CharacteristicResult r : results) {
+            EquivalenceResult eq = r.decidingTost();
+            TTestResult t = r.decidingTest();
+            String interval = eq == null ? "-" : "(" + Format.num(eq.ciLower()) + ", " + Format.num(eq.ciUpper())
+                    + ")";
+            String margin = eq == null ? "none set" : marginText(eq);
+            String conclusion = eq == null ? "not assessed" : eq.conclusion().words();
+            out.printf(Locale.ROOT, fmt, mark(r.verdict().status()), clip(r.name(), 24),
+                    clip(r.unit() == null ? "" : r.unit(), 6), r.before().n() + "/" + r.after().n(),
+                    Format.num(r.before().mean()), Format.num(r.after().mean()), Format.num(t.estimate()), interval,
+                    margin, conclusion + (r.verdict().status() == Verdict.Status.FAILED && eq != null
+                            && eq.conclusion().claimHolds() ? " (limit not met)" : ""));
+        }
+        out.println("Marks: [=] passed  [x] failed  [?] inconclusive  [-] not assessed");
+    }
+
+    private static String marginText(EquivalenceResult eq) {
+        if (eq.lowerMargin() != null && eq.upperMargin() != null) {
+            return "(" + Format.num(eq.lowerMargin()) + ", " + Format.num(eq.upperMargin()) + ")";
+        }
+        return eq.lowerMargin() != null ? "> " + Format.num(eq.lowerMargin()) : "< " + Format.num(eq.upperMargin());
+    }
+
+    private void printDetail(CharacteristicResult r, AnalysisSettings settings) {
+        String unit = r.unit() == null ? "" : " (" + r.unit() + ")";
+        out.println("== " + r.name() + unit + " " + "=".repeat(Math.max(3, 60 - r.name().length() - unit.length())));
+        printGroup("before", r.before());
+        printGroup("after ", r.after());
+        TTestResult t = r.decidingTest();
+        out.printf(Locale.ROOT, "  %s: t = %s, df = %s, p = %s%s; difference %s, %s CI (%s, %s)%n",
+                t.method().description(), Format.num(t.t()), Format.num(t.df()), Format.p(t.p()),
+                r.holmP() == null ? "" : " (Holm-adjusted " + Format.p(r.holmP()) + ")", Format.num(t.estimate()),
+                Format.percent(t.confidenceLevel()), Format.num(t.ciLower()), Format.num(t.ciUpper()));
+        if (!r.paired() && r.method() != org.holdpoint.stats.LocationMethod.POOLED && r.pooled() != null) {
+            out.printf(Locale.ROOT, "  (for reference, pooled two-sample t: t = %s, df = %s, p = %s; not used for "
+                    + "the verdict because equal variances were not asserted)%n", Format.num(r.pooled().t()),
+                    Format.num(r.pooled().df()), Format.p(r.pooled().p()));
+        }
+        EquivalenceResult eq = r.decidingTost();
+        if (eq != null) {
+            out.printf(Locale.ROOT, "  Equivalence, two one-sided tests (%s): %s; p lower = %s, p upper = %s; "
+                    + "%s interval (%s, %s) -> %s%n", eq.method().description(), Format.margin(eq),
+                    eq.pLower() == null ? "-" : Format.p(eq.pLower()), eq.pUpper() == null ? "-" : Format.p(eq.pUpper()),
+                    Format.percent(eq.level()), Format.num(eq.ciLower()), Format.num(eq.ciUpper()),
+                    eq.conclusion().words());
+        }
+        if (r.variance() != null) {
+            out.printf(Locale.ROOT, "  Spread: variance ratio %s, %s CI (%s, %s), F-test p = %s", Format.num(
+                    r.variance().ratio()), Format.percent(r.variance().confidenceLevel()),
+                    Format.num(r.variance().ciLower()), Format.num(r.variance().ciUpper()), Format.p(r.variance().p()));
+            if (r.levene() != null) {
+                out.printf(Locale.ROOT, "; Brown-Forsythe F = %s, p = %s", Format.num(r.levene().f()),
+                        Format.p(r.levene().p()));
+            }
+            out.println();
+        }
+        if (r.sdGrowth() != null) {
+            out.printf(Locale.ROOT, "  sd-growth limit %s: %s upper bound of sd(after)/sd(before) = %s -> %s%n",
+                    Format.num(r.sdGrowth().limit()), Format.percent(r.sdGrowth().level()),
+                    Format.num(r.sdGrowth().upperBound()), r.sdGrowth().met() ? "met" : "NOT met");
+        }
+        out.printf(Locale.ROOT, "  Verdict: %s %s%n", mark(r.verdict().status()), r.verdict().status().words());
+        for (String reason : r.verdict().reasons()) {
+            out.println("    " + reason);
+        }
+        for (String note : r.notes()) {
+            out.println("  Note: " + note);
+        }
+    }
+
+    private void printGroup(String label, Descriptives d) {
+        out.printf(Locale.ROOT, "  %s n = %d, mean = %s, sd = %s, median = %s, min = %s, max = %s%n", label, d.n(),
+                Format.num(d.mean()), Format.num(d.sd()), Format.num(d.median()), Format.num(d.min()),
+                Format.num(d.max()));
+    }
+
+    private static String clip(String s, int w) {
+        return s.length() <= w ? s : s.substring(0, w - 1) + "~";
+    }
+
+    private static String cap(String s) {
+        return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+}

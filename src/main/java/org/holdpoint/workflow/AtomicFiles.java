@@ -1,0 +1,72 @@
+package org.holdpoint.workflow;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/**
+ * Writes output files atomically: into a temporary file in the target's folder, then one move, so a
+ * reader never sees a half-written file and a failure leaves nothing behind.
+ */
+public final class AtomicFiles {
+    private AtomicFiles() {
+    }
+
+    /** Writes the content of an output stream. */
+    @FunctionalInterface
+    public interface Writer {
+        /**
+         * @param out the stream to write to
+         * @throws IOException on failure
+         */
+        void write(OutputStream out) throws IOException;
+    }
+
+    /**
+     * Writes text (UTF-8) atomically, replacing an existing file.
+     *
+     * @param target the file
+     * @param text   the content
+     * @throws IOException when it cannot be written (nothing is left behind)
+     */
+    public static void writeText(Path target, String text) throws IOException {
+        write(target, true, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
+    }
+
+    /**
+     * Writes a file atomically.
+     *
+     * @param target    the file
+     * @param overwrite whether an existing file may be replaced
+     * @param writer    produces the content
+     * @throws IOException when it cannot be written (nothing is left behind)
+     */
+    public static void write(Path target, boolean overwrite, Writer writer) throws IOException {
+        Path abs = target.toAbsolutePath();
+        Path dir = abs.getParent();
+        if (!overwrite && Files.exists(abs)) {
+            throw new FileAlreadyExistsException(abs.toString(), null, "exists; use --overwrite to replace it");
+        }
+        if (dir != null) {
+            Files.createDirectories(dir);
+        }
+        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
+        try {
+            try (OutputStream out = Files.newOutputStream(tmp)) {
+                writer.write(out);
+            }
+            try {
+                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+}

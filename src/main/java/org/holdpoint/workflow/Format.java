@@ -1,0 +1,86 @@
+package org.holdpoint.workflow;
+
+import java.util.Locale;
+import org.holdpoint.stats.EquivalenceResult;
+
+/** Number formatting for text shown to people (JSON keeps full precision elsewhere). */
+public final class Format {
+    private Format() {
+    }
+
+    /**
+     * A number with 6 significant digits, plain when reasonable.
+     *
+     * @param v the value
+     * @return the text; "undefined" for NaN
+     */
+    public static String num(double v) {
+        if (Double.isNaN(v)) {
+            return "undefined";
+        }
+        if (v == 0) {
+            return "0";
+        }
+        double a = Math.abs(v);
+        if (a >= 1e-4 && a < 1e7) {
+            String s = String.format(Locale.ROOT, "%.6g", v);
+            if (s.contains("e")) {
+                return s;
+            }
+            if (s.contains(".")) {
+                s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+            }
+            return s;
+        }
+        return String.format(Locale.ROOT, "%.4e", v);
+    }
+
+    /**
+     * A p-value: 4 significant digits, scientific below 1e-4, never 0.
+     *
+     * @param p the p-value
+     * @return the text
+     */
+    public static String p(double p) {
+        if (Double.isNaN(p)) {
+            return "undefined";
+        }
+        if (p == 0) {
+            return "< 1e-300";
+        }
+        if (p < 1e-4) {
+            return String.format(Locale.ROOT, "%.3e", p);
+        }
+        return String.format(Locale.ROOT, "%.4f", p);
+    }
+
+    /**
+     * A level such as 0.9 as "90 %".
+     *
+     * @param level a probability
+     * @return the text
+     */
+    public static String percent(double level) {
+        double pct = level * 100;
+        if (Math.abs(pct - Math.rint(pct)) < 1e-9) {
+            return String.format(Locale.ROOT, "%d %%", (long) Math.rint(pct));
+        }
+        return String.format(Locale.ROOT, "%s %%", num(pct));
+    }
+
+    /**
+     * The margin of an equivalence result in words.
+     *
+     * @param eq the result
+     * @return e.g. "(margin -0.01 to 0.01)"
+     */
+    public static String margin(EquivalenceResult eq) {
+        if (eq.lowerMargin() != null && eq.upperMargin() != null) {
+            return "(margin " + num(eq.lowerMargin()) + " to " + num(eq.upperMargin()) + ")";
+        }
+        if (eq.lowerMargin() != null) {
+            return "(lower margin " + num(eq.lowerMargin()) + ")";
+        }
+        return "(upper margin " + num(eq.upperMargin()) + ")";
+    }
+}

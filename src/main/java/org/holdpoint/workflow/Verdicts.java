@@ -1,0 +1,85 @@
+package org.holdpoint.workflow;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.holdpoint.stats.Conclusion;
+import org.holdpoint.stats.EquivalenceResult;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.study.StudyResult;
+import org.holdpoint.study.Verdict;
+import org.holdpoint.study.Verdict.Status;
+
+/**
+ * The verdict rules: a characteristic passes when its equivalence (or one-sided margin) claim holds
+ * and every limit that was set is met; the change is verified only when every characteristic passes
+ * (intersection–union, Berger 1982), so that claim needs no multiplicity adjustment.
+ */
+final class Verdicts {
+    private Verdicts() {
+    }
+
+    static CharacteristicResult judge(CharacteristicResult r) {
+        List<String> reasons = new ArrayList<>();
+        Status status;
+        EquivalenceResult eq = r.decidingTost();
+        if (eq == null) {
+            status = Status.NOT_ASSESSED;
+            reasons.add("no margin set, so equivalence was not assessed; a non-significant difference test is "
+                    + "not evidence of sameness");
+        } else {
+            Conclusion c = eq.conclusion();
+            String interval = String.format(Locale.ROOT, "the %s interval of the difference (%s, %s) %s",
+                    Format.percent(eq.level()), Format.num(eq.ciLower()), Format.num(eq.ciUpper()),
+                    describeAgainstMargin(c));
+            status = switch (c) {
+                case EQUIVALENT, NON_INFERIOR, NON_SUPERIOR -> Status.PASSED;
+                case NOT_EQUIVALENT, INFERIOR, SUPERIOR -> Status.FAILED;
+                case INCONCLUSIVE -> Status.INCONCLUSIVE;
+            };
+            reasons.add(c.words() + ": " + interval + " " + Format.margin(eq));
+        }
+        if (r.sdGrowth() != null && !r.sdGrowth().met()) {
+            reasons.add(String.format(Locale.ROOT, "spread: the %s upper bound of sd(after)/sd(before) is %s, not "
+                    + "below the limit %s", Format.percent(r.sdGrowth().level()), Format.num(r.sdGrowth().upperBound()),
+                    Format.num(r.sdGrowth().limit())));
+            if (status == Status.PASSED || status == Status.INCONCLUSIVE) {
+                status = Status.FAILED;
+            }
+        }
+        Verdict v = new Verdict(status, reasons);
+        return new CharacteristicResult(r.name(), r.unit(), r.settings(), r.margin(), r.paired(), r.before(),
+                r.after(), r.welch(), r.pooled(), r.pairedTest(), r.tost(), r.tostPooled(), r.variance(), r.levene(),
+                r.sdGrowth(), r.holmP(), r.method(), v, r.notes());
+    }
+
+    private static String describeAgainstMargin(Conclusion c) {
+        return switch (c) {
+            case EQUIVALENT -> "lies inside the margin";
+            case NOT_EQUIVALENT -> "lies entirely outside the margin";
+            case INCONCLUSIVE -> "straddles or touches a margin bound: more parts are needed";
+            case NON_INFERIOR -> "lies above the lower margin";
+            case INFERIOR -> "lies entirely below the lower margin";
+            case NON_SUPERIOR -> "lies below the upper margin";
+            case SUPERIOR -> "lies entirely above the upper margin";
+        };
+    }
+
+    static StudyResult overall(List<CharacteristicResult> results) {
+        List<String> failing = new ArrayList<>();
+        for (CharacteristicResult r : results) {
+            if (r.verdict().status() != Status.PASSED) {
+                failing.add(r.name() + ": " + r.verdict().status().words() + " ("
+                        + String.join("; ", r.verdict().reasons()) + ")");
+            }
+        }
+        int n = results.size();
+        boolean verified = failing.isEmpty();
+        String summary = verified
+                ? String.format(Locale.ROOT, "CHANGE VERIFIED: all %d characteristic%s passed (equivalent within the "
+                        + "agreed margin, every limit set met).", n, n == 1 ? "" : "s")
+                : String.format(Locale.ROOT, "CHANGE NOT VERIFIED: %d of %d characteristic%s did not pass.",
+                        failing.size(), n, n == 1 ? "" : "s");
+        return new StudyResult(results, verified, summary, failing);
+    }
+}
