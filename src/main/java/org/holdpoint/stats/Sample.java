@@ -154,6 +154,16 @@ public final class Sample {
         return values;
     }
 
+    /**
+     * The exact decimal of one value when known, else the shortest decimal that reads back as the double.
+     *
+     * @param i the 0-based position
+     * @return the decimal
+     */
+    public BigDecimal decimal(int i) {
+        return unscaled != null ? BigDecimal.valueOf(unscaled[i], scale) : BigDecimal.valueOf(values[i]);
+    }
+
     /** @return whether exact decimals are known for every value */
     public boolean hasExactDecimals() {
         return unscaled != null;

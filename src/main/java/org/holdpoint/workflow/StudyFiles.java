@@ -1,0 +1,442 @@
+package org.holdpoint.workflow;
+
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.holdpoint.stats.Sample;
+import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.ChangeDescription;
+import org.holdpoint.study.ChangeKind;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.Dataset;
+import org.holdpoint.study.Exclusion;
+import org.holdpoint.study.GroupData;
+import org.holdpoint.study.ImportReport;
+import org.holdpoint.study.InputInfo;
+import org.holdpoint.study.Layout;
+import org.holdpoint.study.MarginSpec;
+import org.holdpoint.study.Origin;
+import org.holdpoint.study.Signature;
+import org.holdpoint.study.SkipReason;
+import org.holdpoint.study.SkippedCell;
+import org.holdpoint.study.SpecLimits;
+import org.holdpoint.study.StudyResult;
+
+/**
+ * The study file: one JSON document holding a whole change study (change, settings, raw values with
+ * their origins, exclusions, signatures) and the results computed when it was saved. Its canonical
+ * form (keys in fixed order, no spaces) is what the archive stores and the workbook embeds; its
+ * SHA-256 identifies it. The format is documented in {@code docs/study-file.md}.
+ */
+public final class StudyFiles {
+    /** The schema version this code writes. */
+    public static final int SCHEMA_VERSION = 1;
+    private static final JsonNodeFactory F = JsonNodeFactory.instance;
+    private static final ObjectMapper CANONICAL = new ObjectMapper()
+            .enable(com.fasterxml.jackson.core.JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN);
+    private static final ObjectMapper PRETTY = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
+            .enable(com.fasterxml.jackson.core.JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN);
+    private static final ObjectMapper READER = new ObjectMapper()
+            .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS);
+
+    private StudyFiles() {
+    }
+
+    /**
+     * The study and its results as a JSON tree.
+     *
+     * @param study  the study
+     * @param result its results (stored for comparison; always re-computable)
+     * @return the tree
+     */
+    public static ObjectNode toJson(ChangeStudy study, StudyResult result) {
+        ObjectNode root = F.objectNode();
+        root.put("schemaVersion", SCHEMA_VERSION);
+        ObjectNode tool = root.putObject("tool");
+        tool.put("name", "holdpoint");
+        tool.put("version", Version.get());
+        root.set("change", change(study.change()));
+        root.set("settings", settings(study.settings()));
+        ArrayNode inputs = root.putArray("inputs");
+        for (InputInfo i : study.data().inputs()) {
+            ObjectNode o = inputs.addObject();
+            o.put("file", i.file());
+            o.put("sha256", i.sha256());
+            o.put("sheet", i.sheet());
+            o.put("layout", i.layout() == null ? null : i.layout().name());
+            o.put("role", i.role());
+        }
+        root.set("import", importReport(study.data().report()));
+        ArrayNode chars = root.putArray("characteristics");
+        for (CharacteristicData c : study.data().characteristics()) {
+            chars.add(characteristic(c));
+        }
+        ArrayNode sigs = root.putArray("signatures");
+        for (Signature s : study.signatures()) {
+            ObjectNode o = sigs.addObject();
+            o.put("stage", s.stage().name());
+            o.put("name", s.name());
+            o.put("role", s.role());
+            o.put("meaning", s.meaning());
+            o.put("timestamp", s.timestamp());
+        }
+        if (result != null) {
+            ObjectNode results = root.putObject("results");
+            ArrayNode list = results.putArray("characteristics");
+            result.characteristics().forEach(r -> list.add(ResultJson.characteristic(r)));
+            results.put("changeVerified", result.changeVerified());
+            results.put("summary", result.summary());
+        }
+        return root;
+    }
+
+    /**
+     * The canonical text: compact, keys in the order written, UTF-8.
+     *
+     * @param tree the study tree
+     * @return the canonical bytes
+     */
+    public static byte[] canonical(JsonNode tree) {
+        try {
+            return CANONICAL.writeValueAsBytes(tree);
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException("JSON serialisation failed", e);
+        }
+    }
+
+    /**
+     * Lower-case hex SHA-256 of bytes.
+     *
+     * @param bytes the bytes
+     * @return the hash
+     */
+    public static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is not available", e);
+        }
+    }
+
+    /**
+     * Writes the study file atomically (indented for people; the hash is over the canonical form).
+     *
+     * @param study  the study
+     * @param result its results
+     * @param target the file
+     * @throws IOException when it cannot be written
+     */
+    public static void write(ChangeStudy study, StudyResult result, Path target) throws IOException {
+        ObjectNode tree = toJson(study, result);
+        AtomicFiles.writeText(target, PRETTY.writeValueAsString(tree) + System.lineSeparator());
+    }
+
+    /**
+     * Reads a study file of any supported schema version.
+     *
+     * @param file the file
+     * @return the study
+     * @throws StudyFileException when the file is not a readable study file
+     */
+    public static ChangeStudy read(Path file) {
+        try {
+            return fromJson(READER.readTree(Files.readAllBytes(file)), file.toString());
+        } catch (IOException e) {
+            throw new StudyFileException("%s: cannot read the study file (%s)", file, e.getMessage());
+        }
+    }
+
+    /**
+     * Parses a study from JSON text (e.g. embedded in a workbook or stored in the archive).
+     *
+     * @param text the JSON
+     * @param name a name for messages
+     * @return the study
+     */
+    public static ChangeStudy parse(String text, String name) {
+        try {
+            return fromJson(READER.readTree(text.getBytes(StandardCharsets.UTF_8)), name);
+        } catch (IOException e) {
+            throw new StudyFileException("%s: not valid JSON (%s)", name, e.getMessage());
+        }
+    }
+
+    /**
+     * Parses a JSON tree read with big decimals for floats.
+     *
+     * @param text JSON text
+     * @return the tree
+     */
+    public static JsonNode tree(String text) {
+        try {
+            return READER.readTree(text);
+        } catch (IOException e) {
+            throw new StudyFileException("not valid JSON (%s)", e.getMessage());
+        }
+    }
+
+    static ChangeStudy fromJson(JsonNode root, String name) {
+        if (root == null || !root.isObject() || !root.has("schemaVersion")) {
+            throw new StudyFileException("%s: not a Holdpoint study file (no schemaVersion)", name);
+        }
+        int version = root.get("schemaVersion").asInt();
+        if (version < 1 || version > SCHEMA_VERSION) {
+            throw new StudyFileException("%s: schema version %d is not supported by this version (reads 1 to %d)",
+                    name, version, SCHEMA_VERSION);
+        }
+        try {
+            ChangeDescription change = readChange(root.path("change"));
+            AnalysisSettings settings = readSettings(root.path("settings"));
+            List<InputInfo> inputs = new ArrayList<>();
+            for (JsonNode i : root.path("inputs")) {
+                inputs.add(new InputInfo(text(i, "file"), text(i, "sha256"), text(i, "sheet"),
+                        i.hasNonNull("layout") ? Layout.valueOf(i.get("layout").asText()) : null, text(i, "role")));
+            }
+            List<CharacteristicData> chars = new ArrayList<>();
+            for (JsonNode c : root.path("characteristics")) {
+                chars.add(readCharacteristic(c));
+            }
+            List<Signature> sigs = new ArrayList<>();
+            for (JsonNode s : root.path("signatures")) {
+                sigs.add(new Signature(Signature.Stage.valueOf(s.get("stage").asText()), text(s, "name"),
+                        text(s, "role"), text(s, "meaning"), text(s, "timestamp")));
+            }
+            return new ChangeStudy(change, new Dataset(chars, inputs, readImport(root.path("import"))), settings, sigs);
+        } catch (RuntimeException e) {
+            if (e instanceof StudyFileException) {
+                throw e;
+            }
+            throw new StudyFileException("%s: the study file is damaged or incomplete (%s)", name, e.getMessage());
+        }
+    }
+
+    private static ObjectNode change(ChangeDescription c) {
+        ObjectNode o = F.objectNode();
+        o.put("id", c.id());
+        o.put("title", c.title());
+        o.put("kind", c.kind().name());
+        o.put("partNumber", c.partNumber());
+        o.put("revision", c.revision());
+        o.put("reason", c.reason());
+        o.put("requester", c.requester());
+        o.put("requestDate", c.requestDate());
+        o.put("studyDate", c.studyDate());
+        return o;
+    }
+
+    private static ChangeDescription readChange(JsonNode o) {
+        if (o.isMissingNode() || o.isNull()) {
+            return ChangeDescription.NONE;
+        }
+        return new ChangeDescription(text(o, "id"), text(o, "title"),
+                o.hasNonNull("kind") ? ChangeKind.parse(o.get("kind").asText()) : ChangeKind.OTHER,
+                text(o, "partNumber"), text(o, "revision"), text(o, "reason"), text(o, "requester"),
+                text(o, "requestDate"), text(o, "studyDate"));
+    }
+
+    private static ObjectNode settings(AnalysisSettings s) {
+        ObjectNode o = F.objectNode();
+        o.put("alpha", s.alpha());
+        o.put("equalVariances", s.equalVariances());
+        o.put("holm", s.holm());
+        o.set("defaults", criteria(s.defaults()));
+        ObjectNode per = o.putObject("perCharacteristic");
+        s.perCharacteristic().forEach((k, v) -> per.set(k, criteria(v)));
+        o.set("overrides", criteria(s.overrides()));
+        ArrayNode ex = o.putArray("exclusions");
+        for (Exclusion e : s.exclusions()) {
+            ObjectNode x = ex.addObject();
+            x.put("characteristic", e.characteristic());
+            x.put("cell", e.cell());
+            x.put("reason", e.reason());
+        }
+        return o;
+    }
+
+    private static AnalysisSettings readSettings(JsonNode o) {
+        Map<String, CharacteristicSettings> per = new LinkedHashMap<>();
+        o.path("perCharacteristic").fields().forEachRemaining(e -> per.put(e.getKey(), readCriteria(e.getValue())));
+        List<Exclusion> ex = new ArrayList<>();
+        for (JsonNode x : o.path("exclusions")) {
+            ex.add(new Exclusion(text(x, "characteristic"), text(x, "cell"), text(x, "reason")));
+        }
+        return new AnalysisSettings(o.path("alpha").asDouble(0.05), o.path("equalVariances").asBoolean(false),
+                o.path("holm").asBoolean(false), readCriteria(o.path("defaults")), per,
+                readCriteria(o.path("overrides")), ex);
+    }
+
+    private static ObjectNode criteria(CharacteristicSettings s) {
+        ObjectNode o = F.objectNode();
+        o.put("unit", s.unit());
+        o.put("lsl", s.spec().lsl());
+        o.put("nominal", s.spec().nominal());
+        o.put("usl", s.spec().usl());
+        if (s.margin() == null) {
+            o.putNull("margin");
+        } else {
+            ObjectNode m = o.putObject("margin");
+            m.put("kind", s.margin().kind().name());
+            m.put("lower", s.margin().lower());
+            m.put("upper", s.margin().upper());
+        }
+        o.put("sdGrowthLimit", s.sdGrowthLimit());
+        o.put("capabilityRequirement", s.capabilityRequirement());
+        o.put("paired", s.paired());
+        return o;
+    }
+
+    private static CharacteristicSettings readCriteria(JsonNode o) {
+        if (o.isMissingNode() || o.isNull()) {
+            return CharacteristicSettings.EMPTY;
+        }
+        JsonNode m = o.path("margin");
+        MarginSpec margin = m.isObject() ? new MarginSpec(MarginSpec.Kind.valueOf(m.get("kind").asText()),
+                dbl(m, "lower"), dbl(m, "upper")) : null;
+        return new CharacteristicSettings(text(o, "unit"), new SpecLimits(dbl(o, "lsl"), dbl(o, "nominal"),
+                dbl(o, "usl")), margin, dbl(o, "sdGrowthLimit"), dbl(o, "capabilityRequirement"),
+                o.hasNonNull("paired") ? o.get("paired").asBoolean() : null);
+    }
+
+    private static ObjectNode importReport(ImportReport r) {
+        ObjectNode o = F.objectNode();
+        o.put("valuesUsed", r.valuesUsed());
+        ObjectNode counts = o.putObject("skipCounts");
+        r.skipCounts().forEach((k, v) -> counts.put(k.name(), v));
+        ArrayNode cells = o.putArray("firstSkipped");
+        for (SkippedCell c : r.firstSkipped()) {
+            ObjectNode x = cells.addObject();
+            x.put("file", c.origin().file());
+            x.put("sheet", c.origin().sheet());
+            x.put("row", c.origin().row());
+            x.put("column", c.origin().column());
+            x.put("reason", c.reason().name());
+            x.put("text", c.text());
+        }
+        ArrayNode msgs = o.putArray("messages");
+        r.messages().forEach(msgs::add);
+        return o;
+    }
+
+    private static ImportReport readImport(JsonNode o) {
+        Map<SkipReason, Long> counts = new EnumMap<>(SkipReason.class);
+        o.path("skipCounts").fields().forEachRemaining(e -> counts.put(SkipReason.valueOf(e.getKey()),
+                e.getValue().asLong()));
+        List<SkippedCell> cells = new ArrayList<>();
+        for (JsonNode x : o.path("firstSkipped")) {
+            cells.add(new SkippedCell(new Origin(text(x, "file"), text(x, "sheet"), x.path("row").asInt(),
+                    x.path("column").asInt()), SkipReason.valueOf(x.get("reason").asText()), text(x, "text")));
+        }
+        List<String> msgs = new ArrayList<>();
+        o.path("messages").forEach(m -> msgs.add(m.asText()));
+        return new ImportReport(o.path("valuesUsed").asLong(), counts, cells, msgs);
+    }
+
+    private static ObjectNode characteristic(CharacteristicData c) {
+        ObjectNode o = F.objectNode();
+        o.put("name", c.name());
+        o.put("unit", c.unit());
+        o.put("paired", c.paired());
+        ArrayNode un = o.putArray("unmatchedUnits");
+        c.unmatchedUnits().forEach(un::add);
+        o.set("before", group(c.before()));
+        o.set("after", group(c.after()));
+        return o;
+    }
+
+    private static CharacteristicData readCharacteristic(JsonNode o) {
+        List<String> unmatched = new ArrayList<>();
+        o.path("unmatchedUnits").forEach(u -> unmatched.add(u.asText()));
+        return new CharacteristicData(text(o, "name"), text(o, "unit"), readGroup(o.get("before")),
+                readGroup(o.get("after")), o.path("paired").asBoolean(false), unmatched);
+    }
+
+    private static ObjectNode group(GroupData g) {
+        ObjectNode o = F.objectNode();
+        o.put("file", g.file());
+        o.put("sheet", g.sheet());
+        int n = g.size();
+        ArrayNode values = o.putArray("values");
+        ArrayNode rows = o.putArray("rows");
+        ArrayNode cols = o.putArray("columns");
+        for (int i = 0; i < n; i++) {
+            values.add(g.sample().decimal(i));
+            Origin origin = g.origin(i);
+            rows.add(origin.row());
+            cols.add(origin.column());
+        }
+        strings(o, "units", g.hasUnits(), n, g::unit);
+        strings(o, "lots", g.hasLots(), n, g::lot);
+        strings(o, "subgroups", g.hasSubgroups(), n, g::subgroup);
+        strings(o, "sequence", g.hasSequence(), n, g::sequence);
+        return o;
+    }
+
+    private static void strings(ObjectNode o, String key, boolean present, int n,
+            java.util.function.IntFunction<String> get) {
+        if (!present) {
+            return;
+        }
+        ArrayNode a = o.putArray(key);
+        for (int i = 0; i < n; i++) {
+            a.add(get.apply(i));
+        }
+    }
+
+    private static GroupData readGroup(JsonNode o) {
+        JsonNode values = o.get("values");
+        int n = values.size();
+        BigDecimal[] decimals = new BigDecimal[n];
+        int[] rows = new int[n];
+        int[] cols = new int[n];
+        for (int i = 0; i < n; i++) {
+            decimals[i] = values.get(i).decimalValue();
+            rows[i] = o.path("rows").path(i).asInt(i + 1);
+            cols[i] = o.path("columns").path(i).asInt(1);
+        }
+        return new GroupData(Sample.ofDecimals(decimals), text(o, "file"), text(o, "sheet"), rows, cols,
+                readStrings(o, "units", n), readStrings(o, "lots", n), readStrings(o, "subgroups", n),
+                readStrings(o, "sequence", n));
+    }
+
+    private static String[] readStrings(JsonNode o, String key, int n) {
+        JsonNode a = o.get(key);
+        if (a == null || !a.isArray()) {
+            return null;
+        }
+        String[] r = new String[n];
+        for (int i = 0; i < n; i++) {
+            JsonNode v = a.get(i);
+            r[i] = v == null || v.isNull() ? null : v.asText();
+        }
+        return r;
+    }
+
+    private static String text(JsonNode o, String key) {
+        JsonNode v = o.get(key);
+        return v == null || v.isNull() ? null : v.asText();
+    }
+
+    private static Double dbl(JsonNode o, String key) {
+        JsonNode v = o.get(key);
+        return v == null || v.isNull() ? null : v.asDouble();
+    }
+}
