@@ -117,7 +117,7 @@ public final class DataImporter {
         }
         Plan plan = LayoutResolver.resolve(data, header, r, role, stem(path));
         log.message(describePlan(data, plan, r.layout() != null));
-        if (data.numbersFromText() > 0) {
+        if (data.sheet() != null && data.numbersFromText() > 0) {
             log.message(String.format(Locale.ROOT, "%s: %,d numbers stored as text were read as numbers", data.where(),
                     data.numbersFromText()));
         }
