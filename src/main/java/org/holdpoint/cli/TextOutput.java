@@ -94,19 +94,19 @@ final class TextOutput {
     }
 
     private void printTable(List<CharacteristicResult> results) {
-        String fmt = "%-3s %-24s %-6s %-9s %13s %13s %12s %-26s %-24s %s%n";
+        String fmt = "%-3s %-24s %-5s %-9s %12s %12s %11s %-22s %-18s %s%n";
         out.printf(Locale.ROOT, fmt, "", "Characteristic", "Unit", "n bef/aft", "Mean before", "Mean after",
                 "Difference", "Equivalence interval", "Margin", "Conclusion");
         for (CharacteristicResult r : results) {
             EquivalenceResult eq = r.decidingTost();
             TTestResult t = r.decidingTest();
-            String interval = eq == null ? "-" : "(" + Format.num(eq.ciLower()) + ", " + Format.num(eq.ciUpper())
-                    + ")";
+            String interval = eq == null ? "-" : "(" + Format.num(eq.ciLower(), 4) + ", "
+                    + Format.num(eq.ciUpper(), 4) + ")";
             String margin = eq == null ? "none set" : marginText(eq);
             String conclusion = eq == null ? "not assessed" : eq.conclusion().words();
             out.printf(Locale.ROOT, fmt, mark(r.verdict().status()), clip(r.name(), 24),
                     clip(r.unit() == null ? "" : r.unit(), 6), r.before().n() + "/" + r.after().n(),
-                    Format.num(r.before().mean()), Format.num(r.after().mean()), Format.num(t.estimate()), interval,
+                    Format.num(r.before().mean()), Format.num(r.after().mean()), Format.num(t.estimate(), 4), interval,
                     margin, conclusion + (r.verdict().status() == Verdict.Status.FAILED && eq != null
                             && eq.conclusion().claimHolds() ? " (limit not met)" : ""));
         }
@@ -115,7 +115,7 @@ final class TextOutput {
 
     private static String marginText(EquivalenceResult eq) {
         if (eq.lowerMargin() != null && eq.upperMargin() != null) {
-            return "(" + Format.num(eq.lowerMargin()) + ", " + Format.num(eq.upperMargin()) + ")";
+            return "(" + Format.num(eq.lowerMargin(), 4) + ", " + Format.num(eq.upperMargin(), 4) + ")";
         }
         return eq.lowerMargin() != null ? "> " + Format.num(eq.lowerMargin()) : "< " + Format.num(eq.upperMargin());
     }

@@ -41,9 +41,11 @@ public final class AnalyzeUseCase {
         }
         AnalysisSettings merged = settings;
         if (found != null) {
-            Map<String, CharacteristicSettings> per = SettingsReader.read(found);
-            merged = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(),
-                    settings.defaults(), per, settings.overrides(), settings.exclusions());
+            Map<String, CharacteristicSettings> per = new java.util.LinkedHashMap<>(new SettingsReader().read(found));
+            CharacteristicSettings fileDefaults = per.remove(SettingsReader.DEFAULTS);
+            CharacteristicSettings defaults = settings.defaults().overriddenBy(fileDefaults);
+            merged = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(), defaults, per,
+                    settings.overrides(), settings.exclusions());
         }
         StudyResult result = analyzer.analyze(data, merged, progress);
         progress.step("done", 1);

@@ -36,6 +36,28 @@ public final class Format {
     }
 
     /**
+     * A number with the given significant digits, for tables.
+     *
+     * @param v      the value
+     * @param digits significant digits, 1..17
+     * @return the text; "undefined" for NaN
+     */
+    public static String num(double v, int digits) {
+        if (Double.isNaN(v)) {
+            return "undefined";
+        }
+        if (v == 0) {
+            return "0";
+        }
+        double a = Math.abs(v);
+        if (a >= 1e-4 && a < 1e7) {
+            java.math.BigDecimal d = new java.math.BigDecimal(v).round(new java.math.MathContext(digits));
+            return d.stripTrailingZeros().toPlainString();
+        }
+        return String.format(Locale.ROOT, "%." + (digits - 1) + "e", v);
+    }
+
+    /**
      * A p-value: 4 significant digits, scientific below 1e-4, never 0.
      *
      * @param p the p-value
