@@ -1,0 +1,57 @@
+package org.holdpoint.stats;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+
+/** Test helpers: the log relative error of McCullough 1998 and relative-tolerance assertions. */
+final class Accuracy {
+    private Accuracy() {
+    }
+
+    /**
+     * LRE = −log10(|x − c|/|c|), or −log10|x − c| when c = 0, capped at {@code cap} digits
+     * (McCullough 1998, "Assessing the reliability of statistical software: Part I", Am. Statist.
+     * 52:358–366).
+     */
+    static double lre(double x, double c, double cap) {
+        if (Double.isNaN(x)) {
+            return 0;
+        }
+        double err = c == 0 ? Math.abs(x) : Math.abs(x - c) / Math.abs(c);
+        if (err == 0) {
+            return cap;
+        }
+        return Math.min(cap, -Math.log10(err));
+    }
+
+    /** Asserts |actual − expected| ≤ rel·|expected| (exact equality when expected is 0). */
+    static void assertRel(String what, double actual, double expected, double rel) {
+        assertThat(actual).as(what + ": got %s, expected %s (relative %s)", actual, expected,
+                expected == 0 ? Math.abs(actual) : Math.abs(actual - expected) / Math.abs(expected))
+                .isCloseTo(expected, org.assertj.core.data.Offset.offset(Math.abs(expected) * rel));
+    }
+
+    /** As {@link #assertRel} and checks that the value is a probability. */
+    static void assertProbability(String what, double actual, double expected, double rel) {
+        assertThat(actual).as(what + " is a probability").isBetween(0.0, 1.0);
+        assertRel(what, actual, expected, rel);
+    }
+
+    /** Reads a test resource next to this class as UTF-8 lines (CR dropped). */
+    static List<String> resourceLines(String name) {
+        try (InputStream in = Accuracy.class.getResourceAsStream(name)) {
+            if (in == null) {
+                throw new IllegalStateException("missing test resource " + name);
+            }
+            String text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            return text.replace("\r", "").lines().toList();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
