@@ -6,7 +6,10 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /** Test helpers: the log relative error of McCullough 1998 and relative-tolerance assertions. */
 final class Accuracy {
@@ -53,5 +56,43 @@ final class Accuracy {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /**
+     * Reads a simple comma-separated resource (no quoting; lines starting with '#' are comments; the
+     * first other line is the header) as one map per row, keyed by column name.
+     */
+    static List<Map<String, String>> csv(String name) {
+        List<Map<String, String>> rows = new ArrayList<>();
+        String[] header = null;
+        for (String line : resourceLines(name)) {
+            if (line.startsWith("#") || line.isBlank()) {
+                continue;
+            }
+            String[] cells = line.split(",", -1);
+            if (header == null) {
+                header = cells;
+                continue;
+            }
+            if (cells.length != header.length) {
+                throw new IllegalStateException(name + ": row has " + cells.length + " cells, header "
+                        + header.length + ": " + line);
+            }
+            Map<String, String> row = new LinkedHashMap<>();
+            for (int i = 0; i < cells.length; i++) {
+                row.put(header[i], cells[i]);
+            }
+            rows.add(row);
+        }
+        return rows;
+    }
+
+    /** A number cell; "NA" becomes null. */
+    static Double number(Map<String, String> row, String column) {
+        String v = row.get(column);
+        if (v == null) {
+            throw new IllegalStateException("no column " + column + " in " + row);
+        }
+        return v.equals("NA") ? null : Double.valueOf(v);
     }
 }
