@@ -36,13 +36,11 @@ class RReferenceCasesTest {
     private static final double REL_P = 1e-8;
 
     /** One case: decimal texts of each group, and whether it has a paired design. */
-    record Case(String id, List<String> before, List<String> after, boolean paired) {
-        Sample beforeSample() {
-            return Sample.ofDecimals(before.toArray(String[]::new));
-        }
-
-        Sample afterSample() {
-            return Sample.ofDecimals(after.toArray(String[]::new));
+    record Case(String id, List<String> before, List<String> after, boolean paired, double offset,
+            Sample beforeSample, Sample afterSample) {
+        Case(String id, List<String> before, List<String> after, boolean paired, double offset) {
+            this(id, before, after, paired, offset, Sample.ofDecimals(before.toArray(String[]::new)),
+                    Sample.ofDecimals(after.toArray(String[]::new)));
         }
     }
 
@@ -58,7 +56,8 @@ class RReferenceCasesTest {
         Map<String, Case> cases = new LinkedHashMap<>();
         for (Map<String, String> r : Accuracy.csv("r/r-cases.csv")) {
             String id = r.get("case");
-            cases.put(id, new Case(id, before.get(id), after.get(id), Boolean.parseBoolean(r.get("paired"))));
+            cases.put(id, new Case(id, before.get(id), after.get(id), Boolean.parseBoolean(r.get("paired")),
+                    Double.parseDouble(r.get("offset"))));
         }
         return cases;
     }
@@ -87,6 +86,15 @@ class RReferenceCasesTest {
 
     static Stream<Arguments> varTestRows() {
         return rows("r/r-var-test.csv");
+    }
+
+    static Stream<Arguments> sdGrowthRows() {
+        return rows("r/r-sd-growth.csv");
+    }
+
+    static Stream<Arguments> descriptivesRows() {
+        return Accuracy.csv("r/r-descriptives.csv").stream()
+                .map(r -> Arguments.of(r.get("case") + " " + r.get("group"), r));
     }
 
     static Stream<Arguments> leveneRows() {
@@ -138,8 +146,8 @@ class RReferenceCasesTest {
         assertThat(res.confidenceLevel()).isCloseTo(level, org.assertj.core.data.Offset.offset(1e-15));
     }
 
-    static EquivalenceResult runTost(Case c, String method, Double lower, Double upper) {
-        EquivalenceTest e = EquivalenceTest.withDefaults().withMargin(new Margin(lower, upper)).withAlpha(0.05);
+    static EquivalenceResult runTost(Case c, String method, Double lower, Double upper, double alpha) {
+        EquivalenceTest e = EquivalenceTest.withDefaults().withMargin(new Margin(lower, upper)).withAlpha(alpha);
         return switch (method) {
             case "welch" -> e.with(VarianceAssumption.UNEQUAL).test(c.beforeSample(), c.afterSample());
             case "pooled" -> e.with(VarianceAssumption.EQUAL).test(c.beforeSample(), c.afterSample());
@@ -155,7 +163,8 @@ class RReferenceCasesTest {
         Case c = caseOf(r.get("case"));
         Double lower = number(r, "margin_lower");
         Double upper = number(r, "margin_upper");
-        EquivalenceResult res = runTost(c, r.get("method"), lower, upper);
+        double alpha = number(r, "alpha");
+        EquivalenceResult res = runTost(c, r.get("method"), lower, upper, alpha);
         if (lower != null) {
             assertRel(name + " tL", res.tLower(), number(r, "t_lower"), REL);
             assertProbability(name + " pL", res.pLower(), number(r, "p_lower"), REL_P);
@@ -171,13 +180,14 @@ class RReferenceCasesTest {
             assertThat(res.pUpper()).isNull();
         }
         assertProbability(name + " p", res.p(), number(r, "p"), REL_P);
-        assertNear(name + " 90% lower", res.ciLower(), number(r, "ci_lower"), REL, res.se());
-        assertNear(name + " 90% upper", res.ciUpper(), number(r, "ci_upper"), REL, res.se());
-        assertThat(res.level()).isCloseTo(0.90, org.assertj.core.data.Offset.offset(1e-15));
+        assertNear(name + " (1-2a) lower", res.ciLower(), number(r, "ci_lower"), REL, res.se());
+        assertNear(name + " (1-2a) upper", res.ciUpper(), number(r, "ci_upper"), REL, res.se());
+        assertThat(res.level()).isCloseTo(1 - 2 * alpha, org.assertj.core.data.Offset.offset(1e-15));
+        assertThat(res.alpha()).isEqualTo(alpha);
         // the conclusion R's own numbers imply by the tail rule (ALGORITHMS.md §3)
         assertThat(res.conclusion()).as(name + " conclusion").isEqualTo(tailRule(lower, upper,
                 number(r, "p_lower"), number(r, "p_upper"), number(r, "t_lower"), number(r, "t_upper"),
-                res.df(), 0.05));
+                res.df(), alpha));
     }
 
     /** The tail rule of ALGORITHMS.md §3 from given p and t values. */
@@ -219,7 +229,8 @@ class RReferenceCasesTest {
         for (Map<String, String> r : Accuracy.csv("r/r-tost.csv")) {
             Double lower = number(r, "margin_lower");
             Double upper = number(r, "margin_upper");
-            EquivalenceResult res = runTost(caseOf(r.get("case")), r.get("method"), lower, upper);
+            EquivalenceResult res = runTost(caseOf(r.get("case")), r.get("method"), lower, upper,
+                    number(r, "alpha"));
             assertThat(intervalRule(lower, upper, res.ciLower(), res.ciUpper()))
                     .as("%s %s (%s, %s): interval [%s, %s]", r.get("case"), r.get("method"), lower, upper,
                             res.ciLower(), res.ciUpper())
@@ -243,7 +254,8 @@ class RReferenceCasesTest {
     @MethodSource("statsmodelsRows")
     void tostMatchesStatsmodels(String name, Map<String, String> r) {
         Case c = caseOf(r.get("case"));
-        EquivalenceResult res = runTost(c, r.get("method"), number(r, "margin_lower"), number(r, "margin_upper"));
+        EquivalenceResult res = runTost(c, r.get("method"), number(r, "margin_lower"), number(r, "margin_upper"),
+                0.05);
         assertRel(name + " t1 = tL", res.tLower(), number(r, "t1"), REL);
         assertRel(name + " t2 = tU", res.tUpper(), number(r, "t2"), REL);
         assertRel(name + " df", res.df(), number(r, "df1"), REL);
@@ -294,5 +306,50 @@ class RReferenceCasesTest {
         assertRel(name + " df1", res.df1(), number(r, "df1"), 0);
         assertRel(name + " df2", res.df2(), number(r, "df2"), 0);
         assertProbability(name + " p", res.p(), number(r, "p"), REL_P);
+    }
+
+    /**
+     * R: sqrt(f / qf(alpha, df1, df2)) and pf(f / lambda^2, df1, df2) on the var.test ratio — see
+     * r/r-sd-growth.csv; the limit is met iff that p &lt; α, and then the bound lies below λ.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("sdGrowthRows")
+    void sdGrowthMatchesR(String name, Map<String, String> r) {
+        Case c = caseOf(r.get("case"));
+        double limit = number(r, "limit");
+        double alpha = number(r, "alpha");
+        SdGrowthResult res = SpreadTests.sdGrowth(Descriptives.of(c.beforeSample()).summary(),
+                Descriptives.of(c.afterSample()).summary(), limit, alpha);
+        assertRel(name + " sd ratio", res.sdRatio(), number(r, "sd_ratio"), REL);
+        assertRel(name + " upper bound", res.upperBound(), number(r, "upper_bound"), REL);
+        assertProbability(name + " p", res.p(), number(r, "p"), REL_P);
+        assertThat(res.met()).isEqualTo(number(r, "p") < alpha);
+        assertThat(res.met()).isEqualTo(number(r, "upper_bound") < limit);
+        assertThat(res.level()).isCloseTo(1 - alpha, org.assertj.core.data.Offset.offset(1e-15));
+    }
+
+    /**
+     * R: mean(), sd(), median(), min(), max() of the residuals (value − offset) — see
+     * r/r-descriptives.csv. The offset is added back here; the sum is one rounding, so the location
+     * statistics are compared to 2 ulp of max(|value|, sd) (a mean near 0 carries rounding of the size
+     * of the data, not of itself), and the sd to 1e-13.
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("descriptivesRows")
+    void descriptivesMatchR(String name, Map<String, String> r) {
+        Case c = caseOf(r.get("case"));
+        Descriptives d = Descriptives.of(r.get("group").equals("before") ? c.beforeSample() : c.afterSample());
+        assertThat((double) d.n()).isEqualTo(number(r, "n"));
+        double sd = number(r, "sd");
+        assertUlps(name + " mean", d.mean(), c.offset() + number(r, "mean_residual"), sd);
+        assertUlps(name + " median", d.median(), c.offset() + number(r, "median_residual"), sd);
+        assertUlps(name + " min", d.min(), c.offset() + number(r, "min_residual"), sd);
+        assertUlps(name + " max", d.max(), c.offset() + number(r, "max_residual"), sd);
+        assertRel(name + " sd", d.sd(), number(r, "sd"), 1e-13);
+    }
+
+    private static void assertUlps(String what, double actual, double expected, double scale) {
+        assertThat(Math.abs(actual - expected)).as("%s: got %s, expected %s", what, actual, expected)
+                .isLessThanOrEqualTo(2 * Math.ulp(Math.max(Math.abs(expected), scale)));
     }
 }

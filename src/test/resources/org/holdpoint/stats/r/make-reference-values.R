@@ -6,7 +6,8 @@
 # Calls: stats::t.test (Welch: var.equal = FALSE; pooled: var.equal = TRUE; paired = TRUE) at conf.level 0.95 and 0.90;
 #        stats::var.test (ratio = var(after)/var(before), two-sided, conf.level 0.95);
 #        car::leveneTest(value ~ group, center = median);
-#        TOST by formula from t.test's estimate, stderr and parameter (df) with pt() and qt() (alpha = 0.05 each side);
+#        TOST by formula from t.test's estimate, stderr and parameter (df) with pt() and qt() (alpha = 0.05, 0.10);
+#        sd-growth bound sqrt(f / qf(alpha, df1, df2)) and pf(f / lambda^2, df1, df2); mean, sd, median, min, max;
 #        pt, pf(lower.tail = FALSE), qnorm, qt, qf, qchisq for the distribution checks.
 # Orientation (the project's): x = after, y = before, so the difference is after - before and the ratio after/before.
 # Every number is printed with sprintf("%.17g").
@@ -19,7 +20,6 @@
 # project's Brown-Forsythe also works on the binary64 values.
 
 set.seed(20261201)
-alpha <- 0.05
 f17 <- function(x) ifelse(is.na(x), "NA", sprintf("%.17g", x))
 
 # decimal text of an integer count of 10^-k units (exact: |u| < 2^53)
@@ -62,7 +62,7 @@ far-tail-30-30      30  30  10.0   0.1    1.0      0.1     3   0      FALSE
 ")
 
 inputs <- list(); tt_rows <- list(); tost_rows <- list(); var_rows <- list(); lev_rows <- list()
-case_rows <- list()
+case_rows <- list(); sd_rows <- list(); desc_rows <- list()
 
 for (i in seq_len(nrow(specs))) {
   s <- specs[i, ]
@@ -96,15 +96,16 @@ for (i in seq_len(nrow(specs))) {
     }
     tt <- t.test(xa, xb, var.equal = designs[[d]]$var.equal, paired = designs[[d]]$paired)
     est <- if (d == "paired") unname(tt$estimate) else unname(tt$estimate[1] - tt$estimate[2])
-    se <- tt$stderr; df <- unname(tt$parameter); q <- qt(1 - alpha, df)
-    for (mg in margins) {
+    se <- tt$stderr; df <- unname(tt$parameter)
+    for (a_tost in c(0.05, 0.10)) for (mg in margins) {
+      q <- qt(1 - a_tost, df)
       L <- mg[1]; U <- mg[2]
       tL <- if (is.na(L)) NA else (est - L) / se
       tU <- if (is.na(U)) NA else (est - U) / se
       pL <- if (is.na(L)) NA else pt(tL, df, lower.tail = FALSE)
       pU <- if (is.na(U)) NA else pt(tU, df)
       tost_rows[[length(tost_rows) + 1]] <- data.frame(case = s$id, method = d, margin_lower = f17(L),
-        margin_upper = f17(U), alpha = "0.05", t_lower = f17(tL), t_upper = f17(tU), p_lower = f17(pL),
+        margin_upper = f17(U), alpha = sprintf("%.2f", a_tost), t_lower = f17(tL), t_upper = f17(tU), p_lower = f17(pL),
         p_upper = f17(pU), p = f17(max(pL, pU, na.rm = TRUE)), ci_lower = f17(est - q * se),
         ci_upper = f17(est + q * se))
     }
@@ -114,6 +115,18 @@ for (i in seq_len(nrow(specs))) {
   p_acc <- min(1, 2 * min(pf(f, d1, d2), pf(f, d1, d2, lower.tail = FALSE)))
   var_rows[[i]] <- data.frame(case = s$id, ratio = f17(f), df1 = f17(d1), df2 = f17(d2), p_var_test = f17(vt$p.value),
                               p_both_tails = f17(p_acc), ci_lower = f17(vt$conf.int[1]), ci_upper = f17(vt$conf.int[2]))
+  for (lambda in c(1.1, 1.5, 3)) for (a_sd in c(0.05, 0.10)) {
+    sd_rows[[length(sd_rows) + 1]] <- data.frame(case = s$id, limit = sprintf("%.1f", lambda),
+      alpha = sprintf("%.2f", a_sd), sd_ratio = f17(sqrt(f)), upper_bound = f17(sqrt(f / qf(a_sd, d1, d2))),
+      p = f17(pf(f / lambda^2, d1, d2)))
+  }
+  for (grp in c("before", "after")) {
+    x <- if (grp == "before") xb else xa
+    off <- s$offset
+    desc_rows[[length(desc_rows) + 1]] <- data.frame(case = s$id, group = grp, n = length(x),
+      mean_residual = f17(mean(x)), sd = f17(sd(x)), median_residual = f17(median(x)),
+      min_residual = f17(min(x)), max_residual = f17(max(x)))
+  }
   g <- factor(c(rep("before", s$nb), rep("after", s$na)), levels = c("before", "after"))
   lt <- suppressWarnings(car::leveneTest(c(fb, fa), g, center = median))
   lev_rows[[i]] <- data.frame(case = s$id, f = f17(lt[1, "F value"]), df1 = f17(lt[1, "Df"]), df2 = f17(lt[2, "Df"]),
@@ -141,13 +154,19 @@ wcsv(bind(inputs), "r-inputs.csv", c("value: the decimal text the project reads;
 wcsv(bind(tt_rows), "r-ttest.csv", c("t.test(x = after, y = before, var.equal = (method == 'pooled'),",
   "paired = (method == 'paired'), conf.level) on the residuals; estimate = mean(x) - mean(y) as t.test forms it",
   "(the mean difference when paired); stderr = t.test()$stderr."))
-wcsv(bind(tost_rows), "r-tost.csv", c("TOST by formula on t.test(after, before, ...) at alpha = 0.05 each side:",
+wcsv(bind(tost_rows), "r-tost.csv", c("TOST by formula on t.test(after, before, ...) at alpha each side:",
   "t_lower = (est - L)/se, p_lower = pt(t_lower, df, lower.tail = FALSE); t_upper = (est - U)/se,",
-  "p_upper = pt(t_upper, df); p = max of those present; ci = est -/+ qt(0.95, df) * se (the 90% interval).",
+  "p_upper = pt(t_upper, df); p = max of those present; ci = est -/+ qt(1 - alpha, df) * se (the 1 - 2 alpha",
+  "interval; alpha = 0.05 and 0.10).",
   "NA = margin side absent (one-sided margin)."))
 wcsv(bind(var_rows), "r-var-test.csv", c("var.test(x = after, y = before) on the residuals, conf.level 0.95.",
   "p_var_test = var.test()$p.value, which R forms as 2*min(p, 1 - p); p_both_tails = min(1, 2*min(pf(f, d1, d2),",
   "pf(f, d1, d2, lower.tail = FALSE))), each tail from its own side."))
+wcsv(bind(sd_rows), "r-sd-growth.csv", c("sd-growth limit lambda on the var.test ratio f = var(after)/var(before) of the",
+  "residuals: upper_bound = sqrt(f / qf(alpha, df1, df2)) (the one-sided 1 - alpha bound on sd_a/sd_b),",
+  "p = pf(f / lambda^2, df1, df2) (H0: sd_a/sd_b >= lambda; limit met iff p < alpha)."))
+wcsv(bind(desc_rows), "r-descriptives.csv", c("mean(), sd(), median(), min(), max() of each group's residuals",
+  "(value - offset; add the offset back for the value itself)."))
 wcsv(bind(lev_rows), "r-levene.csv", c("car::leveneTest(c(before, after), factor(group), center = median) on the full",
   "values as binary64 (r_double in r-inputs.csv): F value, Df, residual Df, Pr(>F). NA/Inf: F undefined."))
 

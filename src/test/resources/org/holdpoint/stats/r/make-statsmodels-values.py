@@ -7,7 +7,7 @@
 # Calls: statsmodels.stats.weightstats.ttost_ind(after, before, low, upp, usevar='unequal' | 'pooled') and
 #        ttost_paired(after, before, low, upp), on the residuals (value - offset) of r-inputs.csv, as the R values.
 #        Both return (pvalue, (t1, p1, df1), (t2, p2, df2)): 1 = the test against the lower margin, 2 = against the upper.
-# Only margins with both sides are used (statsmodels has no one-sided margin form). Numbers printed with '%.17g'.
+# Only the alpha = 0.05 rows with margins of both sides are used (statsmodels has no one-sided margin form). Numbers printed with '%.17g'.
 # Also checks that R parsed every input value to the correctly rounded double (Python's float() is correctly rounded).
 import csv
 import sys
@@ -31,7 +31,7 @@ for r in rows("r-inputs.csv"):
 
 out = []
 for r in rows("r-tost.csv"):
-    if r["margin_lower"] == "NA" or r["margin_upper"] == "NA":
+    if r["margin_lower"] == "NA" or r["margin_upper"] == "NA" or r["alpha"] != "0.05":
         continue
     a = np.array(inputs[r["case"]]["after"])
     b = np.array(inputs[r["case"]]["before"])
