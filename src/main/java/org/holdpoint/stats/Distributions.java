@@ -322,6 +322,11 @@ public final class Distributions {
         checkOpenProbability(p);
         double x = CHI2_CACHE.computeIfAbsent(df, d -> new ChiSquaredDistribution(null, d, SOLVER_ACCURACY))
                 .inverseCumulativeProbability(p);
+        if (!(x > 0) && p < 0.5) {
+            // the solver returns 0 for a tiny p (p = 1e-10 at ν = 1): start Newton from the small-x limit
+            // P(ν/2, x/2) ≈ (x/2)^(ν/2)/Γ(ν/2 + 1) instead (Abramowitz & Stegun 6.5.29, first term)
+            x = 2 * Math.exp((Math.log(p) + Gamma.logGamma(0.5 * df + 1)) / (0.5 * df));
+        }
         for (int i = 0; i < 6 && x > 0; i++) {
             double diff = p <= 0.5 ? chiSquaredCdf(x, df) - p : (1 - p) - chiSquaredUpper(x, df);
             double logDens = (0.5 * df - 1) * Math.log(x) - 0.5 * x - 0.5 * df * Math.log(2) - Gamma.logGamma(0.5 * df);

@@ -1,0 +1,173 @@
+package org.holdpoint;
+
+import static com.tngtech.archunit.base.DescribedPredicate.describe;
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
+
+import com.tngtech.archunit.core.domain.JavaClass;
+import com.tngtech.archunit.core.importer.ImportOption;
+import com.tngtech.archunit.junit.AnalyzeClasses;
+import com.tngtech.archunit.junit.ArchTest;
+import com.tngtech.archunit.lang.ArchRule;
+import java.util.Arrays;
+import java.util.Set;
+
+/**
+ * The package dependency rules of HELPER-RULES.md ("Architecture") and STYLE.md ("Proposed package
+ * layout", "Dependency directions"), one rule per direction, checked on the main classes. Rules on
+ * packages that do not exist yet allow an empty "should" so they bite as soon as the package
+ * appears.
+ */
+@AnalyzeClasses(packages = "org.holdpoint", importOptions = ImportOption.DoNotIncludeTests.class)
+class ArchitectureTest {
+    private static final String ROOT = "org.holdpoint";
+    private static final String STATS = ROOT + ".stats..";
+    private static final String STUDY = ROOT + ".study..";
+    private static final String IMPORTER = ROOT + ".importer..";
+    private static final String CHART = ROOT + ".chart..";
+    private static final String REPORT = ROOT + ".report..";
+    private static final String ARCHIVE = ROOT + ".archive..";
+    private static final String WORKFLOW = ROOT + ".workflow..";
+    private static final String CLI = ROOT + ".cli..";
+    private static final String UI = ROOT + ".ui..";
+    private static final String[] PROJECT = {STATS, STUDY, IMPORTER, CHART, REPORT, ARCHIVE, WORKFLOW, CLI, UI};
+
+    private static final String[] IO_AND_UI = {"java.io..", "java.nio.file..", "java.awt..", "javax.swing..",
+        "java.sql..", "javax.sql..", "org.apache.poi..", "org.jfree.."};
+
+    /** Every project package except the given ones. */
+    private static String[] projectExcept(String... allowed) {
+        Set<String> keep = Set.of(allowed);
+        return Arrays.stream(PROJECT).filter(p -> !keep.contains(p)).toArray(String[]::new);
+    }
+
+    // ---- stats: pure numerics ----
+
+    @ArchTest
+    static final ArchRule statsDependsOnNoOtherProjectPackage = noClasses().that().resideInAPackage(STATS)
+            .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS))
+            .orShould().dependOnClassesThat().resideInAPackage(ROOT);
+
+    @ArchTest
+    static final ArchRule statsHasNoIoDatabaseOrUi = noClasses().that().resideInAPackage(STATS)
+            .should().dependOnClassesThat().resideInAnyPackage(IO_AND_UI)
+            .because("stats is pure numerics (no java.io, java.nio.file, AWT/Swing, JDBC, POI, JFreeChart)");
+
+    @ArchTest
+    static final ArchRule statsUsesOnlyTheJdkAndCommonsMath = classes().that().resideInAPackage(STATS)
+            .should().onlyDependOnClassesThat().resideInAnyPackage("java..", "org.apache.commons.math3..", STATS);
+
+    // ---- study: model and ports, depends only on stats ----
+
+    @ArchTest
+    static final ArchRule studyDependsOnlyOnStats = noClasses().that().resideInAPackage(STUDY)
+            .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY))
+            .orShould().dependOnClassesThat().resideInAPackage(ROOT);
+
+    @ArchTest
+    static final ArchRule studyHasNoFileDatabaseOrUi = noClasses().that().resideInAPackage(STUDY)
+            .should().dependOnClassesThat().resideInAnyPackage("java.nio.file..", "java.awt..", "javax.swing..",
+                    "java.sql..", "javax.sql..", "org.apache.poi..", "org.jfree..")
+            .orShould().dependOnClassesThat(describe("java.io file classes", (JavaClass c) ->
+                    c.getPackageName().equals("java.io")
+                            && (c.getSimpleName().startsWith("File") || c.getSimpleName().equals("RandomAccessFile"))));
+
+    // ---- adapters: importer, chart, report, archive depend on study/stats only, never on each other ----
+
+    @ArchTest
+    static final ArchRule importerDependsOnlyOnStudyAndStats = adapterRule(IMPORTER);
+
+    @ArchTest
+    static final ArchRule chartDependsOnlyOnStudyAndStats = adapterRule(CHART);
+
+    @ArchTest
+    static final ArchRule reportDependsOnlyOnStudyAndStats = adapterRule(REPORT);
+
+    @ArchTest
+    static final ArchRule archiveDependsOnlyOnStudyAndStats = adapterRule(ARCHIVE);
+
+    private static ArchRule adapterRule(String adapter) {
+        return noClasses().that().resideInAPackage(adapter)
+                .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY, adapter))
+                .orShould().dependOnClassesThat().resideInAPackage(ROOT)
+                .allowEmptyShould(true);
+    }
+
+    @ArchTest
+    static final ArchRule reportNeverImportsJFreeChart = noClasses().that().resideInAPackage(REPORT)
+            .should().dependOnClassesThat().resideInAPackage("org.jfree..")
+            .because("the report embeds an already rendered PNG received as bytes").allowEmptyShould(true);
+
+    @ArchTest
+    static final ArchRule chartNeverImportsPoi = noClasses().that().resideInAPackage(CHART)
+            .should().dependOnClassesThat().resideInAPackage("org.apache.poi..").allowEmptyShould(true);
+
+    // ---- workflow: use cases ----
+
+    @ArchTest
+    static final ArchRule workflowNeverImportsShellsSwingOrJdbc = noClasses().that().resideInAPackage(WORKFLOW)
+            .should().dependOnClassesThat().resideInAnyPackage(CLI, UI, ROOT, "javax.swing..", "java.sql..",
+                    "javax.sql..")
+            .allowEmptyShould(true);
+
+    @ArchTest
+    static final ArchRule workflowReachesTheArchiveOnlyThroughItsPort = noClasses().that().resideInAPackage(WORKFLOW)
+            .should().dependOnClassesThat().resideInAPackage(ARCHIVE).allowEmptyShould(true);
+
+    // ---- cli and ui: thin shells over workflow ----
+
+    @ArchTest
+    static final ArchRule cliNeverImportsUi = noClasses().that().resideInAPackage(CLI)
+            .should().dependOnClassesThat().resideInAPackage(UI).allowEmptyShould(true);
+
+    @ArchTest
+    static final ArchRule uiNeverImportsCli = noClasses().that().resideInAPackage(UI)
+            .should().dependOnClassesThat().resideInAPackage(CLI).allowEmptyShould(true);
+
+    @ArchTest
+    static final ArchRule cliGoesThroughWorkflow = noClasses().that().resideInAPackage(CLI)
+            .should().dependOnClassesThat().resideInAnyPackage(IMPORTER, REPORT, ARCHIVE, CHART, ROOT)
+            .allowEmptyShould(true);
+
+    @ArchTest
+    static final ArchRule uiGoesThroughWorkflow = noClasses().that().resideInAPackage(UI)
+            .should().dependOnClassesThat().resideInAnyPackage(IMPORTER, REPORT, ARCHIVE, ROOT)
+            .because("ui may use chart to show a chart panel, everything else through workflow")
+            .allowEmptyShould(true);
+
+    // ---- the root package is the composition root ----
+
+    @ArchTest
+    static final ArchRule onlyTheRootPackageUsesArchiveClasses = classes().that().resideInAPackage(ARCHIVE)
+            .should().onlyHaveDependentClassesThat().resideInAnyPackage(ROOT, ARCHIVE).allowEmptyShould(true);
+
+    // ---- third-party libraries stay in their package ----
+
+    @ArchTest
+    static final ArchRule onlyCliUsesPicocli = noClasses().that().resideOutsideOfPackages(CLI, ROOT)
+            .should().dependOnClassesThat().resideInAPackage("picocli..");
+
+    @ArchTest
+    static final ArchRule onlyImporterAndReportUsePoi = noClasses().that()
+            .resideOutsideOfPackages(IMPORTER, REPORT)
+            .should().dependOnClassesThat().resideInAPackage("org.apache.poi..");
+
+    @ArchTest
+    static final ArchRule onlyArchiveUsesJdbc = noClasses().that().resideOutsideOfPackages(ARCHIVE, ROOT)
+            .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "javax.sql..");
+
+    @ArchTest
+    static final ArchRule onlyUiUsesSwing = noClasses().that().resideOutsideOfPackages(UI, ROOT)
+            .should().dependOnClassesThat().resideInAPackage("javax.swing..");
+
+    @ArchTest
+    static final ArchRule onlyChartAndUiUseJFreeChart = noClasses().that().resideOutsideOfPackages(CHART, UI)
+            .should().dependOnClassesThat().resideInAPackage("org.jfree..");
+
+    // ---- no cycles ----
+
+    @ArchTest
+    static final ArchRule noCyclesBetweenPackages = slices().matching("org.holdpoint.(*)..").should()
+            .beFreeOfCycles();
+}
