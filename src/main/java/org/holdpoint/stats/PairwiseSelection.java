@@ -13,6 +13,8 @@ package org.holdpoint.stats;
  * once on heavy ties. All counts are {@code long}; nothing of size K is allocated.
  */
 abstract class PairwiseSelection {
+    /** Live values per row and column at which the rounds stop and a quickselect finishes. */
+    private static final long LIVE_FACTOR = 8;
     final int rows;
     final int cols;
     private final int[] lo;
@@ -126,7 +128,7 @@ abstract class PairwiseSelection {
             hi[i] = cols;
         }
         long below = 0;
-        long limit = 8L * ((long) rows + cols);
+        long limit = LIVE_FACTOR * ((long) rows + cols);
         lastRounds = 0;
         while (true) {
             lastRounds++;
