@@ -172,13 +172,17 @@ public final class RankSumTest {
     private static RankInterval exactInterval(PairwiseSelection sel, double[] cdf, long k, double twoSidedAlpha,
             int m, int n, List<String> notes) {
         int qu = RankDistributions.lowerQuantile(cdf, twoSidedAlpha / 2);
-        boolean reached = qu > 0;
-        if (!reached) {
+        boolean raised = qu == 0;
+        if (raised) {
             qu = 1;
+        }
+        double achieved = 1 - 2 * cdf[qu - 1];
+        // the level falls short only when q was raised from 0, and then only if 1 − 2P(U ≤ 0) is below it
+        boolean reached = !raised || achieved >= 1 - twoSidedAlpha - 1e-12;
+        if (!reached) {
             notes.add(String.format(java.util.Locale.ROOT, "the %.4g level cannot be reached with %d and %d values; "
                     + "the interval spans all differences", 1 - twoSidedAlpha, m, n));
         }
-        double achieved = 1 - 2 * cdf[qu - 1];
         double lower = sel.select(qu);
         double upper = sel.select(k - qu + 1);
         return new RankInterval(lower, upper, 1 - twoSidedAlpha, Math.max(0, achieved), reached, RankMethod.EXACT);

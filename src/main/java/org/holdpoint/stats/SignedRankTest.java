@@ -202,13 +202,17 @@ public final class SignedRankTest {
     private static RankInterval exactInterval(PairwiseSelection sel, double[] cdf, long k, double twoSidedAlpha, int n,
             List<String> notes) {
         int qu = RankDistributions.lowerQuantile(cdf, twoSidedAlpha / 2);
-        boolean reached = qu > 0;
-        if (!reached) {
+        boolean raised = qu == 0;
+        if (raised) {
             qu = 1;
+        }
+        double achieved = 1 - 2 * cdf[qu - 1];
+        // the level falls short only when q was raised from 0, and then only if 1 − 2P(U ≤ 0) is below it
+        boolean reached = !raised || achieved >= 1 - twoSidedAlpha - 1e-12;
+        if (!reached) {
             notes.add(String.format(Locale.ROOT, "the %.4g level cannot be reached with %d differences; the interval "
                     + "spans all Walsh averages", 1 - twoSidedAlpha, n));
         }
-        double achieved = 1 - 2 * cdf[qu - 1];
         return new RankInterval(0.5 * sel.select(qu), 0.5 * sel.select(k - qu + 1), 1 - twoSidedAlpha,
                 Math.max(0, achieved), reached, RankMethod.EXACT);
     }
@@ -224,8 +228,8 @@ public final class SignedRankTest {
         }
         boolean reached = a == twoSidedAlpha;
         if (a >= 1) {
-            double[] sorted = d.clone();
-            double med = Quantiles.median(sorted);
+            int n = d.length;
+            double med = n % 2 == 1 ? d[n / 2] : RankDistributions.midpoint(d[n / 2 - 1], d[n / 2]);
             notes.add(String.format(Locale.ROOT, "the %.4g level cannot be reached with %d differences; both bounds "
                     + "are the median difference", 1 - twoSidedAlpha, d.length));
             return new RankInterval(med, med, 1 - twoSidedAlpha, 0, false, RankMethod.NORMAL);
