@@ -1,0 +1,339 @@
+package org.holdpoint.stats;
+
+/**
+ * The k-th smallest pairwise difference fl(a_i − b_j) or Walsh sum fl(d_i + d_j) (i ≤ j) without
+ * building the K values, in O((m + n) log K) time and O(m + n) memory.
+ *
+ * <p>The values form a virtual matrix whose rows and columns never decrease (rounding is monotone,
+ * so this holds for the computed doubles). Each row keeps a window of live columns; each round picks
+ * the weighted median of the row-window medians as pivot (Johnson &amp; Mizoguchi 1978, "Selecting the
+ * Kth element in X+Y and X1+X2+…+Xm", SIAM J. Comput. 7:147–153; the one-sample form is Monahan
+ * 1984, ACM TOMS 10:265–270), counts the live values below and at the pivot with one monotone
+ * two-pointer sweep, and drops at least a quarter of the live values. The three-way split ends at
+ * once on heavy ties. All counts are {@code long}; nothing of size K is allocated.
+ */
+abstract class PairwiseSelection {
+    /** Live values per row and column at which the rounds stop and a quickselect finishes. */
+    private static final long LIVE_FACTOR = 8;
+    final int rows;
+    final int cols;
+    private final int[] lo;
+    private final int[] hi;
+    private final int[] ltCol;
+    private final int[] leCol;
+    private final double[] medians;
+    private final long[] weights;
+    /** Number of rounds of the last selection (for benchmarks). */
+    int lastRounds;
+
+    PairwiseSelection(int rows, int cols) {
+        this.rows = rows;
+        this.cols = cols;
+        this.lo = new int[rows];
+        this.hi = new int[rows];
+        this.ltCol = new int[rows];
+        this.leCol = new int[rows];
+        this.medians = new double[rows];
+        this.weights = new long[rows];
+    }
+
+    /** The value in row i, absolute column j. */
+    abstract double value(int i, int j);
+
+    /** The first column of row i (0 for differences, i for Walsh sums). */
+    abstract int firstColumn(int i);
+
+    /** @return the number K of values in the matrix */
+    long size() {
+        long k = 0;
+        for (int i = 0; i < rows; i++) {
+            k += cols - firstColumn(i);
+        }
+        return k;
+    }
+
+    /**
+     * The differences fl(a_i − b_j) of two ascending arrays; row i, column j holds a_i − b_{n−1−j}.
+     */
+    static PairwiseSelection differences(double[] sortedA, double[] sortedB) {
+        return new Differences(sortedA, sortedB);
+    }
+
+    /** The Walsh sums fl(d_i + d_j), i ≤ j, of one ascending array (halve them for the averages). */
+    static PairwiseSelection walshSums(double[] sortedD) {
+        return new WalshSums(sortedD);
+    }
+
+    /**
+     * For each row the absolute column of the first value ≥ p (strict = true) or &gt; p, found by one
+     * pointer carried down the rows: the count below p never increases from row to row.
+     */
+    private void sweep(double p, boolean strict, int[] out) {
+        int g = cols;
+        for (int i = 0; i < rows; i++) {
+            int first = firstColumn(i);
+            if (g < first) {
+                g = first;
+            }
+            if (g > cols) {
+                g = cols;
+            }
+            if (strict) {
+                while (g > first && value(i, g - 1) >= p) {
+                    g--;
+                }
+            } else {
+                while (g > first && value(i, g - 1) > p) {
+                    g--;
+                }
+            }
+            out[i] = g;
+        }
+    }
+
+    /** Number of values ≤ p in the whole matrix. */
+    long countAtMost(double p) {
+        sweep(p, false, leCol);
+        long c = 0;
+        for (int i = 0; i < rows; i++) {
+            c += leCol[i] - firstColumn(i);
+        }
+        return c;
+    }
+
+    /** The smallest value &gt; v in the matrix, or NaN if none. */
+    double smallestAbove(double v) {
+        sweep(v, false, leCol);
+        double best = Double.NaN;
+        for (int i = 0; i < rows; i++) {
+            if (leCol[i] < cols) {
+                double x = value(i, leCol[i]);
+                if (!(x >= best)) {
+                    best = x;
+                }
+            }
+        }
+        return best;
+    }
+
+    /**
+     * The k-th smallest value (1-based) of the matrix.
+     *
+     * @param k in [1, K]
+     * @return that value, exactly one of the computed doubles
+     */
+    double select(long k) {
+        for (int i = 0; i < rows; i++) {
+            lo[i] = firstColumn(i);
+            hi[i] = cols;
+        }
+        long below = 0;
+        long limit = LIVE_FACTOR * ((long) rows + cols);
+        lastRounds = 0;
+        while (true) {
+            lastRounds++;
+            long live = 0;
+            for (int i = 0; i < rows; i++) {
+                live += hi[i] - lo[i];
+            }
+            if (live <= limit) {
+                return selectFromLive((int) live, (int) (k - below));
+            }
+            double p = pivot();
+            sweep(p, true, ltCol);
+            sweep(p, false, leCol);
+            long lt = 0;
+            long le = 0;
+            for (int i = 0; i < rows; i++) {
+                ltCol[i] = clamp(ltCol[i], lo[i], hi[i]);
+                leCol[i] = clamp(leCol[i], lo[i], hi[i]);
+                lt += ltCol[i] - lo[i];
+                le += leCol[i] - lo[i];
+            }
+            if (k <= below + lt) {
+                System.arraycopy(ltCol, 0, hi, 0, rows);
+            } else if (k > below + le) {
+                below += le;
+                System.arraycopy(leCol, 0, lo, 0, rows);
+            } else {
+                return p;
+            }
+        }
+    }
+
+    private static int clamp(int v, int min, int max) {
+        return v < min ? min : Math.min(v, max);
+    }
+
+    /** The weighted median of the row-window medians, weights = window sizes. */
+    private double pivot() {
+        int r = 0;
+        long total = 0;
+        for (int i = 0; i < rows; i++) {
+            int w = hi[i] - lo[i];
+            if (w > 0) {
+                medians[r] = value(i, lo[i] + (w - 1) / 2);
+                weights[r] = w;
+                total += w;
+                r++;
+            }
+        }
+        return weightedMedian(medians, weights, r, (total + 1) / 2);
+    }
+
+    /** The value at which the cumulative weight (in ascending value order) first reaches target. */
+    static double weightedMedian(double[] v, long[] w, int size, long target) {
+        int left = 0;
+        int right = size - 1;
+        long need = target;
+        while (true) {
+            if (left == right) {
+                return v[left];
+            }
+            double p = v[left + (right - left) / 2];
+            // three-way partition of [left, right] into < p, == p, > p
+            int lt = left;
+            int gt = right;
+            int i = left;
+            while (i <= gt) {
+                if (v[i] < p) {
+                    swap(v, w, lt++, i++);
+                } else if (v[i] > p) {
+                    swap(v, w, i, gt--);
+                } else {
+                    i++;
+                }
+            }
+            long wLess = 0;
+            for (int j = left; j < lt; j++) {
+                wLess += w[j];
+            }
+            long wEq = 0;
+            for (int j = lt; j <= gt; j++) {
+                wEq += w[j];
+            }
+            if (need <= wLess) {
+                right = lt - 1;
+            } else if (need <= wLess + wEq) {
+                return p;
+            } else {
+                need -= wLess + wEq;
+                left = gt + 1;
+            }
+        }
+    }
+
+    private static void swap(double[] v, long[] w, int a, int b) {
+        double tv = v[a];
+        v[a] = v[b];
+        v[b] = tv;
+        long tw = w[a];
+        w[a] = w[b];
+        w[b] = tw;
+    }
+
+    private double selectFromLive(int live, int rank) {
+        double[] buf = new double[live];
+        int c = 0;
+        for (int i = 0; i < rows; i++) {
+            for (int j = lo[i]; j < hi[i]; j++) {
+                buf[c++] = value(i, j);
+            }
+        }
+        return quickselect(buf, rank - 1);
+    }
+
+    /** The element of rank r (0-based) of v, by Hoare's selection with a three-way split; v is permuted. */
+    static double quickselect(double[] v, int r) {
+        int left = 0;
+        int right = v.length - 1;
+        while (left < right) {
+            double p = median3(v[left], v[left + (right - left) / 2], v[right]);
+            int lt = left;
+            int gt = right;
+            int i = left;
+            while (i <= gt) {
+                double x = v[i];
+                if (x < p) {
+                    v[i++] = v[lt];
+                    v[lt++] = x;
+                } else if (x > p) {
+                    v[i] = v[gt];
+                    v[gt--] = x;
+                } else {
+                    i++;
+                }
+            }
+            if (r < lt) {
+                right = lt - 1;
+            } else if (r > gt) {
+                left = gt + 1;
+            } else {
+                return p;
+            }
+        }
+        return v[left];
+    }
+
+    private static double median3(double a, double b, double c) {
+        return Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
+    }
+
+    /**
+     * The lower median (K/2-th for even K, else the middle) and the upper median ((K/2+1)-th for even
+     * K); the upper one follows from the lower v: v itself if #{≤ v} &gt; K/2, else the smallest value
+     * above v.
+     */
+    double[] middlePair() {
+        long k = size();
+        long lowerRank = (k + 1) / 2;
+        double v = select(lowerRank);
+        if (k % 2 == 1) {
+            return new double[] {v, v};
+        }
+        double upper = countAtMost(v) > k / 2 ? v : smallestAbove(v);
+        return new double[] {v, upper};
+    }
+
+    private static final class Differences extends PairwiseSelection {
+        private final double[] a;
+        private final double[] b;
+        private final int nb1;
+
+        Differences(double[] a, double[] b) {
+            super(a.length, b.length);
+            this.a = a;
+            this.b = b;
+            this.nb1 = b.length - 1;
+        }
+
+        @Override
+        double value(int i, int j) {
+            return a[i] - b[nb1 - j];
+        }
+
+        @Override
+        int firstColumn(int i) {
+            return 0;
+        }
+    }
+
+    private static final class WalshSums extends PairwiseSelection {
+        private final double[] d;
+
+        WalshSums(double[] d) {
+            super(d.length, d.length);
+            this.d = d;
+        }
+
+        @Override
+        double value(int i, int j) {
+            return d[i] + d[j];
+        }
+
+        @Override
+        int firstColumn(int i) {
+            return i;
+        }
+    }
+}

@@ -1,0 +1,125 @@
+package org.holdpoint.stats;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.Arrays;
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The k-th pairwise difference and Walsh sum against brute force (all K values built and sorted here in the test),
+ * on seeded random data: continuous, rounded (ties), and heavily tied (three distinct values).
+ */
+class PairwiseSelectionTest {
+    private static double[] draw(SplittableRandom rnd, int n, int kind) {
+        double[] x = new double[n];
+        for (int i = 0; i < n; i++) {
+            double g = rnd.nextGaussian() * 3 + 100;
+            x[i] = switch (kind) {
+                case 0 -> g;
+                case 1 -> Math.round(g * 10) / 10.0;
+                default -> rnd.nextInt(3) * 0.1;
+            };
+        }
+        Arrays.sort(x);
+        return x;
+    }
+
+    private static double[] bruteDifferences(double[] a, double[] b) {
+        double[] d = new double[a.length * b.length];
+        int c = 0;
+        for (double x : a) {
+            for (double y : b) {
+                d[c++] = x - y;
+            }
+        }
+        Arrays.sort(d);
+        return d;
+    }
+
+    private static double[] bruteWalsh(double[] d) {
+        double[] w = new double[d.length * (d.length + 1) / 2];
+        int c = 0;
+        for (int i = 0; i < d.length; i++) {
+            for (int j = i; j < d.length; j++) {
+                w[c++] = d[i] + d[j];
+            }
+        }
+        Arrays.sort(w);
+        return w;
+    }
+
+    @Test
+    void everyRankOfSmallMatricesMatchesBruteForce() {
+        SplittableRandom rnd = new SplittableRandom(20261201L);
+        for (int rep = 0; rep < 300; rep++) {
+            int kind = rep % 3;
+            double[] a = draw(rnd, 1 + rnd.nextInt(40), kind);
+            double[] b = draw(rnd, 1 + rnd.nextInt(40), kind);
+            double[] all = bruteDifferences(a, b);
+            PairwiseSelection sel = PairwiseSelection.differences(a, b);
+            assertThat(sel.size()).isEqualTo(all.length);
+            for (int k = 1; k <= all.length; k++) {
+                assertThat(sel.select(k)).as("rep %d k %d", rep, k).isEqualTo(all[k - 1]);
+            }
+            double[] w = bruteWalsh(a);
+            PairwiseSelection ws = PairwiseSelection.walshSums(a);
+            assertThat(ws.size()).isEqualTo(w.length);
+            for (int k = 1; k <= w.length; k++) {
+                assertThat(ws.select(k)).as("walsh rep %d k %d", rep, k).isEqualTo(w[k - 1]);
+            }
+        }
+    }
+
+    @Test
+    void largerMatricesPassThroughThePivotRoundsAndMatchBruteForce() {
+        SplittableRandom rnd = new SplittableRandom(7L);
+        for (int rep = 0; rep < 12; rep++) {
+            int kind = rep % 3;
+            double[] a = draw(rnd, 200 + rnd.nextInt(300), kind);
+            double[] b = draw(rnd, 200 + rnd.nextInt(300), kind);
+            double[] all = bruteDifferences(a, b);
+            PairwiseSelection sel = PairwiseSelection.differences(a, b);
+            double[] w = bruteWalsh(a);
+            PairwiseSelection ws = PairwiseSelection.walshSums(a);
+            for (int t = 0; t < 60; t++) {
+                int k = 1 + rnd.nextInt(all.length);
+                assertThat(sel.select(k)).isEqualTo(all[k - 1]);
+                int kw = 1 + rnd.nextInt(w.length);
+                assertThat(ws.select(kw)).isEqualTo(w[kw - 1]);
+            }
+            assertThat(sel.select(1)).isEqualTo(all[0]);
+            assertThat(sel.select(all.length)).isEqualTo(all[all.length - 1]);
+            int h = all.length / 2;
+            double[] mid = sel.middlePair();
+            if (all.length % 2 == 0) {
+                assertThat(mid).containsExactly(all[h - 1], all[h]);
+            } else {
+                assertThat(mid).containsExactly(all[h], all[h]);
+            }
+            int hw = w.length / 2;
+            double[] midW = ws.middlePair();
+            assertThat(midW[1]).isEqualTo(w[hw]);
+            assertThat(midW[0]).isEqualTo(w.length % 2 == 0 ? w[hw - 1] : w[hw]);
+        }
+    }
+
+    @Test
+    void weightedMedianAndQuickselectMatchSorting() {
+        SplittableRandom rnd = new SplittableRandom(3L);
+        for (int rep = 0; rep < 200; rep++) {
+            int n = 1 + rnd.nextInt(50);
+            double[] v = new double[n];
+            for (int i = 0; i < n; i++) {
+                v[i] = rnd.nextInt(6);
+            }
+            double[] sorted = v.clone();
+            Arrays.sort(sorted);
+            int r = rnd.nextInt(n);
+            assertThat(PairwiseSelection.quickselect(v.clone(), r)).isEqualTo(sorted[r]);
+            long[] w = new long[n];
+            Arrays.fill(w, 1);
+            assertThat(PairwiseSelection.weightedMedian(v.clone(), w, n, r + 1)).isEqualTo(sorted[r]);
+        }
+    }
+}
