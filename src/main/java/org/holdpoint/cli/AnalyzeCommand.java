@@ -6,7 +6,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.holdpoint.importer.ImportRequest;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Exclusion;
@@ -16,6 +15,7 @@ import org.holdpoint.study.SpecLimits;
 import org.holdpoint.workflow.AnalysisOutcome;
 import org.holdpoint.workflow.AnalyzeUseCase;
 import org.holdpoint.workflow.ConsoleProgress;
+import org.holdpoint.workflow.ImportOptions;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -181,7 +181,7 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        ImportRequest request = importRequest();
+        ImportOptions request = importOptions();
         AnalysisSettings settings = settings();
         AnalysisOutcome outcome = new AnalyzeUseCase().run(request, input.settings, settings,
                 new ConsoleProgress(spec.commandLine().getErr(), false));
@@ -198,7 +198,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    ImportRequest importRequest() {
+    ImportOptions importOptions() {
         InputOptions in = input;
         if (file == null && (in.before == null || in.after == null)) {
             throw new CommandLine.ParameterException(spec.commandLine(),
@@ -225,10 +225,12 @@ final class AnalyzeCommand implements Callable<Integer> {
         if (in.decimal != null && in.decimal != '.' && in.decimal != ',') {
             throw new CommandLine.ParameterException(spec.commandLine(), "--decimal must be . or ,");
         }
-        return new ImportRequest(file, in.before, in.after, in.sheet, in.beforeSheet, in.afterSheet, in.layout,
-                in.paired, in.groupColumn, in.valueColumn, in.characteristicColumn, in.beforeColumn, in.afterColumn,
-                in.beforeLabel, in.afterLabel, in.unitColumn, in.lotColumn, in.subgroupColumn, in.sequenceColumn, delim,
-                in.decimal, in.headerRow);
+        ImportOptions o = file != null ? ImportOptions.file(file) : ImportOptions.files(in.before, in.after);
+        return o.sheets(in.sheet, in.beforeSheet, in.afterSheet).layout(in.layout, in.paired)
+                .columns(in.groupColumn, in.valueColumn, in.characteristicColumn, in.beforeColumn, in.afterColumn)
+                .labels(in.beforeLabel, in.afterLabel)
+                .traceColumns(in.unitColumn, in.lotColumn, in.subgroupColumn, in.sequenceColumn)
+                .text(delim, in.decimal, in.headerRow);
     }
 
     AnalysisSettings settings() {

@@ -6,11 +6,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.concurrent.Callable;
-import org.holdpoint.importer.ImportRequest;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.workflow.AnalysisOutcome;
 import org.holdpoint.workflow.AnalyzeUseCase;
 import org.holdpoint.workflow.ConsoleProgress;
+import org.holdpoint.workflow.ImportOptions;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -35,7 +35,7 @@ final class DemoCommand implements Callable<Integer> {
         Files.createDirectories(out);
         Path data = extract(STUDY + ".csv");
         extract(STUDY + ".settings.csv");
-        AnalysisOutcome outcome = new AnalyzeUseCase().run(ImportRequest.of(data), null,
+        AnalysisOutcome outcome = new AnalyzeUseCase().run(ImportOptions.file(data), null,
                 AnalysisSettings.defaultSettings(), new ConsoleProgress(spec.commandLine().getErr(), false));
         new TextOutput(spec.commandLine().getOut()).print(outcome.data(), outcome.settings(), outcome.result());
         Path json = out.resolve("result.json");

@@ -1,7 +1,6 @@
 package org.holdpoint.cli;
 
 import java.io.PrintWriter;
-import org.holdpoint.importer.ImportException;
 import org.holdpoint.stats.StatsException;
 import org.holdpoint.workflow.AnalysisException;
 import picocli.CommandLine;
@@ -15,14 +14,18 @@ final class Failures implements CommandLine.IExecutionExceptionHandler, CommandL
     @Override
     public int handleExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parse) {
         PrintWriter err = cl.getErr();
-        if (ex instanceof ImportException || ex instanceof StatsException) {
+        if (ex instanceof StatsException) {
             err.println("holdpoint: " + ex.getMessage());
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
         if (ex instanceof AnalysisException a) {
-            err.println("holdpoint: the study cannot be analysed as given:");
-            a.problems().forEach(p -> err.println("  - " + p));
+            if (a.problems().size() == 1) {
+                err.println("holdpoint: " + a.problems().get(0));
+            } else {
+                err.println("holdpoint: the study cannot be analysed as given:");
+                a.problems().forEach(p -> err.println("  - " + p));
+            }
             err.flush();
             return ExitCodes.BAD_INPUT;
         }

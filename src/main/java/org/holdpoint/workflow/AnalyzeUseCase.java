@@ -2,8 +2,10 @@ package org.holdpoint.workflow;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
 import org.holdpoint.importer.DataImporter;
+import org.holdpoint.importer.ImportException;
 import org.holdpoint.importer.ImportRequest;
 import org.holdpoint.importer.SettingsReader;
 import org.holdpoint.study.AnalysisSettings;
@@ -22,26 +24,40 @@ public final class AnalyzeUseCase {
     /**
      * Reads the data and the settings, and analyses every characteristic.
      *
-     * @param request      what to import
+     * @param options      what to import
      * @param settingsFile an explicit settings file, or null to look beside the data file
      * @param settings     study-wide settings and command-line overrides
      * @param progress     progress and cancel port
      * @return the outcome
-     * @throws org.holdpoint.importer.ImportException when the input cannot be read
-     * @throws AnalysisException                      when a characteristic cannot be analysed
+     * @throws AnalysisException when the input cannot be read or a characteristic cannot be analysed
      */
-    public AnalysisOutcome run(ImportRequest request, Path settingsFile, AnalysisSettings settings,
+    public AnalysisOutcome run(ImportOptions options, Path settingsFile, AnalysisSettings settings,
             Progress progress) {
+        return run(options.toRequest(), settingsFile, settings, progress);
+    }
+
+    AnalysisOutcome run(ImportRequest request, Path settingsFile, AnalysisSettings settings, Progress progress) {
         progress.step("reading the data", 0);
-        Dataset data = new DataImporter().read(request);
+        Dataset data;
+        try {
+            data = new DataImporter().read(request);
+        } catch (ImportException e) {
+            throw new AnalysisException(List.of(e.getMessage()));
+        }
         progress.checkCancelled();
         Path found = settingsFile;
-        if (found == null && request.file() != null) {
-            found = SettingsReader.findBeside(request.file()).orElse(null);
+        Path main = request.file() != null ? request.file() : request.beforeFile();
+        if (found == null && main != null) {
+            found = SettingsReader.findBeside(main).orElse(null);
         }
         AnalysisSettings merged = settings;
         if (found != null) {
-            Map<String, CharacteristicSettings> per = new java.util.LinkedHashMap<>(new SettingsReader().read(found));
+            Map<String, CharacteristicSettings> per;
+            try {
+                per = new java.util.LinkedHashMap<>(new SettingsReader().read(found));
+            } catch (ImportException e) {
+                throw new AnalysisException(List.of(e.getMessage()));
+            }
             CharacteristicSettings fileDefaults = per.remove(SettingsReader.DEFAULTS);
             CharacteristicSettings defaults = settings.defaults().overriddenBy(fileDefaults);
             merged = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(), defaults, per,
