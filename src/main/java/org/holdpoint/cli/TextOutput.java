@@ -158,6 +158,9 @@ final class TextOutput {
                     Format.num(r.sdGrowth().limit()), Format.percent(r.sdGrowth().level()),
                     Format.num(r.sdGrowth().upperBound()), r.sdGrowth().met() ? "met" : "NOT met");
         }
+        if (r.checks() != null) {
+            printChecks(r.checks());
+        }
         out.printf(Locale.ROOT, "  Verdict: %s %s%n", mark(r.verdict().status()), r.verdict().status().words());
         for (String reason : r.verdict().reasons()) {
             out.println("    " + reason);
@@ -165,6 +168,64 @@ final class TextOutput {
         for (String note : r.notes()) {
             out.println("  Note: " + note);
         }
+    }
+
+    private void printChecks(org.holdpoint.study.AssumptionChecks c) {
+        if (c.rankSum() != null) {
+            var r = c.rankSum();
+            out.printf(Locale.ROOT, "  Rank sum (Wilcoxon-Mann-Whitney, %s): U = %s, p = %s; Hodges-Lehmann shift %s, %s "
+                    + "CI (%s, %s)%s%n", r.method().name().toLowerCase(Locale.ROOT), Format.num(r.u()),
+                    r.p() == null ? "undefined" : Format.p(r.p()), Format.num(r.shift()),
+                    Format.percent(r.ci().achievedLevel()), Format.num(r.ciLower()), Format.num(r.ciUpper()),
+                    rankEquivalence(r.equivalence()));
+        }
+        if (c.signedRank() != null) {
+            var r = c.signedRank();
+            out.printf(Locale.ROOT, "  Signed rank (Wilcoxon, %s): V = %s, p = %s; Hodges-Lehmann shift %s, %s CI "
+                    + "(%s, %s)%s%n", r.method().name().toLowerCase(Locale.ROOT), Format.num(r.v()),
+                    r.p() == null ? "undefined" : Format.p(r.p()), Format.num(r.shift()),
+                    Format.percent(r.ci().achievedLevel()), Format.num(r.ciLower()), Format.num(r.ciUpper()),
+                    rankEquivalence(r.equivalence()));
+        }
+        out.printf(Locale.ROOT, "  Shape: before %s; after %s%n", shape(c.before().normality()),
+                shape(c.after().normality()));
+        for (var g : new org.holdpoint.study.GroupChecks[] {c.before(), c.after()}) {
+            var cap = g.capability();
+            if (cap != null) {
+                out.printf(Locale.ROOT, "  Capability %s: Pp = %s, Ppk = %s (%s lower bound %s)%s, expected out of "
+                        + "spec %s ppm below, %s ppm above%n", g == c.before() ? "before" : "after ",
+                        opt(cap.pp()), opt(cap.ppk()), Format.percent(1 - cap.alpha()), opt(cap.ppkLower()),
+                        cap.cpk() == null ? "" : ", Cp = " + opt(cap.cp()) + ", Cpk = " + opt(cap.cpk()) + " ("
+                                + cap.estimator().description() + ")", opt(cap.ppmBelow()), opt(cap.ppmAbove()));
+            }
+        }
+        out.println("  Recommended reading: " + c.recommendation());
+    }
+
+    private static String rankEquivalence(org.holdpoint.stats.RankEquivalence e) {
+        if (e == null) {
+            return "";
+        }
+        return String.format(Locale.ROOT, "; rank-based equivalence: %s interval (%s, %s) -> %s",
+                Format.percent(e.interval().achievedLevel()), Format.num(e.interval().lower()),
+                Format.num(e.interval().upper()), e.conclusion().words());
+    }
+
+    private static String shape(org.holdpoint.stats.NormalityResult n) {
+        StringBuilder sb = new StringBuilder();
+        if (n.shapiro() != null) {
+            sb.append("Shapiro-Wilk W = ").append(Format.num(n.shapiro().w())).append(", p = ")
+                    .append(Format.p(n.shapiro().p()));
+        }
+        if (n.anderson() != null) {
+            sb.append(sb.length() > 0 ? ", " : "").append("Anderson-Darling A2 = ").append(Format.num(n.anderson().a2()))
+                    .append(", p = ").append(Format.p(n.anderson().p()));
+        }
+        return sb.length() == 0 ? "not checked (see notes)" : sb.toString();
+    }
+
+    private static String opt(Double v) {
+        return v == null ? "-" : Format.num(v, 4);
     }
 
     private void printGroup(String label, Descriptives d) {

@@ -62,6 +62,13 @@ public final class ResultJson {
         verdict.put("summary", result.summary());
         ArrayNode failing = verdict.putArray("failing");
         result.failing().forEach(failing::add);
+        ArrayNode exclusions = root.putArray("exclusions");
+        settings.exclusions().forEach(e -> {
+            ObjectNode o = exclusions.addObject();
+            o.put("characteristic", e.characteristic());
+            o.put("cell", e.cell());
+            o.put("reason", e.reason());
+        });
         ArrayNode cautions = root.putArray("cautions");
         Cautions.TEXT.forEach(cautions::add);
         return root;
@@ -176,6 +183,7 @@ public final class ResultJson {
         if (r.holmP() != null) {
             num(n, "holmP", r.holmP());
         }
+        ChecksJson.put(n, r.checks());
         ObjectNode v = n.putObject("verdict");
         v.put("status", r.verdict().status().words());
         v.put("passed", r.verdict().status() == org.holdpoint.study.Verdict.Status.PASSED);

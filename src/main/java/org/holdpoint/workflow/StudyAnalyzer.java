@@ -19,6 +19,7 @@ import org.holdpoint.stats.TTestResult;
 import org.holdpoint.stats.VarianceAssumption;
 import org.holdpoint.stats.VarianceRatioResult;
 import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.AssumptionChecks;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
@@ -52,7 +53,15 @@ public final class StudyAnalyzer {
             progress.checkCancelled();
             progress.step("analysing " + c.name(), (double) i++ / data.characteristics().size());
             try {
-                results.add(analyzeOne(c, settings));
+                CharacteristicResult r = analyzeOne(c, settings);
+                double unusable = data.report().unusableFraction(c.name());
+                if (unusable > UNUSABLE_LIMIT) {
+                    List<String> notes = new ArrayList<>(r.notes());
+                    notes.add(String.format(Locale.ROOT, "%.0f %% of this characteristic's cells could not be used "
+                            + "(see the import report); check the data before relying on the result", unusable * 100));
+                    r = r.with(r.holmP(), r.verdict(), notes);
+                }
+                results.add(r);
             } catch (StatsException e) {
                 problems.add("characteristic \"" + c.name() + "\": " + e.getMessage());
             }
@@ -60,7 +69,28 @@ public final class StudyAnalyzer {
         if (!problems.isEmpty()) {
             throw new AnalysisException(problems);
         }
+        if (settings.holm()) {
+            results = holm(results);
+        }
         return Verdicts.overall(results);
+    }
+
+    /** Above this share of unusable cells a characteristic is flagged (common practice, no source). */
+    static final double UNUSABLE_LIMIT = 0.05;
+
+    /** Holm (1979) adjustment of the deciding difference p-values across characteristics, as R's p.adjust. */
+    private static List<CharacteristicResult> holm(List<CharacteristicResult> results) {
+        double[] p = new double[results.size()];
+        for (int i = 0; i < p.length; i++) {
+            p[i] = results.get(i).decidingTest().p();
+        }
+        double[] adjusted = org.holdpoint.stats.Holm.adjust(p);
+        List<CharacteristicResult> out = new ArrayList<>();
+        for (int i = 0; i < p.length; i++) {
+            CharacteristicResult r = results.get(i);
+            out.add(r.with(adjusted[i], r.verdict(), r.notes()));
+        }
+        return out;
     }
 
     CharacteristicResult analyzeOne(CharacteristicData data, AnalysisSettings study) {
@@ -134,9 +164,10 @@ public final class StudyAnalyzer {
             notes.add("Brown-Forsythe is undefined: every value equals its group median's neighbours "
                     + "(zero within-group deviation)");
         }
+        AssumptionChecks checks = Checks.compute(c, s, margin, alpha, paired, study.equalVariances(), notes);
         String unit = s.unit() != null ? s.unit() : c.unit();
         CharacteristicResult draft = new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, welch, pooled,
-                pairedTest, tost, tostPooled, variance, levene, growth, null, method,
+                pairedTest, tost, tostPooled, variance, levene, growth, null, method, checks,
                 new org.holdpoint.study.Verdict(org.holdpoint.study.Verdict.Status.NOT_ASSESSED, List.of()), notes);
         return Verdicts.judge(draft);
     }

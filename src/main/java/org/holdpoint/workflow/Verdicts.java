@@ -47,10 +47,16 @@ final class Verdicts {
                 status = Status.FAILED;
             }
         }
-        Verdict v = new Verdict(status, reasons);
-        return new CharacteristicResult(r.name(), r.unit(), r.settings(), r.margin(), r.paired(), r.before(),
-                r.after(), r.welch(), r.pooled(), r.pairedTest(), r.tost(), r.tostPooled(), r.variance(), r.levene(),
-                r.sdGrowth(), r.holmP(), r.method(), v, r.notes());
+        if (r.checks() != null && Boolean.FALSE.equals(r.checks().capabilityMet())) {
+            var cap = r.checks().after().capability();
+            reasons.add(String.format(Locale.ROOT, "capability: the %s lower bound of Ppk after the change is %s, not "
+                    + "above the requirement %s", Format.percent(1 - cap.alpha()), Format.num(cap.ppkLower()),
+                    Format.num(r.settings().capabilityRequirement())));
+            if (status == Status.PASSED || status == Status.INCONCLUSIVE) {
+                status = Status.FAILED;
+            }
+        }
+        return r.with(r.holmP(), new Verdict(status, reasons), r.notes());
     }
 
     private static String describeAgainstMargin(Conclusion c) {

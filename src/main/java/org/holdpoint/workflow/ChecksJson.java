@@ -1,0 +1,177 @@
+package org.holdpoint.workflow;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.holdpoint.stats.CapabilityResult;
+import org.holdpoint.stats.EsdResult;
+import org.holdpoint.stats.GrubbsResult;
+import org.holdpoint.stats.NormalityResult;
+import org.holdpoint.stats.RankEquivalence;
+import org.holdpoint.stats.RankInterval;
+import org.holdpoint.stats.RankSumResult;
+import org.holdpoint.stats.SignedRankResult;
+import org.holdpoint.study.AssumptionChecks;
+import org.holdpoint.study.FlaggedValue;
+import org.holdpoint.study.GroupChecks;
+
+/** The JSON blocks of the further checks: rankSum, signedRank, normality, capability, outliers, order. */
+final class ChecksJson {
+    private static final JsonNodeFactory F = JsonNodeFactory.instance;
+
+    private ChecksJson() {
+    }
+
+    static void put(ObjectNode n, AssumptionChecks c) {
+        if (c == null) {
+            return;
+        }
+        if (c.rankSum() != null) {
+            n.set("rankSum", rankSum(c.rankSum()));
+        }
+        if (c.signedRank() != null) {
+            n.set("signedRank", signedRank(c.signedRank()));
+        }
+        ObjectNode normality = n.putObject("normality");
+        normality.set("before", normality(c.before().normality()));
+        normality.set("after", normality(c.after().normality()));
+        if (c.before().capability() != null || c.after().capability() != null) {
+            ObjectNode cap = n.putObject("capability");
+            cap.set("before", capability(c.before().capability()));
+            cap.set("after", capability(c.after().capability()));
+            if (c.capabilityMet() != null) {
+                cap.put("requirementMet", c.capabilityMet());
+            }
+        }
+        ObjectNode outliers = n.putObject("outliers");
+        outliers.set("before", outliers(c.before()));
+        outliers.set("after", outliers(c.after()));
+        if (c.before().lag1() != null || c.after().lag1() != null || c.before().lots() != null) {
+            ObjectNode order = n.putObject("independence");
+            order.set("before", order(c.before()));
+            order.set("after", order(c.after()));
+        }
+        n.put("recommendation", c.recommendation());
+    }
+
+    private static ObjectNode rankSum(RankSumResult r) {
+        ObjectNode o = F.objectNode();
+        ResultJson.num(o, "u", r.u());
+        ResultJson.numOrNull(o, "p", r.p());
+        ResultJson.num(o, "shift", r.shift());
+        interval(o, r.ci());
+        o.put("method", r.method().name().toLowerCase(java.util.Locale.ROOT));
+        equivalence(o, r.equivalence());
+        return o;
+    }
+
+    private static ObjectNode signedRank(SignedRankResult r) {
+        ObjectNode o = F.objectNode();
+        ResultJson.num(o, "v", r.v());
+        ResultJson.numOrNull(o, "p", r.p());
+        ResultJson.num(o, "shift", r.shift());
+        interval(o, r.ci());
+        o.put("method", r.method().name().toLowerCase(java.util.Locale.ROOT));
+        o.put("zeros", r.zeros());
+        equivalence(o, r.equivalence());
+        return o;
+    }
+
+    private static void interval(ObjectNode o, RankInterval ci) {
+        ResultJson.num(o, "ciLower", ci.lower());
+        ResultJson.num(o, "ciUpper", ci.upper());
+        ResultJson.num(o, "level", ci.requestedLevel());
+        ResultJson.num(o, "achievedLevel", ci.achievedLevel());
+        o.put("levelReached", ci.levelReached());
+    }
+
+    private static void equivalence(ObjectNode o, RankEquivalence e) {
+        if (e == null) {
+            return;
+        }
+        ObjectNode q = o.putObject("equivalence");
+        ResultJson.numOrNull(q, "lowerMargin", e.margin().lower());
+        ResultJson.numOrNull(q, "upperMargin", e.margin().upper());
+        interval(q, e.interval());
+        q.put("equivalent", e.equivalent());
+        q.put("conclusion", e.conclusion().words());
+    }
+
+    private static ObjectNode normality(NormalityResult r) {
+        ObjectNode o = F.objectNode();
+        if (r.shapiro() != null) {
+            ResultJson.num(o, "shapiroW", r.shapiro().w());
+            ResultJson.num(o, "shapiroP", r.shapiro().p());
+        }
+        if (r.anderson() != null) {
+            ResultJson.num(o, "andersonA2", r.anderson().a2());
+            ResultJson.num(o, "andersonP", r.anderson().p());
+        }
+        return o;
+    }
+
+    private static ObjectNode capability(CapabilityResult c) {
+        ObjectNode o = F.objectNode();
+        if (c == null) {
+            return o;
+        }
+        ResultJson.numOrNull(o, "pp", c.pp());
+        ResultJson.numOrNull(o, "ppk", c.ppk());
+        ResultJson.numOrNull(o, "ppkLower", c.ppkLower());
+        ResultJson.numOrNull(o, "ppLower", c.ppLower());
+        ResultJson.numOrNull(o, "cp", c.cp());
+        ResultJson.numOrNull(o, "cpk", c.cpk());
+        ResultJson.numOrNull(o, "cpkLower", c.cpkLower());
+        ResultJson.numOrNull(o, "ppmBelow", c.ppmBelow());
+        ResultJson.numOrNull(o, "ppmAbove", c.ppmAbove());
+        o.put("withinEstimator", c.estimator() == null ? null : c.estimator().description());
+        ResultJson.num(o, "level", 1 - c.alpha());
+        return o;
+    }
+
+    private static ObjectNode outliers(GroupChecks g) {
+        ObjectNode o = F.objectNode();
+        GrubbsResult gr = g.grubbs();
+        if (gr != null) {
+            ObjectNode x = o.putObject("grubbs");
+            ResultJson.num(x, "g", gr.g());
+            ResultJson.num(x, "critical", gr.critical());
+            ResultJson.num(x, "p", gr.p());
+            ResultJson.num(x, "value", gr.value());
+            x.put("outlier", gr.outlier());
+        }
+        EsdResult esd = g.esd();
+        if (esd != null) {
+            ObjectNode x = o.putObject("esd");
+            x.put("maxTested", esd.maxTests());
+            x.put("count", esd.count());
+        }
+        ArrayNode flagged = o.putArray("flagged");
+        for (FlaggedValue f : g.flagged()) {
+            ObjectNode x = flagged.addObject();
+            ResultJson.num(x, "value", f.value());
+            x.put("file", f.origin().file());
+            x.put("sheet", f.origin().sheet());
+            x.put("cell", f.origin().cell());
+            x.put("test", f.test());
+        }
+        return o;
+    }
+
+    private static ObjectNode order(GroupChecks g) {
+        ObjectNode o = F.objectNode();
+        if (g.lag1() != null) {
+            ResultJson.num(o, "lag1", g.lag1().r1());
+            ResultJson.num(o, "lag1P", g.lag1().pRefined());
+        }
+        if (g.runs() != null) {
+            o.put("runs", g.runs().runs());
+            ResultJson.num(o, "runsExpected", g.runs().expected());
+            ResultJson.num(o, "runsP", g.runs().p());
+        }
+        if (g.lots() != null) {
+            o.put("lots", g.lots());
+        }
+        return o;
+    }
+}
