@@ -59,6 +59,7 @@ offset-1e6-3-3      3   3   0.0    0.01   0.002    0.01    4   1e6    TRUE
 offset-1e8-8-9      8   9   0.0    0.05   0.01     0.08    3   1e8    FALSE
 offset-1e8-30-30    30  30  0.0    0.05  -0.02     0.04    3   1e8    TRUE
 far-tail-30-30      30  30  10.0   0.1    1.0      0.1     3   0      FALSE
+flat-before-5-8     5   8   20.0   0.0    0.3      0.5     2   0      FALSE
 ")
 
 inputs <- list(); tt_rows <- list(); tost_rows <- list(); var_rows <- list(); lev_rows <- list()
@@ -77,7 +78,7 @@ for (i in seq_len(nrow(specs))) {
   inputs[[i]] <- data.frame(case = s$id, group = c(rep("before", s$nb), rep("after", s$na)),
                             index = c(seq_len(s$nb), seq_len(s$na)), value = c(full_b, full_a),
                             residual = c(res_b, res_a), r_double = f17(c(fb, fa)))
-  sdb <- sd(xb)
+  sdb <- if (sd(xb) > 0) sd(xb) else sd(xa)   # margin scale (the before sd, or the after sd when before is flat)
   # margins: symmetric, asymmetric, lower only, upper only; in the case's decimals
   m <- function(x) round(x, 4)
   margins <- list(c(-m(0.6 * sdb), m(0.6 * sdb)), c(-m(0.25 * sdb), m(1.1 * sdb)),
