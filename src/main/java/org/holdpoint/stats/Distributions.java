@@ -1,6 +1,7 @@
 package org.holdpoint.stats;
 
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.distribution.ChiSquaredDistribution;
 import org.apache.commons.math3.distribution.FDistribution;
 import org.apache.commons.math3.distribution.TDistribution;
@@ -20,6 +21,8 @@ import org.apache.commons.math3.special.Gamma;
 public final class Distributions {
     private static final double SOLVER_ACCURACY = 1e-14;
     private static final double BETA_EPS = 1e-15;
+    /** Below this lower-tail probability the solver's 1e-15 function-value accuracy is no guide. */
+    private static final double FAR_TAIL = 1e-8;
     private static final ConcurrentHashMap<Double, TDistribution> T_CACHE = new ConcurrentHashMap<>();
     private static final ConcurrentHashMap<Long, FDistribution> F_CACHE = new ConcurrentHashMap<>();
     private static final ConcurrentHashMap<Double, ChiSquaredDistribution> CHI2_CACHE = new ConcurrentHashMap<>();
@@ -117,8 +120,9 @@ public final class Distributions {
     }
 
     /**
-     * Student's t quantile t_{p,ν}: Commons Math's solver at 1e-14, then Newton steps on the smaller
-     * tail so that t_{0.975,ν} and t_{1−1e-12,ν} are both good to about 1e-14 relative.
+     * Student's t quantile t_{p,ν}: Commons Math's solver at 1e-14 (below a tail of 1e-8 the leading
+     * term of the tail instead), then Newton steps on ln F against ln|t| on the smaller tail, so that
+     * t_{0.975,ν} and t_{1−1e-20,ν} are both good to about 1e-14 relative.
      *
      * @param p  a probability in (0, 1)
      * @param df ν &gt; 0
@@ -141,26 +145,47 @@ public final class Distributions {
      * computed directly; used for the upper quantile as −t at q = 1 − p.
      */
     private static double tLowerQuantileSmall(double q, double df) {
-        double x = t(df).inverseCumulativeProbability(q);
-        if (Double.isInfinite(x) || Double.isNaN(x)) {
-            x = -1e10;
+        double x = q < FAR_TAIL ? Double.NaN : t(df).inverseCumulativeProbability(q);
+        if (!(x < 0) || Double.isInfinite(x)) {
+            // far tail, or a solver result that only meets its 1e-15 function-value accuracy: start from
+            // the leading term of F_ν(t) = ½·I_x(ν/2, ½) ≈ ½·x^(ν/2)/((ν/2)·B(ν/2, ½)), x = ν/(ν + t²)
+            double a = 0.5 * df;
+            double logX = (Math.log(2 * q) + Math.log(a) + Beta.logBeta(a, 0.5)) / a;
+            x = -Math.sqrt(df) * Math.exp(-0.5 * logX) * Math.sqrt(-Math.expm1(logX));
         }
-        for (int i = 0; i < 6; i++) {
-            double f = tCdf(x, df);
-            double d = tDensity(x, df);
-            if (!(d > 0)) {
+        return -logNewton(s -> tCdf(-s, df), s -> -tDensity(s, df), q, -x);
+    }
+
+    /**
+     * Solves tail(x) = p for x &gt; 0 by Newton steps on ln tail against ln x. Every lower tail used
+     * here behaves like a power of x (t in |t|, F and χ² near 0), so ln tail is nearly linear in ln x
+     * and the iteration converges from far starts where Newton on the tail itself stalls; each step is
+     * damped to a factor e² at most.
+     *
+     * @param tail       the tail probability, monotone in x and computed from its own side
+     * @param derivative d tail/dx
+     * @param p          the target probability
+     * @param start      a start &gt; 0
+     */
+    private static double logNewton(DoubleUnaryOperator tail, DoubleUnaryOperator derivative, double p,
+            double start) {
+        double x = start;
+        for (int i = 0; i < 100; i++) {
+            double f = tail.applyAsDouble(x);
+            double d = derivative.applyAsDouble(x);
+            if (!(f > 0) || d == 0 || Double.isNaN(d)) {
                 break;
             }
-            double step = (f - q) / d;
-            double next = x - step;
-            if (next >= 0) {
-                next = x / 2;
-            }
-            if (Math.abs(next - x) <= 2e-16 * Math.abs(x)) {
-                x = next;
+            double step = Math.max(-2, Math.min(2, Math.log(f / p) * f / (x * d)));
+            double next = x * Math.exp(-step);
+            if (!(next > 0) || Double.isInfinite(next)) {
                 break;
             }
+            boolean done = Math.abs(next - x) <= 4e-16 * x;
             x = next;
+            if (done) {
+                break;
+            }
         }
         return x;
     }
@@ -238,8 +263,9 @@ public final class Distributions {
     }
 
     /**
-     * F quantile F_p(ν1, ν2): Commons Math's solver at 1e-14, polished by Newton steps on the smaller
-     * tail (each tail computed directly).
+     * F quantile F_p(ν1, ν2): Commons Math's solver at 1e-14 (below 1e-8 the leading term of the
+     * lower tail instead), polished by Newton steps on ln P(F ≤ f) against ln f on the smaller tail
+     * (each tail computed directly).
      *
      * @param p   a probability in (0, 1)
      * @param df1 numerator df
@@ -254,24 +280,14 @@ public final class Distributions {
             // the upper quantile of F(ν1, ν2) is the reciprocal of the lower one of F(ν2, ν1)
             return 1 / fQuantile(1 - p, df2, df1);
         }
-        double x = f(df1, df2).inverseCumulativeProbability(p);
-        for (int i = 0; i < 6 && x > 0; i++) {
-            double cdf = fCdf(x, df1, df2);
-            double dens = fDensity(x, df1, df2);
-            if (!(dens > 0)) {
-                break;
-            }
-            double next = x - (cdf - p) / dens;
-            if (next <= 0) {
-                next = x / 2;
-            }
-            if (Math.abs(next - x) <= 2e-16 * x) {
-                x = next;
-                break;
-            }
-            x = next;
+        double x = p < FAR_TAIL ? Double.NaN : f(df1, df2).inverseCumulativeProbability(p);
+        if (!(x > 0) || Double.isInfinite(x)) {
+            // far tail (or a solver result of 0): start from I_x(a, b) ≈ x^a/(a·B(a, b)), a = ν1/2, b = ν2/2
+            double a = 0.5 * df1;
+            double logX = (Math.log(p) + Math.log(a) + Beta.logBeta(a, 0.5 * df2)) / a;
+            x = df2 / df1 * Math.exp(logX) / -Math.expm1(logX);
         }
-        return x;
+        return logNewton(v -> fCdf(v, df1, df2), v -> fDensity(v, df1, df2), p, x);
     }
 
     private static double fDensity(double f, double df1, double df2) {
@@ -311,7 +327,8 @@ public final class Distributions {
     }
 
     /**
-     * χ² quantile χ²_{p,ν}, Commons Math's solver at 1e-14 polished by Newton steps on the lower tail.
+     * χ² quantile χ²_{p,ν}, Commons Math's solver at 1e-14 (below 1e-8 the leading term of the lower
+     * tail instead) polished by Newton steps on the smaller tail (in ln x for the lower one).
      *
      * @param p  a probability in (0, 1)
      * @param df ν &gt; 0
@@ -320,17 +337,20 @@ public final class Distributions {
     public static double chiSquaredQuantile(double p, double df) {
         checkDf(df, "of chi-square");
         checkOpenProbability(p);
-        double x = CHI2_CACHE.computeIfAbsent(df, d -> new ChiSquaredDistribution(null, d, SOLVER_ACCURACY))
-                .inverseCumulativeProbability(p);
-        if (!(x > 0) && p < 0.5) {
-            // the solver returns 0 for a tiny p (p = 1e-10 at ν = 1): start Newton from the small-x limit
-            // P(ν/2, x/2) ≈ (x/2)^(ν/2)/Γ(ν/2 + 1) instead (Abramowitz & Stegun 6.5.29, first term)
-            x = 2 * Math.exp((Math.log(p) + Gamma.logGamma(0.5 * df + 1)) / (0.5 * df));
+        double x = p < FAR_TAIL ? Double.NaN
+                : CHI2_CACHE.computeIfAbsent(df, d -> new ChiSquaredDistribution(null, d, SOLVER_ACCURACY))
+                        .inverseCumulativeProbability(p);
+        if (p <= 0.5) {
+            if (!(x > 0) || Double.isInfinite(x)) {
+                // far tail, or the solver's 0 (p = 1e-10 at ν = 1): start from the small-x limit
+                // P(ν/2, x/2) ≈ (x/2)^(ν/2)/Γ(ν/2 + 1) (Abramowitz & Stegun 6.5.29, first term)
+                x = 2 * Math.exp((Math.log(p) + Gamma.logGamma(0.5 * df + 1)) / (0.5 * df));
+            }
+            return logNewton(v -> chiSquaredCdf(v, df), v -> chiSquaredDensity(v, df), p, x);
         }
         for (int i = 0; i < 6 && x > 0; i++) {
-            double diff = p <= 0.5 ? chiSquaredCdf(x, df) - p : (1 - p) - chiSquaredUpper(x, df);
-            double logDens = (0.5 * df - 1) * Math.log(x) - 0.5 * x - 0.5 * df * Math.log(2) - Gamma.logGamma(0.5 * df);
-            double dens = Math.exp(logDens);
+            double diff = (1 - p) - chiSquaredUpper(x, df);
+            double dens = chiSquaredDensity(x, df);
             if (!(dens > 0)) {
                 break;
             }
@@ -345,6 +365,10 @@ public final class Distributions {
             x = next;
         }
         return x;
+    }
+
+    private static double chiSquaredDensity(double x, double df) {
+        return Math.exp((0.5 * df - 1) * Math.log(x) - 0.5 * x - 0.5 * df * Math.log(2) - Gamma.logGamma(0.5 * df));
     }
 
     private static void checkOpenProbability(double p) {

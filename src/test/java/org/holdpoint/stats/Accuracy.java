@@ -87,12 +87,17 @@ final class Accuracy {
         return rows;
     }
 
-    /** A number cell; "NA" becomes null. */
+    /** A number cell as R prints it; "NA" becomes null, "Inf"/"-Inf" the infinities. */
     static Double number(Map<String, String> row, String column) {
         String v = row.get(column);
         if (v == null) {
             throw new IllegalStateException("no column " + column + " in " + row);
         }
-        return v.equals("NA") ? null : Double.valueOf(v);
+        return switch (v) {
+            case "NA" -> null;
+            case "Inf" -> Double.POSITIVE_INFINITY;
+            case "-Inf" -> Double.NEGATIVE_INFINITY;
+            default -> Double.valueOf(v);
+        };
     }
 }

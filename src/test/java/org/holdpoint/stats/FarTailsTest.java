@@ -21,9 +21,12 @@ import org.junit.jupiter.params.provider.MethodSource;
  * {@code r/mpmath-distributions.csv}, written by {@code r/make-mpmath-values.py}). Tolerances
  * (ALGORITHMS.md §2 and §12): tails 1e-12 relative, normal quantile 1e-14, t/F/χ² quantiles 1e-13.
  *
- * <p>R's {@code qf} (through {@code qbeta}) misses 1e-13 on four rows with a small numerator df
- * (e.g. {@code qf(1e-6, 1, 90)} is 5e-4 relative off: {@code pf} of it gives 9.9974e-7); there the
- * mpmath value decides and {@link #rQfIsTheOneOff()} documents the difference.
+ * <p>R's {@code qf} (through {@code qbeta}) misses 1e-13 on 15 rows with a small numerator df or a
+ * far tail (e.g. {@code qf(1e-6, 1, 90)} is 5e-4 relative off: {@code pf} of it gives 9.9974e-7),
+ * and R's {@code qt} on three rows at q = 1e-300; there the mpmath value decides and
+ * {@link #whereRIsOffTheProjectIsCloser()} documents the difference. The far-tail quantile rows
+ * (q down to 1e-300) were added after they showed that the solver's start was useless below about
+ * 1e-15 (t quantile at q = 1e-15, ν = 30 came out −255724 instead of −14.93).
  */
 class FarTailsTest {
 
@@ -58,8 +61,7 @@ class FarTailsTest {
         double exact = number(r, "value");
         double rValue = number(r, "r_value");
         if (Math.abs(rValue - exact) > v[1] * Math.abs(exact)) {
-            assertThat(r.get("fn")).as("only R's qf is known to be off: %s", name).isEqualTo("qf");
-            return;
+            return; // R itself is off here: see whereRIsOffTheProjectIsCloser()
         }
         assertRel(name + " vs R", v[0], rValue, v[1]);
     }
@@ -72,21 +74,28 @@ class FarTailsTest {
         assertRel(name + " vs mpmath", v[0], number(r, "value"), v[1]);
     }
 
-    /** The four qf rows where R 4.2.2 and mpmath disagree: the project is the closer one. */
+    /**
+     * The rows where R 4.2.2 and mpmath disagree beyond the tolerance: R's qf (through qbeta) for a
+     * small numerator df or far lower tails (it even returns 0 for qf(1e-20, 1, 5), whose value is
+     * 1.73e-40), and R's qt at q = 1e-300 for df 2.5, 3 and 5. On every one of them the project is
+     * closer to mpmath than R is.
+     */
     @Test
-    void rQfIsTheOneOff() {
-        int off = 0;
+    void whereRIsOffTheProjectIsCloser() {
+        List<String> off = new java.util.ArrayList<>();
         for (Map<String, String> r : Accuracy.csv("r/mpmath-distributions.csv")) {
             double exact = number(r, "value");
             double rValue = number(r, "r_value");
             double[] v = computed(r);
             if (Math.abs(rValue - exact) > v[1] * Math.abs(exact)) {
-                off++;
-                assertThat(Math.abs(v[0] - exact)).as("%s %s %s %s", r.get("fn"), r.get("x"), r.get("df1"), r.get("df2"))
-                        .isLessThan(Math.abs(rValue - exact));
+                String name = r.get("fn") + "(" + r.get("x") + ", " + r.get("df1") + ", " + r.get("df2") + ")";
+                off.add(name);
+                assertThat(r.get("fn").equals("qf") || (r.get("fn").equals("qt") && number(r, "x") <= 1e-300))
+                        .as("unexpected disagreement of R and mpmath: %s", name).isTrue();
+                assertThat(Math.abs(v[0] - exact)).as(name).isLessThan(Math.abs(rValue - exact));
             }
         }
-        assertThat(off).isEqualTo(4);
+        assertThat(off).hasSize(18);
     }
 
     @Test

@@ -16,8 +16,9 @@ import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * t-tests, TOST, F-test and Brown–Forsythe on 25 seeded cases of our own (tiny n = 2 and 3, unequal
- * n, unequal variances, offsets 1e6 and 1e8 with small noise, paired designs; symmetric,
+ * t-tests, TOST, F-test, sd-growth bound, Brown–Forsythe and descriptives on 26 seeded cases of our
+ * own (tiny n = 2 and 3, unequal n, unequal variances, offsets 1e6 and 1e8 with small noise, paired
+ * designs, a flat before group, p near 1e-40; symmetric,
  * asymmetric and one-sided margins) against values computed with R 4.2.2 ({@code t.test},
  * {@code var.test}, {@code car::leveneTest(center = median)} 3.1-1, TOST by formula with
  * {@code pt}/{@code qt}) and, for the TOST, independently with statsmodels 0.13.5
@@ -115,7 +116,7 @@ class RReferenceCasesTest {
             assertThat(Double.parseDouble(r.get("value"))).as("%s %s", r.get("case"), r.get("value"))
                     .isEqualTo(Double.parseDouble(r.get("r_double")));
         }
-        assertThat(CASES).hasSize(25);
+        assertThat(CASES).hasSize(26);
     }
 
     private static TTestResult runT(Case c, String method, double alpha) {
@@ -270,6 +271,13 @@ class RReferenceCasesTest {
     @MethodSource("varTestRows")
     void fTestMatchesR(String name, Map<String, String> r) {
         Case c = caseOf(r.get("case"));
+        if (Double.isInfinite(number(r, "ratio"))) {
+            // a flat before group: R prints ratio Inf; the project refuses (ALGORITHMS.md §4)
+            org.assertj.core.api.Assertions.assertThatThrownBy(() -> SpreadTests.fTest(
+                    Descriptives.of(c.beforeSample()).summary(), Descriptives.of(c.afterSample()).summary(), 0.05))
+                    .isInstanceOf(StatsException.class).hasMessageContaining("before group has zero spread");
+            return;
+        }
         VarianceRatioResult res = SpreadTests.fTest(Descriptives.of(c.beforeSample()).summary(),
                 Descriptives.of(c.afterSample()).summary(), 0.05);
         assertRel(name + " ratio", res.ratio(), number(r, "ratio"), REL);
@@ -318,6 +326,12 @@ class RReferenceCasesTest {
         Case c = caseOf(r.get("case"));
         double limit = number(r, "limit");
         double alpha = number(r, "alpha");
+        if (Double.isInfinite(number(r, "sd_ratio"))) {
+            org.assertj.core.api.Assertions.assertThatThrownBy(() -> SpreadTests.sdGrowth(
+                    Descriptives.of(c.beforeSample()).summary(), Descriptives.of(c.afterSample()).summary(), limit,
+                    alpha)).isInstanceOf(StatsException.class).hasMessageContaining("before group has zero spread");
+            return;
+        }
         SdGrowthResult res = SpreadTests.sdGrowth(Descriptives.of(c.beforeSample()).summary(),
                 Descriptives.of(c.afterSample()).summary(), limit, alpha);
         assertRel(name + " sd ratio", res.sdRatio(), number(r, "sd_ratio"), REL);

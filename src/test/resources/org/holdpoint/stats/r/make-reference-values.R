@@ -59,6 +59,7 @@ offset-1e6-3-3      3   3   0.0    0.01   0.002    0.01    4   1e6    TRUE
 offset-1e8-8-9      8   9   0.0    0.05   0.01     0.08    3   1e8    FALSE
 offset-1e8-30-30    30  30  0.0    0.05  -0.02     0.04    3   1e8    TRUE
 far-tail-30-30      30  30  10.0   0.1    1.0      0.1     3   0      FALSE
+flat-before-5-8     5   8   20.0   0.0    0.3      0.5     2   0      FALSE
 ")
 
 inputs <- list(); tt_rows <- list(); tost_rows <- list(); var_rows <- list(); lev_rows <- list()
@@ -77,7 +78,7 @@ for (i in seq_len(nrow(specs))) {
   inputs[[i]] <- data.frame(case = s$id, group = c(rep("before", s$nb), rep("after", s$na)),
                             index = c(seq_len(s$nb), seq_len(s$na)), value = c(full_b, full_a),
                             residual = c(res_b, res_a), r_double = f17(c(fb, fa)))
-  sdb <- sd(xb)
+  sdb <- if (sd(xb) > 0) sd(xb) else sd(xa)   # margin scale (the before sd, or the after sd when before is flat)
   # margins: symmetric, asymmetric, lower only, upper only; in the case's decimals
   m <- function(x) round(x, 4)
   margins <- list(c(-m(0.6 * sdb), m(0.6 * sdb)), c(-m(0.25 * sdb), m(1.1 * sdb)),
@@ -181,6 +182,12 @@ for (a in list(c(50, 3, 20), c(200, 10, 10), c(1000, 1, 5), c(30, 239, 239), c(1
 for (a in list(c(0.01, 10, 12), c(1e-4, 3, 30), c(0.5, 239, 239)))
   add("pf_lower", a[1], a[2], a[3], pf(a[1], a[2], a[3]))
 for (p in c(1e-300, 1e-12, 0.025, 0.5, 0.975)) add("qnorm", p, NA, NA, qnorm(p))
+# far lower tails of the quantiles (q = 1e-300 only where t^2 stays finite, i.e. df >= 2)
+for (df in c(1, 2, 2.5, 3, 5, 30, 1000))
+  for (p in c(1e-12, 1e-15, 1e-20, 1e-50, 1e-100, if (df >= 2) 1e-300)) add("qt", p, df, NA, qt(p, df))
+for (dd in list(c(1, 5), c(4, 2), c(2, 1), c(10, 8), c(239, 239)))
+  for (p in c(1e-12, 1e-20, 1e-50)) add("qf", p, dd[1], dd[2], qf(p, dd[1], dd[2]))
+for (df in c(1, 4, 30, 1000)) for (p in c(1e-20, 1e-50, 1e-100)) add("qchisq", p, df, NA, qchisq(p, df))
 for (df in c(1, 2, 3, 4.5, 10, 15.532514, 30, 136.874977, 326, 1e4))
   for (p in c(0.975, 0.95, 0.025, 1e-10)) add("qt", p, df, NA, qt(p, df))
 for (dd in list(c(239, 239), c(10, 8), c(1, 90), c(9, 90), c(3, 2.5), c(24, 11), c(100, 3)))
