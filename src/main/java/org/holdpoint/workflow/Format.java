@@ -15,24 +15,7 @@ public final class Format {
      * @return the text; "undefined" for NaN
      */
     public static String num(double v) {
-        if (Double.isNaN(v)) {
-            return "undefined";
-        }
-        if (v == 0) {
-            return "0";
-        }
-        double a = Math.abs(v);
-        if (a >= 1e-4 && a < 1e7) {
-            String s = String.format(Locale.ROOT, "%.6g", v);
-            if (s.contains("e")) {
-                return s;
-            }
-            if (s.contains(".")) {
-                s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-            }
-            return s;
-        }
-        return String.format(Locale.ROOT, "%.4e", v);
+        return num(v, 6);
     }
 
     /**
