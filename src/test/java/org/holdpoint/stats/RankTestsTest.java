@@ -132,6 +132,20 @@ class RankTestsTest {
     }
 
     @Test
+    void absoluteValuesInOrderWithoutSorting() {
+        SplittableRandom rnd = new SplittableRandom(5L);
+        for (int rep = 0; rep < 200; rep++) {
+            double[] x = new double[rnd.nextInt(30)];
+            for (int i = 0; i < x.length; i++) {
+                x[i] = (rnd.nextInt(9) - 4) * 0.5;
+            }
+            Arrays.sort(x);
+            double[] expected = Arrays.stream(x).map(Math::abs).sorted().toArray();
+            assertThat(SignedRankTest.absAscending(x)).containsExactly(expected);
+        }
+    }
+
+    @Test
     void twiceUIsExactBeyondTheIntRange() {
         // 50,000 × 50,000 tied values: K = 2.5e9 > 2^31; 2U recomputed here by binary search per after value
         SplittableRandom rnd = new SplittableRandom(99L);
