@@ -166,9 +166,19 @@ class RankTestsTest {
         }
         double[] sa = a.clone();
         Arrays.sort(sa);
-        assertThat(RankSumTest.mergeCounts(sa, sb)[0]).isEqualTo(expected);
+        assertThat(RankSumTest.merge(sa, sb).twiceU()).isEqualTo(expected);
+        // Σ(t³ − t) of the combined sample, from counting each distinct value here (t³ would overflow int)
+        double[] all = new double[2 * n];
+        System.arraycopy(a, 0, all, 0, n);
+        System.arraycopy(b, 0, all, n, n);
+        double tie = 0;
+        for (double v : Arrays.stream(all).distinct().toArray()) {
+            double t = Arrays.stream(all).filter(x -> x == v).count();
+            tie += t * t * t - t;
+        }
+        assertThat(RankSumTest.merge(sa, sb).tieSum()).isEqualTo(tie);
         // U(after) + U(before) = mn
-        assertThat(RankSumTest.mergeCounts(sa, sb)[0] + RankSumTest.mergeCounts(sb, sa)[0]).isEqualTo(2L * n * n);
+        assertThat(RankSumTest.merge(sa, sb).twiceU() + RankSumTest.merge(sb, sa).twiceU()).isEqualTo(2L * n * n);
     }
 
     private static int lowerBound(double[] s, double v) {
