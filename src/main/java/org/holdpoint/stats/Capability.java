@@ -181,6 +181,7 @@ public final class Capability {
             return new Within(sum / (x.length - 1) / d2(2), x.length - 1.0, null);
         }
         if (subgroups == null) {
+            notes.add("no subgroups given, so Cp and Cpk (within-subgroup indices) are not computed");
             return null;
         }
         Map<Integer, List<Double>> groups = new LinkedHashMap<>();

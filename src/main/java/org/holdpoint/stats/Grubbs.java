@@ -79,7 +79,7 @@ public final class Grubbs {
             }
         }
         double g = Math.max(0, bestScore / sd);
-        double critical = critical(n, alpha, side == OutlierSide.TWO_SIDED);
+        double critical = critical(n, alpha, side);
         double p = pValue(n, g, side == OutlierSide.TWO_SIDED);
         return new GrubbsResult(n, side, g, best, sample.value(best), critical, p, alpha, g > critical);
     }
@@ -87,13 +87,17 @@ public final class Grubbs {
     /**
      * G_crit = ((n−1)/√n)·√(t²/(n−2+t²)), t = t_{1−α/(2n),n−2} (two-sided) or t_{1−α/n,n−2}.
      *
-     * @param n        sample size ≥ 3
-     * @param alpha    level
-     * @param twoSided whether the test is two-sided
+     * @param n     sample size ≥ 3
+     * @param alpha level in (0, 1)
+     * @param side  two-sided, or one of the one-sided forms
      * @return the critical value
      */
-    public static double critical(int n, double alpha, boolean twoSided) {
-        double q = twoSided ? alpha / (2.0 * n) : alpha / n;
+    public static double critical(int n, double alpha, OutlierSide side) {
+        if (n < 3) {
+            throw new StatsException("Grubbs' test needs at least 3 values, got %d", n);
+        }
+        Alpha.check(alpha);
+        double q = side == OutlierSide.TWO_SIDED ? alpha / (2.0 * n) : alpha / n;
         double t = Distributions.tUpperQuantile(q, n - 2.0);
         double t2 = t * t;
         return (n - 1) / Math.sqrt(n) * Math.sqrt(t2 / (n - 2 + t2));

@@ -90,9 +90,9 @@ public final class RankSumTest {
         int n = b.length;
         long k = (long) m * n;
         List<String> notes = new ArrayList<>();
-        long[] merged = mergeCounts(a, b);
-        long twiceU = merged[0];
-        boolean ties = merged[1] != 0;
+        Merge merged = merge(a, b);
+        long twiceU = merged.twiceU();
+        boolean ties = merged.tieSum() != 0;
         boolean exact = rule == RankMethodRule.AUTOMATIC && m < EXACT_LIMIT && n < EXACT_LIMIT && !ties;
         PairwiseSelection sel = PairwiseSelection.differences(a, b);
         double[] mid = sel.middlePair();
@@ -109,7 +109,7 @@ public final class RankSumTest {
             eq = margin == null ? null : exactInterval(sel, cdf, k, 2 * alpha, m, n, notes);
         } else {
             double nn = (double) m + n;
-            double sigma2 = (k / 12.0) * ((nn + 1) - combinedTieSum(a, b) / (nn * (nn - 1)));
+            double sigma2 = (k / 12.0) * ((nn + 1) - merged.tieSum() / (nn * (nn - 1)));
             double dz = (twiceU - (double) k) / 2;
             if (sigma2 > 0) {
                 z = (dz - 0.5 * Math.signum(dz)) / Math.sqrt(sigma2);
@@ -131,13 +131,17 @@ public final class RankSumTest {
                 equivalence, notes);
     }
 
+    /** 2U and Σ(t³ − t) over the tie groups of the combined sample, from one merge. */
+    record Merge(long twiceU, double tieSum) {
+    }
+
     /**
-     * Merges the two ascending arrays: returns {2U, 1 if any value occurs more than once in the
-     * combined sample else 0}.
+     * Merges the two ascending arrays: 2U = Σ over after values of 2·#{before below} + #{before equal}, and the
+     * tie sum of the combined sample, in O(m + n).
      */
-    static long[] mergeCounts(double[] a, double[] b) {
+    static Merge merge(double[] a, double[] b) {
         long twiceU = 0;
-        long tied = 0;
+        double ties = 0;
         int i = 0;
         int j = 0;
         while (i < a.length || j < b.length) {
@@ -152,21 +156,11 @@ public final class RankSumTest {
                 j++;
             }
             int cb = j - jStart;
-            // a values equal to v beat the jStart smaller b values and tie with cb
             twiceU += (long) ca * (2L * jStart + cb);
-            if (ca + cb > 1) {
-                tied = 1;
-            }
+            double t = ca + cb;
+            ties += (t * t - 1) * t;
         }
-        return new long[] {twiceU, tied};
-    }
-
-    private static double combinedTieSum(double[] a, double[] b) {
-        double[] all = new double[a.length + b.length];
-        System.arraycopy(a, 0, all, 0, a.length);
-        System.arraycopy(b, 0, all, a.length, b.length);
-        Arrays.sort(all);
-        return RankDistributions.tieSum(all);
+        return new Merge(twiceU, ties);
     }
 
     private static RankInterval exactInterval(PairwiseSelection sel, double[] cdf, long k, double twoSidedAlpha,

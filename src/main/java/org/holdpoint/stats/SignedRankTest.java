@@ -113,11 +113,7 @@ public final class SignedRankTest {
         if (zeros > 0) {
             notes.add(String.format(Locale.ROOT, "%d zero difference(s) dropped; %d pairs used", zeros, n));
         }
-        double[] abs = new double[n];
-        for (int i = 0; i < n; i++) {
-            abs[i] = Math.abs(d[i]);
-        }
-        Arrays.sort(abs);
+        double[] abs = absAscending(d);
         long twiceV = twiceV(d, abs);
         double absTies = RankDistributions.tieSum(abs);
         boolean exact = rule == RankMethodRule.AUTOMATIC && n < RankSumTest.EXACT_LIMIT && absTies == 0 && zeros == 0;
@@ -147,8 +143,9 @@ public final class SignedRankTest {
                 notes.add("the signed-rank variance is zero, so the p-value is undefined");
             }
             double sigma0 = Math.sqrt(nn * (nn + 1) * (2 * nn + 1) / 24 - RankDistributions.tieSum(d) / 48);
-            ci = normalInterval(sel, d, k, alpha, sigma0, notes);
-            eq = margin == null ? null : normalInterval(sel, d, k, 2 * alpha, sigma0, notes);
+            double[] ends = {endScore(d, d[0]), endScore(d, d[n - 1])};
+            ci = normalInterval(sel, d, ends, k, alpha, sigma0, notes);
+            eq = margin == null ? null : normalInterval(sel, d, ends, k, 2 * alpha, sigma0, notes);
         }
         RankEquivalence equivalence = eq == null ? null : RankEquivalence.judge(margin, alpha, eq);
         if (equivalence != null && !eq.levelReached()) {
@@ -217,11 +214,11 @@ public final class SignedRankTest {
                 Math.max(0, achieved), reached, RankMethod.EXACT);
     }
 
-    private static RankInterval normalInterval(PairwiseSelection sel, double[] d, long k, double twoSidedAlpha,
-            double sigma0, List<String> notes) {
+    private static RankInterval normalInterval(PairwiseSelection sel, double[] d, double[] ends, long k,
+            double twoSidedAlpha, double sigma0, List<String> notes) {
         double a = twoSidedAlpha;
-        double lowEnd = endScore(d, d[0]);
-        double highEnd = endScore(d, d[d.length - 1]);
+        double lowEnd = ends[0];
+        double highEnd = ends[1];
         // R's wilcox.test doubles alpha until both ends of the data lie outside the ±z band
         while (a < 1 && !(lowEnd >= Normal.upperQuantile(a / 2) && highEnd <= Normal.quantile(a / 2))) {
             a *= 2;
@@ -254,27 +251,42 @@ public final class SignedRankTest {
      * of the data: fl(d_i − c), zeros dropped, midranks of |·|, tie-corrected σ; NaN if nothing is left.
      */
     static double endScore(double[] d, double c) {
-        double[] x = new double[d.length];
+        // d is ascending and rounding is monotone, so fl(d_i − c) is ascending too: no sort is needed
+        double[] xd = new double[d.length];
         int nx = 0;
         for (double v : d) {
             double t = v - c;
             if (t != 0) {
-                x[nx++] = t;
+                xd[nx++] = t;
             }
         }
         if (nx == 0) {
             return Double.NaN;
         }
-        double[] xd = Arrays.copyOf(x, nx);
-        Arrays.sort(xd);
-        double[] abs = new double[nx];
-        for (int i = 0; i < nx; i++) {
-            abs[i] = Math.abs(xd[i]);
-        }
-        Arrays.sort(abs);
+        xd = Arrays.copyOf(xd, nx);
+        double[] abs = absAscending(xd);
         double nn = nx;
         double zd = twiceV(xd, abs) / 2.0 - nn * (nn + 1) / 4;
         double sigma = Math.sqrt(nn * (nn + 1) * (2 * nn + 1) / 24 - RankDistributions.tieSum(abs) / 48);
         return (zd - 0.5 * Math.signum(zd)) / sigma;
+    }
+
+    /** |x| in ascending order for ascending x: the negatives reversed merged with the non-negatives, O(n). */
+    static double[] absAscending(double[] x) {
+        int firstNonNegative = 0;
+        while (firstNonNegative < x.length && x[firstNonNegative] < 0) {
+            firstNonNegative++;
+        }
+        double[] out = new double[x.length];
+        int neg = firstNonNegative - 1;
+        int pos = firstNonNegative;
+        for (int k = 0; k < out.length; k++) {
+            if (neg >= 0 && (pos >= x.length || -x[neg] <= x[pos])) {
+                out[k] = -x[neg--];
+            } else {
+                out[k] = x[pos++];
+            }
+        }
+        return out;
     }
 }

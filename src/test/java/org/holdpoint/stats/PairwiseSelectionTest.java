@@ -52,7 +52,7 @@ class PairwiseSelectionTest {
     @Test
     void everyRankOfSmallMatricesMatchesBruteForce() {
         SplittableRandom rnd = new SplittableRandom(20261201L);
-        for (int rep = 0; rep < 300; rep++) {
+        for (int rep = 0; rep < 200; rep++) {
             int kind = rep % 3;
             double[] a = draw(rnd, 1 + rnd.nextInt(40), kind);
             double[] b = draw(rnd, 1 + rnd.nextInt(40), kind);
@@ -73,6 +73,15 @@ class PairwiseSelectionTest {
 
     @Test
     void largerMatricesPassThroughThePivotRoundsAndMatchBruteForce() {
+        largerMatrices(true);
+    }
+
+    @Test
+    void weightedMedianPivotAloneAlsoMatchesBruteForce() {
+        largerMatrices(false);
+    }
+
+    private static void largerMatrices(boolean sampling) {
         SplittableRandom rnd = new SplittableRandom(7L);
         for (int rep = 0; rep < 12; rep++) {
             int kind = rep % 3;
@@ -82,6 +91,8 @@ class PairwiseSelectionTest {
             PairwiseSelection sel = PairwiseSelection.differences(a, b);
             double[] w = bruteWalsh(a);
             PairwiseSelection ws = PairwiseSelection.walshSums(a);
+            sel.samplePivots = sampling;
+            ws.samplePivots = sampling;
             for (int t = 0; t < 60; t++) {
                 int k = 1 + rnd.nextInt(all.length);
                 assertThat(sel.select(k)).isEqualTo(all[k - 1]);

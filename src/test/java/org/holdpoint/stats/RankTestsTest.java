@@ -132,6 +132,20 @@ class RankTestsTest {
     }
 
     @Test
+    void absoluteValuesInOrderWithoutSorting() {
+        SplittableRandom rnd = new SplittableRandom(5L);
+        for (int rep = 0; rep < 200; rep++) {
+            double[] x = new double[rnd.nextInt(30)];
+            for (int i = 0; i < x.length; i++) {
+                x[i] = (rnd.nextInt(9) - 4) * 0.5;
+            }
+            Arrays.sort(x);
+            double[] expected = Arrays.stream(x).map(Math::abs).sorted().toArray();
+            assertThat(SignedRankTest.absAscending(x)).containsExactly(expected);
+        }
+    }
+
+    @Test
     void twiceUIsExactBeyondTheIntRange() {
         // 50,000 × 50,000 tied values: K = 2.5e9 > 2^31; 2U recomputed here by binary search per after value
         SplittableRandom rnd = new SplittableRandom(99L);
@@ -152,9 +166,19 @@ class RankTestsTest {
         }
         double[] sa = a.clone();
         Arrays.sort(sa);
-        assertThat(RankSumTest.mergeCounts(sa, sb)[0]).isEqualTo(expected);
+        assertThat(RankSumTest.merge(sa, sb).twiceU()).isEqualTo(expected);
+        // Σ(t³ − t) of the combined sample, from counting each distinct value here (t³ would overflow int)
+        double[] all = new double[2 * n];
+        System.arraycopy(a, 0, all, 0, n);
+        System.arraycopy(b, 0, all, n, n);
+        double tie = 0;
+        for (double v : Arrays.stream(all).distinct().toArray()) {
+            double t = Arrays.stream(all).filter(x -> x == v).count();
+            tie += t * t * t - t;
+        }
+        assertThat(RankSumTest.merge(sa, sb).tieSum()).isEqualTo(tie);
         // U(after) + U(before) = mn
-        assertThat(RankSumTest.mergeCounts(sa, sb)[0] + RankSumTest.mergeCounts(sb, sa)[0]).isEqualTo(2L * n * n);
+        assertThat(RankSumTest.merge(sa, sb).twiceU() + RankSumTest.merge(sb, sa).twiceU()).isEqualTo(2L * n * n);
     }
 
     private static int lowerBound(double[] s, double v) {
