@@ -49,6 +49,9 @@ final class XlsxReader {
         } catch (NotOfficeXmlFileException e) {
             throw notWorkbook(name, e);
         } catch (InvalidFormatException | OpenXML4JRuntimeException | IllegalArgumentException e) {
+            if (e.getMessage() != null && e.getMessage().contains("content type part")) {
+                throw notWorkbook(name, e);
+            }
             throw damaged(name, e);
         }
         try {
@@ -56,6 +59,9 @@ final class XlsxReader {
         } catch (IOException | OpenXML4JException | SAXException | ParserConfigurationException | POIXMLException
                 | OpenXML4JRuntimeException | IllegalStateException | IllegalArgumentException
                 | UnsupportedOperationException e) {
+            if (e.getMessage() != null && e.getMessage().contains("content type part")) {
+                throw notWorkbook(name, e);
+            }
             if (zipBomb(e)) {
                 throw new ImportException(e, "file %s looks like a zip bomb: a part of it expands far more than a real "
                         + "workbook does (POI's inflate-ratio guard stopped reading). Do not open it; ask the sender "
