@@ -48,23 +48,38 @@ public final class ImportBenchmark {
             importer.read(ImportRequest.of(file));
         }
         double[] ms = new double[runs];
+        double[] cpu = new double[runs];
         long[] alloc = new long[runs];
         long values = 0;
+        java.lang.management.ThreadMXBean threads = ManagementFactory.getThreadMXBean();
         for (int i = 0; i < runs; i++) {
             long a0 = allocated();
+            long c0 = threads.getCurrentThreadCpuTime();
             long t0 = System.nanoTime();
             Dataset d = importer.read(ImportRequest.of(file));
             ms[i] = (System.nanoTime() - t0) / 1e6;
+            cpu[i] = (threads.getCurrentThreadCpuTime() - c0) / 1e6;
             alloc[i] = allocated() - a0;
             values = d.report().valuesUsed();
         }
         double[] sorted = ms.clone();
         Arrays.sort(sorted);
+        double[] cs = cpu.clone();
+        Arrays.sort(cs);
         long[] as = alloc.clone();
         Arrays.sort(as);
-        System.out.printf(Locale.ROOT, "%s (%s, %.1f MB): %d values, median %.0f ms (min %.0f, max %.0f) over %d "
-                + "runs; allocated median %.0f MB per import%n", label, file.getFileName(), size(file) / 1e6, values,
-                sorted[runs / 2], sorted[0], sorted[runs - 1], runs, as[runs / 2] / 1e6);
+        System.out.printf(Locale.ROOT, "%s (%s, %.1f MB): %d values; wall median %.0f ms (min %.0f, max %.0f); "
+                + "importing thread's CPU median %.0f ms (min %.0f); over %d runs; allocated median %.0f MB per import; "
+                + "load average %s%n", label, file.getFileName(), size(file) / 1e6, values, sorted[runs / 2], sorted[0],
+                sorted[runs - 1], cs[runs / 2], cs[0], runs, as[runs / 2] / 1e6, loadAverage());
+    }
+
+    private static String loadAverage() {
+        try {
+            return Files.readString(Path.of("/proc/loadavg")).split(" ")[0];
+        } catch (java.io.IOException | RuntimeException e) {
+            return String.format(Locale.ROOT, "%.2f", ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
+        }
     }
 
     private static long size(Path f) {
