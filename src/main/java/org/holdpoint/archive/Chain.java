@@ -33,7 +33,11 @@ final class Chain {
      * @throws ArchiveException on a database failure
      */
     static Chain open(Connection c) throws ArchiveException {
-        String user = Jdbc.queryOne(c, Sql.CURRENT_DB_USER, rs -> rs.getString(1)).orElse("unknown");
+        String user = Jdbc.queryOne(c, Sql.CURRENT_DB_USER, rs -> rs.getString(1)).orElse("");
+        if (user.isBlank()) {
+            // an embedded database opened without a user: record the operating-system account instead
+            user = "os:" + System.getProperty("user.name", "unknown");
+        }
         long[] seq = {0};
         String[] hash = {Canonical.GENESIS};
         Jdbc.stream(c, Sql.SELECT_HEAD, rs -> {

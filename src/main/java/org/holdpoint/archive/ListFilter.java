@@ -1,5 +1,7 @@
 package org.holdpoint.archive;
 
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import org.holdpoint.study.ArchiveQuery;
@@ -23,8 +25,9 @@ record ListFilter(String where, Object[] params) {
         add(clauses, params, Sql.WHERE_CHARACTERISTIC, q.characteristic());
         add(clauses, params, Sql.WHERE_CHANGE_KIND, q.changeKind());
         add(clauses, params, Sql.WHERE_VERDICT, q.verdict());
-        add(clauses, params, Sql.WHERE_CREATED_FROM, q.createdFrom());
-        add(clauses, params, Sql.WHERE_CREATED_TO, q.createdTo());
+        // stored times are truncated to microseconds, so the bounds are too
+        add(clauses, params, Sql.WHERE_CREATED_FROM, micros(q.createdFrom()));
+        add(clauses, params, Sql.WHERE_CREATED_TO, micros(q.createdTo()));
         add(clauses, params, Sql.WHERE_SIGNER, q.signer());
         add(clauses, params, Sql.WHERE_CHANGE_ID, q.changeId());
         if (q.versions() == ArchiveQuery.Versions.CURRENT) {
@@ -32,6 +35,10 @@ record ListFilter(String where, Object[] params) {
         }
         String where = clauses.isEmpty() ? "" : " WHERE " + String.join(" AND ", clauses);
         return new ListFilter(where, params.toArray());
+    }
+
+    private static Instant micros(Instant t) {
+        return t == null ? null : t.truncatedTo(ChronoUnit.MICROS);
     }
 
     private static void add(List<String> clauses, List<Object> params, String clause, Object value) {
