@@ -11,7 +11,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Properties;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ThreadLocalRandom;
+import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.locks.ReentrantLock;
 import org.holdpoint.study.ArchiveException;
 import org.holdpoint.study.ArchiveException.Reason;
@@ -39,13 +41,19 @@ public final class JdbcArchive implements ChangeRecordArchive {
     private final Dialect dialect;
     private final ConnectionPool pool;
     private final Clock clock;
-    private final ReentrantLock writeLock = new ReentrantLock();
+    /** Embedded H2 is used by one process at a time, so its writers are serialised per URL in this JVM. */
+    private static final Map<String, ReentrantLock> H2_WRITE_LOCKS = new ConcurrentHashMap<>();
+
+    private final ReentrantLock writeLock;
+    private final AtomicInteger conflictsRetried = new AtomicInteger();
 
     private JdbcArchive(String url, Dialect dialect, ConnectionPool pool, Clock clock) {
         this.url = url;
         this.dialect = dialect;
         this.pool = pool;
         this.clock = clock;
+        this.writeLock = dialect == Dialect.H2 ? H2_WRITE_LOCKS.computeIfAbsent(url, k -> new ReentrantLock())
+                : new ReentrantLock();
     }
 
     @FunctionalInterface
@@ -144,6 +152,11 @@ public final class JdbcArchive implements ChangeRecordArchive {
     /** @return connections currently open (idle or in use); 0 after {@link #close()} */
     int openConnections() {
         return pool.openConnections();
+    }
+
+    /** @return how many write transactions lost a race and were rerun since this archive was opened */
+    int conflictsRetried() {
+        return conflictsRetried.get();
     }
 
     @Override
@@ -298,6 +311,7 @@ public final class JdbcArchive implements ChangeRecordArchive {
                                 + " appending at the same moment; nothing was stored after " + attempt
                                 + " attempts, try again. Last failure: " + e.getMessage(), e);
                     }
+                    conflictsRetried.incrementAndGet();
                     pause(attempt);
                 }
             }
