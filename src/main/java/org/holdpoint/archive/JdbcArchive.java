@@ -44,6 +44,14 @@ public final class JdbcArchive implements ChangeRecordArchive {
     /** Embedded H2 is used by one process at a time, so its writers are serialised per URL in this JVM. */
     private static final Map<String, ReentrantLock> H2_WRITE_LOCKS = new ConcurrentHashMap<>();
 
+    /**
+     * Open archives per embedded URL in this JVM, guarded by itself: the last one to close an H2 file may
+     * compact it.
+     */
+    private static final Map<String, Integer> H2_OPEN = new HashMap<>();
+    /** Below this share of live data in an H2 file, closing compacts it. */
+    private static final int H2_COMPACT_BELOW_FILL_PERCENT = 50;
+
     private final ReentrantLock writeLock;
     private final AtomicInteger conflictsRetried = new AtomicInteger();
 
@@ -106,6 +114,18 @@ public final class JdbcArchive implements ChangeRecordArchive {
      */
     public static JdbcArchive open(String url, Properties properties, Clock clock) throws ArchiveException {
         Dialect dialect = Dialect.of(url);
+        if (dialect != Dialect.H2) {
+            return openPool(url, dialect, properties, clock);
+        }
+        synchronized (H2_OPEN) {
+            JdbcArchive archive = openPool(url, dialect, properties, clock);
+            H2_OPEN.merge(url, 1, Integer::sum);
+            return archive;
+        }
+    }
+
+    private static JdbcArchive openPool(String url, Dialect dialect, Properties properties, Clock clock)
+            throws ArchiveException {
         ConnectionPool pool = new ConnectionPool(url, properties);
         try (ConnectionPool.Lease lease = pool.lease()) {
             Migrator.migrate(lease.connection(), dialect);
@@ -289,9 +309,35 @@ public final class JdbcArchive implements ChangeRecordArchive {
         }
     }
 
+    /**
+     * Closes the archive's connections. The last archive of an embedded H2 file to close compacts the file
+     * when less than half of it is live data (bulk archiving leaves old page versions behind).
+     */
     @Override
     public void close() {
-        pool.close();
+        if (dialect != Dialect.H2) {
+            pool.close();
+            return;
+        }
+        synchronized (H2_OPEN) {
+            Integer left = H2_OPEN.computeIfPresent(url, (k, n) -> n > 1 ? n - 1 : null);
+            if (left == null && url.regionMatches(true, 0, "jdbc:h2:file:", 0, "jdbc:h2:file:".length())) {
+                compactIfSparse();
+            }
+            pool.close();
+        }
+    }
+
+    private void compactIfSparse() {
+        try (ConnectionPool.Lease lease = pool.lease()) {
+            long fill = Jdbc.queryLong(lease.connection(), Sql.H2_FILL_RATE);
+            if (fill < H2_COMPACT_BELOW_FILL_PERCENT) {
+                lease.discard();
+                Jdbc.update(lease.connection(), Sql.H2_SHUTDOWN_COMPACT);
+            }
+        } catch (ArchiveException | RuntimeException e) {
+            // compaction only saves disk space; every commit is already on disk, so a failure loses nothing
+        }
     }
 
     // --- writing ------------------------------------------------------------------------------------

@@ -133,6 +133,16 @@ final class Sql {
     static final Stmt ALL_SIGNATURES = new Stmt("read all signatures",
             "SELECT id, study_id, signer, role, meaning, signed_at FROM signature ORDER BY id");
 
+    // --- H2 maintenance --------------------------------------------------------------------------------
+
+    /** Percent of live data: in the file (after a restart) or in its chunks (within a session), whichever is lower. */
+    static final Stmt H2_FILL_RATE = new Stmt("read H2 file fill rate", """
+            SELECT MIN(CAST(SETTING_VALUE AS INTEGER)) FROM INFORMATION_SCHEMA.SETTINGS
+            WHERE SETTING_NAME IN ('info.FILL_RATE', 'info.CHUNKS_FILL_RATE')""");
+
+    /** Closes the embedded database for every session and rewrites its file without dead pages. */
+    static final Stmt H2_SHUTDOWN_COMPACT = new Stmt("compact H2 file", "SHUTDOWN COMPACT");
+
     /** Tables the archive owns, for diagnostics and tests. */
     static final List<String> TABLES = List.of("study", "study_characteristic", "signature", "audit_event",
             "schema_version");

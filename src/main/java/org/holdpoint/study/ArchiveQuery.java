@@ -56,25 +56,45 @@ public record ArchiveQuery(String partNumber, String characteristic, String chan
         return DEFAULTS;
     }
 
-    /** @param value part number @return a copy filtering on it */
+    /**
+     * A copy filtering on the part number.
+     *
+     * @param value the part number, or null for any
+     * @return the copy
+     */
     public ArchiveQuery withPartNumber(String value) {
         return new ArchiveQuery(value, characteristic, changeKind, verdict, createdFrom, createdTo, signer, changeId,
                 versions);
     }
 
-    /** @param value characteristic name @return a copy filtering on it */
+    /**
+     * A copy filtering on the characteristic name.
+     *
+     * @param value the characteristic name, or null for any
+     * @return the copy
+     */
     public ArchiveQuery withCharacteristic(String value) {
         return new ArchiveQuery(partNumber, value, changeKind, verdict, createdFrom, createdTo, signer, changeId,
                 versions);
     }
 
-    /** @param value kind of change @return a copy filtering on it */
+    /**
+     * A copy filtering on the kind of change.
+     *
+     * @param value the kind of change, or null for any
+     * @return the copy
+     */
     public ArchiveQuery withChangeKind(String value) {
         return new ArchiveQuery(partNumber, characteristic, value, verdict, createdFrom, createdTo, signer, changeId,
                 versions);
     }
 
-    /** @param value verdict in words @return a copy filtering on it */
+    /**
+     * A copy filtering on the verdict in words.
+     *
+     * @param value the verdict in words, or null for any
+     * @return the copy
+     */
     public ArchiveQuery withVerdict(String value) {
         return new ArchiveQuery(partNumber, characteristic, changeKind, value, createdFrom, createdTo, signer,
                 changeId, versions);
@@ -92,19 +112,34 @@ public record ArchiveQuery(String partNumber, String characteristic, String chan
                 versions);
     }
 
-    /** @param value signer's name @return a copy filtering on it */
+    /**
+     * A copy filtering on the signer's name.
+     *
+     * @param value the signer's name, or null for any
+     * @return the copy
+     */
     public ArchiveQuery withSigner(String value) {
         return new ArchiveQuery(partNumber, characteristic, changeKind, verdict, createdFrom, createdTo, value,
                 changeId, versions);
     }
 
-    /** @param value change record identifier @return a copy filtering on it */
+    /**
+     * A copy filtering on the change record identifier.
+     *
+     * @param value the change record identifier, or null for any
+     * @return the copy
+     */
     public ArchiveQuery withChangeId(String value) {
         return new ArchiveQuery(partNumber, characteristic, changeKind, verdict, createdFrom, createdTo, signer,
                 value, versions);
     }
 
-    /** @param value which versions to include @return a copy with that choice */
+    /**
+     * A copy including all versions or only current ones.
+     *
+     * @param value which versions to include
+     * @return the copy
+     */
     public ArchiveQuery withVersions(Versions value) {
         return new ArchiveQuery(partNumber, characteristic, changeKind, verdict, createdFrom, createdTo, signer,
                 changeId, value);

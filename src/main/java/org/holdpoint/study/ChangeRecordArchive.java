@@ -83,6 +83,18 @@ public interface ChangeRecordArchive extends AutoCloseable {
     List<AuditEvent> events(long studyId) throws ArchiveException;
 
     /**
+     * The current (not superseded) version of a change record, e.g. to supersede it with a correction.
+     *
+     * @param changeId the change record's identifier
+     * @return its current version, or empty when the change id is not archived
+     * @throws ArchiveException on a database failure
+     */
+    default Optional<StudyVersion> currentVersion(String changeId) throws ArchiveException {
+        return list(ArchiveQuery.withDefaults().withChangeId(changeId).withVersions(ArchiveQuery.Versions.CURRENT))
+                .stream().findFirst();
+    }
+
+    /**
      * Re-checks the whole hash chain and every study, JSON text and signature against it.
      *
      * @return the findings; {@link VerificationReport#intact()} when nothing was altered

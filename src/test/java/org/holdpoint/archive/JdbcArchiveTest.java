@@ -110,6 +110,8 @@ class JdbcArchiveTest {
         assertThat(ids(ArchiveQuery.withDefaults().withVersions(ArchiveQuery.Versions.CURRENT)))
                 .containsExactly(v2.id());
         assertThat(ids(ArchiveQuery.withDefaults().withChangeId("CR-1"))).containsExactly(v2.id(), v1.id());
+        assertThat(archive.currentVersion("CR-1")).map(StudyVersion::id).contains(v2.id());
+        assertThat(archive.currentVersion("CR-404")).isEmpty();
         assertThat(archive.events(v1.id())).extracting(AuditEvent::kind)
                 .containsExactly(AuditEvent.Kind.CREATED, AuditEvent.Kind.SUPERSEDED);
         AuditEvent superseded = archive.events(v1.id()).get(1);
@@ -163,6 +165,25 @@ class JdbcArchiveTest {
         assertThat(events.get(3).dbUser()).isNotBlank();
         assertThat(archive.show(v.id()).orElseThrow().version().signatures()).containsExactly(sig);
         assertThat(archive.verify().intact()).isTrue();
+    }
+
+    @Test
+    void aLargeStudyJsonIsStoredAndReturnedWhole() throws ArchiveException {
+        String json = "{\"values\":[" + "12.0031,".repeat(250_000) + "12.0]}"; // about 2 MB
+        NewStudyVersion s = NewStudyVersion.of("CR-BIG", "t", null, "P", null, List.of("Bore"), null, "a", JAN, json);
+        assertThat(archive.show(archive.add(s, "a", null).id()).orElseThrow().json()).isEqualTo(json);
+    }
+
+    @Test
+    void aDatabaseFailureNamesTheStatementAndItsParameters() {
+        NewStudyVersion s = NewStudyVersion.of("CR-LONG", "x".repeat(3000), null, "P-1", null, List.of(), null, "a",
+                JAN, "{}");
+        // the H2 schema limits a title to 2000 characters
+        assertThatThrownBy(() -> archive.add(s, "a", null)).isInstanceOf(ArchiveException.class)
+                .hasMessageContaining("statement 'insert study' failed with parameters [1, 'CR-LONG', 1, null, 'xxx")
+                .hasMessageContaining("…(3000 chars)")
+                .hasMessageContaining("'P-1'")
+                .extracting(e -> ((ArchiveException) e).reason()).isEqualTo(ArchiveException.Reason.DATABASE);
     }
 
     @Test
