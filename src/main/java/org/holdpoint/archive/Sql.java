@@ -69,13 +69,15 @@ final class Sql {
     // --- reading ------------------------------------------------------------------------------------
 
     private static final String STUDY_COLUMNS = """
-            s.id, s.change_id, s.version, s.supersedes_id,
-            (SELECT n.id FROM study n WHERE n.supersedes_id = s.id) AS superseded_by,
+            s.id, s.change_id, s.version, s.supersedes_id, n.id AS superseded_by,
             s.title, s.change_kind, s.part_number, s.revision, s.verdict, s.author, s.created_at, s.archived_at,
             s.json_sha256""";
 
+    /** A study with the version that superseded it, if any (supersedes_id is unique, so at most one). */
+    private static final String STUDY_FROM = " FROM study s LEFT JOIN study n ON n.supersedes_id = s.id";
+
     static final Stmt SELECT_STUDY = new Stmt("read study",
-            "SELECT " + STUDY_COLUMNS + " FROM study s WHERE s.id = ?");
+            "SELECT " + STUDY_COLUMNS + STUDY_FROM + " WHERE s.id = ?");
 
     static final Stmt SELECT_STUDY_JSON = new Stmt("read study JSON",
             "SELECT json_text FROM study WHERE id = ?");
@@ -96,24 +98,24 @@ final class Sql {
 
     // --- listing: a fixed head, fixed filter fragments, a fixed tail --------------------------------
 
-    static final String LIST_HEAD = "SELECT " + STUDY_COLUMNS + " FROM study s";
+    static final String LIST_HEAD = "SELECT " + STUDY_COLUMNS + STUDY_FROM;
     static final String LIST_TAIL = " ORDER BY s.created_at DESC, s.id DESC";
     static final String LIST_CHARACTERISTICS_HEAD = "SELECT c.study_id, c.name FROM study_characteristic c"
-            + " WHERE c.study_id IN (SELECT s.id FROM study s";
-    static final String LIST_CHARACTERISTICS_TAIL = ") ORDER BY c.study_id, c.ordinal";
+            + " JOIN study s ON s.id = c.study_id";
+    static final String LIST_CHARACTERISTICS_TAIL = " ORDER BY c.study_id, c.ordinal";
     static final String LIST_SIGNATURES_HEAD = "SELECT g.id, g.study_id, g.signer, g.role, g.meaning, g.signed_at"
-            + " FROM signature g WHERE g.study_id IN (SELECT s.id FROM study s";
-    static final String LIST_SIGNATURES_TAIL = ") ORDER BY g.study_id, g.signed_at, g.id";
+            + " FROM signature g JOIN study s ON s.id = g.study_id";
+    static final String LIST_SIGNATURES_TAIL = " ORDER BY g.study_id, g.signed_at, g.id";
 
-    static final String WHERE_PART = "LOWER(s.part_number) = LOWER(?)";
+    static final String WHERE_PART = "s.part_key = LOWER(?)";
     static final String WHERE_CHARACTERISTIC = "EXISTS (SELECT 1 FROM study_characteristic c2"
-            + " WHERE c2.study_id = s.id AND LOWER(c2.name) = LOWER(?))";
-    static final String WHERE_CHANGE_KIND = "LOWER(s.change_kind) = LOWER(?)";
+            + " WHERE c2.study_id = s.id AND c2.name_key = LOWER(?))";
+    static final String WHERE_CHANGE_KIND = "s.change_kind_key = LOWER(?)";
     static final String WHERE_VERDICT = "LOWER(s.verdict) = LOWER(?)";
     static final String WHERE_CREATED_FROM = "s.created_at >= ?";
     static final String WHERE_CREATED_TO = "s.created_at < ?";
     static final String WHERE_SIGNER = "EXISTS (SELECT 1 FROM signature g2"
-            + " WHERE g2.study_id = s.id AND LOWER(g2.signer) = LOWER(?))";
+            + " WHERE g2.study_id = s.id AND g2.signer_key = LOWER(?))";
     static final String WHERE_CHANGE_ID = "s.change_id = ?";
     static final String WHERE_CURRENT = "NOT EXISTS (SELECT 1 FROM study n2 WHERE n2.supersedes_id = s.id)";
 

@@ -29,19 +29,24 @@ CREATE TABLE study (
     archived_at     timestamptz NOT NULL,
     json_sha256     char(64) NOT NULL,
     json_text       text NOT NULL,
+    -- search keys (case-insensitive filters through an index); derived by the database, never written
+    part_key        text GENERATED ALWAYS AS (lower(part_number)) STORED,
+    change_kind_key text GENERATED ALWAYS AS (lower(change_kind)) STORED,
     CONSTRAINT study_change_version_uq UNIQUE (change_id, version),
     CONSTRAINT study_supersedes_uq UNIQUE (supersedes_id)
 );
-CREATE INDEX study_part_idx ON study (lower(part_number));
+CREATE INDEX study_part_idx ON study (part_key);
+CREATE INDEX study_change_kind_idx ON study (change_kind_key);
 CREATE INDEX study_created_idx ON study (created_at);
 
 CREATE TABLE study_characteristic (
     study_id        bigint NOT NULL REFERENCES study (id),
     ordinal         integer NOT NULL,
     name            text NOT NULL,
+    name_key        text GENERATED ALWAYS AS (lower(name)) STORED,
     PRIMARY KEY (study_id, ordinal)
 );
-CREATE INDEX study_characteristic_name_idx ON study_characteristic (lower(name));
+CREATE INDEX study_characteristic_name_idx ON study_characteristic (name_key);
 
 CREATE TABLE signature (
     id              bigint PRIMARY KEY,
@@ -49,10 +54,11 @@ CREATE TABLE signature (
     signer          text NOT NULL,
     role            text NOT NULL,
     meaning         text NOT NULL,
-    signed_at       timestamptz NOT NULL
+    signed_at       timestamptz NOT NULL,
+    signer_key      text GENERATED ALWAYS AS (lower(signer)) STORED
 );
 CREATE INDEX signature_study_idx ON signature (study_id);
-CREATE INDEX signature_signer_idx ON signature (lower(signer));
+CREATE INDEX signature_signer_idx ON signature (signer_key);
 
 CREATE TABLE audit_event (
     seq             bigint PRIMARY KEY,
