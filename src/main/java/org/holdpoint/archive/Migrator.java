@@ -4,8 +4,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.sql.Connection;
+import java.sql.PreparedStatement;
 import java.sql.SQLException;
-import java.sql.Statement;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -118,8 +118,8 @@ final class Migrator {
         List<String> statements = SqlScript.split(m.text());
         for (int i = 0; i < statements.size(); i++) {
             String sql = statements.get(i);
-            try (Statement s = c.createStatement()) {
-                s.execute(sql);
+            try (PreparedStatement s = c.prepareStatement(sql)) {
+                s.execute();
             } catch (SQLException e) {
                 throw Jdbc.failure(new Stmt("migration " + m.file() + " statement " + (i + 1), sql),
                         new Object[0], e);

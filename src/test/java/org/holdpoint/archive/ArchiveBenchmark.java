@@ -37,6 +37,10 @@ public final class ArchiveBenchmark {
         int n = args.length > 0 ? Integer.parseInt(args[0]) : 10_000;
         Path dir = Files.createTempDirectory("holdpoint-bench");
         run("H2 file (embedded default)", ArchiveLocation.embeddedUrl(dir), n);
+        Path file = dir.resolve("holdpoint.mv.db");
+        System.out.printf(Locale.ROOT, "  H2 file after close: %.1f MB%n", Files.size(file) / 1048576.0);
+        Files.delete(file);
+        Files.delete(dir);
         String admin = System.getenv("HOLDPOINT_PG_URL");
         if (admin != null && !admin.isBlank()) {
             String db = "hp_bench_" + UUID.randomUUID().toString().replace("-", "").substring(0, 8);
