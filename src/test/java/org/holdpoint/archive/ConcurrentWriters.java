@@ -70,6 +70,36 @@ final class ConcurrentWriters {
         }
     }
 
+    /**
+     * Verifies repeatedly while one writer appends: every report must come from a consistent snapshot.
+     *
+     * @param writer   the archive that writes
+     * @param verifier the archive that verifies (may be the same)
+     * @param studies  how many studies to write
+     * @return the number of problems seen in all reports during the writes, and the number of reports
+     * @throws Exception when a call fails
+     */
+    static int[] verifyWhileWriting(ChangeRecordArchive writer, ChangeRecordArchive verifier, int studies)
+            throws Exception {
+        CountDownLatch start = new CountDownLatch(1);
+        ExecutorService pool = Executors.newSingleThreadExecutor();
+        try {
+            Future<int[]> w = pool.submit(writer(writer, writer, "W", studies, start));
+            start.countDown();
+            int problems = 0;
+            int reports = 0;
+            while (!w.isDone() || reports == 0) {
+                problems += verifier.verify().problems().size();
+                reports++;
+            }
+            w.get(120, TimeUnit.SECONDS);
+            return new int[] {problems, reports};
+        } finally {
+            pool.shutdownNow();
+            pool.awaitTermination(60, TimeUnit.SECONDS);
+        }
+    }
+
     private static Callable<int[]> writer(ChangeRecordArchive archive, ChangeRecordArchive signer, String name, int n,
             CountDownLatch start) {
         return () -> {

@@ -33,4 +33,14 @@ class H2ConcurrencyTest {
             assertThat(o.report().eventsChecked()).isGreaterThanOrEqualTo(o.stored());
         }
     }
+
+    @Test
+    void verifyReadsAConsistentSnapshotWhileAnotherArchiveWrites() throws Exception {
+        String url = Fixtures.memUrl("verify-while-writing");
+        try (JdbcArchive writer = JdbcArchive.open(url); JdbcArchive auditor = JdbcArchive.open(url)) {
+            int[] r = ConcurrentWriters.verifyWhileWriting(writer, auditor, 150);
+            assertThat(r[0]).as("problems over %d reports", r[1]).isZero();
+            assertThat(r[1]).isPositive();
+        }
+    }
 }

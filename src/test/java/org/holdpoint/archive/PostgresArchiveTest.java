@@ -104,6 +104,19 @@ class PostgresArchiveTest {
             assertThat(sqlState(who, "DELETE FROM audit_event")).as(who).isEqualTo("42501");
             assertThat(sqlState(who, "TRUNCATE signature")).as(who).isEqualTo("42501");
         }
+        // row-level security: each role appends only its own kinds of event, under its own database name
+        String event = "INSERT INTO audit_event (seq, study_id, kind, subject_id, actor, db_user, occurred_at, what,"
+                + " subject_digest, prev_hash, hash) VALUES (99, " + id + ", '%s', " + id + ", 'x', '%s', now(), 'x',"
+                + " repeat('0', 64), repeat('0', 64), repeat('%s', 64))";
+        assertThat(sqlState(approver, String.format(event, "CREATED", approver, "a"))).isEqualTo("42501");
+        assertThat(sqlState(author, String.format(event, "SIGNED", author, "b"))).isEqualTo("42501");
+        assertThat(sqlState(author, String.format(event, "CREATED", approver, "c"))).isEqualTo("42501");
+        // the same row under the author's own name and kind passes the policy (and is then caught by verify)
+        assertThat(sqlState(author, String.format(event, "CREATED", author, "d"))).isEqualTo("no error");
+        try (JdbcArchive asAuditor = JdbcArchive.open(url, auditor, null)) {
+            assertThat(asAuditor.verify().problems()).extracting(VerificationReport.Problem::record)
+                    .contains("audit_event seq 99");
+        }
         // even the owner is stopped by the append-only trigger
         assertThat(sqlState(owner, "UPDATE study SET title = 'x'")).isEqualTo("42501");
         assertThat(sqlState(owner, "DELETE FROM audit_event")).isEqualTo("42501");
@@ -145,6 +158,20 @@ class PostgresArchiveTest {
             assertThat(o.report().problems()).isEmpty();
             assertThat(o.listed()).isEqualTo(o.stored());
             assertThat(o.report().studiesChecked()).isEqualTo(o.stored());
+        }
+    }
+
+    @Test
+    void anAuditorVerifiesAConsistentSnapshotWhileAnAuthorWrites() throws Exception {
+        JdbcArchive.migrate(url, owner, null);
+        try (JdbcArchive asAuthor = JdbcArchive.open(url, author, null);
+                JdbcArchive asApprover = JdbcArchive.open(url, approver, null);
+                JdbcArchive asAuditor = JdbcArchive.open(url, auditor, null)) {
+            // the writer signs through its own archive, so give it author and approver rights for this test
+            exec(admin, "GRANT holdpoint_approver TO " + author);
+            int[] r = ConcurrentWriters.verifyWhileWriting(asAuthor, asAuditor, 100);
+            assertThat(r[0]).as("problems over %d reports", r[1]).isZero();
+            assertThat(asApprover.verify().intact()).isTrue();
         }
     }
 

@@ -108,3 +108,13 @@ GRANT SELECT ON study, study_characteristic, signature, audit_event, schema_vers
     TO holdpoint_author, holdpoint_approver, holdpoint_auditor;
 GRANT INSERT ON study, study_characteristic, audit_event TO holdpoint_author;
 GRANT INSERT ON signature, audit_event TO holdpoint_approver;
+
+-- Which role may append which kind of audit event, and only under its own name (row-level security; the
+-- owner is exempt, as table owners are unless FORCE is set).
+ALTER TABLE audit_event ENABLE ROW LEVEL SECURITY;
+CREATE POLICY audit_event_read ON audit_event FOR SELECT
+    TO holdpoint_author, holdpoint_approver, holdpoint_auditor USING (true);
+CREATE POLICY audit_event_author_append ON audit_event FOR INSERT TO holdpoint_author
+    WITH CHECK (kind IN ('CREATED', 'ANALYSED', 'EXCLUSION_ADDED', 'SUPERSEDED') AND db_user = current_user);
+CREATE POLICY audit_event_approver_append ON audit_event FOR INSERT TO holdpoint_approver
+    WITH CHECK (kind = 'SIGNED' AND db_user = current_user);
