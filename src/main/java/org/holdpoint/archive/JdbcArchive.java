@@ -13,6 +13,7 @@ import java.util.Optional;
 import java.util.Properties;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ThreadLocalRandom;
+import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.locks.ReentrantLock;
 import org.holdpoint.study.ArchiveException;
@@ -54,6 +55,7 @@ public final class JdbcArchive implements ChangeRecordArchive {
 
     private final ReentrantLock writeLock;
     private final AtomicInteger conflictsRetried = new AtomicInteger();
+    private final AtomicBoolean closed = new AtomicBoolean();
 
     private JdbcArchive(String url, Dialect dialect, ConnectionPool pool, Clock clock) {
         this.url = url;
@@ -315,6 +317,9 @@ public final class JdbcArchive implements ChangeRecordArchive {
      */
     @Override
     public void close() {
+        if (!closed.compareAndSet(false, true)) {
+            return;
+        }
         if (dialect != Dialect.H2) {
             pool.close();
             return;

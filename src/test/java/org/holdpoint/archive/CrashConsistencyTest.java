@@ -20,7 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Kills a child JVM (SIGKILL via destroyForcibly) while it is archiving into an H2 file, three times in a row
  * on the same file, then checks that the archive opens, verify() passes and every study the child reported as
- * committed is there.
+ * committed is there; and halts a child (Runtime.halt) at a known point inside a write transaction.
  */
 class CrashConsistencyTest {
 
@@ -45,11 +45,34 @@ class CrashConsistencyTest {
         }
     }
 
-    private static List<String> runAndKill(String url, String label) throws IOException, InterruptedException {
+    @Test
+    void haltingInsideASigningTransactionLeavesNoHalfWrittenSignature(@TempDir Path dir) throws Exception {
+        String url = ArchiveLocation.embeddedUrl(dir);
+        // per study i the child reads the clock once in add and, for even i, once more in sign after it has
+        // inserted the signature row: sign of study i = 2k is clock reading 3k + 2, so 32 is the sign of study 20
+        Process p = child(url, "halt", "32").redirectOutput(ProcessBuilder.Redirect.DISCARD).start();
+        assertThat(p.waitFor(120, TimeUnit.SECONDS)).isTrue();
+        assertThat(p.exitValue()).isEqualTo(3);
+        try (JdbcArchive archive = JdbcArchive.open(url)) {
+            VerificationReport report = archive.verify();
+            assertThat(report.problems()).isEmpty();
+            assertThat(report.studiesChecked()).isEqualTo(21); // studies 0 … 20
+            assertThat(report.signaturesChecked()).isEqualTo(10); // even studies 0 … 18
+            assertThat(archive.currentVersion("CRASH-halt-20").orElseThrow().signatures()).isEmpty();
+            assertThat(archive.currentVersion("CRASH-halt-18").orElseThrow().signers()).containsExactly("Quinn");
+        }
+    }
+
+    private static ProcessBuilder child(String url, String... args) {
         String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
-        Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-cp",
-                classpath, "-Xmx256m", CrashChild.class.getName(), url, label)
-                .redirectError(ProcessBuilder.Redirect.DISCARD).start();
+        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java")
+                .toString(), "-cp", classpath, "-Xmx256m", CrashChild.class.getName(), url));
+        command.addAll(List.of(args));
+        return new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.DISCARD);
+    }
+
+    private static List<String> runAndKill(String url, String label) throws IOException, InterruptedException {
+        Process p = child(url, label).start();
         List<String> committed = Collections.synchronizedList(new ArrayList<>());
         Thread reader = new Thread(() -> read(p, committed), "crash-child-reader");
         reader.start();
