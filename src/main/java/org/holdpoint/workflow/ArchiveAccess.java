@@ -1,0 +1,84 @@
+package org.holdpoint.workflow;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.Properties;
+import org.holdpoint.study.ArchiveException;
+import org.holdpoint.study.ChangeRecordArchive;
+
+/**
+ * How the use cases reach the change-record archive: through the {@link ChangeRecordArchive} port,
+ * opened by a function the composition root installs (the JDBC adapter). The URL comes from the
+ * {@code --archive} option, else from {@code archive.url} in the settings file
+ * ({@code $XDG_CONFIG_HOME/holdpoint/settings.properties}, default {@code ~/.config/holdpoint/}), else
+ * the embedded default in the user's data folder.
+ */
+public final class ArchiveAccess {
+    /** Opens an archive from a JDBC URL, or the embedded default for null. */
+    @FunctionalInterface
+    public interface Opener {
+        /**
+         * @param url a JDBC URL, or null for the embedded default
+         * @return the open archive (the caller closes it)
+         * @throws ArchiveException when it cannot be opened
+         */
+        ChangeRecordArchive open(String url) throws ArchiveException;
+    }
+
+    private static volatile Opener opener;
+
+    private ArchiveAccess() {
+    }
+
+    /**
+     * Installs the adapter; called once by the composition root.
+     *
+     * @param o the opener
+     */
+    public static void install(Opener o) {
+        opener = o;
+    }
+
+    /**
+     * Opens the archive at a URL, at the configured one, or the embedded default.
+     *
+     * @param url an explicit JDBC URL, or null
+     * @return the archive
+     * @throws ArchiveException when it cannot be opened
+     */
+    public static ChangeRecordArchive open(String url) throws ArchiveException {
+        Opener o = opener;
+        if (o == null) {
+            throw new ArchiveException(ArchiveException.Reason.DATABASE,
+                    "no archive adapter is installed in this build");
+        }
+        return o.open(url != null ? url : configuredUrl(System.getenv(), Path.of(System.getProperty("user.home"))));
+    }
+
+    /**
+     * The archive URL of the settings file, if one is set there.
+     *
+     * @param env      the environment (for XDG_CONFIG_HOME)
+     * @param userHome the user's home folder
+     * @return the URL, or null
+     */
+    static String configuredUrl(Map<String, String> env, Path userHome) {
+        String xdg = env.get("XDG_CONFIG_HOME");
+        Path dir = xdg != null && !xdg.isBlank() ? Path.of(xdg) : userHome.resolve(".config");
+        Path file = dir.resolve("holdpoint").resolve("settings.properties");
+        if (!Files.isRegularFile(file)) {
+            return null;
+        }
+        Properties p = new Properties();
+        try (InputStream in = Files.newInputStream(file)) {
+            p.load(in);
+        } catch (IOException e) {
+            return null;
+        }
+        String url = p.getProperty("archive.url");
+        return url == null || url.isBlank() ? null : url.trim();
+    }
+}

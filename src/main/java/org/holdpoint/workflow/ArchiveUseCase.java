@@ -1,0 +1,140 @@
+package org.holdpoint.workflow;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import org.holdpoint.study.ArchiveException;
+import org.holdpoint.study.ArchiveQuery;
+import org.holdpoint.study.ArchivedStudy;
+import org.holdpoint.study.AuditEvent;
+import org.holdpoint.study.ChangeRecordArchive;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.Exclusion;
+import org.holdpoint.study.Progress;
+import org.holdpoint.study.StudyResult;
+import org.holdpoint.study.StudyVersion;
+
+/**
+ * The archive use cases behind {@code holdpoint archive ...} and the window's archive view: add a
+ * study file as an immutable version (a correction supersedes the current version), list, show,
+ * sign and verify. Every study is re-analysed from its raw data before it is archived, so the
+ * verdict stored is the one the data give.
+ */
+public final class ArchiveUseCase {
+    private final ChangeRecordArchive archive;
+
+    /**
+     * @param archive the open archive (the caller closes it)
+     */
+    public ArchiveUseCase(ChangeRecordArchive archive) {
+        this.archive = archive;
+    }
+
+    /**
+     * Archives a study file: a new change id becomes version 1; an existing one is superseded by this
+     * version, which then needs a reason.
+     *
+     * @param studyFile the study file
+     * @param actor     who archives it
+     * @param reason    why (required for a correction)
+     * @return the stored version
+     * @throws ArchiveException when the archive refuses it
+     */
+    public StudyVersion add(Path studyFile, String actor, String reason) throws ArchiveException {
+        ChangeStudy study = StudyFiles.read(studyFile);
+        StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        String json = new String(StudyFiles.canonical(StudyFiles.toJson(study, result)), StandardCharsets.UTF_8);
+        var change = study.change();
+        if (change.partNumber().isBlank() || change.title().isBlank()) {
+            throw new ArchiveException(ArchiveException.Reason.REJECTED, studyFile + ": the study has no "
+                    + (change.partNumber().isBlank() ? "part number" : "title")
+                    + "; describe the change (--part, --title) when you analyse it, then save the study again");
+        }
+        List<String> names = new ArrayList<>();
+        for (CharacteristicData c : study.data().characteristics()) {
+            names.add(c.name());
+        }
+        Instant now = Instant.now();
+        List<AuditEvent.Draft> history = new ArrayList<>();
+        history.add(new AuditEvent.Draft(AuditEvent.Kind.ANALYSED, actor, now, "analysed " + names.size()
+                + " characteristic(s) with holdpoint " + Version.get() + ": " + result.summary(), "archiving"));
+        for (Exclusion e : study.settings().exclusions()) {
+            history.add(new AuditEvent.Draft(AuditEvent.Kind.EXCLUSION_ADDED, actor, now, "excluded the value at "
+                    + e.cell() + (e.characteristic() == null ? "" : " of " + e.characteristic()), e.reason()));
+        }
+        var version = org.holdpoint.study.NewStudyVersion.of(change.id(), change.title(), change.kind().words(),
+                change.partNumber(), change.revision(), names, result.changeVerified() ? "verified" : "not verified",
+                actor, now, json).withHistory(history);
+        var current = archive.currentVersion(change.id());
+        if (current.isPresent()) {
+            if (reason == null || reason.isBlank()) {
+                throw new ArchiveException(ArchiveException.Reason.REJECTED, "change " + change.id()
+                        + " is already archived (version " + current.get().version() + "); a correction needs "
+                        + "--reason saying why it supersedes that version");
+            }
+            return archive.supersede(current.get().id(), version, actor, reason);
+        }
+        return archive.add(version, actor, reason == null || reason.isBlank() ? "archived" : reason);
+    }
+
+    /**
+     * @param query the filters
+     * @return matching versions, newest first
+     * @throws ArchiveException on a database failure
+     */
+    public List<StudyVersion> list(ArchiveQuery query) throws ArchiveException {
+        return archive.list(query);
+    }
+
+    /**
+     * @param id the version id
+     * @return the version with its JSON and audit events
+     * @throws ArchiveException when it does not exist
+     */
+    public Shown show(long id) throws ArchiveException {
+        ArchivedStudy s = archive.show(id).orElseThrow(() -> new ArchiveException(ArchiveException.Reason.NOT_FOUND,
+                "no archived study has id " + id + "; run 'holdpoint archive list' to see the ids"));
+        return new Shown(s, archive.events(id));
+    }
+
+    /** A version as shown: metadata, JSON and its events. */
+    public record Shown(ArchivedStudy study, List<AuditEvent> events) {
+        /** Copies the list. */
+        public Shown {
+            events = List.copyOf(events);
+        }
+
+        /** @return the study re-read from its stored JSON */
+        public ChangeStudy changeStudy() {
+            return StudyFiles.parse(study.json(), "archived study " + study.version().id());
+        }
+    }
+
+    /**
+     * Adds a signature to the current version of a study.
+     *
+     * @param id      the version id
+     * @param signer  printed name
+     * @param role    role
+     * @param meaning meaning of the signature
+     * @return the signature stored
+     * @throws ArchiveException when the archive refuses it
+     */
+    public org.holdpoint.study.ArchivedSignature sign(long id, String signer, String role, String meaning)
+            throws ArchiveException {
+        return archive.sign(id, signer, role, meaning, Instant.now());
+    }
+
+    /**
+     * Checks the whole chain and every record it covers.
+     *
+     * @return the report
+     * @throws ArchiveException on a database failure
+     */
+    public org.holdpoint.study.VerificationReport verify() throws ArchiveException {
+        return archive.verify();
+    }
+}
