@@ -79,15 +79,27 @@ final class ExactPower {
         return Math.min(1, p);
     }
 
-    /** Φ(a) − Φ(b) for a ≥ b, from the tail that avoids cancellation (upper tails when b &gt; 0). */
+    /**
+     * Φ(a) − Φ(b) for a ≥ b without cancellation: from the upper tails when b &gt; 0; and when a and b lie
+     * on the same side of 0 and close together (h·max(1, |M|) &lt; ½ with M = (a + b)/2, h = (a − b)/2), as
+     * φ(M)·∫_{−h}^{h} exp(−M·s − s²/2) ds by the 15-point Kronrod rule, which is then exact to rounding.
+     */
     static double normalDifference(double a, double b) {
         if (!(a > b)) {
             return 0;
         }
-        if (b > 0) {
-            return Normal.cdf(-b) - Normal.cdf(-a);
+        double mid = 0.5 * (a + b);
+        double h = 0.5 * (a - b);
+        if ((b > 0 || a < 0) && h * Math.max(1, Math.abs(mid)) < 0.5) {
+            double sum = Quadrature.WGK[7];
+            for (int j = 0; j < 7; j++) {
+                double s = h * Quadrature.XGK[j];
+                sum += Quadrature.WGK[j] * Math.exp(-0.5 * s * s) * 2 * Math.cosh(mid * s);
+            }
+            return Normal.density(mid) * h * sum;
         }
-        return Normal.cdf(a) - Normal.cdf(b);
+        double d = b > 0 ? Normal.cdf(-b) - Normal.cdf(-a) : Normal.cdf(a) - Normal.cdf(b);
+        return Math.max(0, d);
     }
 
     /**
