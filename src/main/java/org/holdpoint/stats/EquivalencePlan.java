@@ -261,10 +261,13 @@ public final class EquivalencePlan {
         checkTarget();
         Checks.positive(sd, "the sd");
         double z = Normal.upperQuantile(0.5 * alpha);
+        // the z-test power Φ(δ − z) + Φ(−δ − z) is at most Φ(δ − z) + α/2, so δ below this cannot reach the target
+        double needed = targetPower - 0.5 * alpha - BOUND_SLACK > 0
+                ? z + Normal.quantile(targetPower - 0.5 * alpha - BOUND_SLACK) : Double.NEGATIVE_INFINITY;
         for (int n = smallestN(); n <= cap; n++) {
             Sizes s = sizes(n, sd);
             double delta = Math.abs(shift) / s.se;
-            if (Normal.cdf(delta - z) + Normal.cdf(-delta - z) < targetPower - BOUND_SLACK) {
+            if (delta < needed || Normal.cdf(delta - z) + Normal.cdf(-delta - z) < targetPower - BOUND_SLACK) {
                 continue;
             }
             double p = clamp(ExactPower.tTest(alpha, shift, s.se, s.df));
