@@ -78,7 +78,7 @@ public final class SuccessRunPlan {
     public double failingProbability(int n) {
         Checks.atLeast(n, failures + 1, "n");
         if (failures == 0) {
-            return Math.exp(n * logReliability());
+            return Math.pow(reliability, n);
         }
         return Distributions.regularizedBeta(reliability, 1 - reliability, (double) n - failures, failures + 1.0);
     }
@@ -94,10 +94,11 @@ public final class SuccessRunPlan {
         }
         int n = (int) Math.max(1, Math.ceil(x - CEILING_GUARD));
         double limit = 1 - confidence;
-        while (Math.exp(n * logReliability()) > limit) {
+        // verified with pow, which is within an ulp and exact where Rⁿ is representable (0.5³ = 0.125)
+        while (Math.pow(reliability, n) > limit) {
             n++;
         }
-        while (n > 1 && Math.exp((n - 1) * logReliability()) <= limit) {
+        while (n > 1 && Math.pow(reliability, n - 1) <= limit) {
             n--;
         }
         return n;
