@@ -247,7 +247,7 @@ public final class EquivalencePlan {
     /**
      * The smallest n at which the two-sided t-test at level α detects the shift with the target power,
      * by the same upward scan, skipping n whose two-sided z-test power (an upper bound) is below the target.
-     * The margin is not used.
+     * The margin is not used. Reproduces Julious 2004, Stat. Med. 23:1921–1986, Table I (α = 0.05, 90 %).
      *
      * @param shift the shift to detect, ≠ 0
      * @param sd    σ &gt; 0
