@@ -164,7 +164,7 @@ public final class StudyAnalyzer {
             notes.add("Brown-Forsythe is undefined: every value equals its group median's neighbours "
                     + "(zero within-group deviation)");
         }
-        AssumptionChecks checks = Checks.compute(c, s, margin, alpha, paired, study.equalVariances(), notes);
+        AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin, alpha, paired, study.equalVariances(), notes);
         String unit = s.unit() != null ? s.unit() : c.unit();
         CharacteristicResult draft = new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, welch, pooled,
                 pairedTest, tost, tostPooled, variance, levene, growth, null, method, checks,

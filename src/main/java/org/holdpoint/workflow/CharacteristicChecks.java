@@ -35,7 +35,7 @@ import org.holdpoint.study.GroupData;
  * The checks behind a t-based conclusion: shape, outliers, order, lots, capability and the
  * distribution-free comparison. Each check that cannot apply is left out with a note saying why.
  */
-final class Checks {
+final class CharacteristicChecks {
     /** Independence is called doubtful below this p (common practice, no source). */
     static final double ORDER_ALPHA = 0.05;
     /** A Shapiro–Wilk p below this counts as a strong departure from normality (common practice, no source). */
@@ -43,7 +43,7 @@ final class Checks {
     /** Fewer values than this per group make the t-based result fragile (common practice, no source). */
     static final int SMALL_N = 8;
 
-    private Checks() {
+    private CharacteristicChecks() {
     }
 
     static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Margin margin, double alpha,

@@ -1,0 +1,176 @@
+package org.holdpoint.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/** The {@code plan} command run through picocli's execute with captured writers. */
+class PlanCommandTest {
+    @TempDir
+    Path dir;
+
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private int run(String... args) {
+        CommandLine cl = new CommandLine(new PlanCommand());
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        return cl.execute(args);
+    }
+
+    private JsonNode json(Path file) throws IOException {
+        return new ObjectMapper().readTree(Files.readString(file));
+    }
+
+    private static List<String> keys(JsonNode node) {
+        List<String> names = new ArrayList<>();
+        node.fieldNames().forEachRemaining(names::add);
+        return names;
+    }
+
+    @Test
+    void searchPrintsThePlanAndWritesTheJson() throws IOException {
+        Path file = dir.resolve("plan.json");
+        int code = run("--alpha", "0.05", "--margin", "0.2", "--difference", "0", "--sd", "0.1", "--power", "0.8",
+                "--json", file.toString());
+        assertThat(code).as(err.toString()).isZero();
+        assertThat(out.toString()).contains("n per group          6").contains("power                0.884063")
+                .contains("power at n - 1       0.783580");
+        JsonNode j = json(file);
+        assertThat(keys(j)).containsExactly("design", "alpha", "marginLower", "marginUpper", "difference", "sd",
+                "ratio", "targetPower", "nPerGroup", "achievedPower", "powerAtNMinus1", "tTestPower", "powerTable");
+        assertThat(j.get("nPerGroup").asInt()).isEqualTo(6);
+        // derived, PowerTOST sampleN.TOST exact table header: N = 12, sigma 0.1, delta 0 -> 0.884063
+        assertThat(j.get("achievedPower").asDouble()).isCloseTo(0.884063, within(5.000001e-7));
+        assertThat(j.get("tTestPower").asDouble()).isCloseTo(0.05, within(1e-12));
+        assertThat(j.get("powerTable")).hasSize(21);
+        assertThat(keys(j.get("powerTable").get(0))).containsExactly("difference", "power");
+        assertThat(j.get("powerTable").get(0).get("difference").asDouble()).isEqualTo(-0.2);
+        // full double precision, not the 6 decimals of the text
+        assertThat(j.get("achievedPower").asText()).hasSizeGreaterThan(12);
+        try (Stream<Path> files = Files.list(dir)) {
+            assertThat(files).containsExactly(file);
+        }
+    }
+
+    @Test
+    void ratioAddsTheAfterGroupSize() throws IOException {
+        Path file = dir.resolve("ratio.json");
+        Files.writeString(file, "old content");
+        int code = run("--margin-lower", "-0.2", "--margin-upper", "0.25", "--difference", "0.05", "--sd", "0.2",
+                "--power", "0.9", "--ratio", "1.5", "--json", file.toString());
+        assertThat(code).as(err.toString()).isZero();
+        JsonNode j = json(file);
+        int n = j.get("nPerGroup").asInt();
+        assertThat(j.get("nAfter").asInt()).isEqualTo((int) Math.ceil(1.5 * n));
+        assertThat(j.get("achievedPower").asDouble()).isGreaterThanOrEqualTo(0.9);
+        assertThat(out.toString()).contains("n before").contains("n after");
+    }
+
+    @Test
+    void pairedPlanAtAGivenSize() throws IOException {
+        Path file = dir.resolve("paired.json");
+        int code = run("--margin", "0.5", "--difference", "0.1", "--sd", "0.4", "--n", "12", "--paired", "--json",
+                file.toString());
+        assertThat(code).as(err.toString()).isZero();
+        JsonNode j = json(file);
+        assertThat(j.has("nPairs")).isTrue();
+        assertThat(j.has("nPerGroup")).isFalse();
+        assertThat(j.has("nAfter")).isFalse();
+        assertThat(j.has("targetPower")).isFalse();
+        assertThat(j.get("nPairs").asInt()).isEqualTo(12);
+        assertThat(j.get("design").asText()).isEqualTo("paired");
+        assertThat(out.toString()).contains("pairs                12");
+    }
+
+    @Test
+    void successRunSizes() throws IOException {
+        // 59 parts for 95 %/95 % and 299 for 95 %/99 %: the well-known success-run values
+        assertThat(run("--success-run", "--confidence", "0.95", "--reliability", "0.95")).isZero();
+        assertThat(out.toString()).contains("parts to test        59");
+        Path file = dir.resolve("run.json");
+        assertThat(run("--success-run", "--confidence", "0.95", "--reliability", "0.99", "--json", file.toString()))
+                .isZero();
+        assertThat(json(file).get("nParts").asInt()).isEqualTo(299);
+        // R 4.2.2: smallest n with pbinom(1, n, 0.05) <= 0.05 is 93
+        assertThat(run("--success-run", "--confidence", "0.95", "--reliability", "0.95", "--failures", "1")).isZero();
+        assertThat(out.toString()).contains("parts to test        93");
+    }
+
+    @Test
+    void badInputExitsWithTwoAndAOneLineMessage() {
+        String[][] cases = {
+            {"must contain the expected difference 0.3", "--margin", "0.2", "--difference", "0.3", "--sd", "1",
+                "--power", "0.8"},
+            {"must contain the expected difference 0.2", "--margin", "0.2", "--difference", "0.2", "--sd", "1",
+                "--power", "0.8"},
+            {"--sd must be positive", "--margin", "0.2", "--difference", "0", "--sd", "0", "--power", "0.8"},
+            {"--sd must be positive", "--margin", "0.2", "--difference", "0", "--sd", "-1", "--power", "0.8"},
+            {"--power must lie strictly between alpha = 0.05 and 1", "--margin", "0.2", "--difference", "0", "--sd",
+                "1", "--power", "0.04"},
+            {"--power must lie strictly between alpha = 0.05 and 1", "--margin", "0.2", "--difference", "0", "--sd",
+                "1", "--power", "1"},
+            {"the cap was reached", "--margin", "0.2", "--difference", "0.15", "--sd", "100", "--power", "0.8"},
+            {"not both", "--margin", "0.2", "--margin-lower", "-0.1", "--margin-upper", "0.1", "--difference", "0",
+                "--sd", "1", "--power", "0.8"},
+            {"both --margin-lower L and --margin-upper U", "--margin-lower", "-0.1", "--difference", "0", "--sd", "1",
+                "--power", "0.8"},
+            {"either --power P", "--margin", "0.2", "--difference", "0", "--sd", "1", "--power", "0.8", "--n", "5"},
+            {"missing --difference", "--margin", "0.2", "--sd", "1", "--power", "0.8"},
+            {"alpha must lie strictly between 0 and 0.5", "--alpha", "0.6", "--margin", "0.2", "--difference", "0",
+                "--sd", "1", "--power", "0.8"},
+            {"--ratio applies to two groups", "--margin", "0.2", "--difference", "0", "--sd", "1", "--power", "0.8",
+                "--paired", "--ratio", "2"},
+            {"--success-run takes only", "--success-run", "--confidence", "0.95", "--reliability", "0.9", "--sd",
+                "1"},
+            {"missing --reliability", "--success-run", "--confidence", "0.95"},
+            {"confidence must lie strictly between 0 and 1", "--success-run", "--confidence", "1.5",
+                "--reliability", "0.9"}};
+        for (String[] c : cases) {
+            StringWriter e = new StringWriter();
+            CommandLine cl = new CommandLine(new PlanCommand());
+            cl.setOut(new PrintWriter(new StringWriter(), true));
+            cl.setErr(new PrintWriter(e, true));
+            int code = cl.execute(java.util.Arrays.copyOfRange(c, 1, c.length));
+            assertThat(code).as(c[0]).isEqualTo(2);
+            String first = e.toString().lines().findFirst().orElse("");
+            assertThat(first).as("first line of stderr").contains(c[0]);
+            assertThat(e.toString()).doesNotContain("Exception").doesNotContain("\tat ");
+        }
+    }
+
+    @Test
+    void unwritableJsonFileExitsWithOne() {
+        Path file = dir.resolve("no-such-folder").resolve("plan.json");
+        int code = run("--margin", "0.2", "--difference", "0", "--sd", "0.1", "--power", "0.8", "--json",
+                file.toString());
+        assertThat(code).isEqualTo(1);
+        assertThat(err.toString().lines()).hasSize(1);
+        assertThat(err.toString()).startsWith("cannot write the JSON file");
+    }
+
+    /** The whole help screen against the golden text in plan-usage.txt (update it when the options change). */
+    @Test
+    void usageHelpMatchesTheGoldenText() throws IOException {
+        assertThat(run("--help")).isZero();
+        String golden;
+        try (var in = PlanCommandTest.class.getResourceAsStream("plan-usage.txt")) {
+            golden = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        }
+        assertThat(out.toString().replace("\r\n", "\n")).isEqualTo(golden);
+    }
+}
