@@ -28,4 +28,12 @@ class BoxPlotChartTest {
         assertThat(boxes.getOutliers(0, 1)).containsExactlyInAnyOrderElementsOf(
                 List.of(12.031, 12.0305));
     }
+
+    @Test
+    void rendersEquivalence() throws Exception {
+        var items = ChartFixtures.demo();
+        JFreeChart chart = EquivalenceChart.create(ChartFixtures.study(items).characteristics(), null, theme);
+        byte[] png = ChartExport.png(chart, theme.width(), theme.equivalenceHeight(items.size()), theme.scale());
+        Files.write(Path.of("target/chart-look/equivalence.png"), png);
+    }
 }
