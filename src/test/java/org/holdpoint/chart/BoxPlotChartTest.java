@@ -36,4 +36,17 @@ class BoxPlotChartTest {
         byte[] png = ChartExport.png(chart, theme.width(), theme.equivalenceHeight(items.size()), theme.scale());
         Files.write(Path.of("target/chart-look/equivalence.png"), png);
     }
+
+    @Test
+    void rendersDistribution() throws Exception {
+        var items = ChartFixtures.demo();
+        for (int i : new int[] {0, 2, 3}) {
+            var it = items.get(i);
+            Files.write(Path.of("target/chart-look/hist" + i + ".png"), ChartExport.png(DistributionCharts.histogram(
+                    it.data(), it.result().settings().spec(), theme), theme.width(), theme.standardHeight(), theme.scale()));
+            Files.write(Path.of("target/chart-look/npp" + i + ".png"), ChartExport.png(
+                    DistributionCharts.normalProbability(it.data(), it.result().settings().spec(), theme), theme.width(),
+                    theme.standardHeight(), theme.scale()));
+        }
+    }
 }
