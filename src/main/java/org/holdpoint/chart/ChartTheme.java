@@ -152,13 +152,13 @@ public final class ChartTheme {
     }
 
     /**
-     * The height of an equivalence picture: 15 pt per row plus 150 pt of titles, axis and legend.
+     * The height of an equivalence picture: 14 pt per row plus 150 pt of titles, axis and legend.
      *
      * @param rows the number of rows
      * @return the height in points
      */
     public double equivalenceHeight(int rows) {
-        return 150 + 15.0 * Math.max(rows, 1);
+        return 150 + 14.0 * Math.max(rows, 1);
     }
 
     /** @return 12 pt bold, for chart titles */

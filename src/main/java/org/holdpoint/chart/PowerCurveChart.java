@@ -64,6 +64,7 @@ public final class PowerCurveChart {
         target.setLabel("target " + pct.format(targetPower));
         target.setLabelFont(theme.tickFont());
         target.setLabelPaint(ChartTheme.INK);
+        target.setLabelBackgroundColor(new java.awt.Color(255, 255, 255, 220));
         target.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
         target.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
         target.setLabelOffset(new RectangleInsets(2, 4, 2, 4));

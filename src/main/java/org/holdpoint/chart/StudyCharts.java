@@ -186,11 +186,12 @@ public final class StudyCharts {
      * of characters turned into one hyphen, lower case, at most 48 characters; "characteristic" when nothing is left.
      *
      * @param name the characteristic's name
-     * @return the safe name, e.g. "bore-diameter-12-h7" for "Bore diameter Ø 12 H7"
+     * @return the safe name, e.g. "bore-diameter-o-12-h7" for "Bore diameter Ø 12 H7"
      */
     public static String safeName(String name) {
-        String s = Normalizer.normalize(name, Normalizer.Form.NFKD).replaceAll("\\p{M}+", "")
-                .replace("\u00df", "ss").replace("\u00d8", "O").replace("\u00f8", "o").replace("\u00b5", "u")
+        String plain = name.replace("\u00df", "ss").replace("\u00d8", "O").replace("\u00f8", "o")
+                .replace("\u00b5", "u").replace("\u03bc", "u");
+        String s = Normalizer.normalize(plain, Normalizer.Form.NFKD).replaceAll("\\p{M}+", "")
                 .toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-+|-+$", "");
         if (s.length() > 48) {
             s = s.substring(0, 48).replaceAll("-+$", "");
