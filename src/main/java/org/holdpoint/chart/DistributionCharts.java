@@ -388,9 +388,15 @@ public final class DistributionCharts {
         for (int i = 0; i < 3; i++) {
             if (values[i] != null) {
                 ValueMarker m = BoxPlotChart.limitMarker(values[i], names[i], theme, i == 1);
-                boolean below = i == 2;
-                m.setLabelAnchor(below ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT);
-                m.setLabelTextAnchor(below ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
+                // the points rise from left to right: USL and nominal labels go left, the LSL label right, where
+                // the plot is empty; each on the side of its line that faces the inside of the plot
+                if (i == 0) {
+                    m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+                    m.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+                } else {
+                    m.setLabelAnchor(i == 2 ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.TOP_LEFT);
+                    m.setLabelTextAnchor(i == 2 ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
+                }
                 m.setLabelOffset(new RectangleInsets(2, 4, 2, 4));
                 p.addRangeMarker(m);
             }

@@ -128,4 +128,20 @@ class StudyChartsTest {
         assertThat(all).filteredOn(c -> c.kind() == ChartKind.HISTOGRAM).hasSize(demo.size());
         assertThat(all).filteredOn(c -> c.kind() == ChartKind.NORMAL_PROBABILITY).hasSize(demo.size());
     }
+
+    @Test
+    void degenerateGroupsStillRender() {
+        // a single value and a constant group: no sd, no curve, no reference line, but every chart draws
+        org.holdpoint.stats.Sample one = org.holdpoint.stats.Sample.of(7.5);
+        org.holdpoint.stats.Sample flat = org.holdpoint.stats.Sample.of(7.4, 7.4, 7.4, 7.4);
+        CharacteristicData d = new CharacteristicData("Slot width", "mm",
+                org.holdpoint.study.GroupData.typed(one, "typed"), org.holdpoint.study.GroupData.typed(flat, "typed"),
+                false, List.of());
+        org.holdpoint.study.SpecLimits limits = new org.holdpoint.study.SpecLimits(7.0, null, 8.0);
+        for (org.jfree.chart.JFreeChart c : List.of(BoxPlotChart.create(d, limits, theme),
+                DistributionCharts.histogram(d, limits, theme), DistributionCharts.normalProbability(d, limits, theme))) {
+            BufferedImage img = ChartAssertions.decode(ChartExport.png(c, theme.width(), theme.standardHeight(), 1));
+            ChartAssertions.assertRendered(img, theme.width(), theme.standardHeight(), 1);
+        }
+    }
 }
