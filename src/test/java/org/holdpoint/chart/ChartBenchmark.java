@@ -18,14 +18,15 @@ import org.holdpoint.study.StudyResult;
 /**
  * Not a test (a benchmark measures, a test asserts): renders every chart of an invented, seeded 200-characteristic
  * study to PNG files and prints the median wall time of several runs. Run with the test classpath and
- * {@code -Djava.awt.headless=true}: {@code java org.holdpoint.chart.ChartBenchmark [runs] [scale]}.
+ * {@code -Djava.awt.headless=true}: {@code java org.holdpoint.chart.ChartBenchmark [runs] [scale] [threads]}.
  */
 public final class ChartBenchmark {
     private ChartBenchmark() {
     }
 
     /**
-     * @param args optional number of timed runs (default 5) and pixels per point (default the theme's 2.5)
+     * @param args optional number of timed runs (default 5), pixels per point (default the theme's 2.5) and
+     *             rendering threads (default 1)
      * @throws IOException if the temporary directory cannot be used
      */
     public static void main(String[] args) throws IOException {
@@ -36,9 +37,12 @@ public final class ChartBenchmark {
         StudyResult result = ChartFixtures.study(items);
         List<CharacteristicData> data = ChartFixtures.data(items);
         long values = items.stream().mapToLong(i -> i.data().before().size() + i.data().after().size()).sum();
-        StudyCharts charts = StudyCharts.withDefaults().with(theme);
-        System.out.printf(Locale.ROOT, "study: %d characteristics, %d values, scale %.1f px/pt, Java %s, %d cores%n",
-                items.size(), values, theme.scale(), System.getProperty("java.version"),
+        int threads = args.length > 2 ? Integer.parseInt(args[2]) : 1;
+        StudyCharts charts = StudyCharts.withDefaults().with(theme).withThreads(threads);
+        com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
+                java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        System.out.printf(Locale.ROOT, "study: %d characteristics, %d values, scale %.1f px/pt, %d rendering "
+                + "thread(s), Java %s, %d cores%n", items.size(), values, theme.scale(), threads, System.getProperty("java.version"),
                 Runtime.getRuntime().availableProcessors());
         Path dir = Files.createTempDirectory("holdpoint-chart-bench");
         try {
@@ -46,6 +50,7 @@ public final class ChartBenchmark {
             java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
             double[] total = new double[runs];
             double[] cpu = new double[runs];
+            double[] processCpu = new double[runs];
             double[] build = new double[runs];
             int files = 0;
             long bytes = 0;
@@ -54,9 +59,11 @@ public final class ChartBenchmark {
                 charts.all(result, data);
                 long t1 = System.nanoTime();
                 long c1 = mx.getCurrentThreadCpuTime();
+                long p1 = os.getProcessCpuTime();
                 List<Path> written = charts.writeAll(result, data, dir);
                 long t2 = System.nanoTime();
                 cpu[r] = (mx.getCurrentThreadCpuTime() - c1) / 1e9;
+                processCpu[r] = (os.getProcessCpuTime() - p1) / 1e9;
                 build[r] = (t1 - t0) / 1e9;
                 total[r] = (t2 - t1) / 1e9;
                 files = written.size();
@@ -65,14 +72,17 @@ public final class ChartBenchmark {
                     bytes += Files.size(p);
                 }
                 System.out.printf(Locale.ROOT, "run %d: build only %.2f s; build + render + write %.2f s wall, "
-                        + "%.2f s CPU of the rendering thread%n", r + 1, build[r], total[r], cpu[r]);
+                        + "%.2f s CPU of the calling thread, %.2f s CPU of the process%n", r + 1, build[r], total[r], cpu[r],
+                        processCpu[r]);
             }
             System.out.printf(Locale.ROOT, "files %d, total %.1f MB%n", files, bytes / 1e6);
             System.out.printf(Locale.ROOT, "median build only (chart objects, no drawing) %.2f s%n", median(build));
             System.out.printf(Locale.ROOT, "median build + render + write %.2f s wall = %.1f ms per chart%n",
                     median(total), 1000 * median(total) / files);
-            System.out.printf(Locale.ROOT, "median CPU time of the rendering thread %.2f s = %.1f ms per chart%n",
+            System.out.printf(Locale.ROOT, "median CPU time of the calling thread %.2f s = %.1f ms per chart%n",
                     median(cpu), 1000 * median(cpu) / files);
+            System.out.printf(Locale.ROOT, "median CPU time of the process (all threads, GC included) %.2f s%n",
+                    median(processCpu));
             breakdown(charts, result, data, mx);
         } finally {
             try (Stream<Path> s = Files.walk(dir)) {

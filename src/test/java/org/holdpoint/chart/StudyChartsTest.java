@@ -59,6 +59,20 @@ class StudyChartsTest {
     }
 
     @Test
+    void twoThreadsWriteTheSameFilesInTheSameOrder(@TempDir Path dir) throws IOException {
+        StudyResult study = ChartFixtures.study(demo);
+        List<Path> one = charts.writeAll(study, ChartFixtures.data(demo), dir.resolve("one"));
+        List<Path> two = charts.withThreads(2).writeAll(study, ChartFixtures.data(demo), dir.resolve("two"));
+        assertThat(two).extracting(p -> p.getFileName().toString())
+                .containsExactlyElementsOf(one.stream().map(p -> p.getFileName().toString()).toList());
+        for (int i = 0; i < one.size(); i++) {
+            assertThat(Files.readAllBytes(two.get(i))).as(one.get(i).getFileName().toString())
+                    .isEqualTo(Files.readAllBytes(one.get(i)));
+        }
+        assertThatThrownBy(() -> charts.withThreads(0)).isInstanceOf(ChartException.class);
+    }
+
+    @Test
     void pngCarriesItsPhysicalResolution(@TempDir Path dir) throws IOException {
         byte[] png = charts.equivalencePages(ChartFixtures.study(demo)).get(0).png(theme.scale());
         try (ImageInputStream in = ImageIO.createImageInputStream(new java.io.ByteArrayInputStream(png))) {
