@@ -43,8 +43,9 @@ public final class DistributionCharts {
      * Histograms of the before and after groups, stacked, over common bins.
      *
      * <p>Bins: width by the Freedman–Diaconis rule 2·IQR·n^(−1/3) (Freedman &amp; Diaconis 1981, Z. Wahrsch. 57:
-     * 453–476) with the type-7 IQR of the pooled values and n the larger group, the count kept within 5..40 (common
-     * practice, no source). Each panel's curve is the normal density with the group's mean and sd, scaled to
+     * 453–476) with the type-7 IQR of the pooled values and n the larger group; when the values lie on a measuring
+     * grid the width is a whole number of grid steps with edges half a step off the grid, otherwise the count is
+     * kept within 5..40; at most 40 bins either way (common practice, no source). Each panel's curve is the normal density with the group's mean and sd, scaled to
      * counts: n·w·φ((x − mean)/sd)/sd for bin width w.
      *
      * <p>Subplot datasets: 0 = the bars ({@link XYIntervalSeriesCollection}, one series), 1 = the curve.
