@@ -14,6 +14,7 @@ import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.SpecLimits;
 import org.holdpoint.workflow.AnalysisOutcome;
 import org.holdpoint.workflow.AnalyzeUseCase;
+import org.holdpoint.workflow.ChartsUseCase;
 import org.holdpoint.workflow.ConsoleProgress;
 import org.holdpoint.workflow.ImportOptions;
 import picocli.CommandLine;
@@ -160,8 +161,9 @@ final class AnalyzeCommand implements Callable<Integer> {
     static final class OutputOptions {
         @Option(names = "--json", paramLabel = "FILE", description = "Also write the machine-readable result.")
         Path json;
-        @Option(names = {"-q", "--quiet"}, description = "Print only the verdict and the cautions.")
-        boolean quiet;
+        @Option(names = "--charts", paramLabel = "DIR", description = "Also write the charts as PNG files into DIR: "
+                + "the equivalence picture and, per characteristic, box plot, histogram and normal plot.")
+        Path charts;
     }
 
     /** Converts layout names such as side-by-side. */
@@ -193,6 +195,17 @@ final class AnalyzeCommand implements Callable<Integer> {
             } catch (IOException e) {
                 throw new UserInputException("cannot write the JSON result to %s (%s); check the folder exists and "
                         + "is writable", output.json, e.getMessage());
+            }
+        }
+        if (output.charts != null) {
+            try {
+                var files = ChartsUseCase.write(outcome, output.charts);
+                spec.commandLine().getOut().printf(java.util.Locale.ROOT, "Wrote %d charts to %s%n", files.size(),
+                        output.charts);
+                spec.commandLine().getOut().flush();
+            } catch (IOException e) {
+                throw new UserInputException("cannot write the charts to %s (%s); check the folder is writable",
+                        output.charts, e.getMessage());
             }
         }
         return ExitCodes.OK;
