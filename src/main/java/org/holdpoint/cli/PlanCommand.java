@@ -83,6 +83,15 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--failures", paramLabel = "c", description = "Pass/fail: failures allowed (default 0).")
     Integer failures;
 
+    @Option(names = "--from", paramLabel = "FILE", description = "Plan every characteristic of a study data file: "
+            + "sd from its before (baseline) sample, margins from its criteria file (or --margin); the largest n "
+            + "decides.")
+    Path from;
+
+    @Option(names = "--settings", paramLabel = "FILE", description = "With --from: the criteria file (default: "
+            + "NAME.settings.csv beside the data).")
+    Path settings;
+
     @Option(names = "--json", paramLabel = "FILE", description = "Also write the plan as JSON to FILE.")
     Path json;
 
@@ -100,7 +109,9 @@ public final class PlanCommand implements Callable<Integer> {
         Map<String, Object> document;
         PrintWriter out = spec.commandLine().getOut();
         try {
-            if (successRun) {
+            if (from != null) {
+                document = fromData(out);
+            } else if (successRun) {
                 SuccessRunResult r = successRunPlan().sampleSize();
                 out.print(PlanOutput.text(r));
                 document = PlanOutput.json(r);
@@ -151,6 +162,72 @@ public final class PlanCommand implements Callable<Integer> {
             return plan.withTargetPower(power).sampleSize(t, s);
         }
         return plan.powerAt(t, s, n);
+    }
+
+    private Map<String, Object> fromData(PrintWriter out) {
+        if (successRun || paired || sd != null || n != null) {
+            throw bad("--from plans two groups from the baseline sd: it does not take --success-run, --paired, --sd "
+                    + "or --n");
+        }
+        if (!java.nio.file.Files.isRegularFile(from)) {
+            throw bad(from + ": file not found; check the path");
+        }
+        double target = require(power, "--power P (the target power, e.g. 0.9)");
+        if (!(target > alpha && target < 1)) {
+            throw bad("--power must lie strictly between alpha = " + alpha + " and 1, got " + target);
+        }
+        Margin m = margin != null || marginLower != null || marginUpper != null ? margin() : null;
+        EquivalencePlan plan = EquivalencePlan.withDefaults().withAlpha(alpha).withRatio(ratio).withTargetPower(target);
+        double t = difference == null ? 0 : difference;
+        org.holdpoint.workflow.PlanFromDataUseCase.Outcome o;
+        try {
+            o = org.holdpoint.workflow.PlanFromDataUseCase.run(org.holdpoint.workflow.ImportOptions.file(from),
+                    settings, m, plan, t);
+        } catch (org.holdpoint.workflow.AnalysisException e) {
+            throw bad(String.join("; ", e.problems()));
+        }
+        out.printf(java.util.Locale.ROOT, "Equivalence trial plan from %s (two one-sided tests, exact power; sd from "
+                + "the before sample, so the power is conditional on sigma = s)%n", from);
+        out.printf(java.util.Locale.ROOT, "  alpha %s per one-sided test, target power %s, expected difference %s%s%n",
+                alpha, target, t, ratio == 1 ? "" : ", ratio " + ratio);
+        out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s  %s%n", "characteristic", "baseline sd", "margin",
+                "n/group", "power", "note");
+        java.util.List<Map<String, Object>> rows = new java.util.ArrayList<>();
+        for (var p : o.plans()) {
+            Map<String, Object> row = new java.util.LinkedHashMap<>();
+            row.put("name", p.name());
+            row.put("sd", Double.isFinite(p.sd()) ? p.sd() : null);
+            row.put("marginLower", p.margin() == null ? null : p.margin().lower());
+            row.put("marginUpper", p.margin() == null ? null : p.margin().upper());
+            row.put("nPerGroup", p.plan() == null ? null : p.plan().n());
+            row.put("achievedPower", p.plan() == null ? null : p.plan().achievedPower());
+            row.put("note", p.note());
+            rows.add(row);
+            out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s  %s%n", p.name(),
+                    org.holdpoint.workflow.Format.num(p.sd(), 4), p.margin() == null ? "-" : "("
+                            + org.holdpoint.workflow.Format.num(p.margin().lower(), 4) + ", "
+                            + org.holdpoint.workflow.Format.num(p.margin().upper(), 4) + ")",
+                    p.plan() == null ? "-" : Integer.toString(p.plan().n()),
+                    p.plan() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f", p.plan().achievedPower()),
+                    p.note() == null ? "" : p.note());
+        }
+        Map<String, Object> doc = new java.util.LinkedHashMap<>();
+        doc.put("from", from.toString());
+        doc.put("alpha", alpha);
+        doc.put("targetPower", target);
+        doc.put("difference", t);
+        doc.put("characteristics", rows);
+        if (o.driving() != null) {
+            out.printf(java.util.Locale.ROOT, "Measure %d parts per group (%d after with the ratio): %s needs the most.%n",
+                    o.driving().plan().n(), o.driving().plan().nAfter(), o.driving().name());
+            doc.put("nPerGroup", o.driving().plan().n());
+            doc.put("drivenBy", o.driving().name());
+        } else {
+            out.println("No characteristic could be planned; see the notes.");
+        }
+        out.println("With several characteristics that must all pass, the chance that all do is about the product of "
+                + "their powers; plan each for a higher power when the overall claim is the goal.");
+        return doc;
     }
 
     private Margin margin() {

@@ -36,21 +36,34 @@ public final class AnalyzeUseCase {
         return run(options.toRequest(), settingsFile, settings, progress);
     }
 
+    /**
+     * Reads the data and the criteria without analysing (for planning from data).
+     *
+     * @param options      what to import
+     * @param settingsFile an explicit settings file, or null to look beside the data file
+     * @param settings     study-wide settings
+     * @return the data and merged settings; the result is null
+     */
+    public AnalysisOutcome importOnly(ImportOptions options, Path settingsFile, AnalysisSettings settings) {
+        return read(options.toRequest(), settingsFile, settings, Progress.NONE);
+    }
+
     AnalysisOutcome run(ImportRequest request, Path settingsFile, AnalysisSettings settings, Progress progress) {
-        progress.step("reading the data", 0);
-        Dataset data;
-        try {
-            data = new DataImporter().read(request);
-        } catch (ImportException e) {
-            throw new AnalysisException(List.of(e.getMessage()));
-        }
-        progress.checkCancelled();
-        Path found = settingsFile;
+        AnalysisOutcome read = read(request, settingsFile, settings, progress);
+        StudyResult result = analyzer.analyze(read.data(), read.settings(), progress);
+        progress.step("done", 1);
+        return new AnalysisOutcome(read.data(), read.settings(), result, read.settingsFile());
+    }
+
+    private AnalysisOutcome read(ImportRequest request, Path settingsFile, AnalysisSettings settings,
+            Progress progress) {
         Path main = request.file() != null ? request.file() : request.beforeFile();
+        Path found = settingsFile;
         if (found == null && main != null) {
             found = SettingsReader.findBeside(main).orElse(null);
         }
         AnalysisSettings merged = settings;
+        ImportRequest effective = request;
         if (found != null) {
             Map<String, CharacteristicSettings> per;
             try {
@@ -62,10 +75,22 @@ public final class AnalyzeUseCase {
             CharacteristicSettings defaults = settings.defaults().overriddenBy(fileDefaults);
             merged = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(), defaults, per,
                     settings.overrides(), settings.exclusions());
+            boolean pairedWanted = Boolean.TRUE.equals(defaults.paired())
+                    || per.values().stream().anyMatch(c -> Boolean.TRUE.equals(c.paired()));
+            if (pairedWanted && !request.paired()) {
+                // the criteria say the same units were measured twice: match them by unit id when reading
+                effective = request.withPaired(true);
+            }
         }
-        StudyResult result = analyzer.analyze(data, merged, progress);
-        progress.step("done", 1);
-        return new AnalysisOutcome(data, merged, result, found);
+        progress.step("reading the data", 0);
+        Dataset data;
+        try {
+            data = new DataImporter().read(effective);
+        } catch (ImportException e) {
+            throw new AnalysisException(List.of(e.getMessage()));
+        }
+        progress.checkCancelled();
+        return new AnalysisOutcome(data, merged, null, found);
     }
 
     /**

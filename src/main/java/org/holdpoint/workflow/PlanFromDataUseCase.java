@@ -1,0 +1,104 @@
+package org.holdpoint.workflow;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.holdpoint.stats.Descriptives;
+import org.holdpoint.stats.EquivalencePlan;
+import org.holdpoint.stats.Margin;
+import org.holdpoint.stats.PlanResult;
+import org.holdpoint.stats.StatsException;
+import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.CharacteristicSettings;
+
+/**
+ * Plans every characteristic of a study at once from its data: σ is the sd of the baseline (before)
+ * sample, the margin comes from the criteria (or one margin for all), and the largest n decides. The
+ * power is conditional on σ = s, which the output says.
+ */
+public final class PlanFromDataUseCase {
+    private PlanFromDataUseCase() {
+    }
+
+    /**
+     * One characteristic's plan, or why it could not be planned.
+     *
+     * @param name   the characteristic
+     * @param unit   its unit, or null
+     * @param sd     the baseline sd used as σ
+     * @param margin the margin in units, or null
+     * @param plan   the plan, or null
+     * @param note   why it was not planned, or null
+     */
+    public record CharacteristicPlan(String name, String unit, double sd, Margin margin, PlanResult plan, String note) {
+    }
+
+    /**
+     * The plans and the characteristic that needs the most parts.
+     *
+     * @param plans   one per characteristic, in file order
+     * @param driving the planned characteristic with the largest n, or null when none could be planned
+     */
+    public record Outcome(List<CharacteristicPlan> plans, CharacteristicPlan driving) {
+        /** Copies the list. */
+        public Outcome {
+            plans = List.copyOf(plans);
+        }
+    }
+
+    /**
+     * Plans every characteristic of the data.
+     *
+     * @param data         the study data (the before group is the baseline)
+     * @param settingsFile criteria file, or null to look beside the data
+     * @param margin       one margin for all characteristics, or null to take each one's from the criteria
+     * @param plan         the planning settings (α, design, ratio, target power); its margin is replaced
+     * @param difference   the expected true difference after − before
+     * @return the plans
+     */
+    public static Outcome run(ImportOptions data, Path settingsFile, Margin margin, EquivalencePlan plan,
+            double difference) {
+        AnalysisOutcome imported = new AnalyzeUseCase().importOnly(data, settingsFile,
+                AnalysisSettings.defaultSettings());
+        List<CharacteristicPlan> plans = new ArrayList<>();
+        CharacteristicPlan driving = null;
+        for (CharacteristicData c : imported.data().characteristics()) {
+            CharacteristicSettings s = imported.settings().resolve(c.name());
+            String unit = s.unit() != null ? s.unit() : c.unit();
+            if (c.before().size() < 2) {
+                plans.add(new CharacteristicPlan(c.name(), unit, Double.NaN, null, null,
+                        "fewer than 2 baseline values"));
+                continue;
+            }
+            double sd = Descriptives.of(c.before().sample()).sd();
+            Margin m;
+            try {
+                m = margin != null ? margin : s.margin() == null ? null : s.margin().resolve(s.spec());
+            } catch (StatsException e) {
+                plans.add(new CharacteristicPlan(c.name(), unit, sd, null, null, e.getMessage()));
+                continue;
+            }
+            if (m == null || m.lower() == null || m.upper() == null) {
+                plans.add(new CharacteristicPlan(c.name(), unit, sd, m, null,
+                        "no two-sided margin set for this characteristic"));
+                continue;
+            }
+            if (!(sd > 0)) {
+                plans.add(new CharacteristicPlan(c.name(), unit, sd, m, null, "the baseline has zero spread"));
+                continue;
+            }
+            try {
+                PlanResult r = plan.withMargin(m).sampleSize(difference, sd);
+                CharacteristicPlan p = new CharacteristicPlan(c.name(), unit, sd, m, r, null);
+                plans.add(p);
+                if (driving == null || r.n() > driving.plan().n()) {
+                    driving = p;
+                }
+            } catch (StatsException e) {
+                plans.add(new CharacteristicPlan(c.name(), unit, sd, m, null, e.getMessage()));
+            }
+        }
+        return new Outcome(plans, driving);
+    }
+}
