@@ -218,8 +218,9 @@ public final class PlanCommand implements Callable<Integer> {
         doc.put("difference", t);
         doc.put("characteristics", rows);
         if (o.driving() != null) {
-            out.printf(java.util.Locale.ROOT, "Measure %d parts per group (%d after with the ratio): %s needs the most.%n",
-                    o.driving().plan().n(), o.driving().plan().nAfter(), o.driving().name());
+            out.printf(java.util.Locale.ROOT, "Measure %d parts %s: %s needs the most.%n", o.driving().plan().n(),
+                    ratio == 1 ? "per group" : "before and " + o.driving().plan().nAfter() + " after",
+                    o.driving().name());
             doc.put("nPerGroup", o.driving().plan().n());
             doc.put("drivenBy", o.driving().name());
         } else {

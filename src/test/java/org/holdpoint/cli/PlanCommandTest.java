@@ -154,11 +154,12 @@ class PlanCommandTest {
     }
 
     @Test
-    void unwritableJsonFileExitsWithOne() {
-        Path file = dir.resolve("no-such-folder").resolve("plan.json");
+    void unwritableJsonFileExitsWithTwo() throws IOException {
+        Path notAFolder = java.nio.file.Files.writeString(dir.resolve("a-file"), "x");
+        Path file = notAFolder.resolve("plan.json");
         int code = run("--margin", "0.2", "--difference", "0", "--sd", "0.1", "--power", "0.8", "--json",
                 file.toString());
-        assertThat(code).isEqualTo(1);
+        assertThat(code).isEqualTo(2);
         assertThat(err.toString().lines()).hasSize(1);
         assertThat(err.toString()).startsWith("cannot write the JSON file");
     }

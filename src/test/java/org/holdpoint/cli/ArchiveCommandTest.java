@@ -1,0 +1,82 @@
+package org.holdpoint.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.Statement;
+import org.holdpoint.Holdpoint;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The archive commands end to end on an embedded archive file: save a study, archive it, find it,
+ * sign it, correct it, verify the chain, and find an edit made directly in the database.
+ */
+class ArchiveCommandTest {
+    @BeforeAll
+    static void wire() {
+        Holdpoint.wire();
+    }
+
+    @Test
+    void aStudyIsArchivedFoundSignedCorrectedAndVerified(@TempDir Path dir) throws Exception {
+        String url = "jdbc:h2:file:" + dir.resolve("archive").toAbsolutePath() + "/db";
+        Path demo = dir.resolve("demo");
+        assertThat(AnalyzeCommandTest.run("demo", "--out", demo.toString()).code()).isZero();
+        Path study = dir.resolve("study.json");
+        AnalyzeCommandTest.Run saved = AnalyzeCommandTest.run("analyze", demo.resolve("boring-bar-insert.csv")
+                .toString(), "--save-study", study.toString(), "--change-id", "CR-77", "--title",
+                "Second-source boring-bar insert", "--kind", "supplier", "--part", "PH-2210", "--revision", "C");
+        assertThat(saved.code()).as(saved.err()).isZero();
+        assertThat(Files.exists(study)).isTrue();
+
+        AnalyzeCommandTest.Run add = AnalyzeCommandTest.run("archive", "add", study.toString(), "--archive", url,
+                "--actor", "A. Engineer");
+        assertThat(add.code()).as(add.err()).isZero();
+        assertThat(add.out()).contains("CR-77 version 1");
+
+        AnalyzeCommandTest.Run again = AnalyzeCommandTest.run("archive", "add", study.toString(), "--archive", url);
+        assertThat(again.code()).isEqualTo(2);
+        assertThat(again.err()).contains("already archived").contains("--reason");
+
+        AnalyzeCommandTest.Run fix = AnalyzeCommandTest.run("archive", "add", study.toString(), "--archive", url,
+                "--reason", "re-measured chamfer");
+        assertThat(fix.code()).as(fix.err()).isZero();
+        assertThat(fix.out()).contains("version 2").contains("superseding");
+
+        AnalyzeCommandTest.Run list = AnalyzeCommandTest.run("archive", "list", "--archive", url, "--part", "PH-2210",
+                "--json");
+        assertThat(list.code()).as(list.err()).isZero();
+        JsonNode studies = new ObjectMapper().readTree(list.out()).path("studies");
+        assertThat(studies).hasSize(1);
+        long id = studies.get(0).path("id").asLong();
+        assertThat(studies.get(0).path("verdict").asText()).isEqualTo("not verified");
+
+        AnalyzeCommandTest.Run sign = AnalyzeCommandTest.run("archive", "sign", Long.toString(id), "--archive", url,
+                "--signed-by", "Q. Manager", "--role", "quality manager", "--meaning", "reviewed");
+        assertThat(sign.code()).as(sign.err()).isZero();
+        AnalyzeCommandTest.Run bySigner = AnalyzeCommandTest.run("archive", "list", "--archive", url, "--signer",
+                "q. manager");
+        assertThat(bySigner.out()).contains("CR-77").contains("1 record(s)");
+        AnalyzeCommandTest.Run show = AnalyzeCommandTest.run("archive", "show", Long.toString(id), "--archive", url);
+        assertThat(show.out()).contains("Audit trail").contains("SUPERSEDED").contains("re-measured chamfer");
+
+        AnalyzeCommandTest.Run intact = AnalyzeCommandTest.run("archive", "verify", "--archive", url);
+        assertThat(intact.code()).as(intact.out() + intact.err()).isZero();
+        assertThat(intact.out()).startsWith("INTACT");
+
+        // an edit made directly in the database, bypassing the tool (the trigger-free embedded file allows it)
+        try (Connection c = DriverManager.getConnection(url); Statement s = c.createStatement()) {
+            s.executeUpdate("UPDATE study SET part_number = 'PH-9999' WHERE id = " + id);
+        }
+        AnalyzeCommandTest.Run altered = AnalyzeCommandTest.run("archive", "verify", "--archive", url);
+        assertThat(altered.code()).isEqualTo(1);
+        assertThat(altered.out()).startsWith("ALTERED").contains("study " + id);
+    }
+}
