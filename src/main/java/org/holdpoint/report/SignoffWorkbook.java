@@ -14,7 +14,6 @@ import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.xssf.streaming.SXSSFWorkbook;
 import org.apache.poi.xssf.usermodel.XSSFClientAnchor;
 import org.apache.poi.xssf.usermodel.XSSFDrawing;
-import org.apache.poi.xssf.usermodel.XSSFPicture;
 import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 
@@ -92,16 +91,39 @@ public final class SignoffWorkbook {
             XSSFDrawing drawing = sh.createDrawingPatriarch();
             for (SheetContent.PlacedImage p : content.images) {
                 int idx = wb.addPicture(p.image().png(), Workbook.PICTURE_TYPE_PNG);
-                XSSFClientAnchor anchor = wb.getCreationHelper().createClientAnchor();
-                anchor.setCol1(p.column());
-                anchor.setRow1(p.row());
+                XSSFClientAnchor anchor = anchor(sh, p);
                 anchor.setAnchorType(ClientAnchor.AnchorType.MOVE_DONT_RESIZE);
-                XSSFPicture pic = drawing.createPicture(anchor, idx);
-                // width in points → pixels at 96 dpi; the picture keeps its aspect ratio
-                double targetPx = p.widthPoints() * 96 / 72;
-                pic.resize(targetPx / p.image().width(), targetPx / p.image().width());
+                drawing.createPicture(anchor, idx);
             }
         }
+    }
+
+    /**
+     * A two-cell anchor that gives the picture the requested width in points and its own aspect ratio,
+     * walking the column widths (pixels at 96 dpi) and row heights (points) of the sheet.
+     */
+    private static XSSFClientAnchor anchor(XSSFSheet sh, SheetContent.PlacedImage p) {
+        double widthPx = p.widthPoints() * 96 / 72;
+        double heightPt = p.widthPoints() * p.image().height() / p.image().width();
+        int col = p.column();
+        double left = widthPx;
+        while (left > sh.getColumnWidthInPixels(col)) {
+            left -= sh.getColumnWidthInPixels(col);
+            col++;
+        }
+        int row = p.row();
+        double down = heightPt;
+        while (down > rowHeight(sh, row)) {
+            down -= rowHeight(sh, row);
+            row++;
+        }
+        return new XSSFClientAnchor(0, 0, (int) Math.round(left * org.apache.poi.util.Units.EMU_PER_PIXEL),
+                (int) Math.round(down * org.apache.poi.util.Units.EMU_PER_POINT), p.column(), p.row(), col, row);
+    }
+
+    private static double rowHeight(XSSFSheet sh, int r) {
+        Row row = sh.getRow(r);
+        return row == null ? sh.getDefaultRowHeightInPoints() : row.getHeightInPoints();
     }
 
     static Row row(Sheet sh, int r) {

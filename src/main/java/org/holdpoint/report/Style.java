@@ -32,6 +32,10 @@ enum Style {
     INCONCLUSIVE,
     /** Status "not assessed". */
     NOT_ASSESSED,
+    /** The large shape of the overall verdict "verified". */
+    MARK_PASSED,
+    /** The large shape of the overall verdict "not verified". */
+    MARK_FAILED,
     /** An unlocked, bordered cell for hand entry (sign-off). */
     FILLABLE,
     /** Fixed-width text (hashes, keys). */

@@ -51,7 +51,7 @@ final class TextBlocks {
         java.util.function.BiConsumer<String, String> put = (label, text) -> {
             s.text(row[0], a.column(), label, Style.LABEL, "method: " + label + " label");
             s.text(row[0], a.column() + 1, text, Style.WRAP, "method: " + label);
-            s.height(row[0], DetailPlan.lines(text, 100) * 12f + 3);
+            s.height(row[0], DetailPlan.lines(text, 135) * 11.5f + 3);
             row[0]++;
         };
         s.text(row[0]++, a.column(), "Method and settings", Style.HEADING, "method heading");
@@ -189,14 +189,20 @@ final class TextBlocks {
     private void cautions() {
         Anchor a = plan.at(TemplateName.CAUTIONS);
         SheetContent s = plan.sheet(TemplateName.CAUTIONS);
-        s.width(a.column(), 110);
+        for (int i = 0; i < 8; i++) {
+            s.width(a.column() + i, 13);
+        }
         int r = a.row();
-        s.text(r++, a.column(), "Cautions", Style.HEADING, "cautions heading");
-        r++;
+        int c = a.column();
+        s.text(r++, c, "Cautions", Style.HEADING, "cautions heading");
+        s.height(r - 1, 20f);
+        s.text(r, c, "These cautions belong to every result in this workbook.", Style.TEXT, "cautions intro");
+        r += 2;
         List<String> text = Cautions.TEXT;
         for (String p : text) {
-            s.text(r, a.column(), p, Style.WRAP, "caution");
-            s.height(r, DetailPlan.lines(p, 115) * 13f + 6);
+            s.text(r, c, p, Style.WRAP, "caution");
+            s.merge(r, r, c, c + 7);
+            s.height(r, DetailPlan.lines(p, 120) * 12f + 8);
             r++;
         }
     }
