@@ -2,6 +2,8 @@ package org.holdpoint.workflow;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
@@ -9,6 +11,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import org.holdpoint.report.RecordSeal;
+import org.holdpoint.report.ReportException;
 import org.holdpoint.report.ReportInput;
 import org.holdpoint.report.SignoffWorkbook;
 import org.holdpoint.report.Template;
@@ -56,11 +59,19 @@ public final class ReportUseCase {
      * @param target  the .xlsx to write
      * @return what was written
      * @throws IOException when the file exists (and may not be replaced) or cannot be written
-     * @throws org.holdpoint.report.ReportException when the template is not usable
+     * @throws SignoffException when the template is not usable or the file exists and may not be replaced
      */
     public Written write(ChangeStudy study, StudyResult result, ReportOptions options, Path target)
             throws IOException {
-        Template template = options.template() == null ? Template.defaultTemplate() : Template.read(options.template());
+        Template template;
+        try {
+            template = options.template() == null ? Template.defaultTemplate() : Template.read(options.template());
+        } catch (ReportException e) {
+            throw new SignoffException(e, "%s", e.getMessage());
+        }
+        if (options.existing() == ReportOptions.ExistingFile.REFUSE && Files.exists(target)) {
+            throw new SignoffException(null, "%s exists; give --overwrite to replace it", target);
+        }
         String now = Instant.now(clock).truncatedTo(ChronoUnit.SECONDS).toString();
         ChangeStudy recorded = withSignOff(study, options.signOff(), now);
         byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(recorded, result));
@@ -68,11 +79,17 @@ public final class ReportUseCase {
         String sha = StudyFiles.sha256(canonical);
         RecordSeal seal = options.privateKey() == null ? null
                 : RecordSigning.sign(canonical, options.privateKey(), options.publicKey());
-        ReportInput input = new ReportInput(recorded, result, json, sha, options.charts().charts(recorded, result),
-                Version.get(), now, seal);
         SignoffWorkbook writer = new SignoffWorkbook(template);
-        AtomicFiles.write(target, options.existing() == ReportOptions.ExistingFile.REPLACE,
-                out -> writer.write(input, out));
+        try {
+            // the charts are rendered inside the atomic write: a renderer that fails leaves no file behind
+            AtomicFiles.write(target, options.existing() == ReportOptions.ExistingFile.REPLACE,
+                    out -> writer.write(new ReportInput(recorded, result, json, sha, options.charts().charts(recorded,
+                            result), Version.get(), now, seal), out));
+        } catch (ReportException e) {
+            throw new SignoffException(e, "%s", e.getMessage());
+        } catch (FileAlreadyExistsException e) {
+            throw new SignoffException(e, "%s exists; give --overwrite to replace it", target);
+        }
         return new Written(target, sha, seal == null ? null : seal.keyFingerprint(), recorded);
     }
 

@@ -1,7 +1,6 @@
 package org.holdpoint.workflow;
 
 import java.util.List;
-import org.holdpoint.report.WorkbookDifference;
 
 /**
  * What {@code verify} found in a sign-off workbook.
@@ -17,13 +16,29 @@ import org.holdpoint.report.WorkbookDifference;
  * @param notes          other remarks (e.g. the current version computes slightly different results)
  */
 public record VerifyResult(Status status, String changeId, String sha256, boolean hashMatches, SealState seal,
-        String keyFingerprint, List<WorkbookDifference> differences, List<String> handEntries, List<String> notes) {
+        String keyFingerprint, List<Difference> differences, List<String> handEntries, List<String> notes) {
 
     /** Copies the lists. */
     public VerifyResult {
         differences = List.copyOf(differences);
         handEntries = List.copyOf(handEntries);
         notes = List.copyOf(notes);
+    }
+
+    /**
+     * One shown value that no longer matches the record.
+     *
+     * @param sheet    the sheet
+     * @param cell     the cell (A1), or "-" for the record as a whole
+     * @param what     what the value is
+     * @param shown    what the workbook shows
+     * @param expected what the re-computation gives
+     */
+    public record Difference(String sheet, String cell, String what, String shown, String expected) {
+        /** @return one line, e.g. "Summary!M15 (Bore diameter: F-test p): shows 0.5, recomputed 0.25" */
+        public String describe() {
+            return sheet + "!" + cell + " (" + what + "): shows " + shown + ", recomputed " + expected;
+        }
     }
 
     /** The verdict on the workbook. */

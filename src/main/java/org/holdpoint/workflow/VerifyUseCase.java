@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.holdpoint.report.RecordSeal;
+import org.holdpoint.report.ReportException;
 import org.holdpoint.report.ReportInput;
 import org.holdpoint.report.SignoffWorkbookReader;
 import org.holdpoint.report.WorkbookDifference;
@@ -28,11 +29,16 @@ public final class VerifyUseCase {
      * @param trustedKey a public key the record should be signed with, or null
      * @param progress   progress and cancel port
      * @return the findings
-     * @throws org.holdpoint.report.ReportException when the file cannot be read or is not a sign-off workbook
+     * @throws SignoffException when the file cannot be read or is not a sign-off workbook
      */
     public VerifyResult verify(Path workbook, Path trustedKey, Progress progress) {
         progress.step("reading the record", 0);
-        SignoffWorkbookReader reader = SignoffWorkbookReader.open(workbook);
+        SignoffWorkbookReader reader;
+        try {
+            reader = SignoffWorkbookReader.open(workbook);
+        } catch (ReportException e) {
+            throw new SignoffException(e, "%s", e.getMessage());
+        }
         byte[] record = reader.studyJson().getBytes(StandardCharsets.UTF_8);
         String sha = StudyFiles.sha256(record);
         boolean hashOk = sha.equals(reader.storedSha256());
@@ -44,6 +50,10 @@ public final class VerifyUseCase {
         }
         RecordSeal seal = reader.seal();
         VerifyResult.SealState sealState = sealState(record, seal, trustedKey);
+        if (sealState == VerifyResult.SealState.OTHER_KEY) {
+            diffs.add(new WorkbookDifference("(record)", "-", "key that signed the record", seal.keyFingerprint(),
+                    RecordSigning.fingerprint(RecordSigning.readPublic(trustedKey)) + " (the key given)"));
+        }
         if (sealState == VerifyResult.SealState.INVALID) {
             diffs.add(new WorkbookDifference("(record)", "-", "Ed25519 signature of the record", "does not match",
                     "a valid signature by key " + seal.keyFingerprint()));
@@ -59,17 +69,28 @@ public final class VerifyUseCase {
             diffs.add(new WorkbookDifference("(record)", "-", "embedded study record", "cannot be re-computed: "
                     + e.getMessage(), "a readable study"));
             return new VerifyResult(VerifyResult.Status.EDITED, null, sha, hashOk, sealState, fingerprint(seal),
-                    diffs, List.of(), notes);
+                    convert(diffs), List.of(), notes);
         }
         compareStoredResults(reader.studyJson(), result, notes);
         progress.step("comparing the shown values", 0.6);
         ReportInput expected = new ReportInput(study, result, reader.studyJson(), sha, null, version(reader), reader
                 .generatedAt(), seal);
-        SignoffWorkbookReader.Comparison cmp = reader.compare(expected);
+        SignoffWorkbookReader.Comparison cmp;
+        try {
+            cmp = reader.compare(expected);
+        } catch (ReportException e) {
+            throw new SignoffException(e, "%s", e.getMessage());
+        }
         diffs.addAll(cmp.differences());
         progress.step("done", 1);
         return new VerifyResult(diffs.isEmpty() ? VerifyResult.Status.INTACT : VerifyResult.Status.EDITED,
-                study.change().id(), sha, hashOk, sealState, fingerprint(seal), diffs, cmp.handEntries(), notes);
+                study.change().id(), sha, hashOk, sealState, fingerprint(seal), convert(diffs), cmp.handEntries(),
+                notes);
+    }
+
+    private static List<VerifyResult.Difference> convert(List<WorkbookDifference> diffs) {
+        return diffs.stream().map(d -> new VerifyResult.Difference(d.sheet(), d.cell(), d.what(), d.shown(),
+                d.expected())).toList();
     }
 
     private static String version(SignoffWorkbookReader reader) {
