@@ -53,11 +53,22 @@ final class ReportFixtures {
     }
 
     static ChangeStudy study(String firstName) {
+        return study(firstName, Integer.MAX_VALUE);
+    }
+
+    /**
+     * @param firstName the name of the first characteristic
+     * @param perGroup  at most this many values per group
+     * @return the study
+     */
+    static ChangeStudy study(String firstName, int perGroup) {
         List<CharacteristicData> chars = new ArrayList<>();
         int[] row = {2};
-        chars.add(characteristic(firstName, "mm", BORE_BEFORE, BORE_AFTER, row));
-        chars.add(characteristic("Wall thickness", "mm", WALL_BEFORE, WALL_AFTER, row));
-        chars.add(characteristic("Tightening torque", "N m", TORQUE_BEFORE, TORQUE_AFTER, row));
+        chars.add(characteristic(firstName, "mm", first(BORE_BEFORE, perGroup), first(BORE_AFTER, perGroup), row));
+        chars.add(characteristic("Wall thickness", "mm", first(WALL_BEFORE, perGroup), first(WALL_AFTER, perGroup),
+                row));
+        chars.add(characteristic("Tightening torque", "N m", first(TORQUE_BEFORE, perGroup), first(TORQUE_AFTER,
+                perGroup), row));
         Map<SkipReason, Long> skips = new EnumMap<>(SkipReason.class);
         skips.put(SkipReason.TEXT, 1L);
         ImportReport report = new ImportReport(60, skips, List.of(new SkippedCell(new Origin("honing-trial.csv", null,
@@ -74,6 +85,10 @@ final class ReportFixtures {
                 + "bore", ChangeKind.SUPPLIER, "VB-4410", "C", "second source for the honing stones",
                 "M. Okafor (process engineering)", "2026-10-05", "2026-11-20");
         return new ChangeStudy(change, data, settings, List.of());
+    }
+
+    private static String[] first(String[] values, int n) {
+        return java.util.Arrays.copyOf(values, Math.min(n, values.length));
     }
 
     private static CharacteristicData characteristic(String name, String unit, String[] before, String[] after,
