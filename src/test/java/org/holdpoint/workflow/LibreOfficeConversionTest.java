@@ -62,7 +62,7 @@ class LibreOfficeConversionTest {
         assertThat(csv).anySatisfy(line -> assertThat(line).startsWith("1,=1+1,mm,"));
     }
 
-    private static int pages(Path pdf) throws Exception {
+    private int pages(Path pdf) throws Exception {
         String pdfinfo = onPath("pdfinfo");
         if (pdfinfo != null) {
             String out = run(pdfinfo, pdf.toString());
