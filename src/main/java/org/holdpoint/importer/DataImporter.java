@@ -117,7 +117,7 @@ public final class DataImporter {
         }
         Plan plan = LayoutResolver.resolve(data, header, r, role, stem(path));
         log.message(describePlan(data, plan, r.layout() != null));
-        if (data.numbersFromText() > 0) {
+        if (data.sheet() != null && data.numbersFromText() > 0) {
             log.message(String.format(Locale.ROOT, "%s: %,d numbers stored as text were read as numbers", data.where(),
                     data.numbersFromText()));
         }
@@ -315,7 +315,10 @@ public final class DataImporter {
             sb.append(skipped("after", a.skippedAfter, a.firstSkipAfter));
         }
         Plan plan = sources.get(0).plan();
-        if (!a.unknownLabels.isEmpty()) {
+        boolean cellsSkipped = noB && !a.skippedBefore.isEmpty() || noA && !a.skippedAfter.isEmpty();
+        if (cellsSkipped && a.unknownLabels.isEmpty()) {
+            sb.append(". Correct those cells (measurements must be numbers) or export the values again");
+        } else if (!a.unknownLabels.isEmpty()) {
             sb.append(String.format(Locale.ROOT, ". The group column holds the label(s) %s, which are neither \"%s\" nor "
                     + "\"%s\": name the labels with the before-label and after-label options", a.unknownLabels
                             .stream().map(s -> "\"" + s + "\"").collect(Collectors.joining(", ")), plan.beforeKey(),

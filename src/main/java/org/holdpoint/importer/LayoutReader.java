@@ -107,14 +107,16 @@ final class LayoutReader {
         Cursor chars = new Cursor(plan.charCol());
         Cursor uom = new Cursor(plan.uomCol());
         Traceability trace = new Traceability();
+        Accum fixed = t.name() == null ? null : accum(t.name(), t.unit());
+        Map<Long, Accum> byTextId = new java.util.HashMap<>();
         for (int r = rows.nextSetBit(first); r >= 0; r = rows.nextSetBit(r + 1)) {
             int vi = value.at(r);
             Boolean before = groupOf(group, r, vi, vc, t.name());
             if (before == null) {
                 continue;
             }
-            String name = t.name();
-            if (name == null) {
+            Accum a = fixed;
+            if (a == null) {
                 int ci = chars.at(r);
                 if (ci < 0) {
                     if (vi >= 0) {
@@ -122,9 +124,16 @@ final class LayoutReader {
                     }
                     continue;
                 }
-                name = data.display(chars.col, ci);
+                if (chars.col.kind(ci) == CellKind.NUMBER) {
+                    a = accum(data.display(chars.col, ci), t.unit());
+                } else {
+                    a = byTextId.get(chars.col.payload(ci));
+                    if (a == null) {
+                        a = accum(data.text(chars.col.payload(ci)), t.unit());
+                        byTextId.put(chars.col.payload(ci), a);
+                    }
+                }
             }
-            Accum a = accum(name, t.unit());
             if (a.unit == null && plan.uomCol() >= 0) {
                 int ui = uom.at(r);
                 if (ui >= 0) {
@@ -249,7 +258,9 @@ final class LayoutReader {
         if (a.unit == null) {
             a.unit = unit;
         }
-        a.where.add(data.where());
+        if (a.where.size() < 2) {
+            a.where.add(data.where());
+        }
         return a;
     }
 

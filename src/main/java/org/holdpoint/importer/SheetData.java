@@ -178,19 +178,63 @@ final class SheetData {
      * error codes, dates and numbers with the other decimal separator get their own kinds.
      */
     void addText(int row, int col, String text) {
+        if (prepare(text)) {
+            addPrepared(row, col);
+        }
+    }
+
+    /** The kind of the last {@link #prepare}d text. */
+    CellKind preparedKind;
+    /** The scale of the last prepared text (numbers: −1 for double bits). */
+    int preparedScale;
+    /** The payload of the last prepared text. */
+    long preparedPayload;
+
+    /**
+     * Classifies a text into {@link #preparedKind}, {@link #preparedScale}, {@link #preparedPayload}
+     * without adding it, so that a source can cache the result for a repeated text.
+     *
+     * @param text the cell text
+     * @return false when the text is blank (no cell)
+     */
+    boolean prepare(String text) {
         String t = text.strip();
         if (t.isEmpty()) {
-            return;
+            return false;
         }
         char first = t.charAt(0);
         if ((first >= '0' && first <= '9') || first == '-' || first == '+' || first == '.' || first == ','
                 || first == '\u2212') {
-            if (addNumberText(row, col, t)) {
-                numbersFromText++;
-                return;
+            int r = parser.parse(t);
+            if (r == DecimalParser.EXACT) {
+                preparedKind = CellKind.NUMBER;
+                preparedScale = parser.scale;
+                preparedPayload = parser.unscaled;
+                return true;
+            }
+            if (r == DecimalParser.DOUBLE_ONLY && Double.isFinite(parser.value)) {
+                preparedKind = CellKind.NUMBER;
+                preparedScale = -1;
+                preparedPayload = Double.doubleToRawLongBits(parser.value);
+                return true;
             }
         }
-        addOther(row, col, TextClassifier.classify(t, parser.separator()), t);
+        preparedKind = TextClassifier.classify(t, parser.separator());
+        preparedScale = 0;
+        preparedPayload = id(t);
+        return true;
+    }
+
+    /** Adds the last prepared text (or one cached from it) as a cell. */
+    void addPrepared(int row, int col, CellKind kind, int scale, long payload) {
+        if (kind == CellKind.NUMBER) {
+            numbersFromText++;
+        }
+        col(row, col).add(row, kind, scale, payload);
+    }
+
+    private void addPrepared(int row, int col) {
+        addPrepared(row, col, preparedKind, preparedScale, preparedPayload);
     }
 
     private int id(String text) {
@@ -234,8 +278,8 @@ final class SheetData {
             return text(c.payload(i));
         }
         if (c.exact(i)) {
-            return java.math.BigDecimal.valueOf(c.payload(i), c.scale(i)).toPlainString();
+            return java.math.BigDecimal.valueOf(c.payload(i), c.scale(i)).stripTrailingZeros().toPlainString();
         }
-        return Double.toString(c.number(i));
+        return java.math.BigDecimal.valueOf(c.number(i)).stripTrailingZeros().toPlainString();
     }
 }
