@@ -72,7 +72,12 @@ public final class SignoffWorkbook {
     }
 
     private static void fill(XSSFWorkbook wb, XSSFSheet sh, SheetContent content, Styles styles) {
-        for (ShownCell c : content.cells) {
+        // create rows in ascending order: XSSF inserts an out-of-order row with a linear search
+        java.util.TreeSet<Integer> rows = new java.util.TreeSet<>(content.rowHeights.keySet());
+        content.cells.forEach(c -> rows.add(c.row()));
+        content.captions.forEach(c -> rows.add(c.row()));
+        rows.forEach(r -> row(sh, r));
+        for (ShownCell c : content.sorted()) {
             put(sh, c, styles);
         }
         for (ShownCell c : content.captions) {
@@ -208,6 +213,9 @@ public final class SignoffWorkbook {
             ShownCell[] cells = rows.next();
             Row row = sh.createRow(r);
             for (ShownCell c : cells) {
+                if (c.value() instanceof String s && s.isEmpty()) {
+                    continue;
+                }
                 Cell cell = row.createCell(c.column());
                 if (c.value() instanceof String s) {
                     cell.setCellValue(s);

@@ -16,6 +16,8 @@ enum Style {
     HEADER,
     /** A text cell of a table, bordered. */
     CELL,
+    /** A wrapped text cell of a table, bordered. */
+    CELL_WRAP,
     /** A number with a fixed count of decimals, bordered. */
     NUMBER,
     /** A whole number, bordered. */

@@ -83,6 +83,10 @@ final class Styles {
                 border(s);
             }
             case CELL -> border(s);
+            case CELL_WRAP -> {
+                border(s);
+                s.setWrapText(true);
+            }
             case NUMBER -> {
                 border(s);
                 s.setDataFormat(wb.createDataFormat().getFormat(decimals == 0 ? "0" : "0." + "0".repeat(decimals)));

@@ -217,6 +217,11 @@ final class TextBlocks {
         int c = a.column();
         int r = a.row();
         s.text(r++, c, "Sign-off", Style.HEADING, "sign-off heading");
+        var result = plan.input.result();
+        s.text(r++, c, "Change " + plan.input.study().change().id() + ": " + (result.changeVerified()
+                ? "CHANGE VERIFIED" : "CHANGE NOT VERIFIED") + " \u2013 " + WorkbookPlan.detail(result)
+                + " Read the Summary, the Details and the Cautions before signing.", Style.TEXT, "sign-off context");
+        r++;
         header(s, r, c, "sign-off header", "Stage", "Printed name", "Role", "Date and time", "Meaning of the "
                 + "signature", "Signature");
         s.height(r++, 26f);
@@ -224,16 +229,16 @@ final class TextBlocks {
         for (Signature.Stage stage : Signature.Stage.values()) {
             Signature g = sigs.get(stage);
             String w = "sign-off " + stage.words();
-            s.text(r, c, stage.words(), Style.LABEL, w + ": stage");
+            s.text(r, c, stage.words(), Style.HEADER, w + ": stage");
             if (g == null) {
                 for (int i = 1; i <= 4; i++) {
                     s.text(r, c + i, "", Style.FILLABLE, w + ": " + SIGN_FIELDS[i - 1]);
                 }
             } else {
-                s.text(r, c + 1, g.name(), Style.CELL, w + ": printed name");
-                s.text(r, c + 2, nz(g.role()), Style.CELL, w + ": role");
-                s.text(r, c + 3, nz(g.timestamp()), Style.CELL, w + ": date and time");
-                s.text(r, c + 4, nz(g.meaning()), Style.CELL, w + ": meaning");
+                s.text(r, c + 1, g.name(), Style.CELL_WRAP, w + ": printed name");
+                s.text(r, c + 2, nz(g.role()), Style.CELL_WRAP, w + ": role");
+                s.text(r, c + 3, nz(g.timestamp()), Style.CELL_WRAP, w + ": date and time");
+                s.text(r, c + 4, nz(g.meaning()), Style.CELL_WRAP, w + ": meaning");
             }
             s.text(r, c + 5, "", Style.FILLABLE, w + ": signature");
             s.height(r++, 34f);

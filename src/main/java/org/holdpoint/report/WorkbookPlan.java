@@ -24,7 +24,7 @@ final class WorkbookPlan {
         "Mean after", "Difference (after \u2212 before)", "%s CI of the difference", "Margin (L, U)",
         "%s CI (equivalence)", "Equivalence conclusion", "Variance ratio (after / before)", "F-test p",
         "Brown\u2013Forsythe p", "Sd growth", "Verdict"};
-    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 21, 15};
+    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 27, 15};
 
     final ReportInput input;
     final Map<TemplateName, Anchor> anchors;
@@ -93,8 +93,15 @@ final class WorkbookPlan {
                 : Style.MARK_FAILED);
         single(TemplateName.OVERALL_VERDICT, r.changeVerified() ? "CHANGE VERIFIED" : "CHANGE NOT VERIFIED",
                 Style.VERDICT);
-        single(TemplateName.OVERALL_DETAIL, r.summary(), Style.TEXT);
+        single(TemplateName.OVERALL_DETAIL, detail(r), Style.TEXT);
         single(TemplateName.RECORD_HASH, "SHA-256 " + input.sha256(), Style.MONO);
+    }
+
+    /** The overall sentence without the verdict words that the verdict cell already shows. */
+    static String detail(StudyResult r) {
+        String s = r.summary();
+        int colon = s.indexOf(": ");
+        return colon > 0 && s.substring(0, colon).startsWith("CHANGE") ? s.substring(colon + 2) : s;
     }
 
     private void summary() {

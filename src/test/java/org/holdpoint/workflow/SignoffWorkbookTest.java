@@ -98,7 +98,7 @@ class SignoffWorkbookTest {
                 Arguments.of("Summary", "I15", (Consumer<Cell>) c -> c.setCellValue("(\u22120.005000, 0.005000)"),
                         "margin"),
                 Arguments.of("Details", "F10", (Consumer<Cell>) c -> c.setCellValue(-0.005), "margin L"),
-                Arguments.of("Sign-off", "D3", (Consumer<Cell>) c -> c.setCellValue("2026-11-25T16:00:00Z"),
+                Arguments.of("Sign-off", "D5", (Consumer<Cell>) c -> c.setCellValue("2026-11-25T16:00:00Z"),
                         "sign-off prepared: date and time"),
                 Arguments.of("Summary", "P15", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
                         "verdict"));
@@ -137,10 +137,10 @@ class SignoffWorkbookTest {
 
     @Test
     void handEntriesInEmptySignOffFieldsAreListedApart() throws IOException {
-        Path signed = edit(file, "Sign-off", "B4", c -> c.setCellValue("R. Haddad"));
+        Path signed = edit(file, "Sign-off", "B6", c -> c.setCellValue("R. Haddad"));
         VerifyResult r = verify(signed);
         assertThat(r.status()).isEqualTo(VerifyResult.Status.INTACT);
-        assertThat(r.handEntries()).singleElement().asString().contains("Sign-off!B4").contains("R. Haddad");
+        assertThat(r.handEntries()).singleElement().asString().contains("Sign-off!B6").contains("R. Haddad");
     }
 
     @Test
@@ -151,14 +151,14 @@ class SignoffWorkbookTest {
         new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults().withSignOff(new Signature(
                 Signature.Stage.PREPARED, "@SUM(A1)", "+cmd", "-2+3", null)), f);
         try (XSSFWorkbook wb = open(f)) {
-            for (String[] at : new String[][] {{"Summary", "B15"}, {"Sign-off", "B3"}, {"Sign-off", "C3"},
-                {"Sign-off", "E3"}, {"Raw data", "A2"}}) {
+            for (String[] at : new String[][] {{"Summary", "B15"}, {"Sign-off", "B5"}, {"Sign-off", "C5"},
+                {"Sign-off", "E5"}, {"Raw data", "A2"}}) {
                 Cell c = cell(wb.getSheet(at[0]), at[1]);
                 assertThat(c.getCellType()).as(at[0] + "!" + at[1]).isEqualTo(CellType.STRING);
                 assertThat(c.getCellStyle().getQuotePrefixed()).as(at[0] + "!" + at[1]).isTrue();
             }
             assertThat(cell(wb.getSheet("Summary"), "B15").getStringCellValue()).isEqualTo("=1+1");
-            assertThat(cell(wb.getSheet("Sign-off"), "B3").getStringCellValue()).isEqualTo("@SUM(A1)");
+            assertThat(cell(wb.getSheet("Sign-off"), "B5").getStringCellValue()).isEqualTo("@SUM(A1)");
         }
         assertThat(verify(f).differences()).isEmpty();
     }
