@@ -141,8 +141,10 @@ final class DetailPlan {
         pair(r + 2, col, "Lower specification limit (LSL)", set.spec().lsl(), Style.NUMBER, d, n + ": LSL");
         pair(r + 3, col, "Nominal", set.spec().nominal(), Style.NUMBER, d, n + ": nominal");
         pair(r + 4, col, "Upper specification limit (USL)", set.spec().usl(), Style.NUMBER, d, n + ": USL");
-        pairText(r + 5, col, "Margin as set", set.margin() == null ? "not set" : set.margin().describe(),
+        s.text(r + 5, col, "Margin as set", Style.LABEL, n + ": margin as set label");
+        s.text(r + 5, col + 1, set.margin() == null ? "not set" : set.margin().describe(), Style.CELL_WRAP,
                 n + ": margin as set");
+        s.height(r + 5, 24f);
         pair(r + 6, col, "Margin L (in units)", c.margin() == null ? null : c.margin().lower(), Style.NUMBER, d,
                 n + ": margin L");
         pair(r + 7, col, "Margin U (in units)", c.margin() == null ? null : c.margin().upper(), Style.NUMBER, d,
@@ -155,9 +157,11 @@ final class DetailPlan {
         TTestResult t = c.decidingTest();
         s.text(r, c0, "Difference test (two-sided)", Style.HEADER, n + ": difference header");
         s.text(r, c0 + 1, "", Style.HEADER, n + ": difference header");
-        pairText(r + 1, c0, "Method", t.method().description(), n + ": difference method");
-        s.text(r + 1, c0 + 2, "", Style.CELL, n + ": difference method");
+        s.text(r + 1, c0, "Method", Style.LABEL, n + ": difference method label");
+        s.text(r + 1, c0 + 1, t.method().description(), Style.CELL_WRAP, n + ": difference method");
+        s.text(r + 1, c0 + 2, "", Style.CELL_WRAP, n + ": difference method");
         s.merge(r + 1, r + 1, c0 + 1, c0 + 2);
+        s.height(r + 1, 24f);
         pair(r + 2, c0, "Difference (after \u2212 before)", t.estimate(), Style.NUMBER, d, n + ": difference");
         pair(r + 3, c0, "Standard error", WorkbookPlan.finite(t.se()), Style.NUMBER, d, n + ": standard error");
         pair(r + 4, c0, "t", WorkbookPlan.finite(t.t()), Style.NUMBER, 4, n + ": t");
