@@ -2,7 +2,6 @@ package org.holdpoint.importer;
 
 import java.util.BitSet;
 import java.util.EnumMap;
-import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.Map;
 import java.util.Set;
@@ -320,10 +319,5 @@ final class LayoutReader {
         String sequence(int r) {
             return sequence.text(r);
         }
-    }
-
-    /** @return the accumulations with their insertion order (for callers building the map) */
-    static Map<String, Accum> newMap() {
-        return new LinkedHashMap<>();
     }
 }
