@@ -148,6 +148,25 @@ final class SheetCells {
         return dateStyle[s] == 1;
     }
 
+    /** The sheet's declared dimension such as "A1:B1000001", used to size the columns once. */
+    void dimension(CharSequence ref) {
+        if (ref == null) {
+            return;
+        }
+        String s = ref.toString();
+        int colon = s.indexOf(':');
+        if (colon < 0) {
+            return;
+        }
+        int c1 = columnOf(s.substring(0, colon));
+        int c2 = columnOf(s.substring(colon + 1));
+        int r1 = rowOf(s.substring(0, colon));
+        int r2 = rowOf(s.substring(colon + 1));
+        if (c1 >= 0 && c2 >= c1 && r1 > 0 && r2 >= r1) {
+            data.sizeHint(r2 - r1 + 1, c2 - c1 + 1);
+        }
+    }
+
     /** A merged range such as "B1:C1". */
     void merge(CharSequence ref) {
         if (ref == null) {

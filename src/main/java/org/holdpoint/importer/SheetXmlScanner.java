@@ -152,7 +152,7 @@ final class SheetXmlScanner {
         }
         byte first = buf[n];
         if (len == 1 && first == 'c' || len == 3 && first == 'r' && buf[n + 1] == 'o' && buf[n + 2] == 'w'
-                || len == 9 && matches(n, "mergeCell")) {
+                || len == 9 && matches(n, "mergeCell") || len == 9 && matches(n, "dimension")) {
             int end = attributes(i, len == 9);
             if (end < 0) {
                 return -1;
@@ -162,8 +162,10 @@ final class SheetXmlScanner {
                 startCell(selfClosing);
             } else if (len == 3) {
                 cells.startRow(attrR.length() == 0 ? -1 : SheetCells.parsePositive(attrR, -1));
-            } else {
+            } else if (first == 'm') {
                 cells.merge(attrR.toString());
+            } else {
+                cells.dimension(attrR.toString());
             }
             return end;
         }
