@@ -232,6 +232,13 @@ final class SheetData {
                 preparedPayload = Double.doubleToRawLongBits(parser.value);
                 return true;
             }
+            if (r == DecimalParser.DOUBLE_ONLY) {
+                // a number too large for binary64, such as 1e400
+                preparedKind = CellKind.NOT_FINITE;
+                preparedScale = 0;
+                preparedPayload = id(t);
+                return true;
+            }
         }
         preparedKind = TextClassifier.classify(t, parser.separator());
         preparedScale = 0;

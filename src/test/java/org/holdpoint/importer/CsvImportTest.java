@@ -158,6 +158,14 @@ class CsvImportTest {
     }
 
     @Test
+    void numbersBeyondBinary64AreNotFinite() {
+        Path f = write(dir, "big.csv", "before,after\n1,2\n1e400,3\n-1E999,4\n");
+        Dataset d = read(f);
+        assertThat(values(only(d).before())).containsExactly(1.0);
+        assertThat(d.report().skipCounts()).containsEntry(SkipReason.NOT_FINITE, 2L);
+    }
+
+    @Test
     void optionsOverrideDetection() {
         Path f = write(dir, "o.csv", "grp,a,b\nold,1,10\nold,2,20\nnew,3,30\nnew,4,40\n");
         Dataset d = read(ImportRequest.of(f).withGroupColumn("grp").withValueColumn("b").withLabels("old", "new")
