@@ -26,7 +26,10 @@ final class SheetCells {
     private char type;
     private int style;
 
-    SheetCells(SheetData data, ReadOnlySharedStringsTable strings, StylesTable styles) {
+    private final boolean date1904;
+
+    SheetCells(SheetData data, ReadOnlySharedStringsTable strings, StylesTable styles, boolean date1904) {
+        this.date1904 = date1904;
         this.data = data;
         this.strings = strings;
         this.styles = styles;
@@ -88,7 +91,7 @@ final class SheetCells {
             int r = parser.parse(value);
             String text = value.toString().strip();
             if (r != DecimalParser.NOT_A_NUMBER && DateUtil.isValidExcelDate(parser.value)) {
-                text = DateUtil.getLocalDateTime(parser.value).toString();
+                text = DateUtil.getLocalDateTime(parser.value, date1904).toString();
             }
             data.addOther(row, col, CellKind.DATE, text);
             return;
