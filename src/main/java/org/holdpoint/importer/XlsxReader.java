@@ -88,6 +88,10 @@ final class XlsxReader {
     }
 
     static ImportException damaged(String name, Exception e) {
+        if (e.getMessage() != null && e.getMessage().toLowerCase(Locale.ROOT).contains("strict ooxml")) {
+            return new ImportException(e, "file %s is saved as \"Strict Open XML\", which is not read. Open it and "
+                    + "save it as an ordinary Excel workbook (.xlsx)", name);
+        }
         return new ImportException(e, "file %s cannot be read as an Excel workbook: it is damaged or incomplete (%s). "
                 + "Open it in its program and save a fresh copy, or export it again", name, e.getMessage());
     }
