@@ -95,8 +95,8 @@ public final class DataImporter {
         SheetData data;
         try {
             data = switch (kind) {
-                case ZIP -> XlsxReader.read(path, name, sheet, decimal(r), log.messages());
-                case OLE2 -> XlsReader.read(path, name, sheet, decimal(r), log.messages());
+                case ZIP -> XlsxReader.read(path, name, sheet, r.decimalSeparator(), log.messages());
+                case OLE2 -> XlsReader.read(path, name, sheet, r.decimalSeparator(), log.messages());
                 case TEXT -> {
                     if (sheet != null) {
                         log.message(name + " is a text file; the sheet option is ignored for it");
@@ -127,10 +127,6 @@ public final class DataImporter {
             a.unknownLabels.addAll(unknown);
         }
         return new Source(name, sha, data.sheet(), plan, unknown);
-    }
-
-    private static Character decimal(ImportRequest r) {
-        return r.decimalSeparator();
     }
 
     private static String stem(Path path) {

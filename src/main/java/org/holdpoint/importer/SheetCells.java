@@ -26,7 +26,10 @@ final class SheetCells {
     private char type;
     private int style;
 
-    SheetCells(SheetData data, ReadOnlySharedStringsTable strings, StylesTable styles) {
+    private final boolean date1904;
+
+    SheetCells(SheetData data, ReadOnlySharedStringsTable strings, StylesTable styles, boolean date1904) {
+        this.date1904 = date1904;
         this.data = data;
         this.strings = strings;
         this.styles = styles;
@@ -88,7 +91,7 @@ final class SheetCells {
             int r = parser.parse(value);
             String text = value.toString().strip();
             if (r != DecimalParser.NOT_A_NUMBER && DateUtil.isValidExcelDate(parser.value)) {
-                text = DateUtil.getLocalDateTime(parser.value).toString();
+                text = DateUtil.getLocalDateTime(parser.value, date1904).toString();
             }
             data.addOther(row, col, CellKind.DATE, text);
             return;
@@ -146,6 +149,25 @@ final class SheetCells {
             dateStyle[s] = (byte) (date ? 1 : 2);
         }
         return dateStyle[s] == 1;
+    }
+
+    /** The sheet's declared dimension such as "A1:B1000001", used to size the columns once. */
+    void dimension(CharSequence ref) {
+        if (ref == null) {
+            return;
+        }
+        String s = ref.toString();
+        int colon = s.indexOf(':');
+        if (colon < 0) {
+            return;
+        }
+        int c1 = columnOf(s.substring(0, colon));
+        int c2 = columnOf(s.substring(colon + 1));
+        int r1 = rowOf(s.substring(0, colon));
+        int r2 = rowOf(s.substring(colon + 1));
+        if (c1 >= 0 && c2 >= c1 && r1 > 0 && r2 >= r1) {
+            data.sizeHint(r2 - r1 + 1, c2 - c1 + 1);
+        }
     }
 
     /** A merged range such as "B1:C1". */

@@ -82,8 +82,13 @@ final class SheetXmlScanner {
                 }
                 p = pos;
             }
-            int end = tagEnd();
-            tag(pos, end);
+            int end = scanTag();
+            while (end < 0) {
+                if (!fill()) {
+                    throw new IOException("the sheet's XML ends inside a tag (the file is truncated)");
+                }
+                end = scanTag();
+            }
             pos = end + 1;
         }
     }
@@ -106,104 +111,148 @@ final class SheetXmlScanner {
         return true;
     }
 
-    /** The index of the '>' closing the tag that starts at pos, reading more input as needed. */
-    private int tagEnd() throws IOException, Unsupported {
-        int from = pos + 1;
-        for (;;) {
-            if (lim - pos >= 4 && buf[pos + 1] == '!') {
-                if (buf[pos + 2] == '-' && buf[pos + 3] == '-') {
-                    for (int i = Math.max(from, pos + 4); i + 2 < lim; i++) {
-                        if (buf[i] == '-' && buf[i + 1] == '-' && buf[i + 2] == '>') {
-                            return i + 2;
-                        }
-                    }
-                } else {
-                    throw new Unsupported("CDATA or document type");
-                }
-            } else if (lim - pos >= 2) {
-                byte quote = 0;
-                for (int i = from; i < lim; i++) {
-                    byte b = buf[i];
-                    if (quote != 0) {
-                        if (b == quote) {
-                            quote = 0;
-                        }
-                    } else if (b == '"' || b == '\'') {
-                        quote = b;
-                    } else if (b == '>') {
-                        return i;
-                    }
-                }
+    /**
+     * Reads the tag starting at pos in one pass (name, then the attributes a cell, row or merged range
+     * needs) and reports it; returns the index of its closing '>', or −1 when the buffer ends first (then
+     * nothing was reported and the caller reads more and calls again).
+     */
+    private int scanTag() throws Unsupported {
+        int i = pos + 1;
+        if (i >= lim) {
+            return -1;
+        }
+        byte b1 = buf[i];
+        if (b1 == '!') {
+            return comment();
+        }
+        if (b1 == '?') {
+            return quotedEnd(i);
+        }
+        boolean close = b1 == '/';
+        if (close) {
+            i++;
+        }
+        int n = i;
+        while (i < lim && buf[i] > ' ' && buf[i] != '/' && buf[i] != '>') {
+            if (buf[i] == ':') {
+                n = i + 1;
             }
-            if (!fill()) {
-                throw new IOException("the sheet's XML ends inside a tag (the file is truncated)");
+            i++;
+        }
+        if (i >= lim) {
+            return -1;
+        }
+        int len = i - n;
+        if (close) {
+            int end = quotedEnd(i);
+            if (end >= 0) {
+                closeTag(n, len);
             }
-            // rescan the whole tag: a restart inside a quoted value would misread the quotes
-            from = pos + 1;
+            return end;
+        }
+        byte first = buf[n];
+        if (len == 1 && first == 'c' || len == 3 && first == 'r' && buf[n + 1] == 'o' && buf[n + 2] == 'w'
+                || len == 9 && matches(n, "mergeCell") || len == 9 && matches(n, "dimension")) {
+            int end = attributes(i, len == 9);
+            if (end < 0) {
+                return -1;
+            }
+            boolean selfClosing = buf[end - 1] == '/';
+            if (len == 1) {
+                startCell(selfClosing);
+            } else if (len == 3) {
+                cells.startRow(attrR.length() == 0 ? -1 : SheetCells.parsePositive(attrR, -1));
+            } else if (first == 'm') {
+                cells.merge(attrR.toString());
+            } else {
+                cells.dimension(attrR.toString());
+            }
+            return end;
+        }
+        int end = quotedEnd(i);
+        if (end >= 0) {
+            openTag(n, len, buf[end - 1] == '/');
+        }
+        return end;
+    }
+
+    /** The '>' ending a tag, from index i, outside quoted values; −1 when not in the buffer. */
+    private int quotedEnd(int i) {
+        byte quote = 0;
+        for (; i < lim; i++) {
+            byte b = buf[i];
+            if (quote != 0) {
+                if (b == quote) {
+                    quote = 0;
+                }
+            } else if (b == '"' || b == '\'') {
+                quote = b;
+            } else if (b == '>') {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private int comment() throws Unsupported {
+        if (lim - pos < 4) {
+            return -1;
+        }
+        if (buf[pos + 2] != '-' || buf[pos + 3] != '-') {
+            throw new Unsupported("CDATA or document type");
+        }
+        for (int i = pos + 4; i + 2 < lim; i++) {
+            if (buf[i] == '-' && buf[i + 1] == '-' && buf[i + 2] == '>') {
+                return i + 2;
+            }
+        }
+        return -1;
+    }
+
+    private void closeTag(int n, int len) {
+        if (len == 9 && matches(n, "sheetData")) {
+            sheetDataEnded = true;
+        } else if (len == 1) {
+            byte c = buf[n];
+            if (c == 'c') {
+                endCell();
+            } else if (c == 'v' || c == 'f' || c == 't') {
+                capture = null;
+            }
         }
     }
 
-    private void tag(int start, int end) {
-        boolean close = buf[start + 1] == '/';
-        if (buf[start + 1] == '?' || buf[start + 1] == '!') {
-            return;
-        }
-        int n = start + (close ? 2 : 1);
-        int nameEnd = n;
-        while (nameEnd < end && buf[nameEnd] > ' ' && buf[nameEnd] != '/' && buf[nameEnd] != '>') {
-            if (buf[nameEnd] == ':') {
-                n = nameEnd + 1;
-            }
-            nameEnd++;
-        }
-        int len = nameEnd - n;
-        boolean selfClosing = buf[end - 1] == '/';
-        if (len == 9 && matches(n, "sheetData") && (close || selfClosing)) {
+    private void openTag(int n, int len, boolean selfClosing) {
+        if (len == 9 && selfClosing && matches(n, "sheetData")) {
             sheetDataEnded = true;
-        }
-        if (close) {
-            if (len == 1) {
-                byte c = buf[n];
-                if (c == 'c') {
-                    endCell();
-                } else if (c == 'v' || c == 'f' || c == 't') {
-                    capture = null;
-                }
-            }
             return;
         }
-        if (len == 1) {
-            switch (buf[n]) {
-                case 'c' -> startCell(nameEnd, end, selfClosing);
-                case 'v' -> {
-                    if (inCell) {
-                        hasV = true;
-                        value.clear();
-                        capture = selfClosing ? null : value;
-                    }
-                }
-                case 'f' -> {
-                    if (inCell) {
-                        hasF = true;
-                        formula.clear();
-                        capture = selfClosing ? null : formula;
-                    }
-                }
-                case 't' -> {
-                    if (inCell && cellType == 'i') {
-                        hasT = true;
-                        capture = selfClosing ? null : inline;
-                    }
-                }
-                default -> {
+        if (len != 1) {
+            return;
+        }
+        switch (buf[n]) {
+            case 'v' -> {
+                if (inCell) {
+                    hasV = true;
+                    value.clear();
+                    capture = selfClosing ? null : value;
                 }
             }
-        } else if (len == 3 && buf[n] == 'r' && buf[n + 1] == 'o' && buf[n + 2] == 'w') {
-            attributes(nameEnd, end, false);
-            cells.startRow(attrR.length() == 0 ? -1 : SheetCells.parsePositive(attrR, -1));
-        } else if (len == 9 && matches(n, "mergeCell")) {
-            attributes(nameEnd, end, true);
-            cells.merge(attrR.toString());
+            case 'f' -> {
+                if (inCell) {
+                    hasF = true;
+                    formula.clear();
+                    capture = selfClosing ? null : formula;
+                }
+            }
+            case 't' -> {
+                if (inCell && cellType == 'i') {
+                    hasT = true;
+                    capture = selfClosing ? null : inline;
+                }
+            }
+            default -> {
+            }
         }
     }
 
@@ -216,8 +265,7 @@ final class SheetXmlScanner {
         return true;
     }
 
-    private void startCell(int from, int end, boolean selfClosing) {
-        attributes(from, end, false);
+    private void startCell(boolean selfClosing) {
         cellType = attrT.length() == 0 ? 'n' : attrT.length() == 1 ? attrT.charAt(0)
                 : SheetCells.typeOf(attrT.toString());
         cells.startCell(attrR.length() == 0 ? -1 : SheetCells.columnOf(attrR), cellType,
@@ -240,31 +288,50 @@ final class SheetXmlScanner {
         capture = null;
     }
 
-    /** Reads the attributes r, t, s (or ref, into attrR, for merged ranges) of a tag. */
-    private void attributes(int from, int end, boolean ref) {
+    /**
+     * Reads the attributes r, t, s (or ref, into attrR, for merged ranges) from index i up to the tag's
+     * '>', which it returns; −1 when the buffer ends first.
+     */
+    private int attributes(int i, boolean ref) {
         attrR.clear();
         attrT.clear();
         attrS.clear();
-        int i = from;
-        while (i < end) {
-            while (i < end && (buf[i] <= ' ' || buf[i] == '/')) {
+        for (;;) {
+            while (i < lim && buf[i] <= ' ') {
                 i++;
             }
+            if (i >= lim) {
+                return -1;
+            }
+            byte b = buf[i];
+            if (b == '>') {
+                return i;
+            }
+            if (b == '/') {
+                i++;
+                continue;
+            }
             int ns = i;
-            while (i < end && buf[i] != '=' && buf[i] > ' ') {
+            while (i < lim && buf[i] != '=' && buf[i] > ' ' && buf[i] != '>') {
                 i++;
             }
             int nl = i - ns;
-            while (i < end && buf[i] != '"' && buf[i] != '\'') {
+            while (i < lim && buf[i] != '"' && buf[i] != '\'' && buf[i] != '>') {
                 i++;
             }
-            if (i >= end) {
-                return;
+            if (i >= lim) {
+                return -1;
+            }
+            if (buf[i] == '>') {
+                return i;
             }
             byte q = buf[i++];
             int vs = i;
-            while (i < end && buf[i] != q) {
+            while (i < lim && buf[i] != q) {
                 i++;
+            }
+            if (i >= lim) {
+                return -1;
             }
             ByteText target = null;
             if (ref) {
@@ -272,7 +339,8 @@ final class SheetXmlScanner {
                     target = attrR;
                 }
             } else if (nl == 1) {
-                target = buf[ns] == 'r' ? attrR : buf[ns] == 't' ? attrT : buf[ns] == 's' ? attrS : null;
+                byte c = buf[ns];
+                target = c == 'r' ? attrR : c == 't' ? attrT : c == 's' ? attrS : null;
             }
             if (target != null) {
                 target.append(buf, vs, i - vs);

@@ -88,6 +88,10 @@ final class XlsxReader {
     }
 
     static ImportException damaged(String name, Exception e) {
+        if (e.getMessage() != null && e.getMessage().toLowerCase(Locale.ROOT).contains("strict ooxml")) {
+            return new ImportException(e, "file %s is saved as \"Strict Open XML\", which is not read. Open it and "
+                    + "save it as an ordinary Excel workbook (.xlsx)", name);
+        }
         return new ImportException(e, "file %s cannot be read as an Excel workbook: it is damaged or incomplete (%s). "
                 + "Open it in its program and save a fresh copy, or export it again", name, e.getMessage());
     }
@@ -102,6 +106,7 @@ final class XlsxReader {
         } catch (IOException | InvalidFormatException | POIXMLException e) {
             styles = null;
         }
+        boolean date1904 = date1904(reader);
         XSSFReader.SheetIterator it = (XSSFReader.SheetIterator) reader.getSheetsData();
         List<String> names = new ArrayList<>();
         int index = 0;
@@ -118,7 +123,8 @@ final class XlsxReader {
                 if (!chosen) {
                     continue;
                 }
-                SheetData data = readSheet(in, it.getSheetPart(), name, sheetName, decimal, strings, styles);
+                SheetData data = readSheet(in, it.getSheetPart(), name, sheetName, decimal,
+                        new Context(strings, styles, date1904));
                 if (wanted != null || data.cellCount() > 0) {
                     if (wanted == null && index > 1) {
                         messages.add(String.format(Locale.ROOT, "%s: sheet %s read (the first sheet holding data)",
@@ -151,17 +157,32 @@ final class XlsxReader {
      * Reads one sheet part with the fast byte scanner, or, for XML the scanner does not take (another
      * encoding, CDATA, a document type), with SAX from a fresh stream of the part.
      */
+    /** What every sheet of a workbook shares. */
+    private record Context(ReadOnlySharedStringsTable strings, StylesTable styles, boolean date1904) {
+    }
+
+    /** Whether the workbook counts dates from 1904 (workbookPr date1904, ECMA-376 Part 1 §18.2.28). */
+    private static boolean date1904(XSSFReader reader) {
+        try (InputStream in = reader.getWorkbookData()) {
+            String head = new String(in.readNBytes(1 << 16), java.nio.charset.StandardCharsets.UTF_8);
+            return head.matches("(?s).*date1904\\s*=\\s*[\"'](1|true)[\"'].*");
+        } catch (IOException | InvalidFormatException | RuntimeException e) {
+            return false;
+        }
+    }
+
     private static SheetData readSheet(InputStream in, org.apache.poi.openxml4j.opc.PackagePart part, String name,
-            String sheetName, char decimal, ReadOnlySharedStringsTable strings, StylesTable styles)
-            throws IOException, SAXException, ParserConfigurationException {
+            String sheetName, char decimal, Context ctx) throws IOException, SAXException,
+            ParserConfigurationException {
         SheetData data = new SheetData(name, sheetName, decimal);
         try {
-            new SheetXmlScanner(in, new SheetCells(data, strings, styles)).run();
+            new SheetXmlScanner(in, new SheetCells(data, ctx.strings(), ctx.styles(), ctx.date1904())).run();
         } catch (SheetXmlScanner.Unsupported e) {
             data = new SheetData(name, sheetName, decimal);
             try (InputStream again = part.getInputStream()) {
                 XMLReader xr = XMLHelper.newXMLReader();
-                xr.setContentHandler(new SaxSheetHandler(new SheetCells(data, strings, styles)));
+                xr.setContentHandler(new SaxSheetHandler(new SheetCells(data, ctx.strings(), ctx.styles(),
+                        ctx.date1904())));
                 xr.parse(new InputSource(again));
             }
         }

@@ -219,6 +219,8 @@ class BadFileCorpusTest {
             m.put("xl/worksheets/sheet1.xml", Arrays.copyOf(sheet, sheet.length * 2 / 3));
             return bytes(d, "cutxml.xlsx", BadFiles.zip(m));
         }, "truncated"));
+        cases.add(c("two columns for one characteristic", d -> text(d, "twice.csv",
+                "phase,bore,wall,Bore\nbefore,1,2,3\nafter,1,2,3\n"), "has two columns (B and D)"));
         cases.add(c("a folder instead of a file", d -> {
             try {
                 return Files.createDirectories(d.resolve("folder.xlsx"));

@@ -55,6 +55,19 @@ class FuzzImportTest {
 
     @Test
     @Timeout(300)
+    void mutatedXlsBytes() throws Exception {
+        byte[] valid = Files.readAllBytes(Workbooks.xls(dir.resolve("v.xls"), row("unit", "before", "after"),
+                row("U1", 1.0, 1.1), row("U2", "2.0", 2.1), row("U3", 3.0, null)));
+        SplittableRandom rnd = new SplittableRandom(SEED + 3);
+        int ok = 0;
+        for (int i = 0; i < 300; i++) {
+            ok += run("xls bytes", i, "f.xls", mutate(valid, rnd));
+        }
+        assertThat(ok).as("mutants of unused bytes still read").isPositive();
+    }
+
+    @Test
+    @Timeout(300)
     void mutatedCsv() {
         byte[] valid = ("Trial 3\nunit;phase;value (mm);lot\nU1;before;10,01;L1\nU2;before;10,02;L1\n"
                 + "U3;after;\"10,03\";L2\nU4;after;10,04;L2\nU5;after;n/a;L2\n").getBytes(StandardCharsets.UTF_8);

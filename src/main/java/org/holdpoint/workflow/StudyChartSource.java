@@ -1,0 +1,41 @@
+package org.holdpoint.workflow;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.holdpoint.chart.NamedChart;
+import org.holdpoint.chart.StudyCharts;
+import org.holdpoint.report.NamedImage;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.study.StudyResult;
+
+/**
+ * The charts the sign-off workbook embeds: per characteristic its box plot, histograms and normal
+ * probability plot, rendered to PNG by {@code chart} (the workbook receives only the bytes).
+ */
+public final class StudyChartSource implements ChartSource {
+    private final StudyCharts charts = StudyCharts.withDefaults();
+
+    @Override
+    public Map<String, List<NamedImage>> charts(ChangeStudy study, StudyResult result) {
+        Map<String, List<NamedImage>> out = new LinkedHashMap<>();
+        int n = result.characteristics().size();
+        for (int i = 0; i < n; i++) {
+            CharacteristicResult r = result.characteristics().get(i);
+            CharacteristicData data = study.data().characteristics().stream().filter(c -> c.name().equals(r.name()))
+                    .findFirst().orElse(null);
+            if (data == null) {
+                continue;
+            }
+            List<NamedImage> images = new ArrayList<>();
+            for (NamedChart nc : charts.characteristicCharts(i + 1, n, r, data)) {
+                images.add(NamedImage.of(nc.fileName(), nc.png(charts.theme().scale())));
+            }
+            out.put(r.name(), images);
+        }
+        return out;
+    }
+}
