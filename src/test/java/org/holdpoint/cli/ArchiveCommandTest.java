@@ -65,7 +65,9 @@ class ArchiveCommandTest {
                 "q. manager");
         assertThat(bySigner.out()).contains("CR-77").contains("1 record(s)");
         AnalyzeCommandTest.Run show = AnalyzeCommandTest.run("archive", "show", Long.toString(id), "--archive", url);
-        assertThat(show.out()).contains("Audit trail").contains("SUPERSEDED").contains("re-measured chamfer");
+        assertThat(show.out()).contains("Audit trail").contains("version 2 (current)").contains("re-measured chamfer");
+        AnalyzeCommandTest.Run all = AnalyzeCommandTest.run("archive", "list", "--archive", url, "--all-versions");
+        assertThat(all.out()).contains("2 record(s)");
 
         AnalyzeCommandTest.Run intact = AnalyzeCommandTest.run("archive", "verify", "--archive", url);
         assertThat(intact.code()).as(intact.out() + intact.err()).isZero();

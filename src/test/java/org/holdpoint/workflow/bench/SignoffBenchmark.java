@@ -45,7 +45,7 @@ public final class SignoffBenchmark {
     public static void main(String[] args) throws Exception {
         int runs = args.length > 0 ? Integer.parseInt(args[0]) : 5;
         Path dir = Files.createTempDirectory("signoff-bench");
-        AnalysisOutcome demo = new AnalyzeUseCase().run(ImportRequest.of(Path.of("sample-data",
+        AnalysisOutcome demo = new AnalyzeUseCase().run(org.holdpoint.workflow.ImportOptions.file(Path.of("sample-data",
                 "boring-bar-insert.csv")), null, AnalysisSettings.defaultSettings(), Progress.NONE);
         ChangeStudy demoStudy = new ChangeStudy(change("CR-DEMO"), demo.data(), demo.settings(), List.of());
         measure("demo study (7 characteristics, 420 values, 2 charts each)", demoStudy, demo.result(), charts(),
