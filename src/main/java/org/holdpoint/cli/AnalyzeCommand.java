@@ -226,6 +226,8 @@ final class AnalyzeCommand implements Callable<Integer> {
     static final class OutputOptions {
         @Option(names = "--json", paramLabel = "FILE", description = "Also write the machine-readable result.")
         Path json;
+        @Option(names = {"-q", "--quiet"}, description = "Print only the overall verdict and the cautions.")
+        boolean quiet;
         @Option(names = "--charts", paramLabel = "DIR", description = "Also write the charts as PNG files into DIR: "
                 + "the equivalence picture and, per characteristic, box plot, histogram and normal plot.")
         Path charts;
@@ -258,7 +260,11 @@ final class AnalyzeCommand implements Callable<Integer> {
         AnalysisOutcome outcome = new AnalyzeUseCase().run(request, input.settings, settings,
                 new ConsoleProgress(spec.commandLine().getErr(), false));
         TextOutput text = new TextOutput(spec.commandLine().getOut());
-        text.print(outcome.data(), outcome.settings(), outcome.result());
+        if (output.quiet) {
+            text.printVerdict(outcome.result());
+        } else {
+            text.print(outcome.data(), outcome.settings(), outcome.result());
+        }
         if (output.saveStudy != null) {
             Signature sig = signOff();
             ChangeStudy study = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(),

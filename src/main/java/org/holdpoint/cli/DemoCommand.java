@@ -5,7 +5,13 @@ import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.holdpoint.study.ChangeDescription;
+import org.holdpoint.study.ChangeKind;
+import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.workflow.AnalysisOutcome;
 import org.holdpoint.workflow.AnalyzeUseCase;
@@ -19,9 +25,14 @@ import picocli.CommandLine.Option;
 @Command(name = "demo", mixinStandardHelpOptions = true, usageHelpAutoWidth = true,
         header = "Analyse the bundled demo study (an invented boring-bar insert supplier change).",
         description = {"Copies the bundled sample data into the output folder, analyses it with the criteria "
-                + "in its settings file, prints the result and writes result.json there."})
+                + "in its settings file, prints the result and writes there result.json, the charts, the sign-off "
+                + "workbook and the study file (files of an earlier demo run are replaced)."})
 final class DemoCommand implements Callable<Integer> {
     static final String STUDY = "boring-bar-insert";
+    /** The invented change behind the demo data. */
+    static final ChangeDescription DEMO_CHANGE = new ChangeDescription("CR-DEMO-0412",
+            "Second-source boring-bar insert for the pump housing bore (demo)", ChangeKind.SUPPLIER, "PH-2210", "C",
+            "second source for the carbide inserts of cell 4 (invented demo study)", "demo", null, null);
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -40,8 +51,20 @@ final class DemoCommand implements Callable<Integer> {
         new TextOutput(spec.commandLine().getOut()).print(outcome.data(), outcome.settings(), outcome.result());
         Path json = out.resolve("result.json");
         AnalyzeUseCase.writeJson(outcome, json);
-        spec.commandLine().getOut().printf("%nWrote %s%n", json);
-        spec.commandLine().getOut().flush();
+        var charts = org.holdpoint.workflow.ChartsUseCase.write(outcome, out.resolve("charts"));
+        ChangeStudy study = new ChangeStudy(DEMO_CHANGE, outcome.data(), outcome.settings(), List.of());
+        var written = new org.holdpoint.workflow.ReportUseCase().write(study, outcome.result(),
+                org.holdpoint.workflow.ReportOptions.withDefaults()
+                        .withExisting(org.holdpoint.workflow.ReportOptions.ExistingFile.REPLACE)
+                        .withCharts(new org.holdpoint.workflow.StudyChartSource()),
+                out.resolve(STUDY + "-signoff.xlsx"));
+        Path studyFile = out.resolve(STUDY + ".study.json");
+        org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), studyFile);
+        PrintWriter w = spec.commandLine().getOut();
+        w.printf(Locale.ROOT, "%nWrote %s, %d charts in %s, the sign-off workbook %s (record SHA-256 %s) and the "
+                + "study file %s%n", json, charts.size(), out.resolve("charts"), written.file(), written.sha256(),
+                studyFile);
+        w.flush();
         return ExitCodes.OK;
     }
 

@@ -54,6 +54,11 @@ final class TextOutput {
             printDetail(r, settings);
         }
         out.println();
+        printVerdict(result);
+    }
+
+    /** The overall verdict, the characteristics that did not pass, and the cautions. */
+    void printVerdict(StudyResult result) {
         out.println(result.summary());
         for (String f : result.failing()) {
             out.println("  - " + f);

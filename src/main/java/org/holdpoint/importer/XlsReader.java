@@ -20,8 +20,8 @@ import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.ss.util.NumberToTextConverter;
 
 /**
- * Reads one sheet of a binary Excel workbook (.xls, BIFF8) with POI's HSSF, and tells an encrypted
- * (password-protected) workbook in an OLE2 container apart. Numbers become the decimal text Excel
+ * Reads one sheet of a binary .xls workbook (.xls, BIFF8) with POI's HSSF, and tells an encrypted
+ * (password-protected) workbook in an OLE2 container apart. Numbers become the decimal text a spreadsheet
  * shows for them ({@link NumberToTextConverter}, 15 significant digits), read exactly; formulas give
  * their cached result.
  */
@@ -44,8 +44,8 @@ final class XlsReader {
                 throw passwordProtected(name, null);
             }
             if (!root.hasEntryCaseInsensitive("Workbook") && !root.hasEntryCaseInsensitive("Book")) {
-                throw new ImportException("file %s is an Office document but not an Excel workbook (perhaps a Word or "
-                        + "other document). Export the data as .xlsx, .xls or .csv", name);
+                throw new ImportException("file %s is an office document but not a spreadsheet "
+                        + "workbook (perhaps a text or other document). Export the data as .xlsx, .xls or .csv", name);
             }
             try (HSSFWorkbook wb = new HSSFWorkbook(root, false)) {
                 return readWorkbook(wb, name, sheet, decimal == null ? '.' : decimal, messages);
@@ -53,13 +53,13 @@ final class XlsReader {
         } catch (EncryptedDocumentException e) {
             throw passwordProtected(name, e);
         } catch (OldExcelFormatException e) {
-            throw new ImportException(e, "file %s is in an old Excel format (Excel 5.0/95 or earlier) that is not read. "
+            throw new ImportException(e, "file %s is in an old binary spreadsheet format (from 1995 or earlier) that is not read. "
                     + "Open it and save it as .xlsx", name);
         } catch (IOException | RuntimeException e) {
             if (e instanceof ImportException ie) {
                 throw ie;
             }
-            throw new ImportException(e, "file %s cannot be read as an Excel workbook: it is damaged or incomplete (%s). "
+            throw new ImportException(e, "file %s cannot be read as a spreadsheet workbook: it is damaged or incomplete (%s). "
                     + "Open it in its program and save a fresh copy, or export it again", name, e.getMessage());
         }
     }

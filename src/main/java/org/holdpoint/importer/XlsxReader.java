@@ -83,16 +83,16 @@ final class XlsxReader {
     }
 
     static ImportException notWorkbook(String name, Exception e) {
-        return new ImportException(e, "file %s is a zip archive but not an Excel workbook (it has no workbook parts). "
+        return new ImportException(e, "file %s is a zip archive but not a spreadsheet workbook (it has no workbook parts). "
                 + "Export the data as .xlsx, .xls or .csv", name);
     }
 
     static ImportException damaged(String name, Exception e) {
         if (e.getMessage() != null && e.getMessage().toLowerCase(Locale.ROOT).contains("strict ooxml")) {
             return new ImportException(e, "file %s is saved as \"Strict Open XML\", which is not read. Open it and "
-                    + "save it as an ordinary Excel workbook (.xlsx)", name);
+                    + "save it as an ordinary .xlsx workbook", name);
         }
-        return new ImportException(e, "file %s cannot be read as an Excel workbook: it is damaged or incomplete (%s). "
+        return new ImportException(e, "file %s cannot be read as a spreadsheet workbook: it is damaged or incomplete (%s). "
                 + "Open it in its program and save a fresh copy, or export it again", name, e.getMessage());
     }
 

@@ -93,14 +93,14 @@ class BadFileCorpusTest {
         cases.add(c("truncated xlsx (first half)", d -> {
             byte[] v = validXlsx(d);
             return bytes(d, "half.xlsx", Arrays.copyOf(v, v.length / 2));
-        }, "cannot be read as an Excel workbook"));
+        }, "cannot be read as a spreadsheet workbook"));
         cases.add(c("truncated xlsx (end cut off)", d -> {
             byte[] v = validXlsx(d);
             return bytes(d, "cut.xlsx", Arrays.copyOf(v, v.length - 40));
         }, "workbook"));
         cases.add(c("zip that is not a workbook", d -> bytes(d, "notes.xlsx",
                 BadFiles.zip(java.util.Map.of("readme.txt", "hello".getBytes(StandardCharsets.UTF_8)))),
-                "not an Excel workbook"));
+                "not a spreadsheet workbook"));
         cases.add(c("empty zip", d -> bytes(d, "empty-zip.xlsx", BadFiles.zip(java.util.Map.of())), "workbook"));
         cases.add(c("renamed pdf (.xlsx)", d -> text(d, "report.xlsx", "%PDF-1.7\n%âãÏÓ\n1 0 obj\n<<>>\nendobj\n"),
                 "is a PDF document"));
@@ -194,7 +194,7 @@ class BadFileCorpusTest {
             return bytes(d, "noise.csv", b);
         }, "not a text file"));
         cases.add(c("OLE2 document that is not a workbook", d -> bytes(d, "letter.xls", BadFiles.oleWithoutWorkbook()),
-                "not an Excel workbook"));
+                "not a spreadsheet workbook"));
         cases.add(c("unbalanced quote", d -> text(d, "quote.csv", "phase,value\nbefore,\"1\nafter,2\n"),
                 "quotes"));
         cases.add(c("no header above the numbers", d -> text(d, "noheader.csv", "1,2\n3,4\n5,6\n"),
