@@ -1,0 +1,230 @@
+package org.holdpoint.chart;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
+import java.util.List;
+import org.holdpoint.stats.BoxStatistics;
+import org.holdpoint.stats.Sample;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.SpecLimits;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
+import org.jfree.chart.axis.CategoryAxis;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.DatasetRenderingOrder;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.renderer.category.LineAndShapeRenderer;
+import org.jfree.chart.title.LegendTitle;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleEdge;
+import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.category.DefaultCategoryDataset;
+import org.jfree.data.statistics.BoxAndWhiskerItem;
+import org.jfree.data.statistics.DefaultBoxAndWhiskerCategoryDataset;
+import org.jfree.data.statistics.DefaultMultiValueCategoryDataset;
+
+/**
+ * The box plot of one characteristic, before and after side by side, built from {@link BoxStatistics} (type-7
+ * quartiles, whiskers to the most extreme values within 1.5·IQR), with every individual value drawn over it at its
+ * true value, the mean marked, and LSL, nominal and USL as labelled lines.
+ *
+ * <p>Plot datasets: 0 = the boxes ({@link DefaultBoxAndWhiskerCategoryDataset}, one series, columns before and
+ * after; each item's outliers are the true outlier values and its min/max outlier are the data minimum and maximum,
+ * so that nothing is parked at an edge), 1 = every value ({@link DefaultMultiValueCategoryDataset}), 2 = the means.
+ */
+public final class BoxPlotChart {
+    /** Series key of the boxes. */
+    public static final String BOX_SERIES = "box";
+    /** Series key of the individual values. */
+    public static final String VALUES_SERIES = "values";
+    /** Series key of the means. */
+    public static final String MEAN_SERIES = "mean";
+    /** Individual values are spread sideways only from this many values per group on. */
+    static final int JITTER_FROM = 10;
+
+    private BoxPlotChart() {
+    }
+
+    /**
+     * The box plot of a characteristic's data.
+     *
+     * @param data   the characteristic (name, unit, before and after groups)
+     * @param limits the specification limits to draw, or {@link SpecLimits#NONE}
+     * @param theme  the theme
+     * @return the chart
+     */
+    public static JFreeChart create(CharacteristicData data, SpecLimits limits, ChartTheme theme) {
+        return create(data.name(), data.unit(), data.before().sample(), data.after().sample(), limits, theme);
+    }
+
+    /**
+     * The box plot of two samples; the samples are only read.
+     *
+     * @param name   the characteristic's name (chart title)
+     * @param unit   the unit for the axis label, or null
+     * @param before the before values in run order
+     * @param after  the after values in run order
+     * @param limits the specification limits to draw, or {@link SpecLimits#NONE}
+     * @param theme  the theme
+     * @return the chart
+     * @throws ChartException if a group is empty
+     */
+    public static JFreeChart create(String name, String unit, Sample before, Sample after, SpecLimits limits,
+            ChartTheme theme) {
+        Sample[] groups = {before, after};
+        String[] labels = new String[2];
+        BoxStatistics[] stats = new BoxStatistics[2];
+        DefaultBoxAndWhiskerCategoryDataset boxes = new DefaultBoxAndWhiskerCategoryDataset();
+        DefaultBoxAndWhiskerCategoryDataset drawn = new DefaultBoxAndWhiskerCategoryDataset();
+        DefaultMultiValueCategoryDataset values = new DefaultMultiValueCategoryDataset();
+        DefaultCategoryDataset means = new DefaultCategoryDataset();
+        for (int g = 0; g < 2; g++) {
+            if (groups[g].size() == 0) {
+                throw new ChartException("characteristic '%s' has no %s values to draw", name,
+                        g == 0 ? "before" : "after");
+            }
+            stats[g] = BoxStatistics.of(groups[g]);
+            labels[g] = (g == 0 ? "before" : "after") + " (n = " + groups[g].size() + ")";
+            boxes.add(item(stats[g], true), BOX_SERIES, labels[g]);
+            drawn.add(item(stats[g], false), BOX_SERIES, labels[g]);
+            values.add(boxed(groups[g].values()), VALUES_SERIES, labels[g]);
+            means.addValue(stats[g].mean(), MEAN_SERIES, labels[g]);
+        }
+        CategoryPlot plot = plot(unit == null ? name : Numbers.axisLabel(name, unit), boxes, drawn, values, means,
+                stats, theme);
+        addLimits(plot, limits, theme);
+        ((NumberAxis) plot.getRangeAxis()).setRange(ChartRanges.padded(rangeOf(stats, limits), 0.06));
+        JFreeChart chart = new JFreeChart(name, theme.titleFont(), plot, false);
+        chart.addSubtitle(theme.subtitle("before and after the change: box, every value, mean"));
+        chart.addSubtitle(theme.note("Box: " + BoxStatistics.METHOD + ". Each value is drawn at its true value"
+                + (Math.max(before.size(), after.size()) >= JITTER_FROM ? ", spread sideways by a fixed jitter" : "")
+                + "; values beyond the whiskers are ringed."));
+        chart.addSubtitle(legend(plot));
+        theme.apply(chart);
+        return chart;
+    }
+
+    static LegendTitle legend(org.jfree.chart.plot.Plot plot) {
+        LegendTitle legend = new LegendTitle(plot);
+        legend.setPosition(RectangleEdge.BOTTOM);
+        return legend;
+    }
+
+    private static BoxAndWhiskerItem item(BoxStatistics s, boolean withOutliers) {
+        List<Double> outliers = new ArrayList<>();
+        if (withOutliers) {
+            for (double v : s.outlierValues()) {
+                outliers.add(v);
+            }
+        }
+        // min/max outlier at the data extremes: JFreeChart then draws no value as a "far out" marker at an edge
+        return new BoxAndWhiskerItem(s.mean(), s.median(), s.q1(), s.q3(), s.lowerWhisker(), s.upperWhisker(),
+                s.min(), s.max(), outliers);
+    }
+
+    private static List<Double> boxed(double[] v) {
+        List<Double> list = new ArrayList<>(v.length);
+        for (double x : v) {
+            list.add(x);
+        }
+        return list;
+    }
+
+    private static CategoryPlot plot(String axisLabel, DefaultBoxAndWhiskerCategoryDataset boxes,
+            DefaultBoxAndWhiskerCategoryDataset drawn, DefaultMultiValueCategoryDataset values,
+            DefaultCategoryDataset means, BoxStatistics[] stats, ChartTheme theme) {
+        CategoryAxis x = new CategoryAxis(null);
+        x.setCategoryMargin(0.3);
+        NumberAxis y = new NumberAxis(axisLabel);
+        y.setAutoRangeIncludesZero(false);
+        OwnOutliersBoxRenderer boxRenderer = new OwnOutliersBoxRenderer(drawn, theme);
+        CategoryPlot plot = new CategoryPlot(boxes, x, y, boxRenderer);
+        plot.setDataset(1, values);
+        plot.setRenderer(1, new ValuesRenderer(stats, theme));
+        plot.setDataset(2, means);
+        plot.setRenderer(2, meanRenderer());
+        plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
+        plot.setRangeGridlinesVisible(true);
+        plot.setInsets(new RectangleInsets(4, 4, 4, 4));
+        plot.setFixedLegendItems(legend(theme));
+        return plot;
+    }
+
+    private static LineAndShapeRenderer meanRenderer() {
+        LineAndShapeRenderer r = new LineAndShapeRenderer(false, true);
+        r.setSeriesShape(0, ChartTheme.diamond(8));
+        r.setUseFillPaint(true);
+        r.setSeriesFillPaint(0, Color.WHITE);
+        r.setDrawOutlines(true);
+        r.setUseOutlinePaint(true);
+        r.setSeriesOutlinePaint(0, ChartTheme.INK);
+        r.setSeriesOutlineStroke(0, new BasicStroke(1.3f));
+        return r;
+    }
+
+    private static LegendItemCollection legend(ChartTheme theme) {
+        LegendItemCollection items = new LegendItemCollection();
+        for (int g = 0; g < 2; g++) {
+            LegendItem box = new LegendItem((g == 0 ? "before" : "after") + " value", null, null, null,
+                    theme.groupShape(g, ValuesRenderer.POINT_SIZE + 2), theme.groupColour(g));
+            items.add(box);
+        }
+        items.add(new LegendItem("mean", null, null, null, true, ChartTheme.diamond(8), true, Color.WHITE, true,
+                ChartTheme.INK, new BasicStroke(1.3f), false, new Rectangle2D.Double(), new BasicStroke(), Color.BLACK));
+        items.add(new LegendItem("beyond the whiskers (ringed)", null, null, null, true, ChartTheme.circle(8), false,
+                Color.WHITE, true, ChartTheme.INK, new BasicStroke(1.1f), false, new Rectangle2D.Double(),
+                new BasicStroke(), Color.BLACK));
+        return items;
+    }
+
+    private static void addLimits(CategoryPlot plot, SpecLimits limits, ChartTheme theme) {
+        if (limits == null) {
+            return;
+        }
+        addLimit(plot, limits.lsl(), "LSL", theme, false);
+        addLimit(plot, limits.usl(), "USL", theme, false);
+        addLimit(plot, limits.nominal(), "nominal", theme, true);
+    }
+
+    static ValueMarker limitMarker(double value, String label, ChartTheme theme, boolean nominal) {
+        ValueMarker m = new ValueMarker(value, ChartTheme.INK, nominal ? theme.nominalStroke() : theme.limitStroke());
+        m.setLabel(label + " " + Numbers.format(value));
+        m.setLabelFont(new Font(theme.fontFamily(), Font.PLAIN, 8));
+        m.setLabelPaint(ChartTheme.INK);
+        m.setLabelBackgroundColor(new Color(255, 255, 255, 200));
+        return m;
+    }
+
+    private static void addLimit(CategoryPlot plot, Double value, String label, ChartTheme theme, boolean nominal) {
+        if (value == null) {
+            return;
+        }
+        ValueMarker m = limitMarker(value, label, theme, nominal);
+        // label just inside the left edge, on the side of the line facing the data, so it is never clipped
+        boolean below = label.equals("USL");
+        m.setLabelAnchor(below ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.TOP_LEFT);
+        m.setLabelTextAnchor(below ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
+        m.setLabelOffset(new RectangleInsets(2, 4, 2, 4));
+        plot.addRangeMarker(m);
+    }
+
+    private static double[] rangeOf(BoxStatistics[] stats, SpecLimits limits) {
+        double lo = Math.min(stats[0].min(), stats[1].min());
+        double hi = Math.max(stats[0].max(), stats[1].max());
+        if (limits != null) {
+            for (Double v : new Double[] {limits.lsl(), limits.nominal(), limits.usl()}) {
+                if (v != null) {
+                    lo = Math.min(lo, v);
+                    hi = Math.max(hi, v);
+                }
+            }
+        }
+        return new double[] {lo, hi};
+    }
+}

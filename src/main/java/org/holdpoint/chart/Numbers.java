@@ -1,0 +1,33 @@
+package org.holdpoint.chart;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+
+/** Number text on charts: up to six significant digits, no exponent for everyday magnitudes, Locale-free. */
+final class Numbers {
+    private Numbers() {
+    }
+
+    /**
+     * @param v a finite value
+     * @return v rounded to six significant digits, trailing zeros dropped, e.g. "12.45" or "-0.0035"
+     */
+    static String format(double v) {
+        if (v == 0) {
+            return "0";
+        }
+        BigDecimal d = new BigDecimal(v).round(new MathContext(6)).stripTrailingZeros();
+        double abs = Math.abs(v);
+        String s = abs >= 1e-4 && abs < 1e9 ? d.toPlainString() : d.toString();
+        return s.startsWith("-") ? "\u2212" + s.substring(1) : s;
+    }
+
+    /**
+     * @param name the characteristic's name
+     * @param unit its unit, or null
+     * @return "name [unit]", or "name (unit not given)"
+     */
+    static String axisLabel(String name, String unit) {
+        return unit == null || unit.isBlank() ? name + " (unit not given)" : name + " [" + unit + "]";
+    }
+}
