@@ -1,10 +1,14 @@
 package org.holdpoint;
 
+import java.awt.GraphicsEnvironment;
 import org.holdpoint.cli.HoldpointCommand;
+import org.holdpoint.ui.swing.MainWindow;
+import org.holdpoint.workflow.WindowLauncher;
 
 /**
- * The launcher and composition root: runs the command line (and, with no arguments on a machine
- * with a display, the window). The only caller of {@link System#exit}.
+ * The launcher and composition root: with no arguments on a machine with a display it opens the
+ * window; otherwise it runs the command line, whose {@code gui} subcommand opens the window through
+ * the {@link WindowLauncher} wired here. The only caller of {@link System#exit}.
  */
 public final class Holdpoint {
     private Holdpoint() {
@@ -16,7 +20,18 @@ public final class Holdpoint {
      * @param args command-line arguments
      */
     public static void main(String[] args) {
-        int code = HoldpointCommand.create().execute(args);
-        System.exit(code);
+        boolean[] opened = {false};
+        WindowLauncher launcher = () -> {
+            MainWindow.launch();
+            opened[0] = true;
+        };
+        if (args.length == 0 && !GraphicsEnvironment.isHeadless()) {
+            launcher.open();
+            return;
+        }
+        int code = HoldpointCommand.create(launcher).execute(args);
+        if (!opened[0] || code != 0) {
+            System.exit(code);
+        }
     }
 }

@@ -6,18 +6,18 @@ public enum ResultColumn {
     VERDICT("Verdict"),
     /** The characteristic's name. */
     CHARACTERISTIC("Characteristic"),
-    /** The conclusion in words. */
-    CONCLUSION("Conclusion"),
+    /** What the tests found, in words. */
+    CONCLUSION("Finding"),
     /** Unit of measure. */
     UNIT("Unit"),
     /** The estimated difference after − before. */
-    DIFFERENCE("Difference (after − before)"),
+    DIFFERENCE("Difference"),
     /** The (1 − 2α) equivalence interval, with its level. */
     INTERVAL("Equivalence interval"),
     /** The margin in units. */
     MARGIN("Margin"),
     /** sd(after)/sd(before). */
-    SD_RATIO("sd after / before");
+    SD_RATIO("sd ratio");
 
     private final String label;
 

@@ -152,7 +152,7 @@ public final class ResultsTable {
         return switch (col) {
             case VERDICT -> VerdictLook.of(r.verdict().status());
             case CHARACTERISTIC -> r.name();
-            case CONCLUSION -> VerdictLook.conclusion(r);
+            case CONCLUSION -> VerdictLook.finding(r);
             case UNIT -> r.unit() == null ? "" : r.unit();
             case DIFFERENCE -> r.decidingTest().estimate();
             case INTERVAL -> eq == null ? "" : Format.percent(eq.level()) + ": (" + Format.num(eq.ciLower()) + ", "

@@ -74,19 +74,19 @@ public enum VerdictLook {
      * @return the words
      */
     public static String conclusion(CharacteristicResult r) {
-        VerdictLook look = of(r.verdict().status());
+        return of(r.verdict().status()).words() + ": " + finding(r);
+    }
+
+    /**
+     * What the tests found, in a few words, without the status: e.g. "equivalent; spread above limit".
+     *
+     * @param r the result
+     * @return the words
+     */
+    public static String finding(CharacteristicResult r) {
         var eq = r.decidingTost();
-        if (eq == null) {
-            return look.words() + ": no margin set";
-        }
-        String c = eq.conclusion().words();
+        String c = eq == null ? "no margin set" : eq.conclusion().words();
         boolean spreadFailed = r.sdGrowth() != null && !r.sdGrowth().met();
-        if (spreadFailed && eq.conclusion().claimHolds()) {
-            return look.words() + ": " + c + ", but the spread grew beyond the limit";
-        }
-        if (spreadFailed) {
-            return look.words() + ": " + c + ", and the spread grew beyond the limit";
-        }
-        return look.words() + ": " + c;
+        return spreadFailed ? c + "; spread above limit" : c;
     }
 }

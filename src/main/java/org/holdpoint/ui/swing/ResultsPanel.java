@@ -1,0 +1,284 @@
+package org.holdpoint.ui.swing;
+
+import java.awt.BorderLayout;
+import java.awt.Component;
+import java.awt.FlowLayout;
+import java.util.Comparator;
+import java.util.List;
+import javax.swing.BorderFactory;
+import javax.swing.JComboBox;
+import javax.swing.JComponent;
+import javax.swing.JEditorPane;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.ListSelectionModel;
+import javax.swing.RowFilter;
+import javax.swing.SwingWorker;
+import javax.swing.table.AbstractTableModel;
+import javax.swing.table.DefaultTableCellRenderer;
+import javax.swing.table.TableRowSorter;
+import org.holdpoint.chart.BoxPlotChart;
+import org.holdpoint.chart.ChartTheme;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.ui.model.ResultColumn;
+import org.holdpoint.ui.model.ResultDetail;
+import org.holdpoint.ui.model.ResultsTable;
+import org.holdpoint.ui.model.StudySession;
+import org.holdpoint.ui.model.VerdictLook;
+import org.holdpoint.workflow.Format;
+import org.jfree.chart.ChartPanel;
+import org.jfree.chart.JFreeChart;
+
+/** The Results step: one row per characteristic, sortable and filterable; the selected one in detail with its chart. */
+final class ResultsPanel extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private final transient StudySession session;
+    private final transient ResultsTable results;
+    private final Model model = new Model();
+    private final JTable table = new JTable(model);
+    private final TableRowSorter<Model> sorter = new TableRowSorter<>(model);
+    private final JComboBox<ResultsTable.Filter> filter = new JComboBox<>(ResultsTable.Filter.values());
+    private final JLabel shown = new JLabel(" ");
+    private final JEditorPane detail = new JEditorPane("text/html", "");
+    private final ChartPanel chart = new ChartPanel(null, false, true, true, true, true);
+    private final JLabel chartNote = new JLabel(" ", JLabel.CENTER);
+    private transient SwingWorker<JFreeChart, Void> chartWorker;
+
+    ResultsPanel(StudySession session) {
+        super(new BorderLayout());
+        this.session = session;
+        this.results = session.results();
+        createComponents();
+        layoutComponents();
+        refreshRows();
+    }
+
+    private void createComponents() {
+        table.setName("results");
+        table.setRowSorter(sorter);
+        table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
+        table.setRowHeight(Math.max(table.getRowHeight(), 28));
+        table.setFillsViewportHeight(true);
+        table.setDefaultRenderer(VerdictLook.class, new VerdictRenderer());
+        table.setDefaultRenderer(Double.class, new NumberRenderer());
+        sorter.setComparator(ResultColumn.VERDICT.ordinal(), Comparator.comparingInt(VerdictLook::urgency));
+        sorter.setRowFilter(new RowFilter<Model, Integer>() {
+            @Override
+            public boolean include(Entry<? extends Model, ? extends Integer> e) {
+                return results.shows(e.getIdentifier());
+            }
+        });
+        int[] widths = {120, 190, 230, 50, 110, 250, 150, 80};
+        for (int i = 0; i < widths.length; i++) {
+            table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+        }
+        table.getSelectionModel().addListSelectionListener(e -> {
+            if (!e.getValueIsAdjusting() && table.getSelectedRow() >= 0) {
+                results.select(results.row(table.convertRowIndexToModel(table.getSelectedRow())).name());
+            }
+        });
+        filter.setName("filter");
+        filter.addActionListener(e -> results.setFilter((ResultsTable.Filter) filter.getSelectedItem()));
+        results.addListener(ResultsTable.Property.FILTER, e -> {
+            filter.setSelectedItem(results.filter());
+            sorter.allRowsChanged();
+            refreshShown();
+        });
+        results.addListener(ResultsTable.Property.RESULT, e -> refreshRows());
+        results.addListener(ResultsTable.Property.SELECTED, e -> refreshDetail());
+        detail.setEditable(false);
+        detail.putClientProperty(JEditorPane.HONOR_DISPLAY_PROPERTIES, Boolean.TRUE);
+        detail.setName("detail");
+        chart.setMinimumDrawWidth(200);
+        chart.setMinimumDrawHeight(150);
+        chart.setMaximumDrawWidth(4000);
+        chart.setMaximumDrawHeight(3000);
+    }
+
+    private void layoutComponents() {
+        JPanel top = new JPanel(new BorderLayout());
+        top.setBorder(BorderFactory.createEmptyBorder(16, 24, 8, 24));
+        top.add(Bind.heading("Verdict per characteristic"), BorderLayout.NORTH);
+        JPanel tools = new JPanel(new FlowLayout(FlowLayout.LEFT, 8, 4));
+        tools.add(Bind.label("Show", 'W', filter));
+        tools.add(filter);
+        tools.add(shown);
+        tools.add(Bind.hint("Difference = after − before; sd ratio = sd(after)/sd(before). Click a heading to sort; "
+                + "select a row for its numbers and chart."));
+        top.add(tools, BorderLayout.SOUTH);
+        add(top, BorderLayout.NORTH);
+        JScrollPane detailScroll = new JScrollPane(detail);
+        JPanel chartBox = new JPanel(new BorderLayout());
+        chartBox.add(chart, BorderLayout.CENTER);
+        chartBox.add(chartNote, BorderLayout.SOUTH);
+        JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, detailScroll, chartBox);
+        lower.setResizeWeight(0.5);
+        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), lower);
+        split.setResizeWeight(0.38);
+        split.setBorder(BorderFactory.createEmptyBorder(0, 24, 12, 24));
+        add(split, BorderLayout.CENTER);
+    }
+
+    private void refreshRows() {
+        String keep = results.selected();
+        model.fireTableDataChanged();
+        refreshShown();
+        selectInTable(keep);
+        refreshDetail();
+    }
+
+    private void selectInTable(String name) {
+        for (int v = 0; v < table.getRowCount(); v++) {
+            if (results.row(table.convertRowIndexToModel(v)).name().equals(name)) {
+                table.setRowSelectionInterval(v, v);
+                return;
+            }
+        }
+    }
+
+    private void refreshShown() {
+        shown.setText(results.rowCount() == 0 ? "" : results.shownCount() + " of " + results.rowCount() + " shown");
+    }
+
+    private void refreshDetail() {
+        CharacteristicResult r = results.selectedResult();
+        if (r == null) {
+            detail.setText("<html><body><p>No characteristic selected.</p></body></html>");
+            chart.setChart(null);
+            chartNote.setText(" ");
+            return;
+        }
+        detail.setText(html(r));
+        detail.setCaretPosition(0);
+        drawChart(session.characteristic(r.name()), r);
+    }
+
+    private void drawChart(CharacteristicData data, CharacteristicResult r) {
+        if (chartWorker != null) {
+            chartWorker.cancel(true);
+        }
+        chart.setChart(null);
+        if (data == null) {
+            chartNote.setText("No data for a chart.");
+            return;
+        }
+        chartNote.setText("Drawing the chart…");
+        chartWorker = new SwingWorker<>() {
+            /** Runs on a worker thread: box statistics and the chart object, no painting. */
+            @Override
+            protected JFreeChart doInBackground() {
+                return BoxPlotChart.create(data, r.settings().spec(), ChartTheme.withDefaults());
+            }
+
+            /** Runs on the event thread. */
+            @Override
+            protected void done() {
+                if (isCancelled()) {
+                    return;
+                }
+                try {
+                    chart.setChart(get());
+                    chartNote.setText(" ");
+                } catch (InterruptedException | java.util.concurrent.ExecutionException e) {
+                    chartNote.setText("The chart could not be drawn: " + (e.getCause() == null ? e.getMessage()
+                            : e.getCause().getMessage()));
+                }
+            }
+        };
+        chartWorker.execute();
+    }
+
+    private static String html(CharacteristicResult r) {
+        StringBuilder sb = new StringBuilder("<html><body style='margin:8px'>");
+        sb.append("<h2 style='margin-top:0'>").append(Dialogs.esc(r.name())).append("</h2>");
+        List<ResultDetail.Section> sections = ResultDetail.of(r);
+        for (ResultDetail.Section s : sections) {
+            sb.append("<p style='margin-top:10px; margin-bottom:2px'><b>").append(Dialogs.esc(s.title()))
+                    .append("</b></p><table cellspacing='0' cellpadding='2'>");
+            for (ResultDetail.Line l : s.lines()) {
+                sb.append("<tr><td valign='top' width='170'>").append(Dialogs.esc(l.label())).append("</td><td>")
+                        .append(Dialogs.esc(l.value())).append("</td></tr>");
+            }
+            sb.append("</table>");
+        }
+        return sb.append("</body></html>").toString();
+    }
+
+    /** @return the results table (for tests) */
+    JTable table() {
+        return table;
+    }
+
+    /** @return the chart panel (for tests) */
+    ChartPanel chartPanel() {
+        return chart;
+    }
+
+    /** The results as a table, typed for sorting. */
+    private final class Model extends AbstractTableModel {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public int getRowCount() {
+            return results == null ? 0 : results.rowCount();
+        }
+
+        @Override
+        public int getColumnCount() {
+            return ResultColumn.values().length;
+        }
+
+        @Override
+        public String getColumnName(int c) {
+            return ResultColumn.values()[c].label();
+        }
+
+        @Override
+        public Class<?> getColumnClass(int c) {
+            return ResultColumn.values()[c].type();
+        }
+
+        @Override
+        public Object getValueAt(int r, int c) {
+            return results.value(r, ResultColumn.values()[c]);
+        }
+    }
+
+    /** The verdict's shape and words. */
+    private static final class VerdictRenderer extends DefaultTableCellRenderer {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public Component getTableCellRendererComponent(JTable t, Object v, boolean sel, boolean focus, int r, int c) {
+            super.getTableCellRendererComponent(t, v, sel, focus, r, c);
+            VerdictLook look = (VerdictLook) v;
+            setIcon(new VerdictIcon(look, 16));
+            setText(look.words());
+            setIconTextGap(8);
+            return this;
+        }
+    }
+
+    /** Numbers right-aligned, "undefined" for a missing value. */
+    private static final class NumberRenderer extends DefaultTableCellRenderer {
+        private static final long serialVersionUID = 1L;
+
+        NumberRenderer() {
+            setHorizontalAlignment(RIGHT);
+        }
+
+        @Override
+        protected void setValue(Object v) {
+            setText(v == null ? "undefined" : Format.num((Double) v));
+        }
+    }
+
+    /** @return the component that gets the focus when the step opens */
+    JComponent focusTarget() {
+        return table;
+    }
+}

@@ -1,0 +1,42 @@
+package org.holdpoint.ui.swing;
+
+import java.nio.file.Path;
+import org.holdpoint.ui.model.Step;
+
+/**
+ * Not a test: walks through the steps of the window on the demo study and saves a screenshot of each
+ * into the folder given (run under xvfb-run; see docs/performance.md and DEVELOPERS.md).
+ */
+public final class ScreenshotTour {
+    private ScreenshotTour() {
+    }
+
+    /**
+     * @param args output folder, theme (LIGHT or DARK), width, height
+     * @throws Exception on failure
+     */
+    public static void main(String[] args) throws Exception {
+        Path out = Path.of(args.length > 0 ? args[0] : "target/screens");
+        Themes theme = args.length > 1 ? Themes.valueOf(args[1]) : Themes.LIGHT;
+        int w = args.length > 2 ? Integer.parseInt(args[2]) : 1440;
+        int h = args.length > 3 ? Integer.parseInt(args[3]) : 900;
+        WindowDriver d = new WindowDriver();
+        MainWindow win = d.open(theme, w, h);
+        WindowDriver.onEdt(() -> {
+            win.session().openDemo();
+            return null;
+        });
+        WindowDriver.await("the demo results", () -> win.session().results().result() != null, 60_000);
+        String suffix = theme == Themes.DARK ? "-dark" : "";
+        for (Step s : Step.values()) {
+            WindowDriver.onEdt(() -> {
+                win.show(s);
+                return null;
+            });
+            d.screenshot(out.resolve((s.ordinal() + 1) + "-" + s.name().toLowerCase(java.util.Locale.ROOT) + suffix
+                    + ".png"));
+        }
+        d.close();
+        System.exit(0);
+    }
+}
