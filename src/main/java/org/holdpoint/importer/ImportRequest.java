@@ -46,4 +46,161 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
         return new ImportRequest(file, null, null, null, null, null, null, false, null, null, null, null, null, null,
                 null, null, null, null, null, null, null, null);
     }
+
+    /**
+     * @param sheet the sheet (name or 1-based index) of the one file
+     * @return this request with sheet replaced
+     */
+    public ImportRequest withSheet(String sheet) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param beforeSheet the sheet of the before file
+     * @return this request with beforeSheet replaced
+     */
+    public ImportRequest withBeforeSheet(String beforeSheet) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param afterSheet the sheet of the after file
+     * @return this request with afterSheet replaced
+     */
+    public ImportRequest withAfterSheet(String afterSheet) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param layout the layout (null: detect)
+     * @return this request with layout replaced
+     */
+    public ImportRequest withLayout(Layout layout) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param paired whether pairs are matched by unit id
+     * @return this request with paired replaced
+     */
+    public ImportRequest withPaired(boolean paired) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param groupColumn the header of the group column
+     * @return this request with groupColumn replaced
+     */
+    public ImportRequest withGroupColumn(String groupColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param valueColumn the header of the value column
+     * @return this request with valueColumn replaced
+     */
+    public ImportRequest withValueColumn(String valueColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param characteristicColumn the header of the characteristic column
+     * @return this request with characteristicColumn replaced
+     */
+    public ImportRequest withCharacteristicColumn(String characteristicColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param beforeColumn the header of the before column
+     * @return this request with beforeColumn replaced
+     */
+    public ImportRequest withBeforeColumn(String beforeColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param afterColumn the header of the after column
+     * @return this request with afterColumn replaced
+     */
+    public ImportRequest withAfterColumn(String afterColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param unitIdColumn the header of the unit id column
+     * @return this request with unitIdColumn replaced
+     */
+    public ImportRequest withUnitIdColumn(String unitIdColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param lotColumn the header of the lot column
+     * @return this request with lotColumn replaced
+     */
+    public ImportRequest withLotColumn(String lotColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param subgroupColumn the header of the subgroup column
+     * @return this request with subgroupColumn replaced
+     */
+    public ImportRequest withSubgroupColumn(String subgroupColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param sequenceColumn the header of the sequence column
+     * @return this request with sequenceColumn replaced
+     */
+    public ImportRequest withSequenceColumn(String sequenceColumn) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param delimiter the text delimiter (null: detect)
+     * @return this request with delimiter replaced
+     */
+    public ImportRequest withDelimiter(Character delimiter) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param decimalSeparator the decimal separator (null: detect)
+     * @return this request with decimalSeparator replaced
+     */
+    public ImportRequest withDecimalSeparator(Character decimalSeparator) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param headerRow the 1-based header row (null: detect)
+     * @return this request with headerRow replaced
+     */
+    public ImportRequest withHeaderRow(Integer headerRow) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * @param beforeLabel the group label of before rows
+     * @param afterLabel  the group label of after rows
+     * @return this request with the labels replaced
+     */
+    public ImportRequest withLabels(String beforeLabel, String afterLabel) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+    }
+
+    /**
+     * A request for a before file and an after file, everything else detected.
+     *
+     * @param beforeFile the file of the before group
+     * @param afterFile  the file of the after group
+     * @return the request
+     */
+    public static ImportRequest ofTwo(Path beforeFile, Path afterFile) {
+        return new ImportRequest(null, beforeFile, afterFile, null, null, null, null, false, null, null, null, null,
+                null, null, null, null, null, null, null, null, null, null);
+    }
 }

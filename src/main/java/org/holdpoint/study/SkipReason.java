@@ -22,6 +22,10 @@ public enum SkipReason {
     UNPAIRED("unit present in only one group"),
     /** A cell outside the header's column set. */
     OUTSIDE_COLUMNS("outside the header's columns"),
+    /** A value whose row names no characteristic (stacked layout with a characteristic column). */
+    NO_CHARACTERISTIC("no characteristic named in its row"),
+    /** A value whose row has no unit id (paired layouts). */
+    NO_UNIT_ID("no unit id in its row (paired)"),
     /** Excluded by the user, with a reason. */
     EXCLUDED("excluded by the user");
 

@@ -1,0 +1,340 @@
+package org.holdpoint.importer;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.stream.Collectors;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.Dataset;
+import org.holdpoint.study.InputInfo;
+import org.holdpoint.study.Layout;
+import org.holdpoint.study.Origin;
+import org.holdpoint.study.SkipReason;
+
+/**
+ * Imports a change study's before/after data from a workbook (.xlsx streamed, .xls) or delimited
+ * text (.csv, .tsv, .txt), one file holding both groups or a before file and an after file. The kind
+ * of file is told from its first bytes (zip → workbook, OLE2 → binary workbook, else text), never only
+ * from its name. Every value kept carries its origin; every cell of a value column that is not used is
+ * counted and listed with its reason in the {@link org.holdpoint.study.ImportReport}; the layout used
+ * is stated there. Input files are only read, never written.
+ */
+public final class DataImporter {
+
+    /** Creates an importer; it holds no state between reads. */
+    public DataImporter() {
+    }
+
+    /**
+     * Reads the request's file or files.
+     *
+     * @param request what to read and how
+     * @return the characteristics' data, the inputs (with SHA-256) and the import report
+     * @throws ImportException for any input that cannot be read as a change study; the message names the
+     *                         file, sheet and cell or row and column, and says what to do
+     */
+    public Dataset read(ImportRequest request) {
+        if (request == null) {
+            throw new ImportException("no input given: name a data file, or a before file and an after file");
+        }
+        try {
+            return doRead(request);
+        } catch (ImportException e) {
+            throw e;
+        } catch (RuntimeException | StackOverflowError e) {
+            throw new ImportException(e, "%s could not be read: %s. The file may be damaged; open it in its program, "
+                    + "save a fresh copy and try again", describe(request), e.getMessage());
+        }
+    }
+
+    private static String describe(ImportRequest r) {
+        return r.file() != null ? "file " + r.file() : "files " + r.beforeFile() + " and " + r.afterFile();
+    }
+
+    private Dataset doRead(ImportRequest r) {
+        boolean one = r.file() != null;
+        boolean two = r.beforeFile() != null || r.afterFile() != null;
+        if (one == two || two && (r.beforeFile() == null || r.afterFile() == null)) {
+            throw new ImportException("give either one data file, or both a before file and an after file (got %s)",
+                    describe(r));
+        }
+        SkipLog log = new SkipLog();
+        Map<String, LayoutReader.Accum> accums = new LinkedHashMap<>();
+        List<InputInfo> inputs = new ArrayList<>();
+        if (one) {
+            Source s = readSource(r.file(), r.sheet(), r, Plan.Role.BOTH, log, accums);
+            inputs.add(new InputInfo(s.name, s.sha256, s.sheet, s.plan.layout(), "data"));
+            return finish(r, List.of(s), accums, inputs, log, s.plan.paired());
+        }
+        Map<String, LayoutReader.Accum> bAcc = new LinkedHashMap<>();
+        Map<String, LayoutReader.Accum> aAcc = new LinkedHashMap<>();
+        Source b = readSource(r.beforeFile(), r.beforeSheet() != null ? r.beforeSheet() : r.sheet(), r,
+                Plan.Role.BEFORE, log, bAcc);
+        Source a = readSource(r.afterFile(), r.afterSheet() != null ? r.afterSheet() : r.sheet(), r, Plan.Role.AFTER,
+                log, aAcc);
+        inputs.add(new InputInfo(b.name, b.sha256, b.sheet, Layout.SEPARATE, "before"));
+        inputs.add(new InputInfo(a.name, a.sha256, a.sheet, Layout.SEPARATE, "after"));
+        merge(bAcc, aAcc, accums, b, a, log);
+        return finish(r, List.of(b, a), accums, inputs, log, r.paired() || b.plan.paired() || a.plan.paired());
+    }
+
+    /** A file read: its name, hash, sheet and plan, and the labels that matched no group. */
+    private record Source(String name, String sha256, String sheet, Plan plan, Set<String> unknownLabels) {
+    }
+
+    private Source readSource(Path path, String sheet, ImportRequest r, Plan.Role role, SkipLog log,
+            Map<String, LayoutReader.Accum> accums) {
+        String name = path.toString();
+        FileKind kind = FileKind.sniff(path, name);
+        String sha = Sha256.of(path, name);
+        SheetData data;
+        try {
+            data = switch (kind) {
+                case ZIP -> XlsxReader.read(path, name, sheet, decimal(r), log.messages());
+                case OLE2 -> XlsReader.read(path, name, sheet, decimal(r), log.messages());
+                case TEXT -> {
+                    if (sheet != null) {
+                        log.message(name + " is a text file; the sheet option is ignored for it");
+                    }
+                    yield CsvReader.read(path, name, r.delimiter(), r.decimalSeparator(), log.messages());
+                }
+            };
+        } catch (ImportException e) {
+            throw e;
+        } catch (RuntimeException | StackOverflowError e) {
+            throw new ImportException(e, "file %s could not be read: %s. The file may be damaged; open it in its "
+                    + "program, save a fresh copy and try again", name, e.getMessage());
+        }
+        Header header = HeaderDetector.detect(data, r.headerRow());
+        if (header.row() > 1) {
+            log.message(String.format(Locale.ROOT, "%s: header in row %d (rows above it are not read)", data.where(),
+                    header.row()));
+        }
+        Plan plan = LayoutResolver.resolve(data, header, r, role, stem(path));
+        log.message(describePlan(data, plan, r.layout() != null));
+        if (data.sheet() != null && data.numbersFromText() > 0) {
+            log.message(String.format(Locale.ROOT, "%s: %,d numbers stored as text were read as numbers", data.where(),
+                    data.numbersFromText()));
+        }
+        reportOutsideColumns(data, plan, log);
+        Set<String> unknown = LayoutReader.read(data, plan, log, accums);
+        for (LayoutReader.Accum a : accums.values()) {
+            a.unknownLabels.addAll(unknown);
+        }
+        return new Source(name, sha, data.sheet(), plan, unknown);
+    }
+
+    private static Character decimal(ImportRequest r) {
+        return r.decimalSeparator();
+    }
+
+    private static String stem(Path path) {
+        Path f = path.getFileName();
+        String s = f == null ? path.toString() : f.toString();
+        int dot = s.lastIndexOf('.');
+        return dot > 0 ? s.substring(0, dot) : s;
+    }
+
+    private static String describePlan(SheetData data, Plan p, boolean requested) {
+        StringBuilder sb = new StringBuilder(data.where()).append(": layout ").append(p.layout().words());
+        if (p.role() != Plan.Role.BOTH) {
+            sb.append(" (").append(p.role() == Plan.Role.BEFORE ? "before" : "after").append(" values only)");
+        }
+        if (p.paired()) {
+            sb.append(", pairs matched by unit id in ").append(col(p.header(), p.unitCol()));
+        }
+        sb.append(requested ? " (as requested)" : " (detected)");
+        if (p.groupCol() >= 0) {
+            sb.append("; group column ").append(col(p.header(), p.groupCol())).append(" with labels \"")
+                    .append(p.beforeKey()).append("\" and \"").append(p.afterKey()).append('"');
+        }
+        if (p.charCol() >= 0) {
+            sb.append("; characteristic column ").append(col(p.header(), p.charCol()));
+        }
+        List<String> t = new ArrayList<>();
+        for (Plan.Target target : p.targets()) {
+            if (target.beforeCol() >= 0) {
+                t.add((target.name() == null ? "" : target.name() + ": ") + "before " + col(p.header(),
+                        target.beforeCol()) + ", after " + col(p.header(), target.afterCol()));
+            } else {
+                t.add(col(p.header(), target.column()));
+            }
+        }
+        sb.append(t.size() == 1 ? "; value column " : "; value columns ")
+                .append(t.size() > 12 ? String.join(", ", t.subList(0, 12)) + String.format(Locale.ROOT,
+                        " and %d more", t.size() - 12) : String.join(", ", t));
+        return sb.toString();
+    }
+
+    private static String col(Header h, int c) {
+        ColumnNames.Name n = h.name(c);
+        return (n == null ? "" : "\"" + n.raw().strip() + "\" ") + "(" + Origin.columnName(c + 1) + ")";
+    }
+
+    /** Cells below the header in columns the header does not name are listed as outside the columns. */
+    private static void reportOutsideColumns(SheetData data, Plan plan, SkipLog log) {
+        Header h = plan.header();
+        List<String> unused = new ArrayList<>();
+        for (int c = 0; c < data.columnCount(); c++) {
+            SheetColumn col = data.column(c);
+            if (col == null) {
+                continue;
+            }
+            int from = col.firstAtOrAfter(h.row() + 1);
+            if (h.name(c) == null) {
+                for (int i = from; i < col.size(); i++) {
+                    log.skip(null, new Origin(data.file(), data.sheet(), col.row(i), c + 1), SkipReason.OUTSIDE_COLUMNS,
+                            data.display(col, i));
+                }
+            } else if (!used(plan, c) && from < col.size()) {
+                unused.add(col(h, c));
+            }
+        }
+        if (!unused.isEmpty()) {
+            log.message(data.where() + ": columns not used: " + (unused.size() > 12
+                    ? String.join(", ", unused.subList(0, 12)) + " and " + (unused.size() - 12) + " more"
+                    : String.join(", ", unused)));
+        }
+    }
+
+    private static boolean used(Plan p, int c) {
+        if (c == p.groupCol() || c == p.charCol() || c == p.unitCol() || c == p.lotCol() || c == p.subgroupCol()
+                || c == p.sequenceCol() || c == p.uomCol()) {
+            return true;
+        }
+        return p.targets().stream().anyMatch(t -> t.column() == c || t.beforeCol() == c || t.afterCol() == c);
+    }
+
+    /** Joins the before file's and the after file's characteristics by name (or the only one of each). */
+    private static void merge(Map<String, LayoutReader.Accum> bAcc, Map<String, LayoutReader.Accum> aAcc,
+            Map<String, LayoutReader.Accum> out, Source b, Source a, SkipLog log) {
+        if (bAcc.size() == 1 && aAcc.size() == 1 && !bAcc.keySet().equals(aAcc.keySet())) {
+            LayoutReader.Accum x = bAcc.values().iterator().next();
+            LayoutReader.Accum y = aAcc.values().iterator().next();
+            log.message(String.format(Locale.ROOT, "the before file's \"%s\" and the after file's \"%s\" are read as "
+                    + "one characteristic, \"%s\"", x.name, y.name, x.name));
+            x.after = y.after;
+            x.skippedAfter.putAll(y.skippedAfter);
+            x.firstSkipAfter = y.firstSkipAfter;
+            x.unit = x.unit != null ? x.unit : y.unit;
+            x.unknownLabels.addAll(y.unknownLabels);
+            out.put(bAcc.keySet().iterator().next(), x);
+            return;
+        }
+        for (Map.Entry<String, LayoutReader.Accum> e : bAcc.entrySet()) {
+            LayoutReader.Accum y = aAcc.get(e.getKey());
+            if (y == null) {
+                throw new ImportException("characteristic \"%s\" is in the before file %s but not in the after file %s "
+                        + "(which has %s). Use the same column names in both files", e.getValue().name, b.name, a.name,
+                        names(aAcc));
+            }
+            LayoutReader.Accum x = e.getValue();
+            x.after = y.after;
+            x.skippedAfter.putAll(y.skippedAfter);
+            x.firstSkipAfter = y.firstSkipAfter;
+            x.unit = x.unit != null ? x.unit : y.unit;
+            x.unknownLabels.addAll(y.unknownLabels);
+            out.put(e.getKey(), x);
+        }
+        for (Map.Entry<String, LayoutReader.Accum> e : aAcc.entrySet()) {
+            if (!bAcc.containsKey(e.getKey())) {
+                throw new ImportException("characteristic \"%s\" is in the after file %s but not in the before file %s "
+                        + "(which has %s). Use the same column names in both files", e.getValue().name, a.name, b.name,
+                        names(bAcc));
+            }
+        }
+    }
+
+    private static String names(Map<String, LayoutReader.Accum> m) {
+        return m.values().stream().limit(10).map(x -> "\"" + x.name + "\"").collect(Collectors.joining(", "))
+                + (m.size() > 10 ? " and " + (m.size() - 10) + " more" : "");
+    }
+
+    private Dataset finish(ImportRequest r, List<Source> sources, Map<String, LayoutReader.Accum> accums,
+            List<InputInfo> inputs, SkipLog log, boolean paired) {
+        if (accums.isEmpty()) {
+            throw new ImportException("%s: no values found below the header. Check the layout options",
+                    describe(r));
+        }
+        List<CharacteristicData> out = new ArrayList<>();
+        Map<String, Long> used = new LinkedHashMap<>();
+        long total = 0;
+        List<String> problems = new ArrayList<>();
+        for (LayoutReader.Accum a : accums.values()) {
+            String p = missingGroup(a, sources);
+            if (p != null) {
+                problems.add(p);
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new ImportException("%s%s", problems.size() > 3 ? problems.size() + " characteristics cannot be "
+                    + "analysed; the first: " : "", String.join("; ", problems.subList(0, Math.min(3,
+                            problems.size()))));
+        }
+        for (LayoutReader.Accum a : accums.values()) {
+            GroupBuilder b = a.before;
+            GroupBuilder f = a.after;
+            List<String> unmatched = List.of();
+            if (paired) {
+                Pairing.Matched m = Pairing.match(a.name, b, f, log);
+                b = m.before();
+                f = m.after();
+                unmatched = m.unmatched();
+                if (!unmatched.isEmpty()) {
+                    log.message(String.format(Locale.ROOT, "characteristic %s: %d unit(s) found in only one group, left "
+                            + "out of the paired analysis: %s", a.name, unmatched.size(), unmatched.size() > 20
+                                    ? String.join(", ", unmatched.subList(0, 20)) + ", …" : String.join(", ", unmatched)));
+                }
+            }
+            out.add(new CharacteristicData(a.name, a.unit, b.build(), f.build(), paired, unmatched));
+            used.put(a.name, (long) b.size() + f.size());
+            total += b.size() + f.size();
+        }
+        return new Dataset(out, inputs, log.report(total, used));
+    }
+
+    /** A message when a characteristic lacks the before or the after values, else null. */
+    private static String missingGroup(LayoutReader.Accum a, List<Source> sources) {
+        boolean noB = a.before == null || a.before.size() == 0;
+        boolean noA = a.after == null || a.after.size() == 0;
+        if (!noB && !noA) {
+            return null;
+        }
+        String which = noB && noA ? "neither before nor after values" : noB ? "no before values" : "no after values";
+        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "characteristic \"%s\" (%s) has %s", a.name,
+                String.join("; ", a.where), which));
+        if (noB) {
+            sb.append(skipped("before", a.skippedBefore, a.firstSkipBefore));
+        }
+        if (noA) {
+            sb.append(skipped("after", a.skippedAfter, a.firstSkipAfter));
+        }
+        Plan plan = sources.get(0).plan();
+        if (!a.unknownLabels.isEmpty()) {
+            sb.append(String.format(Locale.ROOT, ". The group column holds the label(s) %s, which are neither \"%s\" nor "
+                    + "\"%s\": name the labels with the before-label and after-label options", a.unknownLabels
+                            .stream().map(s -> "\"" + s + "\"").collect(Collectors.joining(", ")), plan.beforeKey(),
+                    plan.afterKey()));
+        } else if (sources.size() == 1 && plan.groupCol() >= 0) {
+            sb.append(String.format(Locale.ROOT, ". Check that the group column holds both labels \"%s\" and \"%s\"",
+                    plan.beforeKey(), plan.afterKey()));
+        } else {
+            sb.append(". Check that the measurements are numbers in the value columns");
+        }
+        return sb.toString();
+    }
+
+    private static String skipped(String group, EnumMap<SkipReason, Long> m, String first) {
+        if (m.isEmpty()) {
+            return "";
+        }
+        String reasons = m.entrySet().stream().map(e -> e.getValue() + " " + e.getKey().words())
+                .collect(Collectors.joining(", "));
+        return String.format(Locale.ROOT, " (%s cells not used: %s; the first at %s)", group, reasons, first);
+    }
+}

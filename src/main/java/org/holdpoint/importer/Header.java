@@ -1,0 +1,72 @@
+package org.holdpoint.importer;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The header row of a sheet: its 1-based row and the parsed name of each 0-based column (null for a
+ * column without a header).
+ *
+ * @param row   the 1-based header row
+ * @param names the names per column
+ */
+record Header(int row, List<ColumnNames.Name> names) {
+
+    /** Copies the list (nulls allowed). */
+    Header {
+        names = java.util.Collections.unmodifiableList(new ArrayList<>(names));
+    }
+
+    /** @return the number of columns the header spans (up to its last named column) */
+    int width() {
+        return names.size();
+    }
+
+    /**
+     * @param col 0-based column
+     * @return the name, or null
+     */
+    ColumnNames.Name name(int col) {
+        return col < names.size() ? names.get(col) : null;
+    }
+
+    /**
+     * @param key a comparison key
+     * @return the first column with that key, or −1
+     */
+    int find(String key) {
+        for (int c = 0; c < names.size(); c++) {
+            ColumnNames.Name n = names.get(c);
+            if (n != null && n.key().equals(key)) {
+                return c;
+            }
+        }
+        return -1;
+    }
+
+    /** @return "phase (A), value (B), …" for messages, at most 12 names */
+    String describe() {
+        StringBuilder sb = new StringBuilder();
+        int shown = 0;
+        int total = 0;
+        for (int c = 0; c < names.size(); c++) {
+            ColumnNames.Name n = names.get(c);
+            if (n == null) {
+                continue;
+            }
+            total++;
+            if (shown < 12) {
+                if (shown > 0) {
+                    sb.append(", ");
+                }
+                sb.append('"').append(n.raw().strip()).append("\" (").append(org.holdpoint.study.Origin.columnName(c + 1))
+                        .append(')');
+                shown++;
+            }
+        }
+        if (total > shown) {
+            sb.append(String.format(java.util.Locale.ROOT, " and %,d more", total - shown));
+        }
+        return total == 0 ? "no named columns" : sb.toString();
+    }
+}

@@ -1,0 +1,318 @@
+package org.holdpoint.importer;
+
+import java.util.BitSet;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.Map;
+import java.util.Set;
+import org.holdpoint.study.Origin;
+import org.holdpoint.study.SkipReason;
+
+/**
+ * Reads the values of a sheet as a {@link Plan} says, into one {@link Accum} per characteristic, and
+ * records every cell of a value column that it does not use.
+ */
+final class LayoutReader {
+    private final SheetData data;
+    private final Plan plan;
+    private final SkipLog log;
+    private final Map<String, Accum> accums;
+    private final Set<String> unknownLabels = new LinkedHashSet<>();
+    private final BitSet rows;
+    private final int first;
+
+    /** The values of one characteristic found so far, with what was skipped per group. */
+    static final class Accum {
+        final String name;
+        String unit;
+        GroupBuilder before;
+        GroupBuilder after;
+        final EnumMap<SkipReason, Long> skippedBefore = new EnumMap<>(SkipReason.class);
+        final EnumMap<SkipReason, Long> skippedAfter = new EnumMap<>(SkipReason.class);
+        String firstSkipBefore;
+        String firstSkipAfter;
+        final Set<String> where = new LinkedHashSet<>();
+        final Set<String> unknownLabels = new LinkedHashSet<>();
+
+        Accum(String name) {
+            this.name = name;
+        }
+    }
+
+    private LayoutReader(SheetData data, Plan plan, SkipLog log, Map<String, Accum> accums) {
+        this.data = data;
+        this.plan = plan;
+        this.log = log;
+        this.accums = accums;
+        this.first = plan.header().row() + 1;
+        this.rows = rowsWithData();
+    }
+
+    /**
+     * Reads the sheet into {@code accums} (keyed by the characteristic's name key).
+     *
+     * @param data   the sheet
+     * @param plan   how to read it
+     * @param log    receives skipped cells
+     * @param accums the characteristics found so far (two files share one map)
+     * @return the labels found in the group column that matched neither label
+     */
+    static Set<String> read(SheetData data, Plan plan, SkipLog log, Map<String, Accum> accums) {
+        LayoutReader r = new LayoutReader(data, plan, log, accums);
+        if (r.rows.isEmpty()) {
+            throw new ImportException("%s holds only a header row (row %d) and no data below it. Add the measurements "
+                    + "below the header", data.where(), plan.header().row());
+        }
+        for (Plan.Target t : plan.targets()) {
+            if (t.beforeCol() >= 0) {
+                r.readColumn(t, t.beforeCol(), true);
+                r.readColumn(t, t.afterCol(), false);
+            } else {
+                r.readLabelled(t);
+            }
+        }
+        return r.unknownLabels;
+    }
+
+    /** Rows below the header with a cell in any column the plan reads. */
+    private BitSet rowsWithData() {
+        BitSet b = new BitSet();
+        mark(b, plan.groupCol());
+        mark(b, plan.charCol());
+        mark(b, plan.unitCol());
+        for (Plan.Target t : plan.targets()) {
+            mark(b, t.column());
+            mark(b, t.beforeCol());
+            mark(b, t.afterCol());
+        }
+        return b;
+    }
+
+    private void mark(BitSet b, int col) {
+        SheetColumn c = col < 0 ? null : data.column(col);
+        if (c == null) {
+            return;
+        }
+        for (int i = c.firstAtOrAfter(first); i < c.size(); i++) {
+            b.set(c.row(i));
+        }
+    }
+
+    /** Stacked and wide: the group of each row comes from its label (or from the file's role). */
+    private void readLabelled(Plan.Target t) {
+        int vc = t.column();
+        Cursor group = new Cursor(plan.groupCol());
+        Cursor value = new Cursor(vc);
+        Cursor chars = new Cursor(plan.charCol());
+        Cursor uom = new Cursor(plan.uomCol());
+        Traceability trace = new Traceability();
+        for (int r = rows.nextSetBit(first); r >= 0; r = rows.nextSetBit(r + 1)) {
+            int vi = value.at(r);
+            Boolean before = groupOf(group, r, vi, vc, t.name());
+            if (before == null) {
+                continue;
+            }
+            String name = t.name();
+            if (name == null) {
+                int ci = chars.at(r);
+                if (ci < 0) {
+                    if (vi >= 0) {
+                        log.skip(null, origin(r, vc), SkipReason.NO_CHARACTERISTIC, data.display(value.col, vi));
+                    }
+                    continue;
+                }
+                name = data.display(chars.col, ci);
+            }
+            Accum a = accum(name, t.unit());
+            if (a.unit == null && plan.uomCol() >= 0) {
+                int ui = uom.at(r);
+                if (ui >= 0) {
+                    a.unit = data.display(uom.col, ui);
+                }
+            }
+            take(a, before, value, vi, r, vc, trace);
+        }
+    }
+
+    /**
+     * The group of row r: true before, false after, null when the row is not used (unknown or missing
+     * label, recorded as a skip when the row has a value).
+     */
+    private Boolean groupOf(Cursor group, int r, int vi, int vc, String name) {
+        if (plan.groupCol() < 0) {
+            return plan.role() == Plan.Role.BEFORE;
+        }
+        int gi = group.at(r);
+        String key = gi < 0 ? null : group.col.kind(gi) == CellKind.NUMBER ? data.display(group.col, gi)
+                : data.key(group.col.payload(gi));
+        if (key != null && plan.role() != Plan.Role.AFTER && key.equals(plan.beforeKey())) {
+            return true;
+        }
+        if (key != null && plan.role() != Plan.Role.BEFORE && key.equals(plan.afterKey())) {
+            return false;
+        }
+        if (vi >= 0) {
+            String label = gi < 0 ? "" : data.display(group.col, gi);
+            if (unknownLabels.size() < 8 && !label.isEmpty()) {
+                unknownLabels.add(label);
+            }
+            log.skip(name, origin(r, vc), SkipReason.UNKNOWN_GROUP, label.isEmpty() ? "(no group label)" : label);
+        }
+        return null;
+    }
+
+    /** Side by side and paired: a whole column is one group. */
+    private void readColumn(Plan.Target t, int col, boolean before) {
+        Cursor value = new Cursor(col);
+        Traceability trace = new Traceability();
+        Accum a = accum(t.name(), t.unit());
+        if (value.col == null) {
+            return;
+        }
+        int last = value.col.size() == 0 ? 0 : value.col.row(value.col.size() - 1);
+        for (int r = rows.nextSetBit(first); r >= 0 && r <= last; r = rows.nextSetBit(r + 1)) {
+            int vi = value.at(r);
+            if (vi < 0 && plan.paired()) {
+                continue;
+            }
+            take(a, before, value, vi, r, col, trace);
+        }
+    }
+
+    private void take(Accum a, boolean before, Cursor value, int vi, int r, int col, Traceability trace) {
+        if (vi < 0) {
+            skip(a, before, r, col, SkipReason.BLANK, "");
+            return;
+        }
+        SheetColumn vcol = value.col;
+        CellKind kind = vcol.kind(vi);
+        if (kind == CellKind.OTHER_SEPARATOR) {
+            throw mixedSeparators(r, col, data.text(vcol.payload(vi)));
+        }
+        if (kind != CellKind.NUMBER) {
+            skip(a, before, r, col, kind.skipReason(), data.text(vcol.payload(vi)));
+            return;
+        }
+        String unitId = trace.unit(r);
+        if (plan.paired() && unitId == null) {
+            skip(a, before, r, col, SkipReason.NO_UNIT_ID, data.display(vcol, vi));
+            return;
+        }
+        GroupBuilder g = group(a, before);
+        g.add(vcol, vi, r, col);
+        if (plan.unitCol() >= 0 || plan.lotCol() >= 0 || plan.subgroupCol() >= 0 || plan.sequenceCol() >= 0) {
+            g.setLastTexts(unitId, trace.lot(r), trace.subgroup(r), trace.sequence(r));
+        }
+    }
+
+    private ImportException mixedSeparators(int r, int col, String text) {
+        char sep = data.decimalSeparator();
+        return new ImportException("%s, cell %s: \"%s\" is written with a decimal %s, but this file's numbers use a "
+                + "decimal %s (mixed decimal separators). Export the data again with one decimal separator, or give "
+                + "the decimal separator if it was detected wrongly", data.where(), Origin.columnName(col + 1) + r,
+                text, sep == '.' ? "comma" : "point", sep == '.' ? "point" : "comma");
+    }
+
+    private void skip(Accum a, boolean before, int r, int col, SkipReason reason, String text) {
+        log.skip(a.name, origin(r, col), reason, text);
+        EnumMap<SkipReason, Long> m = before ? a.skippedBefore : a.skippedAfter;
+        m.merge(reason, 1L, Long::sum);
+        if (before && a.firstSkipBefore == null) {
+            a.firstSkipBefore = Origin.columnName(col + 1) + r;
+        } else if (!before && a.firstSkipAfter == null) {
+            a.firstSkipAfter = Origin.columnName(col + 1) + r;
+        }
+    }
+
+    private GroupBuilder group(Accum a, boolean before) {
+        GroupBuilder g = before ? a.before : a.after;
+        if (g == null) {
+            g = new GroupBuilder(data.file(), data.sheet(), plan.unitCol() >= 0, plan.lotCol() >= 0,
+                    plan.subgroupCol() >= 0, plan.sequenceCol() >= 0);
+            if (before) {
+                a.before = g;
+            } else {
+                a.after = g;
+            }
+        }
+        return g;
+    }
+
+    private Accum accum(String name, String unit) {
+        String key = ColumnNames.key(name);
+        Accum a = accums.get(key);
+        if (a == null) {
+            a = new Accum(name);
+            accums.put(key, a);
+        }
+        if (a.unit == null) {
+            a.unit = unit;
+        }
+        a.where.add(data.where());
+        return a;
+    }
+
+    private Origin origin(int row, int col) {
+        return new Origin(data.file(), data.sheet(), row, col + 1);
+    }
+
+    /** Walks one column in row order; {@link #at} must be called with non-decreasing rows. */
+    private final class Cursor {
+        final SheetColumn col;
+        private int i;
+
+        Cursor(int column) {
+            col = column < 0 ? null : data.column(column);
+            i = col == null ? 0 : col.firstAtOrAfter(first);
+        }
+
+        int at(int row) {
+            if (col == null) {
+                return -1;
+            }
+            while (i < col.size() && col.row(i) < row) {
+                i++;
+            }
+            return i < col.size() && col.row(i) == row ? i : -1;
+        }
+
+        String text(int row) {
+            int k = at(row);
+            if (k < 0) {
+                return null;
+            }
+            String s = data.display(col, k);
+            return s.isBlank() ? null : s.strip();
+        }
+    }
+
+    /** The unit, lot, subgroup and sequence texts of a row. */
+    private final class Traceability {
+        private final Cursor unit = new Cursor(plan.unitCol());
+        private final Cursor lot = new Cursor(plan.lotCol());
+        private final Cursor subgroup = new Cursor(plan.subgroupCol());
+        private final Cursor sequence = new Cursor(plan.sequenceCol());
+
+        String unit(int r) {
+            return unit.text(r);
+        }
+
+        String lot(int r) {
+            return lot.text(r);
+        }
+
+        String subgroup(int r) {
+            return subgroup.text(r);
+        }
+
+        String sequence(int r) {
+            return sequence.text(r);
+        }
+    }
+
+    /** @return the accumulations with their insertion order (for callers building the map) */
+    static Map<String, Accum> newMap() {
+        return new LinkedHashMap<>();
+    }
+}

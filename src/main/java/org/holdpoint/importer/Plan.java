@@ -1,0 +1,58 @@
+package org.holdpoint.importer;
+
+import java.util.List;
+import org.holdpoint.study.Layout;
+
+/**
+ * How to read one sheet: the layout and the role of each column (0-based; −1 when absent).
+ *
+ * @param layout      the layout
+ * @param paired      whether values are matched by unit id
+ * @param role        which groups the sheet holds
+ * @param header      the header
+ * @param groupCol    the group (phase) column
+ * @param charCol     the characteristic-name column (stacked)
+ * @param targets     the value columns: one per characteristic, or before/after pairs
+ * @param unitCol     unit/serial id column
+ * @param lotCol      lot column
+ * @param subgroupCol subgroup column
+ * @param sequenceCol sequence/timestamp column
+ * @param uomCol      unit-of-measure column (stacked with a characteristic column)
+ * @param beforeKey   the before label's key
+ * @param afterKey    the after label's key
+ */
+record Plan(Layout layout, boolean paired, Role role, Header header, int groupCol, int charCol, List<Target> targets,
+        int unitCol, int lotCol, int subgroupCol, int sequenceCol, int uomCol, String beforeKey, String afterKey) {
+
+    /** Which groups a sheet holds. */
+    enum Role {
+        /** Both groups (one file). */
+        BOTH,
+        /** Only the before group (the before file of two). */
+        BEFORE,
+        /** Only the after group. */
+        AFTER
+    }
+
+    /**
+     * A characteristic's columns.
+     *
+     * @param name      the characteristic's name (null: taken from the characteristic column per row)
+     * @param unit      unit of measure from the header, or null
+     * @param column    the value column (stacked, wide), or −1
+     * @param beforeCol the before column (side by side, paired), or −1
+     * @param afterCol  the after column, or −1
+     */
+    record Target(String name, String unit, int column, int beforeCol, int afterCol) {
+    }
+
+    /** Copies the targets. */
+    Plan {
+        targets = List.copyOf(targets);
+    }
+
+    /** @return whether the layout has a before and an after column per characteristic */
+    boolean columnsPerGroup() {
+        return targets.stream().anyMatch(t -> t.beforeCol() >= 0);
+    }
+}

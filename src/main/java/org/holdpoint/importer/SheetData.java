@@ -1,0 +1,285 @@
+package org.holdpoint.importer;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One sheet (or text file) as read, column by column in primitive arrays, with a table of the
+ * distinct texts and the merged cell ranges. Sources fill it cell by cell; the layouts read it.
+ */
+final class SheetData {
+    /** Columns above this many are refused: a real export never has them, noise often does. */
+    static final int MAX_COLUMNS = 16_384;
+
+    private final String file;
+    private final String sheet;
+    private SheetColumn[] columns = new SheetColumn[16];
+    private int columnCount;
+    private int lastRow;
+    private long cellCount;
+    private final Map<String, Integer> textIds = new HashMap<>();
+    private final List<String> texts = new ArrayList<>();
+    private final List<int[]> merged = new ArrayList<>();
+    private final DecimalParser parser;
+    private String[] keys = new String[16];
+    private long numbersFromText;
+
+    /**
+     * @param file             the file name as given
+     * @param sheet            the sheet name, or null for text files
+     * @param decimalSeparator the decimal separator for numbers written as text
+     */
+    SheetData(String file, String sheet, char decimalSeparator) {
+        this.file = file;
+        this.sheet = sheet;
+        this.parser = new DecimalParser(decimalSeparator);
+    }
+
+    /** @return the file name */
+    String file() {
+        return file;
+    }
+
+    /** @return the sheet name, or null */
+    String sheet() {
+        return sheet;
+    }
+
+    /** @return 1 + the highest 0-based column with a cell */
+    int columnCount() {
+        return columnCount;
+    }
+
+    /** @return the highest 1-based row with a cell (0 when empty) */
+    int lastRow() {
+        return lastRow;
+    }
+
+    /** @return the number of non-blank cells */
+    long cellCount() {
+        return cellCount;
+    }
+
+    /** @return the decimal separator used for numbers written as text */
+    char decimalSeparator() {
+        return parser.separator();
+    }
+
+    /** @return how many cells held numbers written as text */
+    long numbersFromText() {
+        return numbersFromText;
+    }
+
+    /**
+     * @param col 0-based column
+     * @return the column, or null when it has no cell
+     */
+    SheetColumn column(int col) {
+        return col < columnCount ? columns[col] : null;
+    }
+
+    /** @return the text of a string id */
+    String text(long id) {
+        return texts.get((int) id);
+    }
+
+    /**
+     * @param id a string id
+     * @return the comparison key of that text ({@link ColumnNames#key}), cached
+     */
+    String key(long id) {
+        int i = (int) id;
+        if (keys.length < texts.size()) {
+            keys = Arrays.copyOf(keys, Math.max(texts.size(), keys.length * 2));
+        }
+        String k = keys[i];
+        if (k == null) {
+            k = ColumnNames.key(texts.get(i));
+            keys[i] = k;
+        }
+        return k;
+    }
+
+    /** @return the 4-int ranges {firstRow, lastRow, firstCol, lastCol} (1-based rows, 0-based columns) */
+    List<int[]> merged() {
+        return merged;
+    }
+
+    void addMerged(int firstRow, int lastRow, int firstCol, int lastCol) {
+        merged.add(new int[] {firstRow, lastRow, firstCol, lastCol});
+    }
+
+    private SheetColumn col(int row, int col) {
+        if (col >= MAX_COLUMNS) {
+            throw new ImportException("%s has a cell beyond column %s (row %d); a sheet may use at most %d columns. "
+                    + "Delete the stray cells or copy the data to a new sheet", where(), org.holdpoint.study.Origin.columnName(MAX_COLUMNS),
+                    row, MAX_COLUMNS);
+        }
+        if (col >= columns.length) {
+            columns = Arrays.copyOf(columns, Math.max(col + 1, columns.length * 2));
+        }
+        SheetColumn c = columns[col];
+        if (c == null) {
+            c = new SheetColumn();
+            columns[col] = c;
+        }
+        if (col >= columnCount) {
+            columnCount = col + 1;
+        }
+        if (row > lastRow) {
+            lastRow = row;
+        }
+        cellCount++;
+        return c;
+    }
+
+    /** @return "file X" or "file X, sheet S" */
+    String where() {
+        return sheet == null ? "file " + file : "file " + file + ", sheet " + sheet;
+    }
+
+    /** Adds an exactly known number. */
+    void addExact(int row, int col, long unscaled, int scale) {
+        col(row, col).add(row, CellKind.NUMBER, scale, unscaled);
+    }
+
+    /** Adds a number known only as a double. */
+    void addDouble(int row, int col, double value) {
+        col(row, col).add(row, CellKind.NUMBER, -1, Double.doubleToRawLongBits(value));
+    }
+
+    /** Adds a cell of a non-number kind with its text. */
+    void addOther(int row, int col, CellKind kind, String text) {
+        col(row, col).add(row, kind, 0, id(text));
+    }
+
+    /**
+     * Adds a numeric cell from its stored number text (exact when the text allows).
+     *
+     * @return false when the text is not a number (nothing added)
+     */
+    boolean addNumberText(int row, int col, CharSequence text) {
+        int r = parser.parse(text);
+        if (r == DecimalParser.EXACT) {
+            addExact(row, col, parser.unscaled, parser.scale);
+        } else if (r == DecimalParser.DOUBLE_ONLY && Double.isFinite(parser.value)) {
+            addDouble(row, col, parser.value);
+        } else {
+            return false;
+        }
+        return true;
+    }
+
+    /**
+     * Adds a text cell, classified: numbers written as text become numbers; NaN/infinity, true/false,
+     * error codes, dates and numbers with the other decimal separator get their own kinds.
+     */
+    void addText(int row, int col, String text) {
+        if (prepare(text)) {
+            addPrepared(row, col);
+        }
+    }
+
+    /** The kind of the last {@link #prepare}d text. */
+    CellKind preparedKind;
+    /** The scale of the last prepared text (numbers: −1 for double bits). */
+    int preparedScale;
+    /** The payload of the last prepared text. */
+    long preparedPayload;
+
+    /**
+     * Classifies a text into {@link #preparedKind}, {@link #preparedScale}, {@link #preparedPayload}
+     * without adding it, so that a source can cache the result for a repeated text.
+     *
+     * @param text the cell text
+     * @return false when the text is blank (no cell)
+     */
+    boolean prepare(String text) {
+        String t = text.strip();
+        if (t.isEmpty()) {
+            return false;
+        }
+        char first = t.charAt(0);
+        if ((first >= '0' && first <= '9') || first == '-' || first == '+' || first == '.' || first == ','
+                || first == '\u2212') {
+            int r = parser.parse(t);
+            if (r == DecimalParser.EXACT) {
+                preparedKind = CellKind.NUMBER;
+                preparedScale = parser.scale;
+                preparedPayload = parser.unscaled;
+                return true;
+            }
+            if (r == DecimalParser.DOUBLE_ONLY && Double.isFinite(parser.value)) {
+                preparedKind = CellKind.NUMBER;
+                preparedScale = -1;
+                preparedPayload = Double.doubleToRawLongBits(parser.value);
+                return true;
+            }
+        }
+        preparedKind = TextClassifier.classify(t, parser.separator());
+        preparedScale = 0;
+        preparedPayload = id(t);
+        return true;
+    }
+
+    /** Adds the last prepared text (or one cached from it) as a cell. */
+    void addPrepared(int row, int col, CellKind kind, int scale, long payload) {
+        if (kind == CellKind.NUMBER) {
+            numbersFromText++;
+        }
+        col(row, col).add(row, kind, scale, payload);
+    }
+
+    private void addPrepared(int row, int col) {
+        addPrepared(row, col, preparedKind, preparedScale, preparedPayload);
+    }
+
+    private int id(String text) {
+        Integer id = textIds.get(text);
+        if (id == null) {
+            id = texts.size();
+            texts.add(text);
+            textIds.put(text, id);
+        }
+        return id;
+    }
+
+    /** Puts every column in row order (sources that deliver cells out of order). */
+    void finish() {
+        for (int i = 0; i < columnCount; i++) {
+            if (columns[i] != null) {
+                columns[i].sortIfNeeded();
+            }
+        }
+    }
+
+    /**
+     * The text of a cell as the user sees it (numbers as decimal text), or null when blank.
+     *
+     * @param row 1-based row
+     * @param col 0-based column
+     * @return the text or null
+     */
+    String display(int row, int col) {
+        SheetColumn c = column(col);
+        if (c == null) {
+            return null;
+        }
+        int i = c.indexOfRow(row);
+        return i < 0 ? null : display(c, i);
+    }
+
+    /** @return the display text of cell i of column c */
+    String display(SheetColumn c, int i) {
+        if (c.kind(i) != CellKind.NUMBER) {
+            return text(c.payload(i));
+        }
+        if (c.exact(i)) {
+            return java.math.BigDecimal.valueOf(c.payload(i), c.scale(i)).stripTrailingZeros().toPlainString();
+        }
+        return java.math.BigDecimal.valueOf(c.number(i)).stripTrailingZeros().toPlainString();
+    }
+}
