@@ -45,9 +45,6 @@ public final class BoxPlotChart {
     public static final String VALUES_SERIES = "values";
     /** Series key of the means. */
     public static final String MEAN_SERIES = "mean";
-    /** Individual values are spread sideways only from this many values per group on. */
-    static final int JITTER_FROM = 10;
-
     private BoxPlotChart() {
     }
 
@@ -102,9 +99,8 @@ public final class BoxPlotChart {
         ((NumberAxis) plot.getRangeAxis()).setRange(ChartRanges.padded(rangeOf(stats, limits), 0.06));
         JFreeChart chart = new JFreeChart(name, theme.titleFont(), plot, false);
         chart.addSubtitle(theme.subtitle("before and after the change: box, every value, mean"));
-        chart.addSubtitle(theme.note("Box: " + BoxStatistics.METHOD + ". Each value is drawn at its true value"
-                + (Math.max(before.size(), after.size()) >= JITTER_FROM ? ", spread sideways by a fixed jitter" : "")
-                + "; values beyond the whiskers are ringed."));
+        chart.addSubtitle(theme.note("Box: " + BoxStatistics.METHOD + ". Each value is drawn at its true value, "
+                + "spread sideways by a fixed (seeded) jitter; values beyond the whiskers are ringed."));
         chart.addSubtitle(legend(plot));
         theme.apply(chart);
         return chart;

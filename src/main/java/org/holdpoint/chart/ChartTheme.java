@@ -48,7 +48,7 @@ public final class ChartTheme {
     /** Grid lines. */
     public static final Color GRID = new Color(0xDD, 0xDD, 0xDD);
     /** The margin band of the equivalence picture. */
-    public static final Color BAND = new Color(0xE4, 0xEC, 0xE4);
+    public static final Color BAND = new Color(0xD6, 0xE6, 0xD6);
     /** The "not equivalent" conclusion: a dark vermilion, darker than {@link #AFTER}. */
     public static final Color FAIL = new Color(0xA8, 0x3A, 0x00);
 
@@ -152,13 +152,13 @@ public final class ChartTheme {
     }
 
     /**
-     * The height of an equivalence picture: 15 pt per row plus 150 pt of titles, axis and legend.
+     * The height of an equivalence picture: 14 pt per row plus 150 pt of titles, axis and legend.
      *
      * @param rows the number of rows
      * @return the height in points
      */
     public double equivalenceHeight(int rows) {
-        return 150 + 15.0 * Math.max(rows, 1);
+        return 150 + 14.0 * Math.max(rows, 1);
     }
 
     /** @return 12 pt bold, for chart titles */

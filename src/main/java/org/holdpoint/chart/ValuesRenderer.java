@@ -20,8 +20,8 @@ import org.jfree.data.statistics.MultiValueCategoryDataset;
 
 /**
  * Draws every value of each category at its true value, in the group's colour and shape, spread sideways by a
- * seeded (hence reproducible) jitter when a group has {@link BoxPlotChart#JITTER_FROM} values or more; values
- * beyond the whiskers get a ring, each one separately.
+ * seeded (hence reproducible) jitter, so that values are not hidden under the median and whisker lines and ties
+ * stay visible; values beyond the whiskers get a ring, each one separately.
  */
 final class ValuesRenderer extends AbstractCategoryItemRenderer {
     private static final long serialVersionUID = 1L;
@@ -47,7 +47,6 @@ final class ValuesRenderer extends AbstractCategoryItemRenderer {
         double middle = domainAxis.getCategoryMiddle(column, count, dataArea, xEdge);
         double width = domainAxis.getCategoryEnd(column, count, dataArea, xEdge)
                 - domainAxis.getCategoryStart(column, count, dataArea, xEdge);
-        boolean jitter = values.size() >= BoxPlotChart.JITTER_FROM;
         SplittableRandom rnd = new SplittableRandom(theme.jitterSeed() + 0x9E3779B97F4A7C15L * (column + 1));
         Color colour = theme.groupColour(column);
         Color fill = new Color(colour.getRed(), colour.getGreen(), colour.getBlue(), values.size() > 200 ? 90 : 150);
@@ -56,7 +55,7 @@ final class ValuesRenderer extends AbstractCategoryItemRenderer {
         g2.setStroke(new BasicStroke(1.1f));
         for (Number number : values) {
             double v = number.doubleValue();
-            double offset = jitter ? (rnd.nextDouble() * 2 - 1) * JITTER_HALF_WIDTH * width : 0;
+            double offset = (rnd.nextDouble() * 2 - 1) * JITTER_HALF_WIDTH * width;
             double y = rangeAxis.valueToJava2D(v, dataArea, yEdge);
             AffineTransform at = AffineTransform.getTranslateInstance(middle + offset, y);
             g2.setPaint(fill);
