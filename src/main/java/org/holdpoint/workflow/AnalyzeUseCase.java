@@ -41,7 +41,7 @@ public final class AnalyzeUseCase {
         }
         AnalysisSettings merged = settings;
         if (found != null) {
-            Map<String, CharacteristicSettings> per = SettingsReader.read(found);
+            Map<String, CharacteristicSettings> per = new SettingsReader().read(found);
             merged = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(),
                     settings.defaults(), per, settings.overrides(), settings.exclusions());
         }

@@ -1,0 +1,78 @@
+package org.holdpoint.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The hidden record sheet: the canonical study record in chunks of at most {@value #CHUNK} characters
+ * (a cell holds at most 32,767), its SHA-256, the optional signature and the layout facts the verifier
+ * needs to find the shown values again. Rows are relative to the {@code HP_Record} anchor; labels in the
+ * first column, values in the second.
+ */
+final class RecordSheet {
+    /** Characters per chunk, below the 32,767 a cell holds. */
+    static final int CHUNK = 32_000;
+    /** The format marker of row 1. */
+    static final String FORMAT = "holdpoint-signoff-record 1";
+    static final String[] LABELS = {"format", "sha256", "characters", "chunks", "generated at", "software",
+        "charts per characteristic", "signature algorithm", "public key", "signature", "key fingerprint"};
+    /** Offset of the first chunk row below the anchor. */
+    static final int FIRST_CHUNK = 14;
+
+    private RecordSheet() {
+    }
+
+    /**
+     * The record's values, in the order of {@link #LABELS}.
+     *
+     * @param in          the report input
+     * @param chartCounts charts per characteristic, in result order
+     * @return the values
+     */
+    static String[] values(ReportInput in, Map<String, Integer> chartCounts) {
+        RecordSeal seal = in.seal();
+        StringBuilder counts = new StringBuilder();
+        chartCounts.values().forEach(v -> counts.append(counts.length() == 0 ? "" : ",").append(v));
+        return new String[] {FORMAT, in.sha256(), Integer.toString(in.studyJson().length()),
+            Integer.toString(chunks(in.studyJson()).size()), in.generatedAt(), in.softwareVersion(),
+            counts.toString(), seal == null ? "" : seal.algorithm(), seal == null ? "" : seal.publicKey(),
+            seal == null ? "" : seal.signature(), seal == null ? "" : seal.keyFingerprint()};
+    }
+
+    /**
+     * The chart count of every characteristic of the input, in result order.
+     *
+     * @param in the input
+     * @return name to count
+     */
+    static Map<String, Integer> chartCounts(ReportInput in) {
+        Map<String, Integer> m = new LinkedHashMap<>();
+        in.result().characteristics().forEach(c -> m.put(c.name(), in.chartsOf(c.name()).size()));
+        return m;
+    }
+
+    /**
+     * Splits text into chunks of at most {@link #CHUNK} characters without splitting a surrogate pair.
+     *
+     * @param text the text
+     * @return the chunks (at least one)
+     */
+    static List<String> chunks(String text) {
+        List<String> out = new ArrayList<>();
+        int i = 0;
+        while (i < text.length()) {
+            int end = Math.min(text.length(), i + CHUNK);
+            if (end < text.length() && Character.isHighSurrogate(text.charAt(end - 1))) {
+                end--;
+            }
+            out.add(text.substring(i, end));
+            i = end;
+        }
+        if (out.isEmpty()) {
+            out.add("");
+        }
+        return out;
+    }
+}

@@ -1,0 +1,169 @@
+package org.holdpoint.report;
+
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.apache.poi.ss.usermodel.Name;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.ss.util.CellReference;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+
+/**
+ * A sign-off workbook template: an .xlsx whose defined names (see {@link TemplateName}) say where the
+ * writer puts each value and block. Layout, logo, headings and page setup are the template's own.
+ */
+public final class Template {
+    private final byte[] bytes;
+    private final String name;
+    private final Map<TemplateName, Anchor> anchors;
+
+    private Template(byte[] bytes, String name, Map<TemplateName, Anchor> anchors) {
+        this.bytes = bytes;
+        this.name = name;
+        this.anchors = anchors;
+    }
+
+    /** @return the default template, built by {@link TemplateGenerator} (identical to templates/holdpoint-default.xlsx) */
+    public static Template defaultTemplate() {
+        return of(TemplateGenerator.build(), "the default template");
+    }
+
+    /**
+     * Reads a template file.
+     *
+     * @param file the .xlsx template
+     * @return the template
+     * @throws ReportException when the file cannot be read or lacks a required name
+     */
+    public static Template read(Path file) {
+        try {
+            return of(Files.readAllBytes(file), file.toString());
+        } catch (IOException e) {
+            throw new ReportException(e, "%s: cannot read the template (%s); check the path", file, e.getMessage());
+        }
+    }
+
+    /**
+     * A template from bytes.
+     *
+     * @param bytes the .xlsx bytes
+     * @param name  a name for messages
+     * @return the template
+     * @throws ReportException when the bytes are no workbook or a required name is missing or misplaced
+     */
+    public static Template of(byte[] bytes, String name) {
+        try (XSSFWorkbook wb = new XSSFWorkbook(new ByteArrayInputStream(bytes))) {
+            return new Template(bytes.clone(), name, validate(wb, name));
+        } catch (IOException | RuntimeException e) {
+            if (e instanceof ReportException r) {
+                throw r;
+            }
+            throw new ReportException(e, "%s: not a readable .xlsx workbook (%s)", name, e.getMessage());
+        }
+    }
+
+    private static Map<TemplateName, Anchor> validate(XSSFWorkbook wb, String file) {
+        Map<TemplateName, Anchor> found = new EnumMap<>(TemplateName.class);
+        List<String> missing = new ArrayList<>();
+        for (TemplateName t : TemplateName.values()) {
+            Name n = wb.getName(t.definedName());
+            if (n == null || n.getRefersToFormula() == null) {
+                missing.add(t.definedName());
+                continue;
+            }
+            Anchor a = parse(n.getRefersToFormula(), file, t.definedName());
+            if (wb.getSheet(a.sheet()) == null) {
+                throw new ReportException("%s: the name %s points at sheet '%s', which does not exist", file,
+                        t.definedName(), a.sheet());
+            }
+            found.put(t, a);
+        }
+        if (!missing.isEmpty()) {
+            throw new ReportException("%s: the template lacks the required name%s %s; define %s (Formulas > Name "
+                    + "Manager) as described in templates/README.md", file, missing.size() == 1 ? "" : "s",
+                    String.join(", ", missing), missing.size() == 1 ? "it" : "them");
+        }
+        Map<String, TemplateName> blockSheets = new HashMap<>();
+        for (TemplateName t : TemplateName.values()) {
+            if (!t.block()) {
+                continue;
+            }
+            TemplateName other = blockSheets.put(found.get(t).sheet(), t);
+            if (other != null) {
+                throw new ReportException("%s: %s and %s are on the same sheet '%s'; give every block its own sheet",
+                        file, other.definedName(), t.definedName(), found.get(t).sheet());
+            }
+        }
+        for (TemplateName t : TemplateName.values()) {
+            if (!t.block() && blockSheets.get(found.get(t).sheet()) != null
+                    && blockSheets.get(found.get(t).sheet()) != TemplateName.SUMMARY_TABLE) {
+                throw new ReportException("%s: %s must not be on the sheet of %s; put single values on the summary "
+                        + "sheet or a sheet of their own", file, t.definedName(),
+                        blockSheets.get(found.get(t).sheet()).definedName());
+            }
+        }
+        Anchor raw = found.get(TemplateName.RAW_DATA);
+        Sheet rawSheet = wb.getSheet(raw.sheet());
+        if (rawSheet.getLastRowNum() > raw.row()) {
+            throw new ReportException("%s: sheet '%s' has rows below %s (row %d); the raw data are streamed there, "
+                    + "so leave everything below it empty", file, raw.sheet(), TemplateName.RAW_DATA.definedName(),
+                    raw.row() + 1);
+        }
+        return found;
+    }
+
+    /**
+     * Parses a defined name's formula such as {@code 'Summary'!$B$3} into an anchor.
+     *
+     * @param formula the refers-to formula
+     * @param file    the file, for messages
+     * @param name    the defined name, for messages
+     * @return the anchor
+     * @throws ReportException when the name does not point at one cell of a sheet
+     */
+    static Anchor parse(String formula, String file, String name) {
+        String f = formula.startsWith("=") ? formula.substring(1) : formula;
+        int colon = f.indexOf(':', f.lastIndexOf('!') + 1);
+        String first = colon < 0 ? f : f.substring(0, colon);
+        try {
+            CellReference ref = new CellReference(first);
+            if (ref.getSheetName() == null || ref.getRow() < 0 || ref.getCol() < 0) {
+                throw new IllegalArgumentException("no sheet or cell");
+            }
+            return new Anchor(ref.getSheetName(), ref.getRow(), ref.getCol());
+        } catch (RuntimeException e) {
+            throw new ReportException("%s: the name %s refers to '%s', not to a cell of a sheet; make it point at one "
+                    + "cell such as 'Summary'!$B$3", file, name, formula);
+        }
+    }
+
+    /** @return the template's name for messages */
+    public String name() {
+        return name;
+    }
+
+    /**
+     * @param t a template name
+     * @return where it points
+     */
+    public Anchor anchor(TemplateName t) {
+        return anchors.get(t);
+    }
+
+    /** @return every anchor */
+    public Map<TemplateName, Anchor> anchors() {
+        return java.util.Collections.unmodifiableMap(anchors);
+    }
+
+    /** @return a fresh copy of the template's bytes as a stream */
+    InputStream open() {
+        return new ByteArrayInputStream(bytes);
+    }
+}

@@ -1,0 +1,240 @@
+package org.holdpoint.report;
+
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.holdpoint.stats.Descriptives;
+import org.holdpoint.stats.EquivalenceResult;
+import org.holdpoint.study.ChangeDescription;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.study.Signature;
+import org.holdpoint.study.StudyResult;
+import org.holdpoint.study.Verdict;
+
+/**
+ * Where every shown value of a sign-off workbook goes, given the template's anchors. The writer writes
+ * this plan; the verifier builds it again from a fresh computation and compares it with the file.
+ */
+final class WorkbookPlan {
+    static final String[] SUMMARY_HEADERS = {"#", "Characteristic", "Unit", "n before", "n after", "Mean before",
+        "Mean after", "Difference (after \u2212 before)", "%s CI lower", "%s CI upper", "Margin L", "Margin U",
+        "%s CI lower (equivalence)", "%s CI upper (equivalence)", "Equivalence conclusion",
+        "Variance ratio (after / before)", "F-test p", "Brown\u2013Forsythe p", "Sd growth", "Verdict"};
+    static final int[] SUMMARY_WIDTHS = {4, 26, 6, 8, 8, 11, 11, 12, 11, 11, 10, 10, 12, 12, 15, 11, 9, 11, 22, 16};
+
+    final ReportInput input;
+    final Map<TemplateName, Anchor> anchors;
+    final Map<String, SheetContent> sheets = new LinkedHashMap<>();
+    final double alpha;
+    private final Map<String, Integer> chartCounts;
+
+    private WorkbookPlan(ReportInput input, Map<TemplateName, Anchor> anchors, Map<String, Integer> chartCounts) {
+        this.input = input;
+        this.anchors = anchors;
+        this.chartCounts = chartCounts;
+        this.alpha = input.study().settings().alpha();
+    }
+
+    /**
+     * The plan of a workbook.
+     *
+     * @param input   what to show
+     * @param anchors where the template's names point
+     * @param chartCounts the number of charts per characteristic as laid out (null: count the input's charts)
+     * @return the plan (the raw data rows are produced separately by {@link RawDataRows})
+     */
+    static WorkbookPlan of(ReportInput input, Map<TemplateName, Anchor> anchors, Map<String, Integer> chartCounts) {
+        WorkbookPlan p = new WorkbookPlan(input, anchors, chartCounts);
+        p.header();
+        p.summary();
+        new DetailPlan(p).build();
+        new TextBlocks(p).build();
+        p.rawHeader();
+        return p;
+    }
+
+    int chartCount(String characteristic) {
+        return chartCounts != null ? chartCounts.getOrDefault(characteristic, 0)
+                : input.chartsOf(characteristic).size();
+    }
+
+    SheetContent sheet(TemplateName name) {
+        return sheets.computeIfAbsent(anchors.get(name).sheet(), SheetContent::new);
+    }
+
+    Anchor at(TemplateName name) {
+        return anchors.get(name);
+    }
+
+    private void single(TemplateName name, String value, Style style) {
+        Anchor a = at(name);
+        sheet(name).text(a.row(), a.column(), value == null ? "" : value, style, name.description());
+    }
+
+    private void header() {
+        ChangeDescription c = input.study().change();
+        single(TemplateName.CHANGE_ID, c.id(), Style.HEADING);
+        single(TemplateName.TITLE, c.title(), Style.TEXT);
+        single(TemplateName.KIND, c.kind().words(), Style.TEXT);
+        single(TemplateName.PART_NUMBER, c.partNumber(), Style.TEXT);
+        single(TemplateName.REVISION, c.revision(), Style.TEXT);
+        single(TemplateName.REASON, c.reason(), Style.TEXT);
+        single(TemplateName.REQUESTER, c.requester(), Style.TEXT);
+        single(TemplateName.REQUEST_DATE, c.requestDate(), Style.TEXT);
+        single(TemplateName.STUDY_DATE, c.studyDate(), Style.TEXT);
+        single(TemplateName.GENERATED_AT, input.generatedAt(), Style.TEXT);
+        StudyResult r = input.result();
+        Verdict.Status overall = r.changeVerified() ? Verdict.Status.PASSED : Verdict.Status.FAILED;
+        single(TemplateName.OVERALL_MARK, Texts.mark(overall), Texts.style(overall));
+        single(TemplateName.OVERALL_VERDICT, r.changeVerified() ? "CHANGE VERIFIED" : "CHANGE NOT VERIFIED",
+                Style.VERDICT);
+        single(TemplateName.OVERALL_DETAIL, r.summary(), Style.TEXT);
+        single(TemplateName.RECORD_HASH, "SHA-256 " + input.sha256(), Style.MONO);
+    }
+
+    private void summary() {
+        Anchor a = at(TemplateName.SUMMARY_TABLE);
+        SheetContent s = sheet(TemplateName.SUMMARY_TABLE);
+        String ci = Texts.percent(1 - alpha);
+        String eq = Texts.percent(1 - 2 * alpha);
+        int r0 = a.row();
+        int c0 = a.column();
+        for (int i = 0; i < SUMMARY_HEADERS.length; i++) {
+            String h = SUMMARY_HEADERS[i];
+            h = (i == 8 || i == 9) ? String.format(Locale.ROOT, h, ci) : (i == 12 || i == 13)
+                    ? String.format(Locale.ROOT, h, eq) : h;
+            s.text(r0, c0 + i, h, Style.HEADER, "summary table header");
+            s.width(c0 + i, SUMMARY_WIDTHS[i]);
+        }
+        s.height(r0, 40f);
+        s.printTitleRows = new int[] {r0, r0};
+        int row = r0 + 1;
+        int k = 1;
+        for (CharacteristicResult c : input.result().characteristics()) {
+            summaryRow(s, row++, c0, k++, c);
+        }
+        String legend = "Marks: " + Texts.status(Verdict.Status.PASSED) + " \u00b7 " + Texts.status(
+                Verdict.Status.FAILED) + " \u00b7 " + Texts.status(Verdict.Status.INCONCLUSIVE) + " \u00b7 "
+                + Texts.status(Verdict.Status.NOT_ASSESSED) + ". Difference = after \u2212 before. Difference "
+                + "intervals are " + ci + ", equivalence intervals " + eq + " (two one-sided tests at \u03b1 = "
+                + Texts.num(alpha) + "). An empty cell means the value does not apply or is undefined; the "
+                + "Details sheet says why.";
+        s.text(row + 1, c0, legend, Style.NOTE, "summary legend");
+        s.merge(row + 1, row + 1, c0, c0 + SUMMARY_HEADERS.length - 1);
+        s.height(row + 1, 26f);
+    }
+
+    private void summaryRow(SheetContent s, int row, int c0, int index, CharacteristicResult c) {
+        int d = statDecimals(data(c.name()));
+        String n = c.name();
+        s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
+        s.text(row, c0 + 1, n, Style.CELL, n + ": name");
+        s.text(row, c0 + 2, c.unit() == null ? "" : c.unit(), Style.CELL, n + ": unit");
+        s.number(row, c0 + 3, (double) c.before().n(), Style.INTEGER, 0, n + ": n before");
+        s.number(row, c0 + 4, (double) c.after().n(), Style.INTEGER, 0, n + ": n after");
+        s.number(row, c0 + 5, c.before().mean(), Style.NUMBER, d, n + ": mean before");
+        s.number(row, c0 + 6, c.after().mean(), Style.NUMBER, d, n + ": mean after");
+        var t = c.decidingTest();
+        s.number(row, c0 + 7, t.estimate(), Style.NUMBER, d, n + ": difference");
+        s.number(row, c0 + 8, finite(t.ciLower()), Style.NUMBER, d, n + ": difference CI lower");
+        s.number(row, c0 + 9, finite(t.ciUpper()), Style.NUMBER, d, n + ": difference CI upper");
+        s.number(row, c0 + 10, c.margin() == null ? null : c.margin().lower(), Style.NUMBER, d, n + ": margin L");
+        s.number(row, c0 + 11, c.margin() == null ? null : c.margin().upper(), Style.NUMBER, d, n + ": margin U");
+        EquivalenceResult eq = c.decidingTost();
+        s.number(row, c0 + 12, eq == null ? null : finite(eq.ciLower()), Style.NUMBER, d,
+                n + ": equivalence CI lower");
+        s.number(row, c0 + 13, eq == null ? null : finite(eq.ciUpper()), Style.NUMBER, d,
+                n + ": equivalence CI upper");
+        s.text(row, c0 + 14, eq == null ? "not assessed (no margin)" : eq.conclusion().words(), Style.CELL,
+                n + ": equivalence conclusion");
+        s.number(row, c0 + 15, c.variance() == null ? null : c.variance().ratio(), Style.NUMBER, 3,
+                n + ": variance ratio");
+        s.number(row, c0 + 16, c.variance() == null ? null : c.variance().p(), Style.P_VALUE, 0, n + ": F-test p");
+        s.number(row, c0 + 17, c.levene() == null ? null : c.levene().p(), Style.P_VALUE, 0,
+                n + ": Brown-Forsythe p");
+        s.text(row, c0 + 18, sdGrowth(c), Style.CELL, n + ": sd growth");
+        s.text(row, c0 + 19, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
+                n + ": verdict");
+    }
+
+    static String sdGrowth(CharacteristicResult c) {
+        var g = c.sdGrowth();
+        if (g == null) {
+            return "no limit set";
+        }
+        return (g.met() ? "met: " : "not met: ") + "bound " + Texts.num(g.upperBound()) + (g.met() ? " < " : " \u2265 ")
+                + Texts.num(g.limit());
+    }
+
+    private void rawHeader() {
+        Anchor a = at(TemplateName.RAW_DATA);
+        SheetContent s = sheet(TemplateName.RAW_DATA);
+        for (int i = 0; i < RawDataRows.HEADERS.length; i++) {
+            s.text(a.row(), a.column() + i, RawDataRows.HEADERS[i], Style.HEADER, "raw data header");
+            s.width(a.column() + i, RawDataRows.WIDTHS[i]);
+        }
+        s.height(a.row(), 28f);
+        s.printTitleRows = new int[] {a.row(), a.row()};
+    }
+
+    CharacteristicData data(String name) {
+        for (CharacteristicData c : input.study().data().characteristics()) {
+            if (c.name().equals(name)) {
+                return c;
+            }
+        }
+        return null;
+    }
+
+    /**
+     * The decimals of the raw values: the common decimal scale of the data (at most 8), read from the first values.
+     *
+     * @param c the data, or null
+     * @return 0..8
+     */
+    static int dataDecimals(CharacteristicData c) {
+        if (c == null) {
+            return 4;
+        }
+        int scale = 0;
+        for (var g : List.of(c.before(), c.after())) {
+            int m = Math.min(g.size(), 500);
+            for (int i = 0; i < m; i++) {
+                BigDecimal b = g.sample().hasExactDecimals() ? g.sample().decimal(i)
+                        : g.sample().decimal(i).stripTrailingZeros();
+                scale = Math.max(scale, b.scale());
+            }
+        }
+        return Math.max(0, Math.min(8, scale));
+    }
+
+    /**
+     * @param c the data
+     * @return decimals for means, differences and intervals: two more than the data's
+     */
+    static int statDecimals(CharacteristicData c) {
+        return Math.min(10, dataDecimals(c) + 2);
+    }
+
+    static Double finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+
+    /** @return the latest signature of each stage, in stage order; absent stages are missing */
+    Map<Signature.Stage, Signature> signatures() {
+        Map<Signature.Stage, Signature> m = new LinkedHashMap<>();
+        for (Signature s : input.study().signatures()) {
+            m.put(s.stage(), s);
+        }
+        return m;
+    }
+
+    /** @return every sheet's content */
+    List<SheetContent> contents() {
+        return new ArrayList<>(sheets.values());
+    }
+}
