@@ -155,8 +155,7 @@ public final class ResultsTable {
             case CONCLUSION -> VerdictLook.finding(r);
             case UNIT -> r.unit() == null ? "" : r.unit();
             case DIFFERENCE -> r.decidingTest().estimate();
-            case INTERVAL -> eq == null ? "" : Format.percent(eq.level()) + ": (" + Format.num(eq.ciLower()) + ", "
-                    + Format.num(eq.ciUpper()) + ")";
+            case INTERVAL -> eq == null ? "" : "(" + Format.num(eq.ciLower()) + ", " + Format.num(eq.ciUpper()) + ")";
             case MARGIN -> margin(r.margin());
             case SD_RATIO -> r.variance() == null ? null : Math.sqrt(r.variance().ratio());
         };

@@ -281,6 +281,42 @@ public final class StudySession {
     }
 
     /**
+     * Writes the sign-off workbook of the analysed study (charts, results, raw data, record and hash).
+     *
+     * @param target the .xlsx file
+     */
+    public void writeWorkbook(Path target) {
+        StudyResult r = results.result();
+        ChangeStudy study;
+        try {
+            study = study();
+        } catch (RuntimeException e) {
+            problem(new UserMessage("Nothing to write yet", e.getMessage(), "Open data and analyse them first."));
+            return;
+        }
+        if (r == null) {
+            problem(new UserMessage("Not analysed yet", "The workbook shows the results, and there are none yet.",
+                    "Analyse the study first (F5)."));
+            return;
+        }
+        start("Writing " + target.getFileName(), p -> {
+            service.writeWorkbook(study, r, target, p);
+            return target;
+        }, t -> {
+            recent.setLastFolder(t.toAbsolutePath().getParent());
+            lastWorkbook = t;
+            status("Wrote the sign-off workbook " + t.getFileName() + ".");
+        });
+    }
+
+    private Path lastWorkbook;
+
+    /** @return the workbook last written in this session, or null */
+    public Path lastWorkbook() {
+        return lastWorkbook;
+    }
+
+    /**
      * Opens a saved study file and analyses it again from its stored raw data.
      *
      * @param file the study file

@@ -145,7 +145,7 @@ public final class MainWindow extends JFrame {
 
             @Override
             public String workbookUnavailable() {
-                return "The sign-off workbook writer is not part of this build yet; save the study file instead.";
+                return null;
             }
         });
         center.add(changePanel, Step.CHANGE.name());
@@ -433,8 +433,11 @@ public final class MainWindow extends JFrame {
     }
 
     private void writeWorkbook() {
-        session.problem(new UserMessage("Not available", "The sign-off workbook writer is not part of this build yet.",
-                "Save the study file; the workbook can be written from it later."));
+        String id = session.change().toDescription().id().replaceAll("[^A-Za-z0-9._-]+", "-");
+        Path target = dialogs.chooseSave("Write the sign-off workbook", id + "-sign-off.xlsx", ".xlsx");
+        if (target != null) {
+            session.writeWorkbook(target);
+        }
     }
 
     /** @return true when there is no unsaved work, or the user chose to discard it */

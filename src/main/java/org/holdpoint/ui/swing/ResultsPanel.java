@@ -20,8 +20,8 @@ import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
 import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.TableRowSorter;
-import org.holdpoint.chart.BoxPlotChart;
-import org.holdpoint.chart.ChartTheme;
+import org.holdpoint.chart.NamedChart;
+import org.holdpoint.chart.StudyCharts;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicResult;
 import org.holdpoint.ui.model.ResultColumn;
@@ -44,9 +44,10 @@ final class ResultsPanel extends JPanel {
     private final JComboBox<ResultsTable.Filter> filter = new JComboBox<>(ResultsTable.Filter.values());
     private final JLabel shown = new JLabel(" ");
     private final JEditorPane detail = new JEditorPane("text/html", "");
-    private final ChartPanel chart = new ChartPanel(null, false, true, true, true, true);
+    private final javax.swing.JTabbedPane chartTabs = new javax.swing.JTabbedPane();
+    private final ChartPanel[] charts = {chartPanel(), chartPanel(), chartPanel()};
     private final JLabel chartNote = new JLabel(" ", JLabel.CENTER);
-    private transient SwingWorker<JFreeChart, Void> chartWorker;
+    private transient SwingWorker<List<JFreeChart>, Void> chartWorker;
 
     ResultsPanel(StudySession session) {
         super(new BorderLayout());
@@ -72,7 +73,7 @@ final class ResultsPanel extends JPanel {
                 return results.shows(e.getIdentifier());
             }
         });
-        int[] widths = {120, 190, 230, 50, 110, 250, 150, 80};
+        int[] widths = {115, 185, 250, 50, 110, 230, 150, 80};
         for (int i = 0; i < widths.length; i++) {
             table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -93,10 +94,23 @@ final class ResultsPanel extends JPanel {
         detail.setEditable(false);
         detail.putClientProperty(JEditorPane.HONOR_DISPLAY_PROPERTIES, Boolean.TRUE);
         detail.setName("detail");
-        chart.setMinimumDrawWidth(200);
-        chart.setMinimumDrawHeight(150);
-        chart.setMaximumDrawWidth(4000);
-        chart.setMaximumDrawHeight(3000);
+        String[] titles = {"Box plot", "Histograms", "Normal probability"};
+        for (int i = 0; i < charts.length; i++) {
+            chartTabs.addTab(titles[i], charts[i]);
+        }
+        chartTabs.setMnemonicAt(0, 'B');
+        chartTabs.setMnemonicAt(1, 'G');
+        chartTabs.setMnemonicAt(2, 'N');
+        chartTabs.setName("charts");
+    }
+
+    private static ChartPanel chartPanel() {
+        ChartPanel c = new ChartPanel(null, false, true, true, true, true);
+        c.setMinimumDrawWidth(200);
+        c.setMinimumDrawHeight(150);
+        c.setMaximumDrawWidth(4000);
+        c.setMaximumDrawHeight(3000);
+        return c;
     }
 
     private void layoutComponents() {
@@ -107,18 +121,18 @@ final class ResultsPanel extends JPanel {
         tools.add(Bind.label("Show", 'W', filter));
         tools.add(filter);
         tools.add(shown);
-        tools.add(Bind.hint("Difference = after − before; sd ratio = sd(after)/sd(before). Click a heading to sort; "
-                + "select a row for its numbers and chart."));
-        top.add(tools, BorderLayout.SOUTH);
+        top.add(tools, BorderLayout.CENTER);
+        top.add(Bind.hint("Difference = after − before; equivalence interval at 1 − 2α; sd ratio = sd(after)/sd(before)."
+                + " Click a heading to sort; select a row for its numbers and charts."), BorderLayout.SOUTH);
         add(top, BorderLayout.NORTH);
         JScrollPane detailScroll = new JScrollPane(detail);
         JPanel chartBox = new JPanel(new BorderLayout());
-        chartBox.add(chart, BorderLayout.CENTER);
+        chartBox.add(chartTabs, BorderLayout.CENTER);
         chartBox.add(chartNote, BorderLayout.SOUTH);
         JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, detailScroll, chartBox);
         lower.setResizeWeight(0.5);
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), lower);
-        split.setResizeWeight(0.38);
+        split.setResizeWeight(0.42);
         split.setBorder(BorderFactory.createEmptyBorder(0, 24, 12, 24));
         add(split, BorderLayout.CENTER);
     }
@@ -148,7 +162,7 @@ final class ResultsPanel extends JPanel {
         CharacteristicResult r = results.selectedResult();
         if (r == null) {
             detail.setText("<html><body><p>No characteristic selected.</p></body></html>");
-            chart.setChart(null);
+            setCharts(null);
             chartNote.setText(" ");
             return;
         }
@@ -161,7 +175,7 @@ final class ResultsPanel extends JPanel {
         if (chartWorker != null) {
             chartWorker.cancel(true);
         }
-        chart.setChart(null);
+        setCharts(null);
         if (data == null) {
             chartNote.setText("No data for a chart.");
             return;
@@ -170,8 +184,9 @@ final class ResultsPanel extends JPanel {
         chartWorker = new SwingWorker<>() {
             /** Runs on a worker thread: box statistics and the chart object, no painting. */
             @Override
-            protected JFreeChart doInBackground() {
-                return BoxPlotChart.create(data, r.settings().spec(), ChartTheme.withDefaults());
+            protected List<JFreeChart> doInBackground() {
+                return StudyCharts.withDefaults().characteristicCharts(1, 1, r, data).stream()
+                        .map(NamedChart::chart).toList();
             }
 
             /** Runs on the event thread. */
@@ -181,7 +196,7 @@ final class ResultsPanel extends JPanel {
                     return;
                 }
                 try {
-                    chart.setChart(get());
+                    setCharts(get());
                     chartNote.setText(" ");
                 } catch (InterruptedException | java.util.concurrent.ExecutionException e) {
                     chartNote.setText("The chart could not be drawn: " + (e.getCause() == null ? e.getMessage()
@@ -190,6 +205,12 @@ final class ResultsPanel extends JPanel {
             }
         };
         chartWorker.execute();
+    }
+
+    private void setCharts(List<JFreeChart> list) {
+        for (int i = 0; i < charts.length; i++) {
+            charts[i].setChart(list == null || i >= list.size() ? null : list.get(i));
+        }
     }
 
     private static String html(CharacteristicResult r) {
@@ -213,9 +234,9 @@ final class ResultsPanel extends JPanel {
         return table;
     }
 
-    /** @return the chart panel (for tests) */
-    ChartPanel chartPanel() {
-        return chart;
+    /** @return the box plot panel (for tests) */
+    ChartPanel boxPlotPanel() {
+        return charts[0];
     }
 
     /** The results as a table, typed for sorting. */
