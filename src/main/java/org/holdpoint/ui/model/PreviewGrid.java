@@ -112,6 +112,11 @@ public record PreviewGrid(List<Row> rows, long total) {
         return new PreviewGrid(rows.size() > limit ? rows.subList(0, limit) : rows, total);
     }
 
+    private static String shortName(Origin o) {
+        String f = o.file() == null ? "" : java.nio.file.Path.of(o.file()).getFileName().toString();
+        return f + (o.sheet() == null ? "" : ", sheet " + o.sheet()) + ", cell " + o.cell();
+    }
+
     private static void add(List<Row> rows, String name, String group, GroupData g, int limit) {
         int n = Math.min(g.size(), limit);
         for (int i = 0; i < n; i++) {
@@ -133,7 +138,7 @@ public record PreviewGrid(List<Row> rows, long total) {
                 report.skippedTotal()));
         report.skipCounts().forEach((k, v) -> l.add(String.format(java.util.Locale.ROOT, "  %s: %,d", k.words(), v)));
         for (SkippedCell s : report.firstSkipped()) {
-            l.add("  " + s.origin().describe() + ": " + s.reason().words()
+            l.add("  " + shortName(s.origin()) + ": " + s.reason().words()
                     + (s.text() == null || s.text().isEmpty() ? "" : " (\"" + s.text() + "\")"));
         }
         if (report.skippedTotal() > report.firstSkipped().size()) {

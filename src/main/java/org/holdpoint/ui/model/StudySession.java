@@ -51,8 +51,8 @@ public final class StudySession {
     }
 
     /** What the import job hands back to the event thread. */
-    private record Loaded(DataSources sources, StudyService.Imported imported, StudyResult result,
-            UserMessage analysisProblem) {
+    private record Loaded(DataSources sources, StudyService.Imported imported, PreviewGrid preview,
+            StudyResult result, UserMessage analysisProblem) {
     }
 
     private final Bound<Property> bound = new Bound<>(this, Property.class);
@@ -331,13 +331,13 @@ public final class StudySession {
             } catch (org.holdpoint.workflow.StudyProblem e) {
                 problem = UserMessage.of(e);
             }
-            return new Object[] {s, r, problem};
+            return new Object[] {s, r, problem, PreviewGrid.of(s.data(), PreviewGrid.LIMIT)};
         }, o -> {
             ChangeStudy s = (ChangeStudy) o[0];
             change.load(s.change());
             Map<String, CharacteristicSettings> resolved = new java.util.LinkedHashMap<>();
             s.data().characteristics().forEach(c -> resolved.put(c.name(), s.settings().resolve(c.name())));
-            showData(s.data(), null);
+            showData(s.data(), (PreviewGrid) o[3], null);
             criteria.load(s.data().characteristics(), resolved, s.settings().alpha());
             equalVariances = s.settings().equalVariances();
             holm = s.settings().holm();
@@ -459,14 +459,14 @@ public final class StudySession {
         } catch (org.holdpoint.workflow.StudyProblem e) {
             problem = UserMessage.of(e);
         }
-        return new Loaded(sources, imported, r, problem);
+        return new Loaded(sources, imported, PreviewGrid.of(imported.data(), PreviewGrid.LIMIT), r, problem);
     }
 
     private void apply(Loaded l) {
         dataForm.show(l.sources());
         criteriaFile = l.imported().criteriaFile();
         exclusions = List.of();
-        showData(l.imported().data(), l.imported().criteria());
+        showData(l.imported().data(), l.preview(), l.imported().criteria());
         results.show(l.result());
         if (l.analysisProblem() != null) {
             problem(l.analysisProblem());
@@ -477,9 +477,9 @@ public final class StudySession {
         }
     }
 
-    private void showData(Dataset d, Map<String, CharacteristicSettings> found) {
+    private void showData(Dataset d, PreviewGrid grid, Map<String, CharacteristicSettings> found) {
         data = d;
-        preview = PreviewGrid.of(d, PreviewGrid.LIMIT);
+        preview = grid;
         if (found != null) {
             criteria.showData(d.characteristics(), found);
         }

@@ -64,7 +64,7 @@ final class CriteriaPanel extends JPanel {
                         new JComboBox<>(c.choices().toArray(String[]::new))));
             }
         }
-        int[] widths = {200, 55, 75, 75, 75, 95, 125, 115, 115, 90, 300};
+        int[] widths = {200, 50, 70, 70, 70, 85, 120, 120, 115, 90, 300};
         for (int i = 0; i < widths.length; i++) {
             grid.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -157,8 +157,13 @@ final class CriteriaPanel extends JPanel {
             copySource.setSelectedItem(sel);
         }
         int bad = table.rowsWithProblems();
+        String first = null;
+        for (int r = 0; r < table.rowCount() && first == null; r++) {
+            String p = table.rowProblem(r);
+            first = p == null ? null : table.name(r) + " — " + p;
+        }
         summary.setText(bad == 0 ? (table.rowCount() == 0 ? "Open data first." : "All criteria are valid.")
-                : "⚠ " + bad + " row(s) to correct (see the Check column)");
+                : "⚠ " + bad + " row(s) to correct. " + first);
     }
 
     private void stopEditing() {

@@ -15,7 +15,6 @@ import javax.swing.ButtonGroup;
 import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
-import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JRadioButton;
 import javax.swing.JScrollPane;
@@ -50,7 +49,7 @@ final class DataPanel extends JPanel {
     private final JButton importButton = new JButton("Import and analyse");
     private final PreviewModel previewModel = new PreviewModel();
     private final JTable preview = new JTable(previewModel);
-    private final JList<String> report = new JList<>();
+    private final javax.swing.JTextArea report = new javax.swing.JTextArea();
     private final JLabel previewTitle = Bind.heading("What was read");
     private final JLabel criteriaInfo = Bind.hint(" ");
 
@@ -103,6 +102,12 @@ final class DataPanel extends JPanel {
         preview.setDefaultRenderer(Object.class, new PreviewRenderer());
         preview.setName("preview");
         report.setName("report");
+        report.setEditable(false);
+        report.setLineWrap(true);
+        report.setWrapStyleWord(true);
+        preview.getColumnModel().getColumn(PreviewGrid.Column.STATUS.ordinal()).setPreferredWidth(260);
+        preview.getColumnModel().getColumn(PreviewGrid.Column.GROUP.ordinal()).setPreferredWidth(60);
+        preview.getColumnModel().getColumn(PreviewGrid.Column.CELL.ordinal()).setPreferredWidth(60);
         setTransferHandler(new DropFiles());
         preview.setTransferHandler(getTransferHandler());
     }
@@ -204,16 +209,17 @@ final class DataPanel extends JPanel {
         previewModel.show(g);
         if (session.data() == null) {
             previewTitle.setText("What was read");
-            report.setListData(new String[] {"Nothing imported yet."});
+            report.setText("Nothing imported yet.");
             criteriaInfo.setText(" ");
             return;
         }
         previewTitle.setText(String.format(java.util.Locale.ROOT, "What was read (%,d of %,d cells shown; cells not "
                 + "used are marked)", g.rows().size(), g.total()));
-        report.setListData(PreviewGrid.reportLines(session.data().report()).toArray(String[]::new));
+        report.setText(String.join("\n", PreviewGrid.reportLines(session.data().report())));
+        report.setCaretPosition(0);
         Path cf = session.criteriaFile();
-        criteriaInfo.setText(cf == null ? "No criteria file was found beside the data; set the criteria on the "
-                + "next step." : "Criteria read from " + cf.getFileName() + " (edit them on the Criteria step).");
+        criteriaInfo.setText(cf == null ? "No criteria file was found beside the data; criteria typed before are "
+                + "kept, the others are set on the next step." : "Criteria read from " + cf.getFileName() + " (edit them on the Criteria step).");
     }
 
     /** @return the Import button (default button of this step) */

@@ -16,7 +16,6 @@ import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.ListSelectionModel;
 import javax.swing.RowFilter;
-import javax.swing.SwingWorker;
 import javax.swing.table.AbstractTableModel;
 import javax.swing.table.DefaultTableCellRenderer;
 import javax.swing.table.TableRowSorter;
@@ -30,7 +29,6 @@ import org.holdpoint.ui.model.ResultsTable;
 import org.holdpoint.ui.model.StudySession;
 import org.holdpoint.ui.model.VerdictLook;
 import org.holdpoint.workflow.Format;
-import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
 
 /** The Results step: one row per characteristic, sortable and filterable; the selected one in detail with its chart. */
@@ -45,9 +43,15 @@ final class ResultsPanel extends JPanel {
     private final JLabel shown = new JLabel(" ");
     private final JEditorPane detail = new JEditorPane("text/html", "");
     private final javax.swing.JTabbedPane chartTabs = new javax.swing.JTabbedPane();
-    private final ChartPanel[] charts = {chartPanel(), chartPanel(), chartPanel()};
+    private final transient java.util.concurrent.ExecutorService renderer =
+            java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
+                Thread t = new Thread(r, "holdpoint-charts");
+                t.setDaemon(true);
+                return t;
+            });
+    private final ChartView[] charts = {new ChartView(renderer), new ChartView(renderer), new ChartView(renderer)};
     private final JLabel chartNote = new JLabel(" ", JLabel.CENTER);
-    private transient SwingWorker<List<JFreeChart>, Void> chartWorker;
+    private JSplitPane split;
 
     ResultsPanel(StudySession session) {
         super(new BorderLayout());
@@ -73,7 +77,7 @@ final class ResultsPanel extends JPanel {
                 return results.shows(e.getIdentifier());
             }
         });
-        int[] widths = {115, 185, 250, 50, 110, 230, 150, 80};
+        int[] widths = {115, 185, 250, 50, 125, 230, 150, 80};
         for (int i = 0; i < widths.length; i++) {
             table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -104,14 +108,7 @@ final class ResultsPanel extends JPanel {
         chartTabs.setName("charts");
     }
 
-    private static ChartPanel chartPanel() {
-        ChartPanel c = new ChartPanel(null, false, true, true, true, true);
-        c.setMinimumDrawWidth(200);
-        c.setMinimumDrawHeight(150);
-        c.setMaximumDrawWidth(4000);
-        c.setMaximumDrawHeight(3000);
-        return c;
-    }
+
 
     private void layoutComponents() {
         JPanel top = new JPanel(new BorderLayout());
@@ -131,7 +128,7 @@ final class ResultsPanel extends JPanel {
         chartBox.add(chartNote, BorderLayout.SOUTH);
         JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, detailScroll, chartBox);
         lower.setResizeWeight(0.5);
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), lower);
+        split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), lower);
         split.setResizeWeight(0.42);
         split.setBorder(BorderFactory.createEmptyBorder(0, 24, 12, 24));
         add(split, BorderLayout.CENTER);
@@ -140,9 +137,20 @@ final class ResultsPanel extends JPanel {
     private void refreshRows() {
         String keep = results.selected();
         model.fireTableDataChanged();
+        javax.swing.SwingUtilities.invokeLater(this::fitTable);
         refreshShown();
         selectInTable(keep);
         refreshDetail();
+    }
+
+    /** Gives the table the height of its rows (at most half the step), so that a short study shows whole. */
+    private void fitTable() {
+        int h = split.getHeight();
+        if (h <= 0 || table.getRowCount() == 0) {
+            return;
+        }
+        int want = table.getTableHeader().getPreferredSize().height + table.getRowCount() * table.getRowHeight() + 6;
+        split.setDividerLocation(Math.min(h / 2, Math.max(h / 4, want)));
     }
 
     private void selectInTable(String name) {
@@ -172,44 +180,28 @@ final class ResultsPanel extends JPanel {
     }
 
     private void drawChart(CharacteristicData data, CharacteristicResult r) {
-        if (chartWorker != null) {
-            chartWorker.cancel(true);
-        }
-        setCharts(null);
         if (data == null) {
+            setCharts(null);
             chartNote.setText("No data for a chart.");
             return;
         }
-        chartNote.setText("Drawing the chart…");
-        chartWorker = new SwingWorker<>() {
-            /** Runs on a worker thread: box statistics and the chart object, no painting. */
-            @Override
-            protected List<JFreeChart> doInBackground() {
-                return StudyCharts.withDefaults().characteristicCharts(1, 1, r, data).stream()
-                        .map(NamedChart::chart).toList();
-            }
-
-            /** Runs on the event thread. */
-            @Override
-            protected void done() {
-                if (isCancelled()) {
-                    return;
+        chartNote.setText(" ");
+        java.util.concurrent.atomic.AtomicReference<List<NamedChart>> built = new java.util.concurrent.atomic.AtomicReference<>();
+        for (int i = 0; i < charts.length; i++) {
+            int k = i;
+            // Runs on the render thread, in order: the first view builds all three charts once.
+            charts[i].show(() -> {
+                if (built.get() == null) {
+                    built.set(StudyCharts.withDefaults().characteristicCharts(1, 1, r, data));
                 }
-                try {
-                    setCharts(get());
-                    chartNote.setText(" ");
-                } catch (InterruptedException | java.util.concurrent.ExecutionException e) {
-                    chartNote.setText("The chart could not be drawn: " + (e.getCause() == null ? e.getMessage()
-                            : e.getCause().getMessage()));
-                }
-            }
-        };
-        chartWorker.execute();
+                return built.get().get(k).chart();
+            });
+        }
     }
 
     private void setCharts(List<JFreeChart> list) {
-        for (int i = 0; i < charts.length; i++) {
-            charts[i].setChart(list == null || i >= list.size() ? null : list.get(i));
+        for (ChartView c : charts) {
+            c.clear(" ");
         }
     }
 
@@ -234,8 +226,8 @@ final class ResultsPanel extends JPanel {
         return table;
     }
 
-    /** @return the box plot panel (for tests) */
-    ChartPanel boxPlotPanel() {
+    /** @return the box plot view (for tests) */
+    ChartView boxPlotView() {
         return charts[0];
     }
 

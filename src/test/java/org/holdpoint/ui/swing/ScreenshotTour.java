@@ -36,6 +36,34 @@ public final class ScreenshotTour {
             d.screenshot(out.resolve((s.ordinal() + 1) + "-" + s.name().toLowerCase(java.util.Locale.ROOT) + suffix
                     + ".png"));
         }
+        // A criterion typed wrongly: the reason shows beside the cell.
+        WindowDriver.onEdt(() -> {
+            win.session().criteria().set(2, org.holdpoint.ui.model.CriteriaColumn.USL, "0,006");
+            win.show(Step.CRITERIA);
+            return null;
+        });
+        d.screenshot(out.resolve("3-criteria-check" + suffix + ".png"));
+        // A messy copy of the demo data: unusable cells are marked in the preview and listed in the report.
+        java.nio.file.Path messy = java.nio.file.Files.createTempDirectory("holdpoint-tour").resolve("messy.csv");
+        java.util.List<String> lines = new java.util.ArrayList<>(java.nio.file.Files.readAllLines(
+                win.session().dataForm().file()));
+        lines.set(3, lines.get(3).replaceAll(",[^,]*$", ",n/a"));
+        lines.set(7, lines.get(7).replaceAll(",[^,]*$", ","));
+        lines.set(12, lines.get(12).replaceAll(",[^,]*$", ",#DIV/0!"));
+        java.nio.file.Files.write(messy, lines);
+        WindowDriver.onEdt(() -> {
+            win.session().criteria().set(2, org.holdpoint.ui.model.CriteriaColumn.USL, "0.006");
+            win.session().dataForm().setFile(messy);
+            win.session().importAndAnalyse();
+            return null;
+        });
+        WindowDriver.await("the messy import", () -> !win.session().busy() && win.session().data() != null
+                && win.session().data().report().skippedTotal() > 0, 60_000);
+        WindowDriver.onEdt(() -> {
+            win.show(Step.DATA);
+            return null;
+        });
+        d.screenshot(out.resolve("2-data-skipped" + suffix + ".png"));
         d.close();
         System.exit(0);
     }
