@@ -64,11 +64,12 @@ final class CriteriaPanel extends JPanel {
                         new JComboBox<>(c.choices().toArray(String[]::new))));
             }
         }
-        int[] widths = {200, 50, 70, 70, 70, 85, 120, 120, 115, 90, 300};
+        int[] widths = {200, 50, 75, 75, 75, 80, 110, 115, 115, 90, 90};
         for (int i = 0; i < widths.length; i++) {
             grid.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
-        grid.setAutoResizeMode(JTable.AUTO_RESIZE_ALL_COLUMNS);
+        grid.setAutoResizeMode(JTable.AUTO_RESIZE_LAST_COLUMN);
+        grid.getSelectionModel().addListSelectionListener(e -> refreshSummary());
         Runnable ra = Bind.text(alpha, table::alpha, table::setAlpha);
         table.addListener(CriteriaTable.Property.ALPHA, e -> {
             ra.run();
@@ -134,8 +135,12 @@ final class CriteriaPanel extends JPanel {
         tools.add(copy);
         tools.add(javax.swing.Box.createHorizontalStrut(24));
         tools.add(analyse);
-        tools.add(summary);
-        top.add(tools, BorderLayout.SOUTH);
+        JPanel lower = new JPanel(new BorderLayout());
+        lower.add(tools, BorderLayout.NORTH);
+        summary.setName("criteria.problem");
+        summary.setBorder(BorderFactory.createEmptyBorder(6, 8, 0, 0));
+        lower.add(summary, BorderLayout.SOUTH);
+        top.add(lower, BorderLayout.SOUTH);
         add(top, BorderLayout.NORTH);
         JScrollPane sp = new JScrollPane(grid);
         sp.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createEmptyBorder(0, 24, 16, 24),
@@ -156,14 +161,24 @@ final class CriteriaPanel extends JPanel {
         if (sel != null) {
             copySource.setSelectedItem(sel);
         }
+        refreshSummary();
+    }
+
+    /** The reason of the selected row's problem (or the first one) in full, under the toolbar. */
+    private void refreshSummary() {
         int bad = table.rowsWithProblems();
-        String first = null;
-        for (int r = 0; r < table.rowCount() && first == null; r++) {
-            String p = table.rowProblem(r);
-            first = p == null ? null : table.name(r) + " — " + p;
+        String shown = null;
+        int sel = grid.getSelectedRow();
+        if (sel >= 0 && sel < table.rowCount() && table.rowProblem(sel) != null) {
+            shown = table.name(sel) + " — " + table.rowProblem(sel);
         }
+        for (int r = 0; r < table.rowCount() && shown == null; r++) {
+            String p = table.rowProblem(r);
+            shown = p == null ? null : table.name(r) + " — " + p;
+        }
+        summary.setForeground(bad == 0 ? UIManager.getColor("Label.foreground") : errorText());
         summary.setText(bad == 0 ? (table.rowCount() == 0 ? "Open data first." : "All criteria are valid.")
-                : "⚠ " + bad + " row(s) to correct. " + first);
+                : "⚠ " + bad + " row(s) to correct. " + shown);
     }
 
     private void stopEditing() {
@@ -201,6 +216,10 @@ final class CriteriaPanel extends JPanel {
         table.copyFrom(from, rows);
     }
 
+    private static Color errorText() {
+        return com.formdev.flatlaf.FlatLaf.isLafDark() ? new Color(0xFF, 0x9A, 0x8C) : new Color(0xB0, 0x24, 0x18);
+    }
+
     /** The criteria rows, plus a last "Check" column with the row's first problem in words. */
     private final class Model extends AbstractTableModel {
         private static final long serialVersionUID = 1L;
@@ -229,7 +248,7 @@ final class CriteriaPanel extends JPanel {
         public Object getValueAt(int r, int c) {
             if (c == CriteriaColumn.values().length) {
                 String p = table.rowProblem(r);
-                return p == null ? "ok" : "⚠ " + p;
+                return p == null ? "ok" : "⚠ " + p.substring(0, p.indexOf(':'));
             }
             return table.get(r, CriteriaColumn.values()[c]);
         }
@@ -250,7 +269,7 @@ final class CriteriaPanel extends JPanel {
             int mc = t.convertColumnIndexToModel(c);
             String problem = mc < CriteriaColumn.values().length ? table.problem(r, CriteriaColumn.values()[mc]) : null;
             boolean check = mc == CriteriaColumn.values().length;
-            setToolTipText(problem);
+            setToolTipText(check && !"ok".equals(v) ? table.rowProblem(r) : problem);
             setHorizontalAlignment(mc >= CriteriaColumn.LSL.ordinal() && mc <= CriteriaColumn.MARGIN.ordinal()
                     || mc == CriteriaColumn.SD_GROWTH.ordinal() || mc == CriteriaColumn.CAPABILITY.ordinal()
                     ? RIGHT : LEFT);
@@ -267,7 +286,7 @@ final class CriteriaPanel extends JPanel {
             }
             if (check && !sel) {
                 boolean ok = "ok".equals(v);
-                setForeground(ok ? UIManager.getColor("Table.foreground") : error == null ? Color.RED : error);
+                setForeground(ok ? UIManager.getColor("Table.foreground") : errorText());
             } else if (!sel) {
                 setForeground(UIManager.getColor("Table.foreground"));
             }

@@ -127,7 +127,8 @@ final class ResultsPanel extends JPanel {
         chartBox.add(chartTabs, BorderLayout.CENTER);
         chartBox.add(chartNote, BorderLayout.SOUTH);
         JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, detailScroll, chartBox);
-        lower.setResizeWeight(0.5);
+        lower.setResizeWeight(0.45);
+        lower.setDividerLocation(0.45);
         split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), lower);
         split.setResizeWeight(0.42);
         split.setBorder(BorderFactory.createEmptyBorder(0, 24, 12, 24));
@@ -213,7 +214,7 @@ final class ResultsPanel extends JPanel {
             sb.append("<p style='margin-top:10px; margin-bottom:2px'><b>").append(Dialogs.esc(s.title()))
                     .append("</b></p><table cellspacing='0' cellpadding='2'>");
             for (ResultDetail.Line l : s.lines()) {
-                sb.append("<tr><td valign='top' width='170'>").append(Dialogs.esc(l.label())).append("</td><td>")
+                sb.append("<tr><td valign='top' width='150'>").append(Dialogs.esc(l.label())).append("</td><td>")
                         .append(Dialogs.esc(l.value())).append("</td></tr>");
             }
             sb.append("</table>");

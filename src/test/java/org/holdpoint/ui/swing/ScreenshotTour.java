@@ -29,6 +29,10 @@ public final class ScreenshotTour {
         WindowDriver.await("the demo results", () -> win.session().results().result() != null, 60_000);
         String suffix = theme == Themes.DARK ? "-dark" : "";
         for (Step s : Step.values()) {
+            if (s == Step.SIGN_OFF) {
+                WindowDriver.onEdt(() -> win.session().signOff().sign(org.holdpoint.study.Signature.Stage.PREPARED,
+                        "J. Okafor", "process engineer, cell 4", "prepared the study and its data"));
+            }
             WindowDriver.onEdt(() -> {
                 win.show(s);
                 return null;
