@@ -81,6 +81,10 @@ public interface TaskRunner {
         } catch (Progress.CancelledException | InterruptedException e) {
             return new Outcome<>(TaskStatus.CANCELLED, null, null);
         } catch (Exception | OutOfMemoryError e) {
+            // A cancel interrupts the worker, which can surface as an I/O failure of the file being read.
+            if (progress.cancelled()) {
+                return new Outcome<>(TaskStatus.CANCELLED, null, null);
+            }
             return new Outcome<>(TaskStatus.FAILED, null, UserMessage.of(e));
         }
     }

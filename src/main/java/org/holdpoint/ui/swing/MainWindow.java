@@ -177,9 +177,8 @@ public final class MainWindow extends JFrame {
     private void layoutComponents() {
         JPanel root = new JPanel(new BorderLayout());
         JPanel top = new JPanel(new BorderLayout(12, 2));
-        top.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createMatteBorder(0, 0, 1, 0,
-                javax.swing.UIManager.getColor("Component.borderColor")), BorderFactory.createEmptyBorder(10, 16, 10,
-                16)));
+        top.setBorder(BorderFactory.createCompoundBorder(new EdgeBorder(0, 0, 1, 0),
+                BorderFactory.createEmptyBorder(10, 16, 10, 16)));
         JPanel texts = new JPanel(new GridLayout(2, 1));
         texts.setOpaque(false);
         texts.add(banner);
@@ -193,8 +192,7 @@ public final class MainWindow extends JFrame {
         }
         JPanel west = new JPanel(new BorderLayout());
         west.add(steps, BorderLayout.NORTH);
-        west.setBorder(BorderFactory.createMatteBorder(0, 0, 0, 1,
-                javax.swing.UIManager.getColor("Component.borderColor")));
+        west.setBorder(new EdgeBorder(0, 0, 0, 1));
         root.add(west, BorderLayout.WEST);
         root.add(center, BorderLayout.CENTER);
         JPanel south = new JPanel(new BorderLayout());
@@ -211,8 +209,7 @@ public final class MainWindow extends JFrame {
         south.add(cautions, BorderLayout.CENTER);
         status.setBorder(BorderFactory.createEmptyBorder(2, 16, 6, 16));
         south.add(status, BorderLayout.SOUTH);
-        south.setBorder(BorderFactory.createMatteBorder(1, 0, 0, 0,
-                javax.swing.UIManager.getColor("Component.borderColor")));
+        south.setBorder(new EdgeBorder(1, 0, 0, 0));
         root.add(south, BorderLayout.SOUTH);
         setContentPane(root);
         for (Step s : Step.values()) {

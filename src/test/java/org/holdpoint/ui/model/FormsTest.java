@@ -105,6 +105,20 @@ class FormsTest {
         assertThat(bad.status()).isEqualTo(TaskStatus.FAILED);
         assertThat(bad.problem().what()).isEqualTo("data.csv, cell C7: \"n/a\" is not a number");
         assertThat(bad.problem().whatToDo()).contains("Nothing you typed has been lost");
+        Progress stopped = new Progress() {
+            @Override
+            public void step(String what, double fraction) {
+            }
+
+            @Override
+            public boolean cancelled() {
+                return true;
+            }
+        };
+        assertThat(TaskRunner.outcome(p -> {
+            throw new java.io.UncheckedIOException(new java.nio.channels.ClosedByInterruptException());
+        }, stopped).status()).as("an interrupted read after Cancel is a cancel, not a failure")
+                .isEqualTo(TaskStatus.CANCELLED);
         TaskRunner.Outcome<Object> odd = TaskRunner.outcome(p -> {
             throw new IllegalStateException("boom");
         }, Progress.NONE);

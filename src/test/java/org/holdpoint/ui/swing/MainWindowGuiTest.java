@@ -108,6 +108,14 @@ class MainWindowGuiTest {
         assertThat(shot.getWidth()).isGreaterThan(800);
         assertThat(distinctColours(shot)).as("the screenshot shows a drawn window, not a blank area")
                 .isGreaterThan(50);
+
+        // Everything is saved, so closing asks nothing and disposes the window.
+        assertThat(WindowDriver.onEdt(() -> w.session().dirty())).isFalse();
+        WindowDriver.onEdt(() -> {
+            w.closeWindow();
+            return null;
+        });
+        assertThat(WindowDriver.onEdt(w::isDisplayable)).isFalse();
     }
 
     static JComponent find(java.awt.Container root, String name) {
