@@ -250,6 +250,61 @@ public final class StudySession {
     }
 
     /**
+     * Leaves one value out of the analysis, with the reason the record keeps, then analyses again.
+     *
+     * @param characteristic the characteristic the value belongs to
+     * @param cell           its cell, e.g. {@code D12} or {@code Data!D12}
+     * @param reason         why it is left out (required)
+     * @return null when accepted, else why not in plain words
+     */
+    public String exclude(String characteristic, String cell, String reason) {
+        CharacteristicData c = characteristic(characteristic);
+        if (c == null) {
+            return "Choose a characteristic of the current data.";
+        }
+        String t = cell == null ? "" : cell.trim().toUpperCase(java.util.Locale.ROOT);
+        if (!t.matches("([^!]+!)?[A-Z]{1,3}[1-9][0-9]*")) {
+            return "Give the cell of the value as a column letter and row number, e.g. D12.";
+        }
+        if (!holds(c.before(), t) && !holds(c.after(), t)) {
+            return "Cell " + t + " holds no value of \"" + characteristic + "\"; see the Data step for the cells read.";
+        }
+        if (reason == null || reason.isBlank()) {
+            return "Say why the value is left out; the record keeps the reason.";
+        }
+        List<Exclusion> l = new java.util.ArrayList<>(exclusions);
+        l.add(new Exclusion(characteristic, t, reason.trim()));
+        exclusions = List.copyOf(l);
+        setDirty(true);
+        analyse();
+        return null;
+    }
+
+    /** @return the values left out so far, each with its reason */
+    public List<Exclusion> exclusions() {
+        return exclusions;
+    }
+
+    /** Takes every exclusion back and analyses again. */
+    public void clearExclusions() {
+        if (!exclusions.isEmpty()) {
+            exclusions = List.of();
+            setDirty(true);
+            analyse();
+        }
+    }
+
+    private static boolean holds(org.holdpoint.study.GroupData g, String cell) {
+        String bare = cell.contains("!") ? cell.substring(cell.indexOf('!') + 1) : cell;
+        for (int i = 0; i < g.size(); i++) {
+            if (g.origin(i).cell().equals(bare)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
      * Saves the study (change, data, criteria, signatures, results) to a study file.
      *
      * @param target the file

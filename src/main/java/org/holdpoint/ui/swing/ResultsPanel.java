@@ -118,6 +118,15 @@ final class ResultsPanel extends JPanel {
         tools.add(Bind.label("Show", 'W', filter));
         tools.add(filter);
         tools.add(shown);
+        tools.add(javax.swing.Box.createHorizontalStrut(24));
+        javax.swing.JButton exclude = new javax.swing.JButton("Exclude a value…");
+        exclude.setMnemonic('X');
+        exclude.setToolTipText("Leave one value of the selected characteristic out, with a reason the record keeps");
+        exclude.addActionListener(e -> excludeValue());
+        tools.add(exclude);
+        javax.swing.JButton restore = new javax.swing.JButton("Take back exclusions");
+        restore.addActionListener(e -> session.clearExclusions());
+        tools.add(restore);
         top.add(tools, BorderLayout.CENTER);
         top.add(Bind.hint("Difference = after − before; equivalence interval at 1 − 2α; sd ratio = sd(after)/sd(before)."
                 + " Click a heading to sort; select a row for its numbers and charts."), BorderLayout.SOUTH);
@@ -142,6 +151,31 @@ final class ResultsPanel extends JPanel {
         refreshShown();
         selectInTable(keep);
         refreshDetail();
+    }
+
+    private void excludeValue() {
+        CharacteristicResult r = results.selectedResult();
+        if (r == null) {
+            return;
+        }
+        javax.swing.JTextField cell = new javax.swing.JTextField(8);
+        javax.swing.JTextField reason = new javax.swing.JTextField(30);
+        JPanel p = new JPanel(new java.awt.GridLayout(0, 1, 0, 4));
+        p.add(new JLabel("Leave one value of \"" + r.name() + "\" out of the analysis."));
+        p.add(Bind.label("Cell of the value (see the Data step), e.g. D12", 'C', cell));
+        p.add(cell);
+        p.add(Bind.label("Reason (kept in the record)", 'R', reason));
+        p.add(reason);
+        while (javax.swing.JOptionPane.showConfirmDialog(this, p, "Exclude a value",
+                javax.swing.JOptionPane.OK_CANCEL_OPTION, javax.swing.JOptionPane.PLAIN_MESSAGE)
+                == javax.swing.JOptionPane.OK_OPTION) {
+            String why = session.exclude(r.name(), cell.getText(), reason.getText());
+            if (why == null) {
+                return;
+            }
+            javax.swing.JOptionPane.showMessageDialog(this, why, "Exclude a value",
+                    javax.swing.JOptionPane.WARNING_MESSAGE);
+        }
     }
 
     /** Gives the table the height of its rows (at most half the step), so that a short study shows whole. */

@@ -153,6 +153,26 @@ class StudySessionTest {
     }
 
     @Test
+    void aValueIsExcludedOnlyWithAReasonAndTheRecordKeepsIt() {
+        String name = s.criteria().name(0);
+        String cell = s.characteristic(name).before().origin(0).cell();
+        int n = s.results().row(0).before().n();
+        assertThat(s.exclude(name, cell, " ")).startsWith("Say why");
+        assertThat(s.exclude(name, "ZZ9999", "typo")).contains("holds no value");
+        assertThat(s.exclude(name, "12", "typo")).startsWith("Give the cell");
+        assertThat(s.exclude(name, cell.toLowerCase(java.util.Locale.ROOT), "gauge slipped")).isNull();
+        assertThat(s.exclusions()).singleElement().satisfies(e -> {
+            assertThat(e.cell()).isEqualTo(cell);
+            assertThat(e.reason()).isEqualTo("gauge slipped");
+        });
+        assertThat(s.results().row(0).before().n()).isEqualTo(n - 1);
+        assertThat(s.study().settings().exclusions()).hasSize(1);
+        assertThat(s.dirty()).isTrue();
+        s.clearExclusions();
+        assertThat(s.results().row(0).before().n()).isEqualTo(n);
+    }
+
+    @Test
     void aCancelledTaskChangesNothing() {
         Object data = s.data();
         TaskRunner cancelling = new TaskRunner() {
