@@ -25,8 +25,8 @@ final class ColumnNames {
     static final Set<String> LOT = Set.of("lot", "lot no", "lot number", "lot id", "batch", "batch no",
             "batch number", "batch id");
     static final Set<String> SUBGROUP = Set.of("subgroup", "sub group", "subgroup id", "subgroup no");
-    static final Set<String> SEQUENCE = Set.of("sequence", "seq", "sequence no", "sequence number", "run",
-            "run order", "order", "timestamp", "time stamp", "time", "date", "date time", "datetime", "measured at");
+    static final Set<String> SEQUENCE = Set.of("sequence", "seq", "sequence no", "sequence number", "run order",
+            "run no", "timestamp", "time stamp", "date", "date time", "datetime", "measured at");
     static final Set<String> MEASUREMENT_UNIT = Set.of("uom", "unit of measure", "units", "measurement unit");
 
     private ColumnNames() {

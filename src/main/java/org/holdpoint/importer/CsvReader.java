@@ -73,10 +73,6 @@ final class CsvReader {
         String sample = new String(head, bom, head.length - bom, cs);
         char delim = delimiter != null ? delimiter : detectDelimiter(sample);
         char dec = decimalSeparator != null ? decimalSeparator : detectDecimal(sample, delim);
-        if (delim == dec) {
-            throw new ImportException("file %s: the delimiter and the decimal separator are both '%s'; give a "
-                    + "different delimiter or decimal separator", name, delim);
-        }
         messages.add(String.format(java.util.Locale.ROOT, "%s read as text: delimiter %s, decimal separator '%s', %s",
                 name, describe(delim), dec, cs.name()));
         SheetData data = new SheetData(name, null, dec);
@@ -198,10 +194,20 @@ final class CsvReader {
         return ',';
     }
 
-    /** ',' when numbers with a decimal comma outnumber those with a point (never with a comma delimiter). */
+    private static final java.util.regex.Pattern QUOTED_COMMA_NUMBER = java.util.regex.Pattern.compile(
+            "\"\\s*[+-]?\\d*,\\d+\\s*\"");
+    private static final java.util.regex.Pattern POINT_NUMBER = java.util.regex.Pattern.compile(
+            "(^|[,\"])\\s*[+-]?\\d*\\.\\d+\\s*(?=[,\"\\r\\n]|$)", java.util.regex.Pattern.MULTILINE);
+
+    /**
+     * ',' when numbers with a decimal comma outnumber those with a point; with a comma delimiter only
+     * quoted numbers can carry a decimal comma.
+     */
     static char detectDecimal(String sample, char delim) {
         if (delim == ',') {
-            return '.';
+            long comma = QUOTED_COMMA_NUMBER.matcher(sample).results().count();
+            long point = POINT_NUMBER.matcher(sample).results().count();
+            return comma > point ? ',' : '.';
         }
         int comma = 0;
         int point = 0;

@@ -95,8 +95,8 @@ public final class DataImporter {
         SheetData data;
         try {
             data = switch (kind) {
-                case ZIP -> XlsxReader.read(path, name, sheet, decimal(r), log.messages());
-                case OLE2 -> XlsReader.read(path, name, sheet, decimal(r), log.messages());
+                case ZIP -> XlsxReader.read(path, name, sheet, r.decimalSeparator(), log.messages());
+                case OLE2 -> XlsReader.read(path, name, sheet, r.decimalSeparator(), log.messages());
                 case TEXT -> {
                     if (sheet != null) {
                         log.message(name + " is a text file; the sheet option is ignored for it");
@@ -127,10 +127,6 @@ public final class DataImporter {
             a.unknownLabels.addAll(unknown);
         }
         return new Source(name, sha, data.sheet(), plan, unknown);
-    }
-
-    private static Character decimal(ImportRequest r) {
-        return r.decimalSeparator();
     }
 
     private static String stem(Path path) {
@@ -315,7 +311,10 @@ public final class DataImporter {
             sb.append(skipped("after", a.skippedAfter, a.firstSkipAfter));
         }
         Plan plan = sources.get(0).plan();
-        if (!a.unknownLabels.isEmpty()) {
+        boolean cellsSkipped = noB && !a.skippedBefore.isEmpty() || noA && !a.skippedAfter.isEmpty();
+        if (cellsSkipped && a.unknownLabels.isEmpty()) {
+            sb.append(". Correct those cells (measurements must be numbers) or export the values again");
+        } else if (!a.unknownLabels.isEmpty()) {
             sb.append(String.format(Locale.ROOT, ". The group column holds the label(s) %s, which are neither \"%s\" nor "
                     + "\"%s\": name the labels with the before-label and after-label options", a.unknownLabels
                             .stream().map(s -> "\"" + s + "\"").collect(Collectors.joining(", ")), plan.beforeKey(),

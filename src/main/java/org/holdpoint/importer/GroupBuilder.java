@@ -16,10 +16,10 @@ final class GroupBuilder {
     private final boolean withSubgroups;
     private final boolean withSequence;
     private int size;
-    private long[] unscaled = new long[16];
-    private byte[] scales = new byte[16];
-    private int[] rows = new int[16];
-    private int[] cols = new int[16];
+    private long[] unscaled;
+    private byte[] scales;
+    private int[] rows;
+    private int[] cols;
     private String[] units;
     private String[] lots;
     private String[] subgroups;
@@ -35,16 +35,29 @@ final class GroupBuilder {
      */
     GroupBuilder(String file, String sheet, boolean withUnits, boolean withLots, boolean withSubgroups,
             boolean withSequence) {
+        this(file, sheet, withUnits, withLots, withSubgroups, withSequence, 16);
+    }
+
+    /**
+     * @param capacity the number of values expected (a hint)
+     */
+    GroupBuilder(String file, String sheet, boolean withUnits, boolean withLots, boolean withSubgroups,
+            boolean withSequence, int capacity) {
+        int cap = Math.max(16, capacity);
+        unscaled = new long[cap];
+        scales = new byte[cap];
+        rows = new int[cap];
+        cols = new int[cap];
         this.file = file;
         this.sheet = sheet;
         this.withUnits = withUnits;
         this.withLots = withLots;
         this.withSubgroups = withSubgroups;
         this.withSequence = withSequence;
-        units = withUnits ? new String[16] : null;
-        lots = withLots ? new String[16] : null;
-        subgroups = withSubgroups ? new String[16] : null;
-        sequence = withSequence ? new String[16] : null;
+        units = withUnits ? new String[cap] : null;
+        lots = withLots ? new String[cap] : null;
+        subgroups = withSubgroups ? new String[cap] : null;
+        sequence = withSequence ? new String[cap] : null;
     }
 
     /** @return a new empty builder with the same source and columns */
@@ -166,6 +179,10 @@ final class GroupBuilder {
         return org.holdpoint.study.Origin.columnName(cols[i]) + rows[i];
     }
 
+    private static int[] fit(int[] a, int n) {
+        return a.length == n ? a : Arrays.copyOf(a, n);
+    }
+
     /**
      * Builds the group: exact decimals at their largest common scale when every value is exact and
      * fits, else the correctly rounded doubles.
@@ -205,7 +222,7 @@ final class GroupBuilder {
             }
             sample = Sample.of(d);
         }
-        return new GroupData(sample, file, sheet, Arrays.copyOf(rows, n), Arrays.copyOf(cols, n),
+        return new GroupData(sample, file, sheet, fit(rows, n), fit(cols, n),
                 units == null ? null : Arrays.copyOf(units, n), lots == null ? null : Arrays.copyOf(lots, n),
                 subgroups == null ? null : Arrays.copyOf(subgroups, n),
                 sequence == null ? null : Arrays.copyOf(sequence, n));

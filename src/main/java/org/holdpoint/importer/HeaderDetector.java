@@ -5,7 +5,7 @@ import java.util.List;
 
 /**
  * Finds the header row: the last row without numbers above the first run of three data rows (rows
- * holding a number) whose texts do not occur again below in the same column (repeated texts are
+ * holding a number) whose texts occur only once in their columns (repeated texts are
  * group labels or text values, i.e. data); title rows above the header are passed over. Merged header cells lend their text to
  * every column they span; a merged cell spanning several columns in the row above the header becomes
  * a prefix ("Bore (mm)" over "before" and "after" gives "Bore before" and "Bore after", unit mm).
@@ -83,8 +83,8 @@ final class HeaderDetector {
     }
 
     /**
-     * Rows holding a text that occurs again further down in the same column: such a row is data (a
-     * group label, a text value), not the header, whose names do not repeat below it.
+     * Rows holding a text that occurs more than once in the same column: such a row is data (a group
+     * label, a text value), not the header, whose names do not repeat in their columns.
      */
     private static boolean[] recurring(SheetData data, int limit) {
         boolean[] rec = new boolean[limit + 2];
@@ -101,6 +101,7 @@ final class HeaderDetector {
                 Integer prev = seen.put(col.payload(i), col.row(i));
                 if (prev != null) {
                     rec[prev] = true;
+                    rec[col.row(i)] = true;
                 }
             }
         }

@@ -2,7 +2,6 @@ package org.holdpoint.importer;
 
 import java.util.BitSet;
 import java.util.EnumMap;
-import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.Map;
 import java.util.Set;
@@ -21,6 +20,7 @@ final class LayoutReader {
     private final Set<String> unknownLabels = new LinkedHashSet<>();
     private final BitSet rows;
     private final int first;
+    private int capacityHint = 16;
 
     /** The values of one characteristic found so far, with what was skipped per group. */
     static final class Accum {
@@ -102,19 +102,24 @@ final class LayoutReader {
     /** Stacked and wide: the group of each row comes from its label (or from the file's role). */
     private void readLabelled(Plan.Target t) {
         int vc = t.column();
+        SheetColumn column = data.column(vc);
+        // two groups share the column; one builder per characteristic per group
+        capacityHint = plan.charCol() >= 0 || column == null ? 16 : column.size() / 2 + 16;
         Cursor group = new Cursor(plan.groupCol());
         Cursor value = new Cursor(vc);
         Cursor chars = new Cursor(plan.charCol());
         Cursor uom = new Cursor(plan.uomCol());
         Traceability trace = new Traceability();
+        Accum fixed = t.name() == null ? null : accum(t.name(), t.unit());
+        Map<Long, Accum> byTextId = new java.util.HashMap<>();
         for (int r = rows.nextSetBit(first); r >= 0; r = rows.nextSetBit(r + 1)) {
             int vi = value.at(r);
             Boolean before = groupOf(group, r, vi, vc, t.name());
             if (before == null) {
                 continue;
             }
-            String name = t.name();
-            if (name == null) {
+            Accum a = fixed;
+            if (a == null) {
                 int ci = chars.at(r);
                 if (ci < 0) {
                     if (vi >= 0) {
@@ -122,9 +127,16 @@ final class LayoutReader {
                     }
                     continue;
                 }
-                name = data.display(chars.col, ci);
+                if (chars.col.kind(ci) == CellKind.NUMBER) {
+                    a = accum(data.display(chars.col, ci), t.unit());
+                } else {
+                    a = byTextId.get(chars.col.payload(ci));
+                    if (a == null) {
+                        a = accum(data.text(chars.col.payload(ci)), t.unit());
+                        byTextId.put(chars.col.payload(ci), a);
+                    }
+                }
             }
-            Accum a = accum(name, t.unit());
             if (a.unit == null && plan.uomCol() >= 0) {
                 int ui = uom.at(r);
                 if (ui >= 0) {
@@ -165,6 +177,7 @@ final class LayoutReader {
     /** Side by side and paired: a whole column is one group. */
     private void readColumn(Plan.Target t, int col, boolean before) {
         Cursor value = new Cursor(col);
+        capacityHint = value.col == null ? 16 : value.col.size() + 1;
         Traceability trace = new Traceability();
         Accum a = accum(t.name(), t.unit());
         if (value.col == null) {
@@ -229,7 +242,7 @@ final class LayoutReader {
         GroupBuilder g = before ? a.before : a.after;
         if (g == null) {
             g = new GroupBuilder(data.file(), data.sheet(), plan.unitCol() >= 0, plan.lotCol() >= 0,
-                    plan.subgroupCol() >= 0, plan.sequenceCol() >= 0);
+                    plan.subgroupCol() >= 0, plan.sequenceCol() >= 0, capacityHint);
             if (before) {
                 a.before = g;
             } else {
@@ -249,7 +262,9 @@ final class LayoutReader {
         if (a.unit == null) {
             a.unit = unit;
         }
-        a.where.add(data.where());
+        if (a.where.size() < 2) {
+            a.where.add(data.where());
+        }
         return a;
     }
 
@@ -309,10 +324,5 @@ final class LayoutReader {
         String sequence(int r) {
             return sequence.text(r);
         }
-    }
-
-    /** @return the accumulations with their insertion order (for callers building the map) */
-    static Map<String, Accum> newMap() {
-        return new LinkedHashMap<>();
     }
 }

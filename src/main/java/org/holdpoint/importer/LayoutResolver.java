@@ -153,6 +153,18 @@ final class LayoutResolver {
 
     private Plan plan(Layout layout, boolean paired, int groupCol, int charCol, List<Plan.Target> targets, int unitCol,
             int lotCol, int subgroupCol, int sequenceCol, int uomCol, String bKey, String aKey) {
+        Map<String, Plan.Target> seen = new LinkedHashMap<>();
+        for (Plan.Target t : targets) {
+            if (t.name() == null) {
+                continue;
+            }
+            Plan.Target prev = seen.putIfAbsent(ColumnNames.key(t.name()), t);
+            if (prev != null) {
+                throw new ImportException("%s: characteristic \"%s\" has two columns (%s and %s) in the header in row "
+                        + "%d; rename one of them so that every characteristic has one column per group", data.where(),
+                        t.name(), letter(first(prev)), letter(first(t)), header.row());
+            }
+        }
         if (paired && unitCol < 0) {
             throw new ImportException("%s: pairs are matched by unit id, but the header in row %d has no unit id "
                     + "column (%s). Add a column named unit holding each part's id, or name it with the unit id "
@@ -327,6 +339,14 @@ final class LayoutResolver {
             }
         }
         return false;
+    }
+
+    private static int first(Plan.Target t) {
+        return t.column() >= 0 ? t.column() : t.beforeCol();
+    }
+
+    private static String letter(int col) {
+        return org.holdpoint.study.Origin.columnName(col + 1);
     }
 
     static String quote(String s) {

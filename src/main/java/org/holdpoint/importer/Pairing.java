@@ -76,7 +76,7 @@ final class Pairing {
         for (int i = 0; i < g.size(); i++) {
             Integer prev = m.putIfAbsent(g.unit(i), i);
             if (prev != null) {
-                throw new ImportException("%s%s, characteristic %s: unit id \"%s\" appears twice in the %s group "
+                throw new ImportException("file %s%s, characteristic %s: unit id \"%s\" appears twice in the %s group "
                         + "(cells %s and %s). In a paired design every unit is measured once before and once after; "
                         + "correct the duplicate id", g.file(), g.sheet() == null ? "" : ", sheet " + g.sheet(), name,
                         g.unit(i), which, g.cell(prev), g.cell(i));

@@ -50,9 +50,4 @@ record Plan(Layout layout, boolean paired, Role role, Header header, int groupCo
     Plan {
         targets = List.copyOf(targets);
     }
-
-    /** @return whether the layout has a before and an after column per characteristic */
-    boolean columnsPerGroup() {
-        return targets.stream().anyMatch(t -> t.beforeCol() >= 0);
-    }
 }

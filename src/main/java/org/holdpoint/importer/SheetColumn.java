@@ -11,10 +11,21 @@ import java.util.Arrays;
  */
 final class SheetColumn {
     private int size;
-    private int[] rows = new int[8];
-    private byte[] kinds = new byte[8];
-    private byte[] scales = new byte[8];
-    private long[] payloads = new long[8];
+    private int[] rows;
+    private byte[] kinds;
+    private byte[] scales;
+    private long[] payloads;
+
+    /**
+     * @param capacity the number of cells expected (a hint; the column grows as needed)
+     */
+    SheetColumn(int capacity) {
+        int n = Math.max(8, capacity);
+        rows = new int[n];
+        kinds = new byte[n];
+        scales = new byte[n];
+        payloads = new long[n];
+    }
 
     /** @return the number of non-blank cells */
     int size() {

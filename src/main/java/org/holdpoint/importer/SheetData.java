@@ -25,6 +25,7 @@ final class SheetData {
     private final List<int[]> merged = new ArrayList<>();
     private final DecimalParser parser;
     private String[] keys = new String[16];
+    private int capacityHint = 8;
     private long numbersFromText;
 
     /**
@@ -108,6 +109,19 @@ final class SheetData {
         return merged;
     }
 
+    /**
+     * The sheet's declared extent (a workbook's dimension), so columns can be sized once; at most
+     * 8 million cells are reserved in all.
+     *
+     * @param rows    the number of rows declared
+     * @param columns the number of columns declared
+     */
+    void sizeHint(int rows, int columns) {
+        if (rows > 0 && columns > 0) {
+            capacityHint = (int) Math.min(rows, Math.max(8, 8_000_000L / columns));
+        }
+    }
+
     void addMerged(int firstRow, int lastRow, int firstCol, int lastCol) {
         merged.add(new int[] {firstRow, lastRow, firstCol, lastCol});
     }
@@ -123,7 +137,7 @@ final class SheetData {
         }
         SheetColumn c = columns[col];
         if (c == null) {
-            c = new SheetColumn();
+            c = new SheetColumn(capacityHint);
             columns[col] = c;
         }
         if (col >= columnCount) {
@@ -216,6 +230,13 @@ final class SheetData {
                 preparedKind = CellKind.NUMBER;
                 preparedScale = -1;
                 preparedPayload = Double.doubleToRawLongBits(parser.value);
+                return true;
+            }
+            if (r == DecimalParser.DOUBLE_ONLY) {
+                // a number too large for binary64, such as 1e400
+                preparedKind = CellKind.NOT_FINITE;
+                preparedScale = 0;
+                preparedPayload = id(t);
                 return true;
             }
         }

@@ -132,6 +132,14 @@ class CsvImportTest {
     }
 
     @Test
+    void commaDelimiterWithQuotedDecimalCommas() {
+        Path f = write(dir, "q.csv", "phase,value\nbefore,\"10,25\"\nbefore,\"10,5\"\nafter,\"10,75\"\nafter,11\n");
+        CharacteristicData c = only(read(f));
+        assertThat(values(c.before())).containsExactly(10.25, 10.5);
+        assertThat(values(c.after())).containsExactly(10.75, 11.0);
+    }
+
+    @Test
     void tabSeparatedWithTitleRowsAndBom() {
         Path f = write(dir, "t.tsv", "\uFEFFTrial 7 - cover plate\nexported 2026-11-30\n\nphase\tvalue\nbefore\t1\n"
                 + "before\t2\nafter\t3\nafter\t4\n");
@@ -155,6 +163,14 @@ class CsvImportTest {
         assertThat(values(only(d).before())).containsExactly(1.0, 7.0);
         assertThat(d.report().firstSkipped()).anyMatch(s -> s.origin().cell().equals("D13")
                 && s.reason() == SkipReason.OUTSIDE_COLUMNS);
+    }
+
+    @Test
+    void numbersBeyondBinary64AreNotFinite() {
+        Path f = write(dir, "big.csv", "before,after\n1,2\n1e400,3\n-1E999,4\n");
+        Dataset d = read(f);
+        assertThat(values(only(d).before())).containsExactly(1.0);
+        assertThat(d.report().skipCounts()).containsEntry(SkipReason.NOT_FINITE, 2L);
     }
 
     @Test

@@ -153,6 +153,18 @@ class WorkbookImportTest {
 
     @ParameterizedTest
     @ValueSource(strings = {"xlsx", "xls"})
+    void traceabilityColumnsKeptWithEachValue(String ext) {
+        Path f = book(ext, row("date", "lot", "subgroup", "phase", "value"),
+                row(LocalDate.of(2026, 11, 30), "L7", 1, "before", 1.0),
+                row(LocalDate.of(2026, 12, 1), "L8", 2, "after", 2.0));
+        CharacteristicData c = only(read(f));
+        assertThat(c.before().sequence(0)).isEqualTo("2026-11-30T00:00");
+        assertThat(c.after().lot(0)).isEqualTo("L8");
+        assertThat(c.after().subgroup(0)).isEqualTo("2");
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"xlsx", "xls"})
     void unitIdsMayBeNumbers(String ext) {
         Path f = book(ext, row("serial", "before", "after"), row(1001, 5.0, 5.1), row(1002, 6.0, 6.1),
                 row(1003, null, 7.1));

@@ -50,11 +50,11 @@ final class Workbooks {
     }
 
     static Path xlsx(Path file, Object[]... rows) {
-        return xlsx(file, true, new SheetSpec("Data", List.of(rows)));
+        return xlsx(file, true, new SheetSpec("Data", java.util.Arrays.asList(rows)));
     }
 
     static Path xls(Path file, Object[]... rows) {
-        return xls(file, true, new SheetSpec("Data", List.of(rows)));
+        return xls(file, true, new SheetSpec("Data", java.util.Arrays.asList(rows)));
     }
 
     static Object[] row(Object... cells) {
