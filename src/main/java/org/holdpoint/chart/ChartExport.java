@@ -11,6 +11,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.util.Iterator;
 import javax.imageio.IIOImage;
 import javax.imageio.ImageIO;
@@ -115,8 +116,9 @@ public final class ChartExport {
         Path tmp = null;
         try {
             Files.createDirectories(dir);
-            tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
-            Files.write(tmp, bytes);
+            // a plain new file (not createTempFile, whose owner-only permissions would survive the move)
+            tmp = dir.resolve("." + target.getFileName() + "." + Long.toHexString(System.nanoTime()) + ".tmp");
+            Files.write(tmp, bytes, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
             try {
                 Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {

@@ -43,8 +43,9 @@ public final class DistributionCharts {
      * Histograms of the before and after groups, stacked, over common bins.
      *
      * <p>Bins: width by the Freedman–Diaconis rule 2·IQR·n^(−1/3) (Freedman &amp; Diaconis 1981, Z. Wahrsch. 57:
-     * 453–476) with the type-7 IQR of the pooled values and n the larger group, the count kept within 5..40 (common
-     * practice, no source). Each panel's curve is the normal density with the group's mean and sd, scaled to
+     * 453–476) with the type-7 IQR of the pooled values and n the larger group; when the values lie on a measuring
+     * grid the width is a whole number of grid steps with edges half a step off the grid, otherwise the count is
+     * kept within 5..40; at most 40 bins either way (common practice, no source). Each panel's curve is the normal density with the group's mean and sd, scaled to
      * counts: n·w·φ((x − mean)/sd)/sd for bin width w.
      *
      * <p>Subplot datasets: 0 = the bars ({@link XYIntervalSeriesCollection}, one series), 1 = the curve.
@@ -388,9 +389,15 @@ public final class DistributionCharts {
         for (int i = 0; i < 3; i++) {
             if (values[i] != null) {
                 ValueMarker m = BoxPlotChart.limitMarker(values[i], names[i], theme, i == 1);
-                boolean below = i == 2;
-                m.setLabelAnchor(below ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT);
-                m.setLabelTextAnchor(below ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
+                // the points rise from left to right: USL and nominal labels go left, the LSL label right, where
+                // the plot is empty; each on the side of its line that faces the inside of the plot
+                if (i == 0) {
+                    m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+                    m.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+                } else {
+                    m.setLabelAnchor(i == 2 ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.TOP_LEFT);
+                    m.setLabelTextAnchor(i == 2 ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
+                }
                 m.setLabelOffset(new RectangleInsets(2, 4, 2, 4));
                 p.addRangeMarker(m);
             }

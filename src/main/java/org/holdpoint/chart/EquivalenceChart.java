@@ -112,6 +112,8 @@ public final class EquivalenceChart {
         Range xRange = ChartRanges.padded(new double[] {Math.max(lo, -CLAMP), Math.min(hi, CLAMP)}, 0.06);
         XYIntervalSeriesCollection data = new XYIntervalSeriesCollection();
         List<Conclusion> order = new ArrayList<>(series.keySet());
+        // legend and series order: the claim holds, then inconclusive, then the claim fails
+        order.sort(java.util.Comparator.comparingInt(c -> c.claimHolds() ? 0 : c == Conclusion.INCONCLUSIVE ? 1 : 2));
         for (Conclusion c : order) {
             data.addSeries(series.get(c));
         }

@@ -7,6 +7,11 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicResult;
 import org.holdpoint.study.SpecLimits;
@@ -23,18 +28,21 @@ import org.holdpoint.study.StudyResult;
  * {@link #safeName(String)}.
  */
 public final class StudyCharts {
-    private static final StudyCharts DEFAULTS = new StudyCharts(ChartTheme.withDefaults(), 40);
+    private static final StudyCharts DEFAULTS = new StudyCharts(ChartTheme.withDefaults(), 40, 1);
 
     private final ChartTheme theme;
     private final int rowsPerPage;
+    private final int threads;
 
-    private StudyCharts(ChartTheme theme, int rowsPerPage) {
+    private StudyCharts(ChartTheme theme, int rowsPerPage, int threads) {
         this.theme = theme;
         this.rowsPerPage = rowsPerPage;
+        this.threads = threads;
     }
 
     /**
-     * The defaults: {@link ChartTheme#withDefaults()} and 40 characteristics per equivalence page.
+     * The defaults: {@link ChartTheme#withDefaults()}, 40 characteristics per equivalence page, and rendering on
+     * the calling thread only.
      *
      * @return the default chart set
      */
@@ -50,7 +58,7 @@ public final class StudyCharts {
         if (newTheme == null) {
             throw new ChartException("a theme is required");
         }
-        return new StudyCharts(newTheme, rowsPerPage);
+        return new StudyCharts(newTheme, rowsPerPage, threads);
     }
 
     /**
@@ -62,7 +70,19 @@ public final class StudyCharts {
             throw new ChartException("rows per equivalence page must lie in 1..%d, got %d", EquivalenceChart.MAX_ROWS,
                     rows);
         }
-        return new StudyCharts(theme, rows);
+        return new StudyCharts(theme, rows, threads);
+    }
+
+    /**
+     * @param count how many threads {@link #writeAll} renders characteristics on, 1..16 (1 = the calling thread);
+     *              each chart is an independent object, so the files are the same whatever the count
+     * @return a chart set with that many rendering threads
+     */
+    public StudyCharts withThreads(int count) {
+        if (count < 1 || count > 16) {
+            throw new ChartException("rendering threads must lie in 1..16, got %d", count);
+        }
+        return new StudyCharts(theme, rowsPerPage, count);
     }
 
     /** @return the theme in use */
@@ -139,7 +159,8 @@ public final class StudyCharts {
     }
 
     /**
-     * Renders every chart of the study into a directory, one at a time, each file written atomically.
+     * Renders every chart of the study into a directory, each file written atomically; characteristics are rendered
+     * on {@code threads} threads (see {@link #withThreads}), and the list keeps study order either way.
      *
      * @param result    the study's analysis
      * @param data      the characteristics' data, matched to the results by name
@@ -154,12 +175,68 @@ public final class StudyCharts {
             written.add(page.writeTo(directory, theme.scale()));
         }
         int n = result.characteristics().size();
+        List<Callable<List<Path>>> jobs = new ArrayList<>(n);
         for (int i = 0; i < n; i++) {
-            for (NamedChart c : characteristicCharts(i + 1, n, result.characteristics().get(i), matched.get(i))) {
-                written.add(c.writeTo(directory, theme.scale()));
-            }
+            int position = i + 1;
+            CharacteristicResult r = result.characteristics().get(i);
+            CharacteristicData d = matched.get(i);
+            jobs.add(() -> {
+                List<Path> files = new ArrayList<>(3);
+                for (NamedChart c : characteristicCharts(position, n, r, d)) {
+                    files.add(c.writeTo(directory, theme.scale()));
+                }
+                return files;
+            });
         }
+        written.addAll(threads == 1 ? runHere(jobs) : runPooled(jobs));
         return written;
+    }
+
+    private static List<Path> runHere(List<Callable<List<Path>>> jobs) {
+        List<Path> files = new ArrayList<>();
+        for (Callable<List<Path>> job : jobs) {
+            files.addAll(call(job));
+        }
+        return files;
+    }
+
+    private static List<Path> call(Callable<List<Path>> job) {
+        try {
+            return job.call();
+        } catch (RuntimeException e) {
+            throw e;
+        } catch (Exception e) {
+            throw new ChartException(e, "rendering failed: %s", e.getMessage());
+        }
+    }
+
+    private List<Path> runPooled(List<Callable<List<Path>>> jobs) {
+        ExecutorService pool = Executors.newFixedThreadPool(threads, job -> {
+            Thread t = new Thread(job, "holdpoint-chart");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            List<Future<List<Path>>> futures = new ArrayList<>(jobs.size());
+            for (Callable<List<Path>> job : jobs) {
+                futures.add(pool.submit(job));
+            }
+            List<Path> files = new ArrayList<>();
+            for (Future<List<Path>> f : futures) {
+                files.addAll(f.get());
+            }
+            return files;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new ChartException(e, "chart rendering was interrupted");
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException re) {
+                throw re;
+            }
+            throw new ChartException(e.getCause(), "rendering failed: %s", e.getCause().getMessage());
+        } finally {
+            pool.shutdownNow();
+        }
     }
 
     private static List<CharacteristicData> match(StudyResult result, List<CharacteristicData> data) {

@@ -40,7 +40,7 @@ final class ValuesRenderer extends AbstractCategoryItemRenderer {
     @Override
     public void drawItem(Graphics2D g2, CategoryItemRendererState state, Rectangle2D dataArea, CategoryPlot plot,
             CategoryAxis domainAxis, ValueAxis rangeAxis, CategoryDataset dataset, int row, int column, int pass) {
-        List<? extends Number> values = ((MultiValueCategoryDataset) dataset).getValues(row, column);
+        List<?> values = ((MultiValueCategoryDataset) dataset).getValues(row, column);
         RectangleEdge xEdge = plot.getDomainAxisEdge();
         RectangleEdge yEdge = plot.getRangeAxisEdge();
         int count = dataset.getColumnCount();
@@ -53,8 +53,8 @@ final class ValuesRenderer extends AbstractCategoryItemRenderer {
         Shape shape = theme.groupShape(column, POINT_SIZE);
         Shape ring = ChartTheme.circle(POINT_SIZE + 5);
         g2.setStroke(new BasicStroke(1.1f));
-        for (Number number : values) {
-            double v = number.doubleValue();
+        for (Object number : values) {
+            double v = ((Number) number).doubleValue();
             double offset = (rnd.nextDouble() * 2 - 1) * JITTER_HALF_WIDTH * width;
             double y = rangeAxis.valueToJava2D(v, dataArea, yEdge);
             AffineTransform at = AffineTransform.getTranslateInstance(middle + offset, y);

@@ -66,7 +66,11 @@ class BoxPlotChartTest {
             assertThat(doubles(values.getValues(0, g))).containsExactlyInAnyOrder(boxedList(groups[g].values()));
             assertThat(means.getValue(0, g).doubleValue()).isEqualTo(BoxStatistics.of(groups[g]).mean());
         }
-        assertThat(plot.getCategories()).containsExactly("before (n = 30)", "after (n = 30)");
+        List<Object> categories = new ArrayList<>();
+        for (Object c : plot.getCategories()) {
+            categories.add(c);
+        }
+        assertThat(categories).containsExactly("before (n = 30)", "after (n = 30)");
     }
 
     @Test
@@ -79,7 +83,7 @@ class BoxPlotChartTest {
             }
         }
         assertThat(r.contains(11.95) && r.contains(12.0) && r.contains(12.05)).isTrue();
-        assertThat(plot.getRangeMarkers(Layer.FOREGROUND)).hasSize(3);
+        assertThat(plot.getRangeMarkers(Layer.FOREGROUND).size()).isEqualTo(3);
         List<String> labels = new ArrayList<>();
         for (Object m : plot.getRangeMarkers(Layer.FOREGROUND)) {
             labels.add(((Marker) m).getLabel());
@@ -143,7 +147,7 @@ class BoxPlotChartTest {
     void noLimitsMeansNoMarkers() {
         CharacteristicData d = ChartFixtures.demo().get(4).data();
         CategoryPlot plot = BoxPlotChart.create(d, SpecLimits.NONE, theme).getCategoryPlot();
-        assertThat(plot.getRangeMarkers(Layer.FOREGROUND)).isNull();
+        assertThat((Object) plot.getRangeMarkers(Layer.FOREGROUND)).isNull();
     }
 
     static List<Double> doubles(List<?> numbers) {

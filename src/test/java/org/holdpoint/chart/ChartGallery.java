@@ -5,30 +5,31 @@ import java.util.List;
 
 /**
  * Not a test: writes the documentation images (docs/images) from the invented demo study, so that what the README
- * shows is what the code draws. Run with the test classpath: {@code java org.holdpoint.chart.ChartGallery [dir]}.
+ * shows is what the code draws. Run with the test classpath:
+ * {@code java -Djava.awt.headless=true org.holdpoint.chart.ChartGallery [dir [all]]}.
  */
 public final class ChartGallery {
     private ChartGallery() {
     }
 
     /**
-     * @param args optional output directory (default docs/images)
+     * @param args optional output directory (default docs/images) and "all" for every chart of the demo study
      */
     public static void main(String[] args) {
         Path dir = Path.of(args.length > 0 ? args[0] : "docs/images");
+        boolean all = args.length > 1 && args[1].equals("all");
         ChartTheme theme = ChartTheme.withDefaults().withScale(2);
         List<ChartFixtures.Item> demo = ChartFixtures.demo();
         StudyCharts charts = StudyCharts.withDefaults().with(theme);
         ChartFixtures.Item bore = demo.get(0);
         for (NamedChart c : charts.characteristicCharts(1, demo.size(), bore.result(), bore.data())) {
-            if (c.kind() != ChartKind.NORMAL_PROBABILITY || args.length > 0) {
-                c.writeTo(dir, theme.scale());
-            }
+            new NamedChart("example-" + c.kind().fileSuffix() + ".png", c.kind(), c.characteristic(), c.chart(),
+                    c.width(), c.height()).writeTo(dir, theme.scale());
         }
         new NamedChart("example-equivalence.png", ChartKind.EQUIVALENCE, null,
                 EquivalenceChart.create(ChartFixtures.study(demo).characteristics(), null, theme), theme.width(),
                 theme.equivalenceHeight(demo.size())).writeTo(dir, theme.scale());
-        if (args.length > 0) {
+        if (all) {
             List<org.holdpoint.study.CharacteristicResult> rows = EquivalenceChartTest.manyRows(40, 7);
             new NamedChart("forty-rows.png", ChartKind.EQUIVALENCE, null, EquivalenceChart.create(rows,
                     "characteristics 1\u201340 of 40", theme), theme.width(), theme.equivalenceHeight(40))

@@ -63,7 +63,7 @@ class DistributionChartsTest {
             }
         }
         assertThat(x.contains(11.95) && x.contains(12.05)).isTrue();
-        assertThat(panels.get(0).getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)).hasSize(3);
+        assertThat(panels.get(0).getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND).size()).isEqualTo(3);
         BufferedImage img = ChartAssertions.decode(ChartExport.png(chart, theme.width(), theme.standardHeight(),
                 theme.scale()));
         ChartAssertions.assertRendered(img, theme.width(), theme.standardHeight(), theme.scale());

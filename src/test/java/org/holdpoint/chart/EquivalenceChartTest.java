@@ -68,7 +68,7 @@ class EquivalenceChartTest {
             }
             assertThat(words[row]).endsWith(t.conclusion().words());
             int[] at = find(data, row);
-            assertThat(data.getSeriesKey(at[0])).isEqualTo(t.conclusion().words());
+            assertThat((Object) data.getSeriesKey(at[0])).isEqualTo(t.conclusion().words());
             assertThat(data.getXValue(at[0], at[1])).isEqualTo(EquivalenceChart.scaled(t.estimate(), r.margin()));
             assertThat(data.getStartXValue(at[0], at[1])).isEqualTo(EquivalenceChart.scaled(t.ciLower(), r.margin()));
             assertThat(data.getEndXValue(at[0], at[1])).isEqualTo(EquivalenceChart.scaled(t.ciUpper(), r.margin()));
@@ -144,6 +144,18 @@ class EquivalenceChartTest {
             }
         }
         assertThat(notes).isNotEmpty().allMatch(t -> t.endsWith("\u25b8"));
+    }
+
+    @Test
+    void aStudyWithoutMarginsStillRendersItsRows() {
+        CharacteristicResult none = ChartFixtures.demo().get(4).result();
+        JFreeChart chart = EquivalenceChart.create(List.of(none), null, theme);
+        assertThat(((SymbolAxis) chart.getXYPlot().getRangeAxis(1)).getSymbols())
+                .containsExactly("not assessed (no margin)");
+        assertThat(chart.getXYPlot().getDataset().getSeriesCount()).isZero();
+        BufferedImage img = ChartAssertions.decode(ChartExport.png(chart, theme.width(), theme.equivalenceHeight(1),
+                1));
+        ChartAssertions.assertRendered(img, theme.width(), theme.equivalenceHeight(1), 1);
     }
 
     @Test

@@ -59,6 +59,20 @@ class StudyChartsTest {
     }
 
     @Test
+    void twoThreadsWriteTheSameFilesInTheSameOrder(@TempDir Path dir) throws IOException {
+        StudyResult study = ChartFixtures.study(demo);
+        List<Path> one = charts.writeAll(study, ChartFixtures.data(demo), dir.resolve("one"));
+        List<Path> two = charts.withThreads(2).writeAll(study, ChartFixtures.data(demo), dir.resolve("two"));
+        assertThat(two).extracting(p -> p.getFileName().toString())
+                .containsExactlyElementsOf(one.stream().map(p -> p.getFileName().toString()).toList());
+        for (int i = 0; i < one.size(); i++) {
+            assertThat(Files.readAllBytes(two.get(i))).as(one.get(i).getFileName().toString())
+                    .isEqualTo(Files.readAllBytes(one.get(i)));
+        }
+        assertThatThrownBy(() -> charts.withThreads(0)).isInstanceOf(ChartException.class);
+    }
+
+    @Test
     void pngCarriesItsPhysicalResolution(@TempDir Path dir) throws IOException {
         byte[] png = charts.equivalencePages(ChartFixtures.study(demo)).get(0).png(theme.scale());
         try (ImageInputStream in = ImageIO.createImageInputStream(new java.io.ByteArrayInputStream(png))) {
@@ -127,5 +141,21 @@ class StudyChartsTest {
         assertThat(all).filteredOn(c -> c.kind() == ChartKind.BOX_PLOT).hasSize(demo.size());
         assertThat(all).filteredOn(c -> c.kind() == ChartKind.HISTOGRAM).hasSize(demo.size());
         assertThat(all).filteredOn(c -> c.kind() == ChartKind.NORMAL_PROBABILITY).hasSize(demo.size());
+    }
+
+    @Test
+    void degenerateGroupsStillRender() {
+        // a single value and a constant group: no sd, no curve, no reference line, but every chart draws
+        org.holdpoint.stats.Sample one = org.holdpoint.stats.Sample.of(7.5);
+        org.holdpoint.stats.Sample flat = org.holdpoint.stats.Sample.of(7.4, 7.4, 7.4, 7.4);
+        CharacteristicData d = new CharacteristicData("Slot width", "mm",
+                org.holdpoint.study.GroupData.typed(one, "typed"), org.holdpoint.study.GroupData.typed(flat, "typed"),
+                false, List.of());
+        org.holdpoint.study.SpecLimits limits = new org.holdpoint.study.SpecLimits(7.0, null, 8.0);
+        for (org.jfree.chart.JFreeChart c : List.of(BoxPlotChart.create(d, limits, theme),
+                DistributionCharts.histogram(d, limits, theme), DistributionCharts.normalProbability(d, limits, theme))) {
+            BufferedImage img = ChartAssertions.decode(ChartExport.png(c, theme.width(), theme.standardHeight(), 1));
+            ChartAssertions.assertRendered(img, theme.width(), theme.standardHeight(), 1);
+        }
     }
 }
