@@ -8,7 +8,11 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.holdpoint.importer.ImportRequest;
 import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.ChangeDescription;
+import org.holdpoint.study.ChangeKind;
+import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.Signature;
 import org.holdpoint.study.Exclusion;
 import org.holdpoint.study.Layout;
 import org.holdpoint.study.MarginSpec;
@@ -16,6 +20,8 @@ import org.holdpoint.study.SpecLimits;
 import org.holdpoint.workflow.AnalysisOutcome;
 import org.holdpoint.workflow.AnalyzeUseCase;
 import org.holdpoint.workflow.ConsoleProgress;
+import org.holdpoint.workflow.ReportOptions;
+import org.holdpoint.workflow.ReportUseCase;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -36,6 +42,8 @@ import picocli.CommandLine.Parameters;
         footer = {"", "Examples:", "  holdpoint analyze sample-data/boring-bar-insert.csv",
             "  holdpoint analyze data.xlsx --sheet Results --margin 0.01 --json result.json",
             "  holdpoint analyze --before old.csv --after new.xlsx --margin-percent 10 --lsl 24.98 --usl 25.02",
+            "  holdpoint analyze data.csv --change-id CR-0412 --report CR-0412.xlsx --signed-by \"A. Lindqvist\" "
+                    + "--role \"process engineer\"",
             "", "Exit codes: 0 analysed, 2 bad input (the message names the file, sheet and cell)."})
 final class AnalyzeCommand implements Callable<Integer> {
     @CommandLine.Spec
@@ -55,6 +63,63 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     @CommandLine.ArgGroup(exclusive = false, heading = "%nOutput%n", order = 4)
     OutputOptions output = new OutputOptions();
+
+    @CommandLine.ArgGroup(exclusive = false, heading = "%nThe change (shown in the sign-off workbook)%n", order = 5)
+    ChangeOptions change = new ChangeOptions();
+
+    @CommandLine.ArgGroup(exclusive = false, heading = "%nSign-off workbook%n", order = 6)
+    ReportOptionsGroup report = new ReportOptionsGroup();
+
+    static final class ChangeOptions {
+        @Option(names = "--change-id", paramLabel = "ID", description = "Change id, e.g. CR-2026-0412.")
+        String id;
+        @Option(names = "--title", paramLabel = "TEXT", description = "One-line title of the change.")
+        String title;
+        @Option(names = "--kind", paramLabel = "KIND", description = "Kind of change: tooling, machine, material, "
+                + "supplier, method or other.")
+        String kind;
+        @Option(names = "--part", paramLabel = "NUMBER", description = "Part number.")
+        String part;
+        @Option(names = "--revision", paramLabel = "REV", description = "Part revision.")
+        String revision;
+        @Option(names = "--reason", paramLabel = "TEXT", description = "Why the change is made.")
+        String reason;
+        @Option(names = "--requester", paramLabel = "NAME", description = "Who requested the change.")
+        String requester;
+        @Option(names = "--request-date", paramLabel = "YYYY-MM-DD", description = "Date the change was requested.")
+        String requestDate;
+        @Option(names = "--study-date", paramLabel = "YYYY-MM-DD", description = "Date of the study.")
+        String studyDate;
+    }
+
+    static final class ReportOptionsGroup {
+        @Option(names = "--report", paramLabel = "OUT.xlsx", description = "Write the sign-off workbook (summary, "
+                + "details, method, import report, cautions, raw data, sign-off block and the embedded record).")
+        Path file;
+        @Option(names = "--template", paramLabel = "FILE", description = "Fill this template instead of the default "
+                + "(its defined names are described in templates/README.md).")
+        Path template;
+        @Option(names = "--overwrite", description = "Replace an existing workbook (otherwise it is kept and the "
+                + "command stops).")
+        boolean overwrite;
+        @Option(names = "--signed-by", paramLabel = "NAME", description = "Printed name for the sign-off block "
+                + "(a record of who signed, not an electronic signature).")
+        String signedBy;
+        @Option(names = "--role", paramLabel = "ROLE", description = "Role or title of the signer.")
+        String role;
+        @Option(names = "--meaning", paramLabel = "TEXT", description = "Meaning of the signature, e.g. "
+                + "\"prepared: study planned, measured and analysed as recorded\".")
+        String meaning;
+        @Option(names = "--stage", paramLabel = "STAGE", defaultValue = "prepared", description = "Sign-off stage "
+                + "of --signed-by: prepared, reviewed or approved (default: ${DEFAULT-VALUE}).")
+        String stage = "prepared";
+        @Option(names = "--sign-key", paramLabel = "KEY.pem", description = "Also sign the record with this Ed25519 "
+                + "private key (PKCS#8 PEM); needs --sign-public-key.")
+        Path signKey;
+        @Option(names = "--sign-public-key", paramLabel = "PUB.pem", description = "The public key of --sign-key "
+                + "(X.509 PEM), stored in the workbook so that verify can say which key signed.")
+        Path signPublicKey;
+    }
 
     static final class InputOptions {
         @Option(names = "--before", paramLabel = "FILE", description = "File of the before group (with --after).")
@@ -182,11 +247,15 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         ImportRequest request = importRequest();
+        checkReportTarget();
         AnalysisSettings settings = settings();
         AnalysisOutcome outcome = new AnalyzeUseCase().run(request, input.settings, settings,
                 new ConsoleProgress(spec.commandLine().getErr(), false));
         TextOutput text = new TextOutput(spec.commandLine().getOut());
         text.print(outcome.data(), outcome.settings(), outcome.result());
+        if (report.file != null) {
+            writeReport(outcome);
+        }
         if (output.json != null) {
             try {
                 AnalyzeUseCase.writeJson(outcome, output.json);
@@ -196,6 +265,84 @@ final class AnalyzeCommand implements Callable<Integer> {
             }
         }
         return ExitCodes.OK;
+    }
+
+    private void writeReport(AnalysisOutcome outcome) {
+        ChangeStudy study = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(), List.of());
+        ReportOptions options = ReportOptions.withDefaults().withTemplate(report.template)
+                .withExisting(report.overwrite ? ReportOptions.ExistingFile.REPLACE : ReportOptions.ExistingFile.REFUSE)
+                .withSignOff(signOff());
+        if (report.signKey != null) {
+            options = options.withSigningKey(report.signKey, report.signPublicKey);
+        }
+        try {
+            ReportUseCase.Written w = new ReportUseCase().write(study, outcome.result(), options, report.file);
+            spec.commandLine().getOut().printf(java.util.Locale.ROOT, "%nWrote the sign-off workbook %s%n  record "
+                    + "SHA-256 %s%s%n", w.file(), w.sha256(), w.keyFingerprint() == null ? ""
+                    : String.format(java.util.Locale.ROOT, "%n  signed with key SHA-256 %s", w.keyFingerprint()));
+            spec.commandLine().getOut().flush();
+        } catch (IOException e) {
+            throw new UserInputException("cannot write the sign-off workbook %s (%s); check the folder exists and is "
+                    + "writable", report.file, e.getMessage());
+        }
+    }
+
+    private ChangeDescription changeDescription() {
+        ChangeOptions c = change;
+        ChangeKind kind = ChangeKind.OTHER;
+        if (c.kind != null) {
+            try {
+                kind = ChangeKind.parse(c.kind);
+            } catch (IllegalArgumentException e) {
+                throw new CommandLine.ParameterException(spec.commandLine(), "--kind: " + e.getMessage());
+            }
+        }
+        return new ChangeDescription(c.id, c.title, kind, c.part, c.revision, c.reason, c.requester, c.requestDate,
+                c.studyDate);
+    }
+
+    private Signature signOff() {
+        ReportOptionsGroup r = report;
+        if (r.signedBy == null) {
+            if (r.role != null || r.meaning != null) {
+                throw new CommandLine.ParameterException(spec.commandLine(), "--role and --meaning need --signed-by");
+            }
+            return null;
+        }
+        if (r.signedBy.isBlank()) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--signed-by needs a printed name");
+        }
+        Signature.Stage stage = null;
+        for (Signature.Stage s : Signature.Stage.values()) {
+            if (s.words().equalsIgnoreCase(r.stage.trim())) {
+                stage = s;
+            }
+        }
+        if (stage == null) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--stage must be prepared, reviewed or "
+                    + "approved, got '" + r.stage + "'");
+        }
+        return new Signature(stage, r.signedBy.trim(), r.role, r.meaning, null);
+    }
+
+    private void checkReportTarget() {
+        ReportOptionsGroup r = report;
+        if (r.file == null) {
+            if (r.template != null || r.signedBy != null || r.signKey != null || r.overwrite) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--template, --signed-by, --sign-key and --overwrite need --report OUT.xlsx");
+            }
+            return;
+        }
+        if (Files.exists(r.file) && !r.overwrite) {
+            throw new UserInputException("%s exists; give --overwrite to replace it", r.file);
+        }
+        if ((r.signKey == null) != (r.signPublicKey == null)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--sign-key and --sign-public-key go together");
+        }
+        signOff();
+        changeDescription();
     }
 
     ImportRequest importRequest() {

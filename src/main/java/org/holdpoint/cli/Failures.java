@@ -26,6 +26,12 @@ final class Failures implements CommandLine.IExecutionExceptionHandler, CommandL
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
+        if (ex instanceof org.holdpoint.workflow.SignoffException
+                || ex instanceof org.holdpoint.workflow.StudyFileException) {
+            err.println("holdpoint: " + ex.getMessage());
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
         if (ex instanceof UserInputException u) {
             err.println("holdpoint: " + u.getMessage());
             err.flush();

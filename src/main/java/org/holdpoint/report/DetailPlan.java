@@ -13,7 +13,7 @@ import org.holdpoint.study.CharacteristicSettings;
  */
 final class DetailPlan {
     /** Columns of a section: label, value, value, gap, label, value. */
-    static final int[] WIDTHS = {34, 15, 15, 2, 34, 15};
+    static final int[] WIDTHS = {34, 15, 15, 2, 32, 20};
     static final float ROW = 12.75f;
     static final int CHART_ROWS = 18;
     static final double CHART_WIDTH_POINTS = 250;
@@ -141,8 +141,10 @@ final class DetailPlan {
         pair(r + 2, col, "Lower specification limit (LSL)", set.spec().lsl(), Style.NUMBER, d, n + ": LSL");
         pair(r + 3, col, "Nominal", set.spec().nominal(), Style.NUMBER, d, n + ": nominal");
         pair(r + 4, col, "Upper specification limit (USL)", set.spec().usl(), Style.NUMBER, d, n + ": USL");
-        pairText(r + 5, col, "Margin as set", set.margin() == null ? "not set" : set.margin().describe(),
+        s.text(r + 5, col, "Margin as set", Style.LABEL, n + ": margin as set label");
+        s.text(r + 5, col + 1, set.margin() == null ? "not set" : set.margin().describe(), Style.CELL_WRAP,
                 n + ": margin as set");
+        s.height(r + 5, 24f);
         pair(r + 6, col, "Margin L (in units)", c.margin() == null ? null : c.margin().lower(), Style.NUMBER, d,
                 n + ": margin L");
         pair(r + 7, col, "Margin U (in units)", c.margin() == null ? null : c.margin().upper(), Style.NUMBER, d,
@@ -155,7 +157,11 @@ final class DetailPlan {
         TTestResult t = c.decidingTest();
         s.text(r, c0, "Difference test (two-sided)", Style.HEADER, n + ": difference header");
         s.text(r, c0 + 1, "", Style.HEADER, n + ": difference header");
-        pairText(r + 1, c0, "Method", t.method().description(), n + ": difference method");
+        s.text(r + 1, c0, "Method", Style.LABEL, n + ": difference method label");
+        s.text(r + 1, c0 + 1, t.method().description(), Style.CELL_WRAP, n + ": difference method");
+        s.text(r + 1, c0 + 2, "", Style.CELL_WRAP, n + ": difference method");
+        s.merge(r + 1, r + 1, c0 + 1, c0 + 2);
+        s.height(r + 1, 24f);
         pair(r + 2, c0, "Difference (after \u2212 before)", t.estimate(), Style.NUMBER, d, n + ": difference");
         pair(r + 3, c0, "Standard error", WorkbookPlan.finite(t.se()), Style.NUMBER, d, n + ": standard error");
         pair(r + 4, c0, "t", WorkbookPlan.finite(t.t()), Style.NUMBER, 4, n + ": t");
@@ -220,6 +226,8 @@ final class DetailPlan {
         pair(r + 8, c0, (g == null ? "" : Texts.percent(g.level()) + " ") + "upper bound of the sd ratio",
                 g == null ? null : g.upperBound(), Style.NUMBER, 4, n + ": sd ratio upper bound");
         pairText(r + 9, c0, "Sd growth limit", WorkbookPlan.sdGrowth(c), n + ": sd growth result");
+        s.text(r + 9, c0 + 2, "", Style.CELL, n + ": sd growth result");
+        s.merge(r + 9, r + 9, c0 + 1, c0 + 2);
     }
 
     private void design(int r, String n, CharacteristicResult c) {

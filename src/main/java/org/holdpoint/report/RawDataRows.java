@@ -55,18 +55,9 @@ final class RawDataRows implements Iterator<ShownCell[]> {
             }
         }
         if (ci < data.size()) {
-            decimals = decimalsByName.computeIfAbsent(data.get(ci).name(), n -> WorkbookPlan.dataDecimals(data.get(
-                    decimalIndex(n))));
+            CharacteristicData c = data.get(ci);
+            decimals = decimalsByName.computeIfAbsent(c.name(), n -> WorkbookPlan.dataDecimals(c));
         }
-    }
-
-    private int decimalIndex(String name) {
-        for (int k = 0; k < data.size(); k++) {
-            if (data.get(k).name().equals(name)) {
-                return k;
-            }
-        }
-        return ci;
     }
 
     @Override
@@ -124,7 +115,6 @@ final class RawDataRows implements Iterator<ShownCell[]> {
      *
      * @param sheetRow  the 0-based row
      * @param sheetCol  the 0-based column
-     * @param firstCell the first cell of that row as shown (characteristic name)
      * @return e.g. "raw data row 12, column Value"
      */
     String label(int sheetRow, int sheetCol) {

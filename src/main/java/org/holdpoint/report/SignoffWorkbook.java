@@ -14,7 +14,6 @@ import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.xssf.streaming.SXSSFWorkbook;
 import org.apache.poi.xssf.usermodel.XSSFClientAnchor;
 import org.apache.poi.xssf.usermodel.XSSFDrawing;
-import org.apache.poi.xssf.usermodel.XSSFPicture;
 import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 
@@ -73,7 +72,12 @@ public final class SignoffWorkbook {
     }
 
     private static void fill(XSSFWorkbook wb, XSSFSheet sh, SheetContent content, Styles styles) {
-        for (ShownCell c : content.cells) {
+        // create rows in ascending order: XSSF inserts an out-of-order row with a linear search
+        java.util.TreeSet<Integer> rows = new java.util.TreeSet<>(content.rowHeights.keySet());
+        content.cells.forEach(c -> rows.add(c.row()));
+        content.captions.forEach(c -> rows.add(c.row()));
+        rows.forEach(r -> row(sh, r));
+        for (ShownCell c : content.sorted()) {
             put(sh, c, styles);
         }
         for (ShownCell c : content.captions) {
@@ -92,16 +96,39 @@ public final class SignoffWorkbook {
             XSSFDrawing drawing = sh.createDrawingPatriarch();
             for (SheetContent.PlacedImage p : content.images) {
                 int idx = wb.addPicture(p.image().png(), Workbook.PICTURE_TYPE_PNG);
-                XSSFClientAnchor anchor = wb.getCreationHelper().createClientAnchor();
-                anchor.setCol1(p.column());
-                anchor.setRow1(p.row());
+                XSSFClientAnchor anchor = anchor(sh, p);
                 anchor.setAnchorType(ClientAnchor.AnchorType.MOVE_DONT_RESIZE);
-                XSSFPicture pic = drawing.createPicture(anchor, idx);
-                // width in points → pixels at 96 dpi; the picture keeps its aspect ratio
-                double targetPx = p.widthPoints() * 96 / 72;
-                pic.resize(targetPx / p.image().width(), targetPx / p.image().width());
+                drawing.createPicture(anchor, idx);
             }
         }
+    }
+
+    /**
+     * A two-cell anchor that gives the picture the requested width in points and its own aspect ratio,
+     * walking the column widths (pixels at 96 dpi) and row heights (points) of the sheet.
+     */
+    private static XSSFClientAnchor anchor(XSSFSheet sh, SheetContent.PlacedImage p) {
+        double widthPx = p.widthPoints() * 96 / 72;
+        double heightPt = p.widthPoints() * p.image().height() / p.image().width();
+        int col = p.column();
+        double left = widthPx;
+        while (left > sh.getColumnWidthInPixels(col)) {
+            left -= sh.getColumnWidthInPixels(col);
+            col++;
+        }
+        int row = p.row();
+        double down = heightPt;
+        while (down > rowHeight(sh, row)) {
+            down -= rowHeight(sh, row);
+            row++;
+        }
+        return new XSSFClientAnchor(0, 0, (int) Math.round(left * org.apache.poi.util.Units.EMU_PER_PIXEL),
+                (int) Math.round(down * org.apache.poi.util.Units.EMU_PER_POINT), p.column(), p.row(), col, row);
+    }
+
+    private static double rowHeight(XSSFSheet sh, int r) {
+        Row row = sh.getRow(r);
+        return row == null ? sh.getDefaultRowHeightInPoints() : row.getHeightInPoints();
     }
 
     static Row row(Sheet sh, int r) {
@@ -186,6 +213,9 @@ public final class SignoffWorkbook {
             ShownCell[] cells = rows.next();
             Row row = sh.createRow(r);
             for (ShownCell c : cells) {
+                if (c.value() instanceof String s && s.isEmpty()) {
+                    continue;
+                }
                 Cell cell = row.createCell(c.column());
                 if (c.value() instanceof String s) {
                     cell.setCellValue(s);

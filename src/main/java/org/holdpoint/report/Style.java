@@ -16,6 +16,8 @@ enum Style {
     HEADER,
     /** A text cell of a table, bordered. */
     CELL,
+    /** A wrapped text cell of a table, bordered. */
+    CELL_WRAP,
     /** A number with a fixed count of decimals, bordered. */
     NUMBER,
     /** A whole number, bordered. */
@@ -32,6 +34,10 @@ enum Style {
     INCONCLUSIVE,
     /** Status "not assessed". */
     NOT_ASSESSED,
+    /** The large shape of the overall verdict "verified". */
+    MARK_PASSED,
+    /** The large shape of the overall verdict "not verified". */
+    MARK_FAILED,
     /** An unlocked, bordered cell for hand entry (sign-off). */
     FILLABLE,
     /** Fixed-width text (hashes, keys). */

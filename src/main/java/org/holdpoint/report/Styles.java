@@ -83,6 +83,10 @@ final class Styles {
                 border(s);
             }
             case CELL -> border(s);
+            case CELL_WRAP -> {
+                border(s);
+                s.setWrapText(true);
+            }
             case NUMBER -> {
                 border(s);
                 s.setDataFormat(wb.createDataFormat().getFormat(decimals == 0 ? "0" : "0." + "0".repeat(decimals)));
@@ -95,11 +99,20 @@ final class Styles {
                 border(s);
                 s.setDataFormat(wb.createDataFormat().getFormat("[<0.0001]\"< 0.0001\";0.0000"));
             }
-            case VERDICT -> s.setFont(verdict);
+            case VERDICT -> {
+                s.setFont(verdict);
+                s.setVerticalAlignment(VerticalAlignment.CENTER);
+            }
             case PASSED -> status(s, IndexedColors.LIGHT_GREEN);
             case FAILED -> status(s, IndexedColors.ROSE);
             case INCONCLUSIVE -> status(s, IndexedColors.LIGHT_YELLOW);
             case NOT_ASSESSED -> status(s, IndexedColors.GREY_25_PERCENT);
+            case MARK_PASSED, MARK_FAILED -> {
+                status(s, style == Style.MARK_PASSED ? IndexedColors.LIGHT_GREEN : IndexedColors.ROSE);
+                s.setFont(verdict);
+                s.setAlignment(HorizontalAlignment.CENTER);
+                s.setVerticalAlignment(VerticalAlignment.CENTER);
+            }
             case FILLABLE -> {
                 border(s);
                 s.setLocked(false);

@@ -64,6 +64,10 @@ public final class TemplateGenerator {
     /** @return the default template's bytes, identical on every call */
     public static byte[] build() {
         try (XSSFWorkbook wb = new XSSFWorkbook()) {
+            // the default font sets the unit of column widths: measure them in the font the report uses
+            Font base = wb.getFontAt(0);
+            base.setFontName(Styles.FONT);
+            base.setFontHeightInPoints((short) 9);
             summary(wb);
             for (String name : new String[] {SIGN_OFF, DETAILS, METHOD, IMPORT, CAUTIONS, RAW, RECORD}) {
                 Sheet sh = wb.createSheet(name);
@@ -118,12 +122,12 @@ public final class TemplateGenerator {
         String[][] left = {{"Change id", "C", "HP_ChangeId"}, {"Title", "C", "HP_Title"},
             {"Kind of change", "C", "HP_Kind"}, {"Reason", "C", "HP_Reason"},
             {"Workbook written", "C", "HP_GeneratedAt"}};
-        String[][] right = {{"Part number", "Q", "HP_PartNumber"}, {"Revision", "Q", "HP_Revision"},
-            {"Requested by", "Q", "HP_Requester"}, {"Request date", "Q", "HP_RequestDate"},
-            {"Study date", "Q", "HP_StudyDate"}};
+        String[][] right = {{"Part number", "O", "HP_PartNumber"}, {"Revision", "O", "HP_Revision"},
+            {"Requested by", "O", "HP_Requester"}, {"Request date", "O", "HP_RequestDate"},
+            {"Study date", "O", "HP_StudyDate"}};
         for (int i = 0; i < left.length; i++) {
             text(sh, 3 + i, 1, left[i][0], label);
-            text(sh, 3 + i, 15, right[i][0], label);
+            text(sh, 3 + i, 12, right[i][0], label);
             nameOf(wb, left[i][2], SUMMARY, "$" + left[i][1] + "$" + (4 + i));
             nameOf(wb, right[i][2], SUMMARY, "$" + right[i][1] + "$" + (4 + i));
         }

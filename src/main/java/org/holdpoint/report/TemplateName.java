@@ -35,7 +35,7 @@ public enum TemplateName {
     RECORD_HASH("HP_RecordHash", false, "the SHA-256 of the embedded study record"),
     /** The summary table, one row per characteristic. */
     SUMMARY_TABLE("HP_SummaryTable", true, "top-left cell of the summary table (header row, then one row per "
-            + "characteristic, 21 columns)"),
+            + "characteristic, 16 columns)"),
     /** The detail sections. */
     DETAILS("HP_Details", true, "top-left cell of the detail sections, one printed page per characteristic "
             + "(own sheet, 8 columns)"),

@@ -51,7 +51,7 @@ final class TextBlocks {
         java.util.function.BiConsumer<String, String> put = (label, text) -> {
             s.text(row[0], a.column(), label, Style.LABEL, "method: " + label + " label");
             s.text(row[0], a.column() + 1, text, Style.WRAP, "method: " + label);
-            s.height(row[0], DetailPlan.lines(text, 100) * 12f + 3);
+            s.height(row[0], DetailPlan.lines(text, 135) * 11.5f + 3);
             row[0]++;
         };
         s.text(row[0]++, a.column(), "Method and settings", Style.HEADING, "method heading");
@@ -189,14 +189,20 @@ final class TextBlocks {
     private void cautions() {
         Anchor a = plan.at(TemplateName.CAUTIONS);
         SheetContent s = plan.sheet(TemplateName.CAUTIONS);
-        s.width(a.column(), 110);
+        for (int i = 0; i < 8; i++) {
+            s.width(a.column() + i, 13);
+        }
         int r = a.row();
-        s.text(r++, a.column(), "Cautions", Style.HEADING, "cautions heading");
-        r++;
+        int c = a.column();
+        s.text(r++, c, "Cautions", Style.HEADING, "cautions heading");
+        s.height(r - 1, 20f);
+        s.text(r, c, "These cautions belong to every result in this workbook.", Style.TEXT, "cautions intro");
+        r += 2;
         List<String> text = Cautions.TEXT;
         for (String p : text) {
-            s.text(r, a.column(), p, Style.WRAP, "caution");
-            s.height(r, DetailPlan.lines(p, 115) * 13f + 6);
+            s.text(r, c, p, Style.WRAP, "caution");
+            s.merge(r, r, c, c + 7);
+            s.height(r, DetailPlan.lines(p, 120) * 12f + 8);
             r++;
         }
     }
@@ -211,6 +217,11 @@ final class TextBlocks {
         int c = a.column();
         int r = a.row();
         s.text(r++, c, "Sign-off", Style.HEADING, "sign-off heading");
+        var result = plan.input.result();
+        s.text(r++, c, "Change " + plan.input.study().change().id() + ": " + (result.changeVerified()
+                ? "CHANGE VERIFIED" : "CHANGE NOT VERIFIED") + " \u2013 " + WorkbookPlan.detail(result)
+                + " Read the Summary, the Details and the Cautions before signing.", Style.TEXT, "sign-off context");
+        r++;
         header(s, r, c, "sign-off header", "Stage", "Printed name", "Role", "Date and time", "Meaning of the "
                 + "signature", "Signature");
         s.height(r++, 26f);
@@ -218,16 +229,16 @@ final class TextBlocks {
         for (Signature.Stage stage : Signature.Stage.values()) {
             Signature g = sigs.get(stage);
             String w = "sign-off " + stage.words();
-            s.text(r, c, stage.words(), Style.LABEL, w + ": stage");
+            s.text(r, c, stage.words(), Style.HEADER, w + ": stage");
             if (g == null) {
                 for (int i = 1; i <= 4; i++) {
                     s.text(r, c + i, "", Style.FILLABLE, w + ": " + SIGN_FIELDS[i - 1]);
                 }
             } else {
-                s.text(r, c + 1, g.name(), Style.CELL, w + ": printed name");
-                s.text(r, c + 2, nz(g.role()), Style.CELL, w + ": role");
-                s.text(r, c + 3, nz(g.timestamp()), Style.CELL, w + ": date and time");
-                s.text(r, c + 4, nz(g.meaning()), Style.CELL, w + ": meaning");
+                s.text(r, c + 1, g.name(), Style.CELL_WRAP, w + ": printed name");
+                s.text(r, c + 2, nz(g.role()), Style.CELL_WRAP, w + ": role");
+                s.text(r, c + 3, nz(g.timestamp()), Style.CELL_WRAP, w + ": date and time");
+                s.text(r, c + 4, nz(g.meaning()), Style.CELL_WRAP, w + ": meaning");
             }
             s.text(r, c + 5, "", Style.FILLABLE, w + ": signature");
             s.height(r++, 34f);

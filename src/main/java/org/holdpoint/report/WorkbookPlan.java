@@ -20,11 +20,11 @@ import org.holdpoint.study.Verdict;
  * this plan; the verifier builds it again from a fresh computation and compares it with the file.
  */
 final class WorkbookPlan {
-    static final String[] SUMMARY_HEADERS = {"#", "Characteristic", "Unit", "n before", "n after", "Mean before",
-        "Mean after", "Difference (after \u2212 before)", "%s CI lower", "%s CI upper", "Margin L", "Margin U",
-        "%s CI lower (equivalence)", "%s CI upper (equivalence)", "Equivalence conclusion",
-        "Variance ratio (after / before)", "F-test p", "Brown\u2013Forsythe p", "Sd growth", "Verdict"};
-    static final int[] SUMMARY_WIDTHS = {4, 26, 6, 8, 8, 11, 11, 12, 11, 11, 10, 10, 12, 12, 15, 11, 9, 11, 22, 16};
+    static final String[] SUMMARY_HEADERS = {"#", "Characteristic", "Unit", "n before / after", "Mean before",
+        "Mean after", "Difference (after \u2212 before)", "%s CI of the difference", "Margin (L, U)",
+        "%s CI (equivalence)", "Equivalence conclusion", "Variance ratio (after / before)", "F-test p",
+        "Brown\u2013Forsythe p", "Sd growth", "Verdict"};
+    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 27, 15};
 
     final ReportInput input;
     final Map<TemplateName, Anchor> anchors;
@@ -89,11 +89,19 @@ final class WorkbookPlan {
         single(TemplateName.GENERATED_AT, input.generatedAt(), Style.TEXT);
         StudyResult r = input.result();
         Verdict.Status overall = r.changeVerified() ? Verdict.Status.PASSED : Verdict.Status.FAILED;
-        single(TemplateName.OVERALL_MARK, Texts.mark(overall), Texts.style(overall));
+        single(TemplateName.OVERALL_MARK, Texts.mark(overall), overall == Verdict.Status.PASSED ? Style.MARK_PASSED
+                : Style.MARK_FAILED);
         single(TemplateName.OVERALL_VERDICT, r.changeVerified() ? "CHANGE VERIFIED" : "CHANGE NOT VERIFIED",
                 Style.VERDICT);
-        single(TemplateName.OVERALL_DETAIL, r.summary(), Style.TEXT);
+        single(TemplateName.OVERALL_DETAIL, detail(r), Style.TEXT);
         single(TemplateName.RECORD_HASH, "SHA-256 " + input.sha256(), Style.MONO);
+    }
+
+    /** The overall sentence without the verdict words that the verdict cell already shows. */
+    static String detail(StudyResult r) {
+        String s = r.summary();
+        int colon = s.indexOf(": ");
+        return colon > 0 && s.substring(0, colon).startsWith("CHANGE") ? s.substring(colon + 2) : s;
     }
 
     private void summary() {
@@ -105,8 +113,7 @@ final class WorkbookPlan {
         int c0 = a.column();
         for (int i = 0; i < SUMMARY_HEADERS.length; i++) {
             String h = SUMMARY_HEADERS[i];
-            h = (i == 8 || i == 9) ? String.format(Locale.ROOT, h, ci) : (i == 12 || i == 13)
-                    ? String.format(Locale.ROOT, h, eq) : h;
+            h = i == 7 ? String.format(Locale.ROOT, h, ci) : i == 9 ? String.format(Locale.ROOT, h, eq) : h;
             s.text(r0, c0 + i, h, Style.HEADER, "summary table header");
             s.width(c0 + i, SUMMARY_WIDTHS[i]);
         }
@@ -134,31 +141,49 @@ final class WorkbookPlan {
         s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
         s.text(row, c0 + 1, n, Style.CELL, n + ": name");
         s.text(row, c0 + 2, c.unit() == null ? "" : c.unit(), Style.CELL, n + ": unit");
-        s.number(row, c0 + 3, (double) c.before().n(), Style.INTEGER, 0, n + ": n before");
-        s.number(row, c0 + 4, (double) c.after().n(), Style.INTEGER, 0, n + ": n after");
-        s.number(row, c0 + 5, c.before().mean(), Style.NUMBER, d, n + ": mean before");
-        s.number(row, c0 + 6, c.after().mean(), Style.NUMBER, d, n + ": mean after");
+        s.text(row, c0 + 3, c.before().n() + " / " + c.after().n(), Style.CELL, n + ": n before / after");
+        s.number(row, c0 + 4, c.before().mean(), Style.NUMBER, d, n + ": mean before");
+        s.number(row, c0 + 5, c.after().mean(), Style.NUMBER, d, n + ": mean after");
         var t = c.decidingTest();
-        s.number(row, c0 + 7, t.estimate(), Style.NUMBER, d, n + ": difference");
-        s.number(row, c0 + 8, finite(t.ciLower()), Style.NUMBER, d, n + ": difference CI lower");
-        s.number(row, c0 + 9, finite(t.ciUpper()), Style.NUMBER, d, n + ": difference CI upper");
-        s.number(row, c0 + 10, c.margin() == null ? null : c.margin().lower(), Style.NUMBER, d, n + ": margin L");
-        s.number(row, c0 + 11, c.margin() == null ? null : c.margin().upper(), Style.NUMBER, d, n + ": margin U");
+        s.number(row, c0 + 6, t.estimate(), Style.NUMBER, d, n + ": difference");
+        s.text(row, c0 + 7, interval(t.ciLower(), t.ciUpper(), d), Style.CELL, n + ": CI of the difference");
+        s.text(row, c0 + 8, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
+                Style.CELL, n + ": margin");
         EquivalenceResult eq = c.decidingTost();
-        s.number(row, c0 + 12, eq == null ? null : finite(eq.ciLower()), Style.NUMBER, d,
-                n + ": equivalence CI lower");
-        s.number(row, c0 + 13, eq == null ? null : finite(eq.ciUpper()), Style.NUMBER, d,
-                n + ": equivalence CI upper");
-        s.text(row, c0 + 14, eq == null ? "not assessed (no margin)" : eq.conclusion().words(), Style.CELL,
+        s.text(row, c0 + 9, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL,
+                n + ": equivalence CI");
+        s.text(row, c0 + 10, eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL,
                 n + ": equivalence conclusion");
-        s.number(row, c0 + 15, c.variance() == null ? null : c.variance().ratio(), Style.NUMBER, 3,
+        s.number(row, c0 + 11, c.variance() == null ? null : c.variance().ratio(), Style.NUMBER, 3,
                 n + ": variance ratio");
-        s.number(row, c0 + 16, c.variance() == null ? null : c.variance().p(), Style.P_VALUE, 0, n + ": F-test p");
-        s.number(row, c0 + 17, c.levene() == null ? null : c.levene().p(), Style.P_VALUE, 0,
+        s.number(row, c0 + 12, c.variance() == null ? null : c.variance().p(), Style.P_VALUE, 0, n + ": F-test p");
+        s.number(row, c0 + 13, c.levene() == null ? null : c.levene().p(), Style.P_VALUE, 0,
                 n + ": Brown-Forsythe p");
-        s.text(row, c0 + 18, sdGrowth(c), Style.CELL, n + ": sd growth");
-        s.text(row, c0 + 19, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
+        s.text(row, c0 + 14, sdGrowth(c), Style.CELL, n + ": sd growth");
+        s.text(row, c0 + 15, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
                 n + ": verdict");
+    }
+
+    /**
+     * An interval as text with fixed decimals; an absent bound is "none", an undefined one "undefined".
+     *
+     * @param lower    the lower end or null
+     * @param upper    the upper end or null
+     * @param decimals decimals
+     * @return e.g. "(-0.00044, 0.00074)"
+     */
+    static String interval(Double lower, Double upper, int decimals) {
+        return "(" + fixed(lower, decimals) + ", " + fixed(upper, decimals) + ")";
+    }
+
+    private static String fixed(Double v, int decimals) {
+        if (v == null) {
+            return "none";
+        }
+        if (!Double.isFinite(v)) {
+            return "undefined";
+        }
+        return String.format(Locale.ROOT, "%." + decimals + "f", v).replace('-', '\u2212');
     }
 
     static String sdGrowth(CharacteristicResult c) {

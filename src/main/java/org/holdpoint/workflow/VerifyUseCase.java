@@ -1,0 +1,137 @@
+package org.holdpoint.workflow;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.holdpoint.report.RecordSeal;
+import org.holdpoint.report.ReportException;
+import org.holdpoint.report.ReportInput;
+import org.holdpoint.report.SignoffWorkbookReader;
+import org.holdpoint.report.WorkbookDifference;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.study.Progress;
+import org.holdpoint.study.StudyResult;
+
+/**
+ * Re-verifies a sign-off workbook: reads the embedded study record, checks its SHA-256 (and the optional
+ * Ed25519 signature), re-computes every result from the embedded raw data with the current code, and
+ * compares the values shown on the visible sheets with that computation, listing every difference.
+ */
+public final class VerifyUseCase {
+
+    /**
+     * Verifies a workbook.
+     *
+     * @param workbook   the .xlsx
+     * @param trustedKey a public key the record should be signed with, or null
+     * @param progress   progress and cancel port
+     * @return the findings
+     * @throws SignoffException when the file cannot be read or is not a sign-off workbook
+     */
+    public VerifyResult verify(Path workbook, Path trustedKey, Progress progress) {
+        progress.step("reading the record", 0);
+        SignoffWorkbookReader reader;
+        try {
+            reader = SignoffWorkbookReader.open(workbook);
+        } catch (ReportException e) {
+            throw new SignoffException(e, "%s", e.getMessage());
+        }
+        byte[] record = reader.studyJson().getBytes(StandardCharsets.UTF_8);
+        String sha = StudyFiles.sha256(record);
+        boolean hashOk = sha.equals(reader.storedSha256());
+        List<WorkbookDifference> diffs = new ArrayList<>();
+        List<String> notes = new ArrayList<>();
+        if (!hashOk) {
+            diffs.add(new WorkbookDifference("(record)", "-", "SHA-256 of the embedded study record",
+                    reader.storedSha256(), sha));
+        }
+        RecordSeal seal = reader.seal();
+        VerifyResult.SealState sealState = sealState(record, seal, trustedKey);
+        if (sealState == VerifyResult.SealState.OTHER_KEY) {
+            diffs.add(new WorkbookDifference("(record)", "-", "key that signed the record", seal.keyFingerprint(),
+                    RecordSigning.fingerprint(RecordSigning.readPublic(trustedKey)) + " (the key given)"));
+        }
+        if (sealState == VerifyResult.SealState.INVALID) {
+            diffs.add(new WorkbookDifference("(record)", "-", "Ed25519 signature of the record", "does not match",
+                    "a valid signature by key " + seal.keyFingerprint()));
+        }
+        ChangeStudy study;
+        StudyResult result;
+        try {
+            study = StudyFiles.parse(reader.studyJson(), workbook + " (embedded record)");
+            progress.checkCancelled();
+            progress.step("re-computing", 0.3);
+            result = new StudyAnalyzer().analyze(study.data(), study.settings(), progress);
+        } catch (StudyFileException | AnalysisException | org.holdpoint.stats.StatsException e) {
+            diffs.add(new WorkbookDifference("(record)", "-", "embedded study record", "cannot be re-computed: "
+                    + e.getMessage(), "a readable study"));
+            return new VerifyResult(VerifyResult.Status.EDITED, null, sha, hashOk, sealState, fingerprint(seal),
+                    convert(diffs), List.of(), notes);
+        }
+        compareStoredResults(reader.studyJson(), result, notes);
+        progress.step("comparing the shown values", 0.6);
+        ReportInput expected = new ReportInput(study, result, reader.studyJson(), sha, null, version(reader), reader
+                .generatedAt(), seal);
+        SignoffWorkbookReader.Comparison cmp;
+        try {
+            cmp = reader.compare(expected);
+        } catch (ReportException e) {
+            throw new SignoffException(e, "%s", e.getMessage());
+        }
+        diffs.addAll(cmp.differences());
+        progress.step("done", 1);
+        return new VerifyResult(diffs.isEmpty() ? VerifyResult.Status.INTACT : VerifyResult.Status.EDITED,
+                study.change().id(), sha, hashOk, sealState, fingerprint(seal), convert(diffs), cmp.handEntries(),
+                notes);
+    }
+
+    private static List<VerifyResult.Difference> convert(List<WorkbookDifference> diffs) {
+        return diffs.stream().map(d -> new VerifyResult.Difference(d.sheet(), d.cell(), d.what(), d.shown(),
+                d.expected())).toList();
+    }
+
+    private static String version(SignoffWorkbookReader reader) {
+        JsonNode tree = StudyFiles.tree(reader.studyJson());
+        String v = tree.path("tool").path("version").asText("");
+        return v.isEmpty() ? reader.softwareVersion() : v;
+    }
+
+    private static String fingerprint(RecordSeal seal) {
+        return seal == null ? null : seal.keyFingerprint();
+    }
+
+    private static VerifyResult.SealState sealState(byte[] record, RecordSeal seal, Path trustedKey) {
+        if (seal == null) {
+            return VerifyResult.SealState.UNSIGNED;
+        }
+        if (!RecordSigning.verify(record, seal)) {
+            return VerifyResult.SealState.INVALID;
+        }
+        if (trustedKey != null && !RecordSigning.fingerprint(RecordSigning.readPublic(trustedKey))
+                .equals(seal.keyFingerprint())) {
+            return VerifyResult.SealState.OTHER_KEY;
+        }
+        return VerifyResult.SealState.VALID;
+    }
+
+    /** Notes when the current code computes other results than those stored when the workbook was written. */
+    private static void compareStoredResults(String json, StudyResult result, List<String> notes) {
+        JsonNode stored = StudyFiles.tree(json).path("results").path("characteristics");
+        if (!stored.isArray()) {
+            return;
+        }
+        var fresh = com.fasterxml.jackson.databind.node.JsonNodeFactory.instance.arrayNode();
+        for (CharacteristicResult r : result.characteristics()) {
+            fresh.add(ResultJson.characteristic(r));
+        }
+        JsonNode reread = StudyFiles.tree(new String(StudyFiles.canonical(fresh), StandardCharsets.UTF_8));
+        if (!reread.equals(stored)) {
+            notes.add("the results stored in the record differ from those this version computes from the same data "
+                    + "(a change of the software, not of the workbook); the shown values were compared with this "
+                    + "version's results");
+        }
+    }
+}

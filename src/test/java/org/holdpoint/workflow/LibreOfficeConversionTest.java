@@ -1,0 +1,110 @@
+package org.holdpoint.workflow;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.File;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.Signature;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * A real spreadsheet application opens the workbook: LibreOffice headless converts it to PDF (and CSV)
+ * without errors. Skipped when soffice is not installed (CI installs libreoffice-calc).
+ */
+class LibreOfficeConversionTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void convertsToPdfWithOnePagePerSectionAndShowsFormulaTextLiterally() throws Exception {
+        String soffice = onPath("soffice");
+        assumeTrue(soffice != null, "LibreOffice (soffice) is not installed");
+        // 3 characteristics, 5 values per group: the 30 raw data rows fit one landscape page in any font
+        ChangeStudy study = ReportFixtures.study("=1+1", 5);
+        Path xlsx = dir.resolve("signoff.xlsx");
+        new ReportUseCase(SignoffWorkbookTest.CLOCK).write(study, ReportFixtures.analyze(study),
+                ReportOptions.withDefaults().withCharts(ReportFixtures.charts()).withSignOff(new Signature(
+                        Signature.Stage.PREPARED, "@SUM(A1)", "process engineer", "prepared", null)), xlsx);
+        run(soffice, "--convert-to", "pdf", "--outdir", dir.toString(), xlsx.toString());
+        Path pdf = dir.resolve("signoff.pdf");
+        assertThat(pdf).exists();
+        // Summary 1 + Sign-off 1 + Details 3 (a page break before each characteristic) + Method 1
+        // + Import report 1 + Cautions 1 + Raw data 1 = 9; the hidden record sheet is not printed
+        assertThat(pages(pdf)).isEqualTo(9);
+        String pdftotext = onPath("pdftotext");
+        if (pdftotext != null) {
+            run(pdftotext, pdf.toString(), dir.resolve("signoff.txt").toString());
+            String text = Files.readString(dir.resolve("signoff.txt"));
+            assertThat(text).contains("=1+1").contains("@SUM(A1)").contains("CHANGE NOT VERIFIED");
+        }
+        Path csvDir = Files.createDirectories(dir.resolve("csv"));
+        // 44 = comma, 34 = quote, 76 = UTF-8; the last field -1 writes every sheet (LibreOffice 7.2 and later)
+        run(soffice, "--convert-to", "csv:Text - txt - csv (StarCalc):44,34,76,1,,0,false,true,false,false,false,-1",
+                "--outdir", csvDir.toString(), xlsx.toString());
+        List<String> csv = new ArrayList<>();
+        try (Stream<Path> files = Files.list(csvDir)) {
+            for (Path f : files.toList()) {
+                csv.addAll(Files.readAllLines(f, StandardCharsets.UTF_8));
+            }
+        }
+        assertThat(csv).anySatisfy(line -> assertThat(line).startsWith("1,=1+1,mm,"));
+    }
+
+    private int pages(Path pdf) throws Exception {
+        String pdfinfo = onPath("pdfinfo");
+        if (pdfinfo != null) {
+            String out = run(pdfinfo, pdf.toString());
+            Matcher m = Pattern.compile("Pages:\\s+(\\d+)").matcher(out);
+            if (m.find()) {
+                return Integer.parseInt(m.group(1));
+            }
+        }
+        String raw = new String(Files.readAllBytes(pdf), StandardCharsets.ISO_8859_1);
+        Matcher m = Pattern.compile("/Type\\s*/Page(?!s)").matcher(raw);
+        int n = 0;
+        while (m.find()) {
+            n++;
+        }
+        return n;
+    }
+
+    private String run(String... command) throws IOException, InterruptedException {
+        List<String> cmd = new ArrayList<>(List.of(command));
+        if (command[0].endsWith("soffice")) {
+            // a private profile, so that parallel runs and a desktop session do not collide
+            cmd.add(1, "-env:UserInstallation=" + dir.resolve("lo-profile").toUri());
+            cmd.add(1, "--headless");
+        }
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).start();
+        byte[] out = p.getInputStream().readAllBytes();
+        assertThat(p.waitFor(180, TimeUnit.SECONDS)).as("%s finished", command[0]).isTrue();
+        assertThat(p.exitValue()).as("%s exit code", command[0]).isZero();
+        return new String(out, StandardCharsets.UTF_8);
+    }
+
+    private static String onPath(String name) {
+        String path = System.getenv("PATH");
+        if (path == null) {
+            return null;
+        }
+        for (String d : path.split(File.pathSeparator)) {
+            File f = new File(d, name);
+            if (f.canExecute()) {
+                return f.getAbsolutePath();
+            }
+        }
+        return null;
+    }
+}

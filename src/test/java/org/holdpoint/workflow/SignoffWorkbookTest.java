@@ -1,0 +1,290 @@
+package org.holdpoint.workflow;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.List;
+import java.util.function.Consumer;
+import java.util.stream.Stream;
+import org.apache.poi.ss.usermodel.Cell;
+import org.apache.poi.ss.usermodel.CellType;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.ss.util.CellReference;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.Progress;
+import org.holdpoint.study.Signature;
+import org.holdpoint.study.StudyResult;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/** The sign-off workbook written and re-verified end to end, with single cells edited in between. */
+class SignoffWorkbookTest {
+    static final Clock CLOCK = Clock.fixed(Instant.parse("2026-11-21T09:30:00Z"), ZoneOffset.UTC);
+    @TempDir
+    Path dir;
+    Path file;
+
+    @BeforeEach
+    void write() throws IOException {
+        file = dir.resolve("CR-2026-0117.xlsx");
+        write(ReportFixtures.study(), file);
+    }
+
+    private static void write(ChangeStudy study, Path target) throws IOException {
+        StudyResult result = ReportFixtures.analyze(study);
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults().withCharts(ReportFixtures.charts())
+                .withSignOff(new Signature(Signature.Stage.PREPARED, "A. Lindqvist", "process engineer",
+                        "prepared: study planned, measured and analysed as recorded", null)), target);
+    }
+
+    private VerifyResult verify(Path f) {
+        return new VerifyUseCase().verify(f, null, Progress.NONE);
+    }
+
+    @Test
+    void freshWorkbookIsIntact() {
+        VerifyResult r = verify(file);
+        assertThat(r.differences()).isEmpty();
+        assertThat(r.status()).isEqualTo(VerifyResult.Status.INTACT);
+        assertThat(r.hashMatches()).isTrue();
+        assertThat(r.changeId()).isEqualTo("CR-2026-0117");
+        assertThat(r.seal()).isEqualTo(VerifyResult.SealState.UNSIGNED);
+    }
+
+    @Test
+    void shownNumbersAgreeWithR() throws IOException {
+        // R 4.2.2: b <- c(25.0102, ...); a <- c(25.0104, ...) (ReportFixtures.BORE_*)
+        // t.test(a, b)$p.value = 0.60336471226878152 (Welch); t.test(a, b)$conf.int = -0.0004408966285449081,
+        // 0.00074089662854776169; t.test(a, b, conf.level = 0.9)$conf.int = -0.00033904705888565333,
+        // 0.00063904705888850682; var.test(a, b)$p.value = 0.56926752368071454, statistic 0.70330984979384781;
+        // mean(a) = 25.010708333333334, mean(b) = 25.010558333333332
+        try (XSSFWorkbook wb = open(file)) {
+            Sheet summary = wb.getSheet("Summary");
+            assertThat(number(summary, "E15")).isCloseTo(25.010558333333332, within(1e-12));
+            assertThat(number(summary, "F15")).isCloseTo(25.010708333333334, within(1e-12));
+            assertThat(number(summary, "L15")).isCloseTo(0.70330984979384781, within(1e-12));
+            assertThat(number(summary, "M15")).isCloseTo(0.56926752368071454, within(1e-10));
+            assertThat(text(summary, "H15")).isEqualTo("(\u22120.000441, 0.000741)");
+            assertThat(text(summary, "J15")).isEqualTo("(\u22120.000339, 0.000639)");
+            Sheet details = wb.getSheet("Details");
+            // difference test block: p at B20, 95 % CI at B21/B22; equivalence 90 % CI at F19/F20
+            assertThat(number(details, "B20")).isCloseTo(0.60336471226878152, within(1e-10));
+            assertThat(number(details, "B21")).isCloseTo(-0.0004408966285449081, within(1e-14));
+            assertThat(number(details, "B22")).isCloseTo(0.00074089662854776169, within(1e-14));
+            assertThat(number(details, "F19")).isCloseTo(-0.00033904705888565333, within(1e-14));
+            assertThat(number(details, "F20")).isCloseTo(0.00063904705888850682, within(1e-14));
+        }
+    }
+
+    static Stream<Arguments> edits() {
+        return Stream.of(
+                Arguments.of("Raw data", "D2", (Consumer<Cell>) c -> c.setCellValue(25.0202), "raw data row 1, Value"),
+                Arguments.of("Summary", "M15", (Consumer<Cell>) c -> c.setCellValue(0.0312), "F-test p"),
+                Arguments.of("Details", "F20", (Consumer<Cell>) c -> c.setCellValue(0.0006), "equivalence CI upper"),
+                Arguments.of("Summary", "I15", (Consumer<Cell>) c -> c.setCellValue("(\u22120.005000, 0.005000)"),
+                        "margin"),
+                Arguments.of("Details", "F10", (Consumer<Cell>) c -> c.setCellValue(-0.005), "margin L"),
+                Arguments.of("Sign-off", "D5", (Consumer<Cell>) c -> c.setCellValue("2026-11-25T16:00:00Z"),
+                        "sign-off prepared: date and time"),
+                Arguments.of("Summary", "P15", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
+                        "verdict"));
+    }
+
+    @ParameterizedTest(name = "{0}!{1}")
+    @MethodSource("edits")
+    void everySingleEditIsFound(String sheet, String cell, Consumer<Cell> edit, String what) throws IOException {
+        Path edited = edit(file, sheet, cell, edit);
+        VerifyResult r = verify(edited);
+        assertThat(r.status()).isEqualTo(VerifyResult.Status.EDITED);
+        assertThat(r.differences()).hasSize(1);
+        VerifyResult.Difference d = r.differences().get(0);
+        assertThat(d.sheet()).isEqualTo(sheet);
+        assertThat(d.cell()).isEqualTo(cell);
+        assertThat(d.what()).contains(what);
+    }
+
+    @Test
+    void reSavingWithoutEditsStaysIntact() throws IOException {
+        Path same = edit(file, "Summary", "Z1", c -> { });
+        assertThat(verify(same).differences()).isEmpty();
+    }
+
+    @Test
+    void editedRecordBreaksTheHash() throws IOException {
+        // the first chunk of the record: row 15 of the hidden sheet, column B
+        Path edited = edit(file, "Record", "B15", c -> c.setCellValue(c.getStringCellValue()
+                .replace("\"CR-2026-0117\"", "\"CR-2026-0118\"")));
+        VerifyResult r = verify(edited);
+        assertThat(r.hashMatches()).isFalse();
+        assertThat(r.status()).isEqualTo(VerifyResult.Status.EDITED);
+        assertThat(r.differences()).extracting(VerifyResult.Difference::what)
+                .contains("SHA-256 of the embedded study record");
+    }
+
+    @Test
+    void handEntriesInEmptySignOffFieldsAreListedApart() throws IOException {
+        Path signed = edit(file, "Sign-off", "B6", c -> c.setCellValue("R. Haddad"));
+        VerifyResult r = verify(signed);
+        assertThat(r.status()).isEqualTo(VerifyResult.Status.INTACT);
+        assertThat(r.handEntries()).singleElement().asString().contains("Sign-off!B6").contains("R. Haddad");
+    }
+
+    @Test
+    void userTextIsNeverAFormula() throws IOException {
+        ChangeStudy study = ReportFixtures.study("=1+1");
+        Path f = dir.resolve("injection.xlsx");
+        StudyResult result = ReportFixtures.analyze(study);
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults().withSignOff(new Signature(
+                Signature.Stage.PREPARED, "@SUM(A1)", "+cmd", "-2+3", null)), f);
+        try (XSSFWorkbook wb = open(f)) {
+            for (String[] at : new String[][] {{"Summary", "B15"}, {"Sign-off", "B5"}, {"Sign-off", "C5"},
+                {"Sign-off", "E5"}, {"Raw data", "A2"}}) {
+                Cell c = cell(wb.getSheet(at[0]), at[1]);
+                assertThat(c.getCellType()).as(at[0] + "!" + at[1]).isEqualTo(CellType.STRING);
+                assertThat(c.getCellStyle().getQuotePrefixed()).as(at[0] + "!" + at[1]).isTrue();
+            }
+            assertThat(cell(wb.getSheet("Summary"), "B15").getStringCellValue()).isEqualTo("=1+1");
+            assertThat(cell(wb.getSheet("Sign-off"), "B5").getStringCellValue()).isEqualTo("@SUM(A1)");
+        }
+        assertThat(verify(f).differences()).isEmpty();
+    }
+
+    @Test
+    void existingFileIsReplacedOnlyWhenAsked() throws IOException {
+        byte[] before = Files.readAllBytes(file);
+        ChangeStudy study = ReportFixtures.study();
+        StudyResult result = ReportFixtures.analyze(study);
+        assertThatThrownBy(() -> new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults(), file))
+                .isInstanceOf(SignoffException.class).hasMessageContaining("exists").hasMessageContaining("--overwrite");
+        assertThat(Files.readAllBytes(file)).isEqualTo(before);
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults()
+                .withExisting(ReportOptions.ExistingFile.REPLACE), file);
+        assertThat(Files.readAllBytes(file)).isNotEqualTo(before);
+        assertThat(verify(file).differences()).isEmpty();
+    }
+
+    @Test
+    void aFailureLeavesNoFile() throws IOException {
+        Path target = dir.resolve("sub").resolve("never.xlsx");
+        ChangeStudy study = ReportFixtures.study();
+        StudyResult result = ReportFixtures.analyze(study);
+        ChartSource broken = (s, r) -> {
+            throw new IllegalStateException("renderer crashed");
+        };
+        assertThatThrownBy(() -> new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults()
+                .withCharts(broken), target)).hasMessageContaining("renderer crashed");
+        try (Stream<Path> left = Files.list(target.getParent())) {
+            assertThat(left).isEmpty();
+        }
+    }
+
+    @Test
+    void templateWithoutARequiredNameIsAClearError() throws IOException {
+        byte[] bytes = org.holdpoint.report.TemplateGenerator.build();
+        Path template = dir.resolve("plant.xlsx");
+        try (XSSFWorkbook wb = new XSSFWorkbook(new java.io.ByteArrayInputStream(bytes))) {
+            wb.removeName(wb.getName("HP_Method"));
+            try (OutputStream out = Files.newOutputStream(template)) {
+                wb.write(out);
+            }
+        }
+        ChangeStudy study = ReportFixtures.study();
+        StudyResult result = ReportFixtures.analyze(study);
+        Path target = dir.resolve("t.xlsx");
+        assertThatThrownBy(() -> new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults()
+                .withTemplate(template), target)).isInstanceOf(SignoffException.class)
+                .hasMessageContaining("plant.xlsx").hasMessageContaining("HP_Method")
+                .hasMessageContaining("templates/README.md");
+        assertThat(target).doesNotExist();
+    }
+
+    @Test
+    void notASignOffWorkbook() throws IOException {
+        Path plain = dir.resolve("plain.xlsx");
+        try (XSSFWorkbook wb = new XSSFWorkbook(); OutputStream out = Files.newOutputStream(plain)) {
+            wb.createSheet("Data").createRow(0).createCell(0).setCellValue(1.0);
+            wb.write(out);
+        }
+        assertThatThrownBy(() -> verify(plain)).isInstanceOf(SignoffException.class)
+                .hasMessageContaining("not a Holdpoint sign-off workbook");
+        Path text = Files.writeString(dir.resolve("notes.xlsx"), "just text");
+        assertThatThrownBy(() -> verify(text)).isInstanceOf(SignoffException.class)
+                .hasMessageContaining("cannot be read");
+    }
+
+    @Test
+    void signedRecordSaysWhichKeySigned() throws IOException {
+        Path key = dir.resolve("qa.key");
+        Path pub = dir.resolve("qa.pub");
+        String fingerprint = RecordSigning.generate(key, pub);
+        Path other = dir.resolve("other.pub");
+        RecordSigning.generate(dir.resolve("other.key"), other);
+        ChangeStudy study = ReportFixtures.study();
+        StudyResult result = ReportFixtures.analyze(study);
+        Path f = dir.resolve("signed.xlsx");
+        ReportUseCase.Written w = new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults()
+                .withSigningKey(key, pub), f);
+        assertThat(w.keyFingerprint()).isEqualTo(fingerprint);
+        VerifyResult ok = new VerifyUseCase().verify(f, pub, Progress.NONE);
+        assertThat(ok.seal()).isEqualTo(VerifyResult.SealState.VALID);
+        assertThat(ok.keyFingerprint()).isEqualTo(fingerprint);
+        assertThat(ok.status()).isEqualTo(VerifyResult.Status.INTACT);
+        VerifyResult wrongKey = new VerifyUseCase().verify(f, other, Progress.NONE);
+        assertThat(wrongKey.seal()).isEqualTo(VerifyResult.SealState.OTHER_KEY);
+        assertThat(wrongKey.status()).isEqualTo(VerifyResult.Status.EDITED);
+        // re-hashing an edited record cannot forge the signature
+        Path edited = edit(f, "Record", "B15", c -> c.setCellValue(c.getStringCellValue().replace("CR-2026-0117",
+                "CR-2026-0118")));
+        VerifyResult forged = new VerifyUseCase().verify(edited, null, Progress.NONE);
+        assertThat(forged.seal()).isEqualTo(VerifyResult.SealState.INVALID);
+    }
+
+    static XSSFWorkbook open(Path f) throws IOException {
+        try (InputStream in = Files.newInputStream(f)) {
+            return new XSSFWorkbook(in);
+        }
+    }
+
+    private Path edit(Path source, String sheet, String ref, Consumer<Cell> edit) throws IOException {
+        Path target = dir.resolve("edited-" + sheet.replace(' ', '_') + "-" + ref + ".xlsx");
+        try (XSSFWorkbook wb = open(source)) {
+            Sheet sh = wb.getSheet(sheet);
+            CellReference cr = new CellReference(ref);
+            var row = sh.getRow(cr.getRow()) != null ? sh.getRow(cr.getRow()) : sh.createRow(cr.getRow());
+            Cell c = row.getCell(cr.getCol(), org.apache.poi.ss.usermodel.Row.MissingCellPolicy.CREATE_NULL_AS_BLANK);
+            edit.accept(c);
+            try (OutputStream out = Files.newOutputStream(target)) {
+                wb.write(out);
+            }
+        }
+        return target;
+    }
+
+    private static Cell cell(Sheet sh, String ref) {
+        CellReference cr = new CellReference(ref);
+        return sh.getRow(cr.getRow()).getCell(cr.getCol());
+    }
+
+    private static double number(Sheet sh, String ref) {
+        return cell(sh, ref).getNumericCellValue();
+    }
+
+    private static String text(Sheet sh, String ref) {
+        return cell(sh, ref).getStringCellValue();
+    }
+
+}
