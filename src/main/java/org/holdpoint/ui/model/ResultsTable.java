@@ -63,9 +63,8 @@ public final class ResultsTable {
      * @param r the results, or null to clear
      */
     public void show(StudyResult r) {
-        StudyResult old = result;
         result = r;
-        bound.fire(Property.RESULT, old, r);
+        bound.fireChanged(Property.RESULT);
         if (r == null || r.characteristics().stream().noneMatch(c -> c.name().equals(selected))) {
             select(r == null || r.characteristics().isEmpty() ? null : r.characteristics().get(0).name());
         }

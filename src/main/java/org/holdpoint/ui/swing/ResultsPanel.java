@@ -8,7 +8,6 @@ import java.util.List;
 import javax.swing.BorderFactory;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
-import javax.swing.JEditorPane;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
@@ -41,7 +40,7 @@ final class ResultsPanel extends JPanel {
     private final TableRowSorter<Model> sorter = new TableRowSorter<>(model);
     private final JComboBox<ResultsTable.Filter> filter = new JComboBox<>(ResultsTable.Filter.values());
     private final JLabel shown = new JLabel(" ");
-    private final JEditorPane detail = new JEditorPane("text/html", "");
+    private final DetailView detail = new DetailView();
     private final javax.swing.JTabbedPane chartTabs = new javax.swing.JTabbedPane();
     private final transient java.util.concurrent.ExecutorService renderer =
             java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
@@ -77,7 +76,7 @@ final class ResultsPanel extends JPanel {
                 return results.shows(e.getIdentifier());
             }
         });
-        int[] widths = {115, 185, 250, 50, 125, 230, 150, 80};
+        int[] widths = {135, 185, 240, 45, 125, 230, 150, 80};
         for (int i = 0; i < widths.length; i++) {
             table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -95,8 +94,6 @@ final class ResultsPanel extends JPanel {
         });
         results.addListener(ResultsTable.Property.RESULT, e -> refreshRows());
         results.addListener(ResultsTable.Property.SELECTED, e -> refreshDetail());
-        detail.setEditable(false);
-        detail.putClientProperty(JEditorPane.HONOR_DISPLAY_PROPERTIES, Boolean.TRUE);
         detail.setName("detail");
         String[] titles = {"Box plot", "Histograms", "Normal probability"};
         for (int i = 0; i < charts.length; i++) {
@@ -204,13 +201,12 @@ final class ResultsPanel extends JPanel {
     private void refreshDetail() {
         CharacteristicResult r = results.selectedResult();
         if (r == null) {
-            detail.setText("<html><body><p>No characteristic selected.</p></body></html>");
+            detail.message("No characteristic selected.");
             setCharts(null);
             chartNote.setText(" ");
             return;
         }
-        detail.setText(html(r));
-        detail.setCaretPosition(0);
+        detail.show(r.name(), ResultDetail.of(r));
         drawChart(session.characteristic(r.name()), r);
     }
 
@@ -238,22 +234,6 @@ final class ResultsPanel extends JPanel {
         for (ChartView c : charts) {
             c.clear(" ");
         }
-    }
-
-    private static String html(CharacteristicResult r) {
-        StringBuilder sb = new StringBuilder("<html><body style='margin:8px'>");
-        sb.append("<h2 style='margin-top:0'>").append(Dialogs.esc(r.name())).append("</h2>");
-        List<ResultDetail.Section> sections = ResultDetail.of(r);
-        for (ResultDetail.Section s : sections) {
-            sb.append("<p style='margin-top:10px; margin-bottom:2px'><b>").append(Dialogs.esc(s.title()))
-                    .append("</b></p><table cellspacing='0' cellpadding='2'>");
-            for (ResultDetail.Line l : s.lines()) {
-                sb.append("<tr><td valign='top' width='150'>").append(Dialogs.esc(l.label())).append("</td><td>")
-                        .append(Dialogs.esc(l.value())).append("</td></tr>");
-            }
-            sb.append("</table>");
-        }
-        return sb.append("</body></html>").toString();
     }
 
     /** @return the results table (for tests) */
