@@ -2,6 +2,7 @@ package org.holdpoint.workflow;
 
 import java.nio.file.Path;
 import org.holdpoint.importer.ImportRequest;
+import org.holdpoint.study.Layout;
 
 /**
  * Which files hold the before and after values, as the window asks for them: one file with both
@@ -13,9 +14,10 @@ import org.holdpoint.importer.ImportRequest;
  * @param sheet       sheet name or 1-based index of {@code file}, or null
  * @param beforeSheet sheet of {@code beforeFile}, or null
  * @param afterSheet  sheet of {@code afterFile}, or null
+ * @param layout      the layout of the one file, or null to detect it (the import report states what was found)
  */
 public record DataSources(Path file, Path beforeFile, Path afterFile, String sheet, String beforeSheet,
-        String afterSheet) {
+        String afterSheet, Layout layout) {
 
     /** Validates that exactly one of the two shapes is given. */
     public DataSources {
@@ -42,7 +44,7 @@ public record DataSources(Path file, Path beforeFile, Path afterFile, String she
      * @return the sources
      */
     public static DataSources of(Path file) {
-        return new DataSources(file, null, null, null, null, null);
+        return new DataSources(file, null, null, null, null, null, null);
     }
 
     /** @return the file beside which a criteria (settings) file is looked for: the one file, else the before file */
@@ -52,7 +54,8 @@ public record DataSources(Path file, Path beforeFile, Path afterFile, String she
 
     /** @return the import request for these sources, everything else detected */
     ImportRequest toRequest() {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, null, false, null, null,
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout,
+                layout == Layout.PAIRED, null, null,
                 null, null, null, null, null, null, null, null, null, null, null, null);
     }
 

@@ -38,7 +38,23 @@ public final class DataForm {
         /** The after file. */
         AFTER,
         /** The sheet of the one file. */
-        SHEET
+        SHEET,
+        /** The layout of the one file (null: detect). */
+        LAYOUT
+    }
+
+    private org.holdpoint.study.Layout layout;
+
+    /** @return the layout chosen for the one file, or null to detect it */
+    public org.holdpoint.study.Layout layout() {
+        return layout;
+    }
+
+    /** @param l the layout of the one file, or null to detect it */
+    public void setLayout(org.holdpoint.study.Layout l) {
+        org.holdpoint.study.Layout old = layout;
+        layout = l;
+        bound.fire(Property.LAYOUT, old, l);
     }
 
     private final Bound<Property> bound = new Bound<>(this, Property.class);
@@ -158,13 +174,13 @@ public final class DataForm {
             if (file == null) {
                 throw new IllegalArgumentException("Choose the data file first (or drop it on the window).");
             }
-            return new DataSources(file, null, null, sheet, null, null);
+            return new DataSources(file, null, null, sheet, null, null, layout);
         }
         if (before == null || after == null) {
             throw new IllegalArgumentException(before == null ? "Choose the before file first."
                     : "Choose the after file first.");
         }
-        return new DataSources(null, before, after, null, sheet, sheet);
+        return new DataSources(null, before, after, null, sheet, sheet, null);
     }
 
     /**
@@ -177,6 +193,7 @@ public final class DataForm {
             setSource(Source.ONE_FILE);
             setFile(s.file());
             setSheet(s.sheet());
+            setLayout(s.layout());
         } else {
             setSource(Source.TWO_FILES);
             setBefore(s.beforeFile());

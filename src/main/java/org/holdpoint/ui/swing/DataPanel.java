@@ -42,6 +42,7 @@ final class DataPanel extends JPanel {
     private final JTextField before = readOnly("before");
     private final JTextField after = readOnly("after");
     private final JTextField sheet = new JTextField(12);
+    private final javax.swing.JComboBox<String> layout = new javax.swing.JComboBox<>(layoutChoices());
     private final JButton chooseFile = new JButton("Choose…");
     private final JButton chooseBefore = new JButton("Choose…");
     private final JButton chooseAfter = new JButton("Choose…");
@@ -88,6 +89,11 @@ final class DataPanel extends JPanel {
         sheet.putClientProperty("JTextField.placeholderText", "first with data");
         sheet.setToolTipText("Sheet name or number (spreadsheets only); empty: the first sheet with data");
         Bind.text(sheet, form::sheet, form::setSheet);
+        layout.setToolTipText("How the one file holds the groups; detected when left on \"detect\"");
+        layout.addActionListener(e -> {
+            int i = layout.getSelectedIndex();
+            form.setLayout(i <= 0 ? null : LAYOUTS.get(i - 1));
+        });
         importButton.setMnemonic('I');
         importButton.setName("import");
         importButton.putClientProperty("JButton.buttonType", "default");
@@ -143,6 +149,9 @@ final class DataPanel extends JPanel {
         c.gridx = 1;
         JPanel sheetRow = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
         sheetRow.add(sheet);
+        sheetRow.add(javax.swing.Box.createHorizontalStrut(12));
+        sheetRow.add(Bind.label("Layout ", 'L', layout));
+        sheetRow.add(layout);
         sheetRow.add(javax.swing.Box.createHorizontalStrut(12));
         sheetRow.add(swap);
         sheetRow.add(javax.swing.Box.createHorizontalStrut(24));
@@ -202,6 +211,22 @@ final class DataPanel extends JPanel {
         chooseBefore.setEnabled(!one);
         chooseAfter.setEnabled(!one);
         swap.setEnabled(!one);
+        layout.setEnabled(one);
+        int want = form.layout() == null ? 0 : LAYOUTS.indexOf(form.layout()) + 1;
+        if (layout.getSelectedIndex() != want) {
+            layout.setSelectedIndex(want);
+        }
+    }
+
+    private static final List<org.holdpoint.study.Layout> LAYOUTS = List.of(org.holdpoint.study.Layout.STACKED,
+            org.holdpoint.study.Layout.SIDE_BY_SIDE, org.holdpoint.study.Layout.WIDE,
+            org.holdpoint.study.Layout.PAIRED);
+
+    private static String[] layoutChoices() {
+        java.util.List<String> l = new java.util.ArrayList<>();
+        l.add("detect");
+        LAYOUTS.forEach(x -> l.add(x.words()));
+        return l.toArray(String[]::new);
     }
 
     private void refreshData() {

@@ -69,6 +69,16 @@ final class ResultsPanel extends JPanel {
         table.setFillsViewportHeight(true);
         table.setDefaultRenderer(VerdictLook.class, new VerdictRenderer());
         table.setDefaultRenderer(Double.class, new NumberRenderer());
+        table.setDefaultRenderer(String.class, new DefaultTableCellRenderer() {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public Component getTableCellRendererComponent(JTable t, Object v, boolean s, boolean f, int r, int c) {
+                super.getTableCellRendererComponent(t, v, s, f, r, c);
+                setToolTipText(v == null || v.toString().isEmpty() ? null : v.toString());
+                return this;
+            }
+        });
         sorter.setComparator(ResultColumn.VERDICT.ordinal(), Comparator.comparingInt(VerdictLook::urgency));
         sorter.setRowFilter(new RowFilter<Model, Integer>() {
             @Override

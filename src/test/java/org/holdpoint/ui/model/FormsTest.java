@@ -31,6 +31,10 @@ class FormsTest {
         f.drop(List.of(Path.of("/d/all.xlsx")));
         assertThat(f.source()).isEqualTo(DataForm.Source.ONE_FILE);
         assertThat(f.toSources()).isEqualTo(DataSources.of(Path.of("/d/all.xlsx")));
+        f.setLayout(org.holdpoint.study.Layout.WIDE);
+        f.setSheet("Run 2");
+        assertThat(f.toSources()).isEqualTo(new DataSources(Path.of("/d/all.xlsx"), null, null, "Run 2", null, null,
+                org.holdpoint.study.Layout.WIDE));
         assertThatThrownBy(() -> f.drop(List.of(Path.of("a"), Path.of("b"), Path.of("c"))))
                 .hasMessageContaining("3 were dropped");
     }
