@@ -111,6 +111,11 @@ final class DataPanel extends JPanel {
         report.setEditable(false);
         report.setLineWrap(true);
         report.setWrapStyleWord(true);
+        report.setColumns(24);
+        report.setRows(8);
+        preview.getColumnModel().getColumn(PreviewGrid.Column.CHARACTERISTIC.ordinal()).setPreferredWidth(170);
+        preview.getColumnModel().getColumn(PreviewGrid.Column.UNIT_ID.ordinal()).setPreferredWidth(90);
+        preview.getColumnModel().getColumn(PreviewGrid.Column.VALUE.ordinal()).setPreferredWidth(90);
         preview.getColumnModel().getColumn(PreviewGrid.Column.STATUS.ordinal()).setPreferredWidth(260);
         preview.getColumnModel().getColumn(PreviewGrid.Column.GROUP.ordinal()).setPreferredWidth(60);
         preview.getColumnModel().getColumn(PreviewGrid.Column.CELL.ordinal()).setPreferredWidth(60);
@@ -167,7 +172,8 @@ final class DataPanel extends JPanel {
         left.add(new JScrollPane(preview), BorderLayout.CENTER);
         JPanel right = new JPanel(new BorderLayout(0, 4));
         right.add(Bind.heading("Import report"), BorderLayout.NORTH);
-        right.add(new JScrollPane(report), BorderLayout.CENTER);
+        right.add(new JScrollPane(report, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
+                JScrollPane.HORIZONTAL_SCROLLBAR_NEVER), BorderLayout.CENTER);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, right);
         split.setResizeWeight(0.62);
         split.setBorder(BorderFactory.createEmptyBorder(8, 24, 16, 24));
