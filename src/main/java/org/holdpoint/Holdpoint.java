@@ -1,12 +1,16 @@
 package org.holdpoint;
 
+import java.awt.GraphicsEnvironment;
 import org.holdpoint.archive.JdbcArchive;
 import org.holdpoint.cli.HoldpointCommand;
+import org.holdpoint.ui.swing.MainWindow;
 import org.holdpoint.workflow.ArchiveAccess;
+import org.holdpoint.workflow.WindowLauncher;
 
 /**
- * The launcher and composition root: runs the command line (and, with no arguments on a machine
- * with a display, the window). The only caller of {@link System#exit}.
+ * The launcher and composition root: with no arguments on a machine with a display it opens the
+ * window; otherwise it runs the command line, whose {@code gui} subcommand opens the window through
+ * the {@link WindowLauncher} wired here. The only caller of {@link System#exit}.
  */
 public final class Holdpoint {
     private Holdpoint() {
@@ -24,7 +28,18 @@ public final class Holdpoint {
      */
     public static void main(String[] args) {
         wire();
-        int code = HoldpointCommand.create().execute(args);
-        System.exit(code);
+        boolean[] opened = {false};
+        WindowLauncher launcher = () -> {
+            MainWindow.launch();
+            opened[0] = true;
+        };
+        if (args.length == 0 && !GraphicsEnvironment.isHeadless()) {
+            launcher.open();
+            return;
+        }
+        int code = HoldpointCommand.create(launcher).execute(args);
+        if (!opened[0] || code != 0) {
+            System.exit(code);
+        }
     }
 }

@@ -1,6 +1,7 @@
 package org.holdpoint.cli;
 
 import org.holdpoint.workflow.Version;
+import org.holdpoint.workflow.WindowLauncher;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -42,7 +43,18 @@ public final class HoldpointCommand implements Runnable {
      * @return the command line
      */
     public static CommandLine create() {
+        return create(WindowLauncher.NONE);
+    }
+
+    /**
+     * The configured command line with the {@code gui} subcommand opening the window through {@code launcher}.
+     *
+     * @param launcher opens the window (supplied by the composition root)
+     * @return the command line
+     */
+    public static CommandLine create(WindowLauncher launcher) {
         CommandLine cl = new CommandLine(new HoldpointCommand());
+        cl.addSubcommand("gui", new GuiCommand(launcher));
         cl.setExecutionExceptionHandler(new Failures());
         cl.setParameterExceptionHandler(new Failures());
         return cl;

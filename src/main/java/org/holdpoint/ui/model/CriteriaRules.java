@@ -1,0 +1,189 @@
+package org.holdpoint.ui.model;
+
+import java.math.BigDecimal;
+import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.MarginSpec;
+import org.holdpoint.study.SpecLimits;
+
+/** The checks of the Criteria step, cell by cell, and the conversion of a valid row to settings. */
+final class CriteriaRules {
+    private static final java.util.regex.Pattern NUMBER =
+            java.util.regex.Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+    private CriteriaRules() {
+    }
+
+    /** A parsed margin: bounds as the study's {@link MarginSpec} wants them. */
+    record Bounds(Double lower, Double upper) {
+    }
+
+    static String problem(String[] r, CriteriaColumn col) {
+        String t = r[col.ordinal()];
+        return switch (col) {
+            case CHARACTERISTIC, UNIT -> null;
+            case LSL, NOMINAL -> numberProblem(t, col == CriteriaColumn.NOMINAL ? nominalProblem(r) : null);
+            case USL -> numberProblem(t, uslProblem(r));
+            case MARGIN -> marginProblem(r);
+            case MARGIN_IN, PAIRED -> col.choices().contains(t) ? null : "choose one of " + String.join(", ",
+                    col.choices());
+            case SD_GROWTH -> positive(t, "the sd-growth limit", "1.25");
+            case CAPABILITY -> positive(t, "the capability requirement", "1.33");
+        };
+    }
+
+    private static String numberProblem(String t, String relation) {
+        if (!isNumber(t)) {
+            return notANumber(t);
+        }
+        return relation;
+    }
+
+    private static String uslProblem(String[] r) {
+        Double lsl = number(r[CriteriaColumn.LSL.ordinal()]);
+        Double usl = number(r[CriteriaColumn.USL.ordinal()]);
+        if (lsl != null && usl != null && !(lsl < usl)) {
+            return "must be above LSL (" + text(lsl) + ")";
+        }
+        return null;
+    }
+
+    private static String nominalProblem(String[] r) {
+        Double lsl = number(r[CriteriaColumn.LSL.ordinal()]);
+        Double nom = number(r[CriteriaColumn.NOMINAL.ordinal()]);
+        Double usl = number(r[CriteriaColumn.USL.ordinal()]);
+        if (nom == null) {
+            return null;
+        }
+        if (lsl != null && nom < lsl || usl != null && nom > usl) {
+            return "must lie between LSL and USL";
+        }
+        return null;
+    }
+
+    private static String positive(String t, String what, String example) {
+        if (!isNumber(t)) {
+            return notANumber(t);
+        }
+        Double v = number(t);
+        return v == null || v > 0 ? null : what + " must be above 0, e.g. " + example;
+    }
+
+    private static String marginProblem(String[] r) {
+        String t = r[CriteriaColumn.MARGIN.ordinal()];
+        if (t.isEmpty()) {
+            return null;
+        }
+        boolean percent = CriteriaTable.IN_PERCENT.equals(r[CriteriaColumn.MARGIN_IN.ordinal()]);
+        try {
+            margin(t, percent);
+        } catch (IllegalArgumentException e) {
+            return e.getMessage();
+        }
+        if (percent && (number(r[CriteriaColumn.LSL.ordinal()]) == null
+                || number(r[CriteriaColumn.USL.ordinal()]) == null)) {
+            return "a margin in % of tolerance needs both LSL and USL";
+        }
+        return null;
+    }
+
+    /**
+     * Parses a margin: one number d for (−d, d) (or ±d % of tolerance), or "L / U" with either side empty.
+     *
+     * @return the bounds, or null when the text is empty
+     * @throws IllegalArgumentException with the reason in plain words
+     */
+    static Bounds margin(String text, boolean percent) {
+        String t = text.replace("±", "").replace("+/-", "").trim();
+        if (t.isEmpty()) {
+            return null;
+        }
+        if (!t.contains("/")) {
+            Double d = parse(t);
+            if (d == null || !(d > 0)) {
+                throw new IllegalArgumentException("give a positive number d for the margin (−d, d), or L / U");
+            }
+            return new Bounds(percent ? d : -d, d);
+        }
+        String[] parts = t.split("/", -1);
+        if (parts.length != 2) {
+            throw new IllegalArgumentException("write the margin as L / U, e.g. -0.01 / 0.02");
+        }
+        Double lo = parts[0].isBlank() ? null : parse(parts[0].trim());
+        Double hi = parts[1].isBlank() ? null : parse(parts[1].trim());
+        if (!parts[0].isBlank() && lo == null || !parts[1].isBlank() && hi == null) {
+            throw new IllegalArgumentException("both sides of L / U must be numbers (or empty)");
+        }
+        if (lo == null && hi == null) {
+            throw new IllegalArgumentException("give at least one side of L / U");
+        }
+        if (percent) {
+            lo = lo == null ? null : Math.abs(lo);
+            if (lo != null && lo == 0 || hi != null && !(hi > 0)) {
+                throw new IllegalArgumentException("percentages of the tolerance must be above 0");
+            }
+            return new Bounds(lo, hi);
+        }
+        if (lo != null && !(lo < 0) || hi != null && !(hi > 0)) {
+            throw new IllegalArgumentException("the margin must contain 0: L below 0, U above 0");
+        }
+        return new Bounds(lo, hi);
+    }
+
+    static CharacteristicSettings settings(String[] r) {
+        String unit = r[CriteriaColumn.UNIT.ordinal()];
+        SpecLimits spec = new SpecLimits(number(r[CriteriaColumn.LSL.ordinal()]),
+                number(r[CriteriaColumn.NOMINAL.ordinal()]), number(r[CriteriaColumn.USL.ordinal()]));
+        boolean percent = CriteriaTable.IN_PERCENT.equals(r[CriteriaColumn.MARGIN_IN.ordinal()]);
+        Bounds b = margin(r[CriteriaColumn.MARGIN.ordinal()], percent);
+        MarginSpec m = b == null ? null : new MarginSpec(percent ? MarginSpec.Kind.PERCENT_OF_TOLERANCE
+                : MarginSpec.Kind.ABSOLUTE, b.lower(), b.upper());
+        String paired = r[CriteriaColumn.PAIRED.ordinal()];
+        Boolean p = CriteriaTable.FROM_DATA.equals(paired) ? null : "yes".equals(paired);
+        return new CharacteristicSettings(unit.isEmpty() ? null : unit, spec, m,
+                number(r[CriteriaColumn.SD_GROWTH.ordinal()]), number(r[CriteriaColumn.CAPABILITY.ordinal()]), p);
+    }
+
+    static String marginText(MarginSpec m) {
+        boolean percent = m.kind() == MarginSpec.Kind.PERCENT_OF_TOLERANCE;
+        if (m.lower() != null && m.upper() != null) {
+            double lo = percent ? m.lower() : -m.lower();
+            if (lo == m.upper()) {
+                return text(m.upper());
+            }
+        }
+        return text(m.lower()) + " / " + text(m.upper());
+    }
+
+    static boolean isNumber(String t) {
+        return t.isEmpty() || parse(t) != null;
+    }
+
+    static Double number(String t) {
+        return t.isEmpty() ? null : parse(t);
+    }
+
+    private static String notANumber(String t) {
+        if (t.matches("-?\\d+,\\d+")) {
+            return "use a point as the decimal separator (" + t.replace(',', '.') + ")";
+        }
+        return "\"" + t + "\" is not a number";
+    }
+
+    private static Double parse(String t) {
+        if (!NUMBER.matcher(t.trim()).matches()) {
+            return null;
+        }
+        try {
+            double v = Double.parseDouble(t.trim());
+            return Double.isFinite(v) ? v : null;
+        } catch (NumberFormatException e) {
+            return null;
+        }
+    }
+
+    static String text(Double v) {
+        if (v == null) {
+            return "";
+        }
+        return new BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
+    }
+}

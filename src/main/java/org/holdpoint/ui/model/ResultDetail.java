@@ -1,0 +1,111 @@
+package org.holdpoint.ui.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.holdpoint.stats.Descriptives;
+import org.holdpoint.stats.EquivalenceResult;
+import org.holdpoint.stats.TTestResult;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.workflow.Format;
+
+/**
+ * The numbers, checks and notes of one characteristic, as labelled sections of text; the window
+ * only lays them out. Numbers come from the analysis and are only formatted here.
+ */
+public final class ResultDetail {
+    /** A titled group of label–value lines. */
+    public record Section(String title, List<Line> lines) {
+        /** Copies the lines. */
+        public Section {
+            lines = List.copyOf(lines);
+        }
+    }
+
+    /** One label and its value. */
+    public record Line(String label, String value) {
+    }
+
+    private ResultDetail() {
+    }
+
+    /**
+     * The sections of one characteristic: verdict, groups, difference, equivalence, spread, notes.
+     *
+     * @param r the result
+     * @return the sections, in reading order
+     */
+    public static List<Section> of(CharacteristicResult r) {
+        List<Section> s = new ArrayList<>();
+        List<Line> verdict = new ArrayList<>();
+        verdict.add(new Line("Conclusion", VerdictLook.conclusion(r)));
+        r.verdict().reasons().forEach(x -> verdict.add(new Line("Because", x)));
+        s.add(new Section("Verdict", verdict));
+        s.add(groups(r.before(), r.after(), r.unit()));
+        s.add(difference(r.decidingTest()));
+        EquivalenceResult eq = r.decidingTost();
+        if (eq != null) {
+            s.add(equivalence(eq));
+        }
+        s.add(spread(r));
+        if (!r.notes().isEmpty()) {
+            s.add(new Section("Notes", r.notes().stream().map(n -> new Line("", n)).toList()));
+        }
+        return s;
+    }
+
+    private static Section groups(Descriptives b, Descriptives a, String unit) {
+        String u = unit == null || unit.isEmpty() ? "" : " (" + unit + ")";
+        return new Section("Before and after" + u, List.of(
+                new Line("n", b.n() + "  →  " + a.n()),
+                new Line("Mean", Format.num(b.mean()) + "  →  " + Format.num(a.mean())),
+                new Line("Standard deviation", Format.num(b.sd()) + "  →  " + Format.num(a.sd())),
+                new Line("Median (type 7)", Format.num(b.median()) + "  →  " + Format.num(a.median())),
+                new Line("Min … max", Format.num(b.min()) + " … " + Format.num(b.max()) + "  →  "
+                        + Format.num(a.min()) + " … " + Format.num(a.max()))));
+    }
+
+    private static Section difference(TTestResult t) {
+        return new Section("Difference after − before (" + t.method().description() + ")", List.of(
+                new Line("Estimate", Format.num(t.estimate())),
+                new Line(Format.percent(t.confidenceLevel()) + " interval", "(" + Format.num(t.ciLower()) + ", "
+                        + Format.num(t.ciUpper()) + ")"),
+                new Line("t, df, two-sided p", Format.num(t.t()) + ", " + Format.num(t.df()) + ", " + Format.p(t.p())),
+                new Line("", "A non-significant difference is not evidence of sameness; the equivalence test "
+                        + "decides.")));
+    }
+
+    private static Section equivalence(EquivalenceResult eq) {
+        List<Line> l = new ArrayList<>();
+        l.add(new Line("Margin", Format.margin(eq)));
+        l.add(new Line(Format.percent(eq.level()) + " interval", "(" + Format.num(eq.ciLower()) + ", "
+                + Format.num(eq.ciUpper()) + ")"));
+        if (eq.pLower() != null) {
+            l.add(new Line("p (lower test)", Format.p(eq.pLower())));
+        }
+        if (eq.pUpper() != null) {
+            l.add(new Line("p (upper test)", Format.p(eq.pUpper())));
+        }
+        l.add(new Line("Conclusion", eq.conclusion().words()));
+        return new Section("Equivalence (two one-sided tests, each at α = " + Format.num(eq.alpha()) + ")", l);
+    }
+
+    private static Section spread(CharacteristicResult r) {
+        List<Line> l = new ArrayList<>();
+        if (r.variance() != null) {
+            l.add(new Line("Variance ratio after/before", Format.num(r.variance().ratio()) + "  (F-test p "
+                    + Format.p(r.variance().p()) + ")"));
+        }
+        if (r.levene() != null) {
+            l.add(new Line("Brown–Forsythe", "F " + Format.num(r.levene().f()) + ", p " + Format.p(r.levene().p())));
+        }
+        if (r.sdGrowth() != null) {
+            l.add(new Line("sd growth", "upper " + Format.percent(r.sdGrowth().level()) + " bound "
+                    + Format.num(r.sdGrowth().upperBound()) + " against the limit " + Format.num(r.sdGrowth().limit())
+                    + (r.sdGrowth().met() ? ": met" : ": NOT met")));
+        }
+        if (l.isEmpty()) {
+            l.add(new Line("", "not computed (see the notes)"));
+        }
+        return new Section("Spread", l);
+    }
+}

@@ -1,0 +1,219 @@
+package org.holdpoint.ui.model;
+
+import java.util.List;
+import org.holdpoint.stats.EquivalenceResult;
+import org.holdpoint.stats.Margin;
+import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.study.StudyResult;
+import org.holdpoint.study.Verdict;
+import org.holdpoint.workflow.Format;
+
+/**
+ * The Results step: one row per characteristic, a filter, the selected row, and the overall verdict.
+ * Lives on the event thread.
+ */
+public final class ResultsTable {
+    /** Which rows are shown. */
+    public enum Filter {
+        /** Every characteristic. */
+        ALL("all characteristics"),
+        /** Only those that did not pass (failed, inconclusive, not assessed). */
+        NOT_PASSED("only those not passed");
+
+        private final String words;
+
+        Filter(String words) {
+            this.words = words;
+        }
+
+        /** @return the choice in words */
+        public String words() {
+            return words;
+        }
+
+        @Override
+        public String toString() {
+            return words;
+        }
+    }
+
+    /** The bound properties. */
+    public enum Property {
+        /** New results arrived (or were cleared). */
+        RESULT,
+        /** The filter changed. */
+        FILTER,
+        /** Another characteristic was selected. */
+        SELECTED
+    }
+
+    private final Bound<Property> bound = new Bound<>(this, Property.class);
+    private StudyResult result;
+    private Filter filter = Filter.ALL;
+    private String selected;
+
+    /** @return the results shown, or null before the first analysis */
+    public StudyResult result() {
+        return result;
+    }
+
+    /**
+     * Shows new results, keeping the selection when that characteristic is still present.
+     *
+     * @param r the results, or null to clear
+     */
+    public void show(StudyResult r) {
+        result = r;
+        bound.fireChanged(Property.RESULT);
+        if (r == null || r.characteristics().stream().noneMatch(c -> c.name().equals(selected))) {
+            select(r == null || r.characteristics().isEmpty() ? null : r.characteristics().get(0).name());
+        }
+    }
+
+    /** @return the number of rows (before filtering) */
+    public int rowCount() {
+        return result == null ? 0 : result.characteristics().size();
+    }
+
+    /**
+     * @param row the row
+     * @return the characteristic's result
+     */
+    public CharacteristicResult row(int row) {
+        return result.characteristics().get(row);
+    }
+
+    /**
+     * Whether the filter lets a row through.
+     *
+     * @param row the row
+     * @return true when it is shown
+     */
+    public boolean shows(int row) {
+        return filter == Filter.ALL || row(row).verdict().status() != Verdict.Status.PASSED;
+    }
+
+    /** @return the number of rows the filter lets through */
+    public int shownCount() {
+        int n = 0;
+        for (int i = 0; i < rowCount(); i++) {
+            n += shows(i) ? 1 : 0;
+        }
+        return n;
+    }
+
+    /** @return the filter */
+    public Filter filter() {
+        return filter;
+    }
+
+    /**
+     * @param f the filter
+     */
+    public void setFilter(Filter f) {
+        Filter old = filter;
+        filter = f;
+        bound.fire(Property.FILTER, old, f);
+    }
+
+    /** @return the selected characteristic's name, or null */
+    public String selected() {
+        return selected;
+    }
+
+    /** @return the selected characteristic's result, or null */
+    public CharacteristicResult selectedResult() {
+        if (result == null || selected == null) {
+            return null;
+        }
+        return result.characteristics().stream().filter(c -> c.name().equals(selected)).findFirst().orElse(null);
+    }
+
+    /**
+     * @param name the characteristic to select, or null
+     */
+    public void select(String name) {
+        String old = selected;
+        selected = name;
+        bound.fire(Property.SELECTED, old, name);
+    }
+
+    /**
+     * The value of a cell, typed for sorting (numbers as Double, null when undefined).
+     *
+     * @param row the row
+     * @param col the column
+     * @return the value
+     */
+    public Object value(int row, ResultColumn col) {
+        CharacteristicResult r = row(row);
+        EquivalenceResult eq = r.decidingTost();
+        return switch (col) {
+            case VERDICT -> VerdictLook.of(r.verdict().status());
+            case CHARACTERISTIC -> r.name();
+            case CONCLUSION -> VerdictLook.finding(r);
+            case UNIT -> r.unit() == null ? "" : r.unit();
+            case DIFFERENCE -> r.decidingTest().estimate();
+            case INTERVAL -> eq == null ? "" : "(" + Format.num(eq.ciLower()) + ", " + Format.num(eq.ciUpper()) + ")";
+            case MARGIN -> margin(r.margin());
+            case SD_RATIO -> r.variance() == null ? null : Math.sqrt(r.variance().ratio());
+        };
+    }
+
+    /**
+     * The overall verdict in words, e.g. "Change verified: all 7 characteristics passed".
+     *
+     * @return the words, or a hint before the first analysis
+     */
+    public String overallWords() {
+        if (result == null) {
+            return "Not analysed yet: open the data on the Data step";
+        }
+        return result.summary().replace("CHANGE NOT VERIFIED", "Change not verified")
+                .replace("CHANGE VERIFIED", "Change verified");
+    }
+
+    /** @return the overall look: passed when verified, else the most urgent characteristic's look */
+    public VerdictLook overallLook() {
+        if (result == null) {
+            return VerdictLook.NOT_ASSESSED;
+        }
+        if (result.changeVerified()) {
+            return VerdictLook.PASSED;
+        }
+        return result.characteristics().stream().map(c -> VerdictLook.of(c.verdict().status()))
+                .min(java.util.Comparator.comparingInt(VerdictLook::urgency)).orElse(VerdictLook.NOT_ASSESSED);
+    }
+
+    /** @return per look, how many characteristics have it, in words (e.g. "5 passed, 1 failed") */
+    public String counts() {
+        if (result == null) {
+            return "";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (VerdictLook l : List.of(VerdictLook.PASSED, VerdictLook.FAILED, VerdictLook.INCONCLUSIVE,
+                VerdictLook.NOT_ASSESSED)) {
+            long n = result.characteristics().stream().filter(c -> VerdictLook.of(c.verdict().status()) == l).count();
+            if (n > 0) {
+                sb.append(sb.length() == 0 ? "" : ", ").append(n).append(' ').append(l.words());
+            }
+        }
+        return sb.toString();
+    }
+
+    /**
+     * @param property the property
+     * @param listener told of changes, on the event thread
+     */
+    public void addListener(Property property, java.beans.PropertyChangeListener listener) {
+        bound.addListener(property, listener);
+    }
+
+    private static String margin(Margin m) {
+        if (m == null) {
+            return "";
+        }
+        return "(" + (m.lower() == null ? "−∞" : Format.num(m.lower())) + ", "
+                + (m.upper() == null ? "+∞" : Format.num(m.upper())) + ")";
+    }
+}

@@ -1,0 +1,560 @@
+package org.holdpoint.ui.model;
+
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.List;
+import java.util.Map;
+import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.ChangeDescription;
+import org.holdpoint.study.ChangeKind;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.Dataset;
+import org.holdpoint.study.Exclusion;
+import org.holdpoint.study.StudyResult;
+import org.holdpoint.workflow.DataSources;
+import org.holdpoint.workflow.StudyService;
+
+/**
+ * The presentation model of the whole window: the five steps' models, the data and results, whether
+ * there is unsaved work, and the use cases started from the window (each run through the
+ * {@link TaskRunner}, never on the event thread). Knows no Swing component; views listen to its
+ * bound properties. Every method is called on the event thread, and every listener runs there.
+ */
+public final class StudySession {
+    /** The bound properties of the session. */
+    public enum Property {
+        /** New data were imported or opened. */
+        DATA,
+        /** Whether there is unsaved work. */
+        DIRTY,
+        /** The study file the work was last saved to or opened from. */
+        STUDY_FILE,
+        /** A problem to tell the user (a {@link UserMessage}). */
+        PROBLEM,
+        /** A one-line status of the last action. */
+        STATUS,
+        /** A step the window should show (a {@link Step}). */
+        STEP,
+        /** A task started or ended. */
+        BUSY
+    }
+
+    /** The study-wide settings, taken on the event thread for a worker. */
+    private record Study(double alpha, boolean equalVariances, boolean holm) {
+    }
+
+    private Study wide() {
+        double alpha = criteria.alphaProblem() == null ? Double.parseDouble(criteria.alpha()) : 0.05;
+        return new Study(alpha, equalVariances, holm);
+    }
+
+    /** What the import job hands back to the event thread. */
+    private record Loaded(DataSources sources, StudyService.Imported imported, PreviewGrid preview,
+            StudyResult result, UserMessage analysisProblem) {
+    }
+
+    private final Bound<Property> bound = new Bound<>(this, Property.class);
+    private final StudyService service;
+    private final TaskRunner runner;
+    private final RecentFiles recent;
+    private final ChangeForm change = new ChangeForm();
+    private final DataForm dataForm = new DataForm();
+    private final CriteriaTable criteria = new CriteriaTable();
+    private final ResultsTable results = new ResultsTable();
+    private final SignOffForm signOff;
+    private Dataset data;
+    private PreviewGrid preview = PreviewGrid.EMPTY;
+    private Path criteriaFile;
+    private boolean equalVariances;
+    private boolean holm;
+    private List<Exclusion> exclusions = List.of();
+    private boolean dirty;
+    private Path studyFile;
+
+    /**
+     * @param service the window's use cases
+     * @param runner  runs them off the event thread
+     * @param recent  recent files and last folder
+     * @param clock   stamps signatures
+     */
+    public StudySession(StudyService service, TaskRunner runner, RecentFiles recent, Clock clock) {
+        this.service = service;
+        this.runner = runner;
+        this.recent = recent;
+        this.signOff = new SignOffForm(clock);
+        Runnable edited = () -> setDirty(true);
+        change.onEdit(edited);
+        criteria.onEdit(edited);
+        signOff.onEdit(edited);
+    }
+
+    /** @return the Change step */
+    public ChangeForm change() {
+        return change;
+    }
+
+    /** @return the Data step's file choice */
+    public DataForm dataForm() {
+        return dataForm;
+    }
+
+    /** @return the Criteria step */
+    public CriteriaTable criteria() {
+        return criteria;
+    }
+
+    /** @return the Results step */
+    public ResultsTable results() {
+        return results;
+    }
+
+    /** @return the Sign-off step */
+    public SignOffForm signOff() {
+        return signOff;
+    }
+
+    /** @return the recent files */
+    public RecentFiles recent() {
+        return recent;
+    }
+
+    /** @return the imported data, or null */
+    public Dataset data() {
+        return data;
+    }
+
+    /** @return the preview of the imported data */
+    public PreviewGrid preview() {
+        return preview;
+    }
+
+    /** @return the criteria file read beside the data, or null */
+    public Path criteriaFile() {
+        return criteriaFile;
+    }
+
+    /**
+     * @param name a characteristic's name
+     * @return its data, or null
+     */
+    public CharacteristicData characteristic(String name) {
+        if (data == null) {
+            return null;
+        }
+        return data.characteristics().stream().filter(c -> c.name().equals(name)).findFirst().orElse(null);
+    }
+
+    /** @return whether there is work not saved to a study file */
+    public boolean dirty() {
+        return dirty;
+    }
+
+    /** @return the study file last saved or opened, or null */
+    public Path studyFile() {
+        return studyFile;
+    }
+
+    /** @return whether a task is running */
+    public boolean busy() {
+        return runner.busy();
+    }
+
+    /** @return whether equal variances are asserted (pooled tests decide) */
+    public boolean equalVariances() {
+        return equalVariances;
+    }
+
+    /** @param equal whether equal variances are asserted */
+    public void setEqualVariances(boolean equal) {
+        if (equal != equalVariances) {
+            equalVariances = equal;
+            setDirty(true);
+        }
+    }
+
+    /** @return whether difference p-values get a Holm adjustment */
+    public boolean holm() {
+        return holm;
+    }
+
+    /** @param h whether difference p-values get a Holm adjustment */
+    public void setHolm(boolean h) {
+        if (h != holm) {
+            holm = h;
+            setDirty(true);
+        }
+    }
+
+    /**
+     * Opens the bundled demo study (an invented supplier change of a boring-bar insert) and analyses it.
+     */
+    public void openDemo() {
+        Study wide = wide();
+        start("Opening the demo study", p -> {
+            DataSources s = service.extractDemo();
+            return load(s, Map.of(), wide, p);
+        }, l -> {
+            apply(l);
+            change.load(new ChangeDescription("CR-DEMO-0412", "Second-source carbide insert for the boring bar",
+                    ChangeKind.SUPPLIER, "HB-2207", "C", "Second source for the finishing insert of bore Ø25 H7",
+                    "Process engineering, cell 4", null, null));
+            setDirty(false);
+            status("Demo study opened: an invented example; change anything and analyse again.");
+        });
+    }
+
+    /** Imports the files chosen on the Data step and analyses them; a failure leaves everything as it was. */
+    public void importAndAnalyse() {
+        DataSources sources;
+        try {
+            sources = dataForm.toSources();
+        } catch (IllegalArgumentException e) {
+            problem(new UserMessage("Choose the data", e.getMessage(), "Use Choose… or drop the file(s) on the window."));
+            return;
+        }
+        Map<String, CharacteristicSettings> typed = typedCriteria();
+        Study wide = wide();
+        start("Importing " + sources.mainFile().getFileName(), p -> load(sources, typed, wide, p), l -> {
+            apply(l);
+            recent.add(sources.mainFile());
+            setDirty(true);
+        });
+    }
+
+    /** Analyses the current data with the criteria as typed. */
+    public void analyse() {
+        if (data == null) {
+            problem(new UserMessage("No data yet", "There are no data to analyse.",
+                    "Open the before and after data on the Data step."));
+            return;
+        }
+        AnalysisSettings settings;
+        try {
+            settings = settings(criteria.toSettings());
+        } catch (RuntimeException e) {
+            problem(new UserMessage("Criteria to correct", e.getMessage(),
+                    "Correct the marked cells on the Criteria step (the reason is shown beside each), then analyse "
+                            + "again."));
+            step(Step.CRITERIA);
+            return;
+        }
+        Dataset d = data;
+        start("Analysing", p -> service.analyze(d, settings, p), r -> {
+            results.show(r);
+            setDirty(true);
+            status("Analysed: " + results.counts() + ".");
+            step(Step.RESULTS);
+        });
+    }
+
+    /**
+     * Leaves one value out of the analysis, with the reason the record keeps, then analyses again.
+     *
+     * @param characteristic the characteristic the value belongs to
+     * @param cell           its cell, e.g. {@code D12} or {@code Data!D12}
+     * @param reason         why it is left out (required)
+     * @return null when accepted, else why not in plain words
+     */
+    public String exclude(String characteristic, String cell, String reason) {
+        CharacteristicData c = characteristic(characteristic);
+        if (c == null) {
+            return "Choose a characteristic of the current data.";
+        }
+        String t = cell == null ? "" : cell.trim().toUpperCase(java.util.Locale.ROOT);
+        if (!t.matches("([^!]+!)?[A-Z]{1,3}[1-9][0-9]*")) {
+            return "Give the cell of the value as a column letter and row number, e.g. D12.";
+        }
+        if (!holds(c.before(), t) && !holds(c.after(), t)) {
+            return "Cell " + t + " holds no value of \"" + characteristic + "\"; see the Data step for the cells read.";
+        }
+        if (reason == null || reason.isBlank()) {
+            return "Say why the value is left out; the record keeps the reason.";
+        }
+        List<Exclusion> l = new java.util.ArrayList<>(exclusions);
+        l.add(new Exclusion(characteristic, t, reason.trim()));
+        exclusions = List.copyOf(l);
+        setDirty(true);
+        analyse();
+        return null;
+    }
+
+    /** @return the values left out so far, each with its reason */
+    public List<Exclusion> exclusions() {
+        return exclusions;
+    }
+
+    /** Takes every exclusion back and analyses again. */
+    public void clearExclusions() {
+        if (!exclusions.isEmpty()) {
+            exclusions = List.of();
+            setDirty(true);
+            analyse();
+        }
+    }
+
+    private static boolean holds(org.holdpoint.study.GroupData g, String cell) {
+        String bare = cell.contains("!") ? cell.substring(cell.indexOf('!') + 1) : cell;
+        for (int i = 0; i < g.size(); i++) {
+            if (g.origin(i).cell().equals(bare)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Saves the study (change, data, criteria, signatures, results) to a study file.
+     *
+     * @param target the file
+     * @param then   run on the event thread after a successful save (e.g. close the window), or null
+     */
+    public void save(Path target, Runnable then) {
+        ChangeStudy study;
+        try {
+            study = study();
+        } catch (RuntimeException e) {
+            problem(new UserMessage("Nothing to save yet", e.getMessage(), "Open data and set the criteria first."));
+            return;
+        }
+        StudyResult r = results.result();
+        start("Saving " + target.getFileName(), p -> {
+            service.save(study, r, target);
+            return target;
+        }, t -> {
+            Path old = studyFile;
+            studyFile = t;
+            bound.fire(Property.STUDY_FILE, old, t);
+            recent.add(t);
+            setDirty(false);
+            status("Saved " + t.getFileName() + ".");
+            if (then != null) {
+                then.run();
+            }
+        });
+    }
+
+    /**
+     * Writes the sign-off workbook of the analysed study (charts, results, raw data, record and hash).
+     *
+     * @param target the .xlsx file
+     */
+    public void writeWorkbook(Path target) {
+        StudyResult r = results.result();
+        ChangeStudy study;
+        try {
+            study = study();
+        } catch (RuntimeException e) {
+            problem(new UserMessage("Nothing to write yet", e.getMessage(), "Open data and analyse them first."));
+            return;
+        }
+        if (r == null) {
+            problem(new UserMessage("Not analysed yet", "The workbook shows the results, and there are none yet.",
+                    "Analyse the study first (F5)."));
+            return;
+        }
+        start("Writing " + target.getFileName(), p -> {
+            service.writeWorkbook(study, r, target, p);
+            return target;
+        }, t -> {
+            recent.setLastFolder(t.toAbsolutePath().getParent());
+            lastWorkbook = t;
+            status("Wrote the sign-off workbook " + t.getFileName() + ".");
+        });
+    }
+
+    private Path lastWorkbook;
+
+    /** @return the workbook last written in this session, or null */
+    public Path lastWorkbook() {
+        return lastWorkbook;
+    }
+
+    /**
+     * Opens a saved study file and analyses it again from its stored raw data.
+     *
+     * @param file the study file
+     */
+    public void openStudy(Path file) {
+        start("Opening " + file.getFileName(), p -> {
+            ChangeStudy s = service.open(file);
+            StudyResult r = null;
+            UserMessage problem = null;
+            try {
+                r = service.analyze(s.data(), s.settings(), p);
+            } catch (org.holdpoint.workflow.StudyProblem e) {
+                problem = UserMessage.of(e);
+            }
+            return new Object[] {s, r, problem, PreviewGrid.of(s.data(), PreviewGrid.LIMIT)};
+        }, o -> {
+            ChangeStudy s = (ChangeStudy) o[0];
+            change.load(s.change());
+            Map<String, CharacteristicSettings> resolved = new java.util.LinkedHashMap<>();
+            s.data().characteristics().forEach(c -> resolved.put(c.name(), s.settings().resolve(c.name())));
+            showData(s.data(), (PreviewGrid) o[3], null);
+            criteria.load(s.data().characteristics(), resolved, s.settings().alpha());
+            equalVariances = s.settings().equalVariances();
+            holm = s.settings().holm();
+            exclusions = s.settings().exclusions();
+            signOff.load(s.signatures());
+            results.show((StudyResult) o[1]);
+            Path old = studyFile;
+            studyFile = file;
+            bound.fire(Property.STUDY_FILE, old, file);
+            recent.add(file);
+            setDirty(false);
+            if (o[2] != null) {
+                problem((UserMessage) o[2]);
+            }
+            status("Opened " + file.getFileName() + ".");
+            step(Step.RESULTS);
+        });
+    }
+
+    /**
+     * The study as it would be saved now.
+     *
+     * @return the study
+     * @throws IllegalStateException when there are no data or a criterion is not valid
+     */
+    public ChangeStudy study() {
+        if (data == null) {
+            throw new IllegalStateException("there are no data yet");
+        }
+        return new ChangeStudy(change.toDescription(), data, settings(criteria.toSettings()), signOff.signatures());
+    }
+
+    /**
+     * @param property the property
+     * @param listener told of changes, on the event thread
+     */
+    public void addListener(Property property, java.beans.PropertyChangeListener listener) {
+        bound.addListener(property, listener);
+    }
+
+    /**
+     * Tells the user about a problem (through the view listening to {@link Property#PROBLEM}).
+     *
+     * @param m the message
+     */
+    public void problem(UserMessage m) {
+        lastProblem = m;
+        bound.fire(Property.PROBLEM, null, m);
+    }
+
+    private UserMessage lastProblem;
+
+    /** @return the last problem told, or null */
+    public UserMessage lastProblem() {
+        return lastProblem;
+    }
+
+    private String lastStatus = "";
+
+    /** @return the last status line */
+    public String lastStatus() {
+        return lastStatus;
+    }
+
+    private void status(String s) {
+        String old = lastStatus;
+        lastStatus = s;
+        bound.fire(Property.STATUS, old, s);
+    }
+
+    private void step(Step s) {
+        bound.fire(Property.STEP, null, s);
+    }
+
+    private void setDirty(boolean d) {
+        boolean old = dirty;
+        dirty = d;
+        bound.fire(Property.DIRTY, old, d);
+    }
+
+    private AnalysisSettings settings(Map<String, CharacteristicSettings> per) {
+        String ap = criteria.alphaProblem();
+        if (ap != null) {
+            throw new IllegalStateException(ap);
+        }
+        return new AnalysisSettings(Double.parseDouble(criteria.alpha()), equalVariances, holm, null, per, null,
+                exclusions);
+    }
+
+    private Map<String, CharacteristicSettings> typedCriteria() {
+        Map<String, CharacteristicSettings> m = new java.util.LinkedHashMap<>();
+        for (int r = 0; r < criteria.rowCount(); r++) {
+            if (criteria.rowProblem(r) == null) {
+                m.put(criteria.name(r), CriteriaRules.settings(rowOf(r)));
+            }
+        }
+        return m;
+    }
+
+    private String[] rowOf(int r) {
+        String[] a = new String[CriteriaColumn.values().length];
+        for (CriteriaColumn c : CriteriaColumn.values()) {
+            a[c.ordinal()] = criteria.get(r, c);
+        }
+        return a;
+    }
+
+    /** Runs on the worker thread: import, then analyse with typed criteria winning over the file's. */
+    private Loaded load(DataSources sources, Map<String, CharacteristicSettings> typed, Study wide,
+            org.holdpoint.study.Progress p) {
+        StudyService.Imported imported = service.importData(sources, p);
+        Map<String, CharacteristicSettings> per = new java.util.LinkedHashMap<>(imported.criteria());
+        per.putAll(typed);
+        StudyResult r = null;
+        UserMessage problem = null;
+        try {
+            r = service.analyze(imported.data(), new AnalysisSettings(wide.alpha(), wide.equalVariances(),
+                    wide.holm(), null, per, null, List.of()), p);
+        } catch (org.holdpoint.workflow.StudyProblem e) {
+            problem = UserMessage.of(e);
+        }
+        return new Loaded(sources, imported, PreviewGrid.of(imported.data(), PreviewGrid.LIMIT), r, problem);
+    }
+
+    private void apply(Loaded l) {
+        dataForm.show(l.sources());
+        criteriaFile = l.imported().criteriaFile();
+        exclusions = List.of();
+        showData(l.imported().data(), l.preview(), l.imported().criteria());
+        results.show(l.result());
+        if (l.analysisProblem() != null) {
+            problem(l.analysisProblem());
+            step(Step.CRITERIA);
+        } else {
+            status("Imported and analysed: " + results.counts() + ".");
+            step(Step.RESULTS);
+        }
+    }
+
+    private void showData(Dataset d, PreviewGrid grid, Map<String, CharacteristicSettings> found) {
+        data = d;
+        preview = grid;
+        if (found != null) {
+            criteria.showData(d.characteristics(), found);
+        }
+        bound.fireChanged(Property.DATA);
+    }
+
+    private <T> void start(String title, TaskRunner.Job<T> job, java.util.function.Consumer<T> onDone) {
+        if (runner.busy()) {
+            problem(new UserMessage("Please wait", "Another task is still running.",
+                    "Wait for it to finish, or press Cancel."));
+            return;
+        }
+        bound.fire(Property.BUSY, false, true);
+        runner.run(title, job, o -> {
+            bound.fire(Property.BUSY, true, false);
+            switch (o.status()) {
+                case COMPLETED -> onDone.accept(o.value());
+                case CANCELLED -> status(title + ": cancelled; nothing was changed.");
+                case FAILED -> problem(o.problem());
+            }
+        });
+    }
+}

@@ -1,0 +1,39 @@
+package org.holdpoint.ui.model;
+
+import org.holdpoint.study.Progress;
+import org.holdpoint.workflow.StudyProblem;
+
+/**
+ * A problem told to the user: a heading, what happened (naming file, sheet, cell or characteristic)
+ * and what to do. Never a stack trace.
+ *
+ * @param title   a short heading
+ * @param what    what happened
+ * @param whatToDo what the user can do about it
+ */
+public record UserMessage(String title, String what, String whatToDo) {
+
+    /**
+     * Tells a failure in plain words.
+     *
+     * @param failure the failure of a task
+     * @return the message
+     */
+    public static UserMessage of(Throwable failure) {
+        if (failure instanceof StudyProblem p) {
+            return new UserMessage(p.kind().title(), p.getMessage(), p.kind().advice());
+        }
+        if (failure instanceof Progress.CancelledException) {
+            return new UserMessage("Stopped", "The task was cancelled; nothing was changed.", "");
+        }
+        if (failure instanceof OutOfMemoryError) {
+            return new UserMessage("Not enough memory", "The data do not fit into the memory given to Holdpoint.",
+                    "Start Holdpoint with more memory (for example java -Xmx4g -jar holdpoint.jar), or split the "
+                            + "file by characteristic.");
+        }
+        String m = failure.getMessage() == null ? failure.getClass().getSimpleName() : failure.getMessage();
+        return new UserMessage("Something unexpected went wrong", m,
+                "Save your work under a new name, then try again. If it happens again, report the steps that led "
+                        + "to it together with the data file.");
+    }
+}

@@ -1,0 +1,193 @@
+package org.holdpoint.workflow;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.Map;
+import org.holdpoint.importer.DataImporter;
+import org.holdpoint.importer.ImportException;
+import org.holdpoint.importer.SettingsReader;
+import org.holdpoint.stats.StatsException;
+import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.Dataset;
+import org.holdpoint.study.Progress;
+import org.holdpoint.study.StudyResult;
+
+/**
+ * The use cases of the window, step by step (import, analyse, save, open), each run on the caller's
+ * thread (a worker thread in the window) against the {@link Progress} port. Every failure the user
+ * can act on arrives as a {@link StudyProblem}; a cancel arrives as {@link Progress.CancelledException}.
+ */
+public final class StudyService {
+    /** The name of the bundled demo study (files {@code NAME.csv} and {@code NAME.settings.csv}). */
+    public static final String DEMO_STUDY = "boring-bar-insert";
+    private final StudyAnalyzer analyzer = new StudyAnalyzer();
+
+    /**
+     * What an import produced: the data, and the criteria found in a settings file beside the data.
+     *
+     * @param data         the imported data
+     * @param criteria     criteria per characteristic name from the settings file (empty when none)
+     * @param criteriaFile the settings file read, or null
+     */
+    public record Imported(Dataset data, Map<String, CharacteristicSettings> criteria, Path criteriaFile) {
+        /** Copies the map. */
+        public Imported {
+            criteria = Map.copyOf(criteria);
+        }
+    }
+
+    /**
+     * Reads the data and, when present beside the data file, its criteria file.
+     *
+     * @param sources  the files
+     * @param progress progress and cancel port
+     * @return the import
+     * @throws StudyProblem of kind {@link StudyProblem.Kind#BAD_INPUT} naming file, sheet and cell
+     */
+    public Imported importData(DataSources sources, Progress progress) {
+        progress.step("reading " + sources.mainFile().getFileName(), -1);
+        try {
+            Dataset data = new DataImporter().read(sources.toRequest());
+            progress.checkCancelled();
+            Path found = sources.file() == null ? null : SettingsReader.findBeside(sources.file()).orElse(null);
+            Map<String, CharacteristicSettings> criteria = found == null ? Map.of() : new SettingsReader().read(found);
+            return new Imported(data, criteria, found);
+        } catch (ImportException | StatsException e) {
+            throw new StudyProblem(StudyProblem.Kind.BAD_INPUT, e, "%s", e.getMessage());
+        } catch (java.io.UncheckedIOException e) {
+            throw new StudyProblem(StudyProblem.Kind.BAD_INPUT, e, "%s cannot be read: %s", sources.mainFile(),
+                    e.getCause().getMessage());
+        }
+    }
+
+    /**
+     * Analyses every characteristic.
+     *
+     * @param data     the data
+     * @param settings the criteria
+     * @param progress progress and cancel port
+     * @return the results
+     * @throws StudyProblem of kind {@link StudyProblem.Kind#CANNOT_ANALYSE} listing the characteristics concerned
+     */
+    public StudyResult analyze(Dataset data, AnalysisSettings settings, Progress progress) {
+        try {
+            StudyResult result = analyzer.analyze(data, settings, progress);
+            progress.step("done", 1);
+            return result;
+        } catch (AnalysisException e) {
+            throw new StudyProblem(StudyProblem.Kind.CANNOT_ANALYSE, e, "%s", String.join("\n", e.problems()));
+        } catch (StatsException e) {
+            throw new StudyProblem(StudyProblem.Kind.CANNOT_ANALYSE, e, "%s", e.getMessage());
+        }
+    }
+
+    /**
+     * Saves the study file atomically.
+     *
+     * @param study  the study
+     * @param result its results, or null
+     * @param target the file
+     * @throws StudyProblem of kind {@link StudyProblem.Kind#CANNOT_WRITE}
+     */
+    public void save(ChangeStudy study, StudyResult result, Path target) {
+        try {
+            StudyFiles.write(study, result, target);
+        } catch (IOException e) {
+            throw new StudyProblem(StudyProblem.Kind.CANNOT_WRITE, e, "%s could not be written (%s)", target,
+                    e.getMessage());
+        }
+    }
+
+    /**
+     * Writes the sign-off workbook atomically: charts per characteristic (box plot, histograms, normal
+     * probability plot) rendered to PNG, the canonical study record and its SHA-256 embedded.
+     *
+     * @param study    the study (with its signatures)
+     * @param result   its analysis
+     * @param target   the .xlsx file
+     * @param progress progress and cancel port (checked between characteristics)
+     * @throws StudyProblem of kind {@link StudyProblem.Kind#CANNOT_WRITE}
+     */
+    public void writeWorkbook(ChangeStudy study, StudyResult result, Path target, Progress progress) {
+        byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(study, result));
+        String json = new String(canonical, java.nio.charset.StandardCharsets.UTF_8);
+        java.util.Map<String, java.util.List<org.holdpoint.report.NamedImage>> charts = new java.util.LinkedHashMap<>();
+        org.holdpoint.chart.StudyCharts sc = org.holdpoint.chart.StudyCharts.withDefaults();
+        int n = result.characteristics().size();
+        for (int i = 0; i < n; i++) {
+            progress.checkCancelled();
+            var r = result.characteristics().get(i);
+            progress.step("drawing the charts of " + r.name(), 0.8 * i / n);
+            var data = study.data().characteristics().stream().filter(c -> c.name().equals(r.name())).findFirst();
+            if (data.isEmpty()) {
+                continue;
+            }
+            java.util.List<org.holdpoint.report.NamedImage> images = new java.util.ArrayList<>();
+            for (var nc : sc.characteristicCharts(i + 1, n, r, data.get())) {
+                images.add(org.holdpoint.report.NamedImage.of(nc.fileName(), nc.png(sc.theme().scale())));
+            }
+            charts.put(r.name(), images);
+        }
+        progress.step("writing " + target.getFileName(), 0.85);
+        org.holdpoint.report.ReportInput input = new org.holdpoint.report.ReportInput(study, result, json,
+                StudyFiles.sha256(canonical), charts, Version.get(), java.time.OffsetDateTime.now()
+                .truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString(), null);
+        try {
+            AtomicFiles.write(target, true, out -> org.holdpoint.report.SignoffWorkbook.withDefaultTemplate()
+                    .write(input, out));
+        } catch (IOException | org.holdpoint.report.ReportException | org.holdpoint.chart.ChartException e) {
+            throw new StudyProblem(StudyProblem.Kind.CANNOT_WRITE, e, "%s could not be written (%s)", target,
+                    e.getMessage());
+        }
+        progress.step("done", 1);
+    }
+
+    /**
+     * Opens a saved study file.
+     *
+     * @param file the file
+     * @return the study
+     * @throws StudyProblem of kind {@link StudyProblem.Kind#CANNOT_READ_STUDY}
+     */
+    public ChangeStudy open(Path file) {
+        try {
+            return StudyFiles.read(file);
+        } catch (StudyFileException e) {
+            throw new StudyProblem(StudyProblem.Kind.CANNOT_READ_STUDY, e, "%s", e.getMessage());
+        }
+    }
+
+    /**
+     * Copies the bundled demo study (data and criteria) into a new temporary folder.
+     *
+     * @return the sources of the copied data file
+     * @throws StudyProblem of kind {@link StudyProblem.Kind#CANNOT_WRITE} when the copy fails
+     */
+    public DataSources extractDemo() {
+        try {
+            Path dir = Files.createTempDirectory("holdpoint-demo");
+            Path data = copyResource(DEMO_STUDY + ".csv", dir);
+            copyResource(DEMO_STUDY + ".settings.csv", dir);
+            return DataSources.of(data);
+        } catch (IOException e) {
+            throw new StudyProblem(StudyProblem.Kind.CANNOT_WRITE, e,
+                    "the demo study could not be copied to a temporary folder (%s)", e.getMessage());
+        }
+    }
+
+    private static Path copyResource(String name, Path dir) throws IOException {
+        try (InputStream in = StudyService.class.getResourceAsStream("/org/holdpoint/sample-data/" + name)) {
+            if (in == null) {
+                throw new IOException("the bundled sample file " + name + " is missing from this build");
+            }
+            Path target = dir.resolve(name);
+            Files.copy(in, target, StandardCopyOption.REPLACE_EXISTING);
+            return target;
+        }
+    }
+}

@@ -1,0 +1,196 @@
+package org.holdpoint.ui.model;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+import org.holdpoint.study.SkipReason;
+import org.holdpoint.study.Verdict;
+import org.holdpoint.workflow.StudyService;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The window's presentation model without a display: jobs run at once on the test thread
+ * ({@link TaskRunner#DIRECT}) through the real workflow on the bundled demo study.
+ */
+class StudySessionTest {
+    @TempDir
+    Path dir;
+    private StudySession s;
+    private final List<Object> problems = new ArrayList<>();
+    private final List<Object> steps = new ArrayList<>();
+
+    @BeforeEach
+    void open() {
+        s = new StudySession(new StudyService(), TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()),
+                Clock.fixed(Instant.parse("2026-12-01T08:00:00Z"), ZoneOffset.UTC));
+        s.addListener(StudySession.Property.PROBLEM, e -> problems.add(e.getNewValue()));
+        s.addListener(StudySession.Property.STEP, e -> steps.add(e.getNewValue()));
+        s.openDemo();
+    }
+
+    @Test
+    void theDemoOpensAnalysedAndUnchanged() {
+        assertThat(problems).isEmpty();
+        assertThat(s.results().rowCount()).isEqualTo(7);
+        assertThat(s.criteria().rowCount()).isEqualTo(7);
+        assertThat(s.criteria().get(0, CriteriaColumn.MARGIN_IN)).isEqualTo(CriteriaTable.IN_PERCENT);
+        assertThat(s.change().get(ChangeForm.Field.ID)).isEqualTo("CR-DEMO-0412");
+        assertThat(s.dirty()).isFalse();
+        assertThat(s.results().overallWords()).startsWith("Change ");
+        assertThat(steps).last().isEqualTo(Step.RESULTS);
+        assertThat(s.preview().rows()).hasSize(420);
+        assertThat(s.criteriaFile().getFileName().toString()).isEqualTo("boring-bar-insert.settings.csv");
+    }
+
+    @Test
+    void typingMarksTheStudyUnsaved() {
+        s.change().set(ChangeForm.Field.TITLE, "edited");
+        assertThat(s.dirty()).isTrue();
+    }
+
+    @Test
+    void theFilterShowsOnlyCharacteristicsThatDidNotPass() {
+        int rows = s.criteria().rowCount();
+        int[] others = new int[rows - 1];
+        for (int i = 1; i < rows; i++) {
+            others[i - 1] = i;
+        }
+        s.criteria().set(0, CriteriaColumn.SD_GROWTH, "");
+        s.criteria().fillDown(CriteriaColumn.SD_GROWTH, 0, others);
+        s.analyse();
+        assertThat(problems).isEmpty();
+        ResultsTable r = s.results();
+        long passed = r.result().characteristics().stream().filter(c -> c.verdict().status() == Verdict.Status.PASSED)
+                .count();
+        assertThat(passed).as("without the sd-growth limit some characteristics pass").isPositive();
+        r.setFilter(ResultsTable.Filter.NOT_PASSED);
+        assertThat(r.shownCount()).isEqualTo(7 - (int) passed);
+        for (int i = 0; i < r.rowCount(); i++) {
+            assertThat(r.shows(i)).isEqualTo(r.row(i).verdict().status() != Verdict.Status.PASSED);
+        }
+        assertThat(r.counts()).contains(passed + " passed");
+    }
+
+    @Test
+    void aBadCriterionStopsTheAnalysisAndLeadsToTheCriteriaStep() {
+        Object before = s.results().result();
+        s.criteria().set(2, CriteriaColumn.USL, "0,006");
+        s.analyse();
+        assertThat(problems).hasSize(1);
+        UserMessage m = (UserMessage) problems.get(0);
+        assertThat(m.what()).contains("Bore roundness").contains("USL");
+        assertThat(steps).last().isEqualTo(Step.CRITERIA);
+        assertThat(s.results().result()).isSameAs(before);
+        assertThat(s.criteria().get(2, CriteriaColumn.USL)).isEqualTo("0,006");
+    }
+
+    @Test
+    void aBadImportLosesNothingThatWasTyped() throws Exception {
+        Object data = s.data();
+        s.change().set(ChangeForm.Field.REASON, "typed before the import");
+        s.criteria().set(0, CriteriaColumn.SD_GROWTH, "1.6");
+        Path bad = dir.resolve("empty.csv");
+        Files.writeString(bad, "nothing,here\n");
+        s.dataForm().setFile(bad);
+        s.importAndAnalyse();
+        assertThat(problems).hasSize(1);
+        UserMessage m = (UserMessage) problems.get(0);
+        assertThat(m.title()).isEqualTo("The data could not be read");
+        assertThat(m.what()).contains("empty.csv");
+        assertThat(s.data()).isSameAs(data);
+        assertThat(s.change().get(ChangeForm.Field.REASON)).isEqualTo("typed before the import");
+        assertThat(s.criteria().get(0, CriteriaColumn.SD_GROWTH)).isEqualTo("1.6");
+        assertThat(s.results().rowCount()).isEqualTo(7);
+    }
+
+    @Test
+    void skippedCellsAreMarkedInThePreviewAndListedInTheReport() throws Exception {
+        Path f = dir.resolve("press.csv");
+        Files.writeString(f, "phase,value\nbefore,1.01\nbefore,n/a\nbefore,1.03\nbefore,1.02\n"
+                + "after,1.02\nafter,1.04\nafter,1.01\n");
+        s.dataForm().setFile(f);
+        s.importAndAnalyse();
+        PreviewGrid.Row skipped = s.preview().rows().stream().filter(r -> r.skipped() != null).findFirst()
+                .orElseThrow();
+        assertThat(skipped.origin().cell()).isEqualTo("B3");
+        assertThat(skipped.skipped()).isEqualTo(SkipReason.TEXT);
+        assertThat(skipped.cell(PreviewGrid.Column.STATUS)).isEqualTo("not used: text, not a number");
+        assertThat(PreviewGrid.reportLines(s.data().report())).anySatisfy(l -> assertThat(l).contains("cell B3"));
+        assertThat(s.preview().rows()).extracting(r -> r.origin().row()).isSorted();
+    }
+
+    @Test
+    void aSavedStudyOpensAgainWithItsCriteriaAndSignatures() {
+        s.criteria().set(1, CriteriaColumn.CAPABILITY, "1.67");
+        s.signOff().sign(org.holdpoint.study.Signature.Stage.REVIEWED, "C. Review", "quality engineer",
+                "reviewed the analysis");
+        Path file = dir.resolve("study.holdpoint.json");
+        boolean[] then = {false};
+        s.save(file, () -> then[0] = true);
+        assertThat(then[0]).isTrue();
+        assertThat(s.dirty()).isFalse();
+        assertThat(s.recent().list()).first().isEqualTo(file.toAbsolutePath().normalize());
+
+        StudySession other = new StudySession(new StudyService(), TaskRunner.DIRECT,
+                new RecentFiles(PreferenceStore.inMemory()), Clock.systemUTC());
+        other.openStudy(file);
+        assertThat(other.criteria().get(1, CriteriaColumn.CAPABILITY)).isEqualTo("1.67");
+        assertThat(other.criteria().get(0, CriteriaColumn.MARGIN)).isEqualTo(s.criteria().get(0,
+                CriteriaColumn.MARGIN));
+        assertThat(other.signOff().signatures()).extracting(g -> g.name()).containsExactly("C. Review");
+        assertThat(other.change().get(ChangeForm.Field.ID)).isEqualTo("CR-DEMO-0412");
+        assertThat(other.results().rowCount()).isEqualTo(7);
+        assertThat(other.dirty()).isFalse();
+    }
+
+    @Test
+    void aValueIsExcludedOnlyWithAReasonAndTheRecordKeepsIt() {
+        String name = s.criteria().name(0);
+        String cell = s.characteristic(name).before().origin(0).cell();
+        int n = s.results().row(0).before().n();
+        assertThat(s.exclude(name, cell, " ")).startsWith("Say why");
+        assertThat(s.exclude(name, "ZZ9999", "typo")).contains("holds no value");
+        assertThat(s.exclude(name, "12", "typo")).startsWith("Give the cell");
+        assertThat(s.exclude(name, cell.toLowerCase(java.util.Locale.ROOT), "gauge slipped")).isNull();
+        assertThat(s.exclusions()).singleElement().satisfies(e -> {
+            assertThat(e.cell()).isEqualTo(cell);
+            assertThat(e.reason()).isEqualTo("gauge slipped");
+        });
+        assertThat(s.results().row(0).before().n()).isEqualTo(n - 1);
+        assertThat(s.study().settings().exclusions()).hasSize(1);
+        assertThat(s.dirty()).isTrue();
+        s.clearExclusions();
+        assertThat(s.results().row(0).before().n()).isEqualTo(n);
+    }
+
+    @Test
+    void aCancelledTaskChangesNothing() {
+        Object data = s.data();
+        TaskRunner cancelling = new TaskRunner() {
+            @Override
+            public <T> void run(String title, Job<T> job, Consumer<Outcome<T>> done) {
+                done.accept(new Outcome<>(TaskStatus.CANCELLED, null, null));
+            }
+
+            @Override
+            public boolean busy() {
+                return false;
+            }
+        };
+        StudySession c = new StudySession(new StudyService(), cancelling, new RecentFiles(PreferenceStore.inMemory()),
+                Clock.systemUTC());
+        c.openDemo();
+        assertThat(c.data()).isNull();
+        assertThat(c.lastStatus()).contains("cancelled; nothing was changed");
+        assertThat(s.data()).isSameAs(data);
+    }
+}

@@ -1,0 +1,145 @@
+package org.holdpoint.ui.swing;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.junit.jupiter.api.Assumptions.assumeFalse;
+
+import java.awt.GraphicsEnvironment;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javax.swing.JButton;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JTable;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.ui.model.Step;
+import org.holdpoint.workflow.StudyFiles;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Smoke test of the real window (needs a display, e.g. xvfb-run; skipped without one): it opens on the
+ * demo study, analyses it again through the Analyse button, saves the study file and writes the
+ * sign-off workbook through the window's model, and takes a screenshot into target/.
+ */
+@Tag("gui")
+class MainWindowGuiTest {
+    private static final Path OUT = Path.of("target", "gui-smoke");
+    private WindowDriver driver;
+
+    @BeforeAll
+    static void needsDisplay() {
+        assumeFalse(GraphicsEnvironment.isHeadless(), "no display: the window smoke test is skipped");
+    }
+
+    @AfterEach
+    void close() throws Exception {
+        if (driver != null) {
+            driver.close();
+        }
+    }
+
+    @Test
+    void opensOnTheDemoAnalysesSavesAndWritesTheWorkbook() throws Exception {
+        driver = new WindowDriver();
+        MainWindow w = driver.open(Themes.LIGHT, 1440, 900);
+        WindowDriver.onEdt(() -> {
+            w.session().openDemo();
+            return null;
+        });
+        WindowDriver.await("the demo study analysed", () -> w.session().results().result() != null, 60_000);
+
+        // The window shows the seven invented characteristics and an overall verdict in words.
+        JTable results = WindowDriver.onEdt(() -> (JTable) find(w.getContentPane(), "results"));
+        assertThat(WindowDriver.onEdt(results::getRowCount)).isEqualTo(7);
+        String verdict = WindowDriver.onEdt(() -> ((JLabel) find(w.getContentPane(), "verdict")).getText());
+        assertThat(verdict).startsWith("Change");
+        assertThat(WindowDriver.onEdt(w::currentStep)).isEqualTo(Step.RESULTS);
+        assertThat(WindowDriver.onEdt(() -> w.session().dirty())).isFalse();
+
+        // Analyse again through the Criteria step's button (the job runs off the event thread).
+        Object firstResult = WindowDriver.onEdt(() -> w.session().results().result());
+        WindowDriver.onEdt(() -> {
+            w.show(Step.CRITERIA);
+            ((JButton) find(w.getContentPane(), "analyse")).doClick();
+            return null;
+        });
+        WindowDriver.await("the second analysis", () -> w.session().results().result() != firstResult
+                && !w.session().busy(), 60_000);
+        assertThat(WindowDriver.onEdt(() -> w.session().results().rowCount())).isEqualTo(7);
+
+        // Sign, save the study file and write the workbook.
+        Files.createDirectories(OUT);
+        Path study = OUT.resolve("demo.holdpoint.json");
+        Path workbook = OUT.resolve("demo-sign-off.xlsx");
+        Files.deleteIfExists(study);
+        Files.deleteIfExists(workbook);
+        WindowDriver.onEdt(() -> {
+            w.session().signOff().sign(org.holdpoint.study.Signature.Stage.PREPARED, "A. Tester", "process engineer",
+                    "prepared the study and its data");
+            w.session().save(study, null);
+            return null;
+        });
+        WindowDriver.await("the study file", () -> !w.session().busy() && w.session().studyFile() != null, 60_000);
+        ChangeStudy back = StudyFiles.read(study);
+        assertThat(back.data().characteristics()).hasSize(7);
+        assertThat(back.signatures()).extracting(s -> s.name()).containsExactly("A. Tester");
+        assertThat(back.change().id()).isEqualTo("CR-DEMO-0412");
+
+        WindowDriver.onEdt(() -> {
+            w.show(Step.SIGN_OFF);
+            w.session().writeWorkbook(workbook);
+            return null;
+        });
+        WindowDriver.await("the workbook", () -> !w.session().busy() && w.session().lastWorkbook() != null, 120_000);
+        assertThat(workbook).isRegularFile();
+        byte[] head = Files.readAllBytes(workbook);
+        assertThat(head[0]).isEqualTo((byte) 'P'); // an .xlsx is a zip archive: "PK"
+        assertThat(head[1]).isEqualTo((byte) 'K');
+        assertThat(WindowDriver.onEdt(() -> w.session().lastProblem())).isNull();
+
+        WindowDriver.onEdt(() -> {
+            w.show(Step.RESULTS);
+            return null;
+        });
+        BufferedImage shot = driver.screenshot(OUT.resolve("results.png"));
+        assertThat(shot.getWidth()).isGreaterThan(800);
+        assertThat(distinctColours(shot)).as("the screenshot shows a drawn window, not a blank area")
+                .isGreaterThan(50);
+
+        // Everything is saved, so closing asks nothing and disposes the window.
+        assertThat(WindowDriver.onEdt(() -> w.session().dirty())).isFalse();
+        WindowDriver.onEdt(() -> {
+            w.closeWindow();
+            return null;
+        });
+        assertThat(WindowDriver.onEdt(w::isDisplayable)).isFalse();
+    }
+
+    static JComponent find(java.awt.Container root, String name) {
+        for (java.awt.Component c : root.getComponents()) {
+            if (name.equals(c.getName()) && c instanceof JComponent j) {
+                return j;
+            }
+            if (c instanceof java.awt.Container k) {
+                JComponent f = find(k, name);
+                if (f != null) {
+                    return f;
+                }
+            }
+        }
+        return null;
+    }
+
+    private static int distinctColours(BufferedImage img) {
+        java.util.Set<Integer> s = new java.util.HashSet<>();
+        for (int y = 0; y < img.getHeight(); y += 4) {
+            for (int x = 0; x < img.getWidth(); x += 4) {
+                s.add(img.getRGB(x, y));
+            }
+        }
+        return s.size();
+    }
+}
