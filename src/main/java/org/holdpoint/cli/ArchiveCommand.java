@@ -39,7 +39,7 @@ import picocli.CommandLine.Parameters;
                     + "chosen with --archive jdbc:postgresql://... or archive.url in "
                     + "~/.config/holdpoint/settings.properties."},
         subcommands = {ArchiveCommand.Add.class, ArchiveCommand.ListStudies.class, ArchiveCommand.Show.class,
-            ArchiveCommand.Sign.class, ArchiveCommand.Verify.class},
+            ArchiveCommand.Sign.class, ArchiveCommand.Export.class, ArchiveCommand.Verify.class},
         footer = {"", "Exit codes: 0 done (verify: intact), 1 verify found something altered, 2 bad input or refused, "
                 + "3 internal error; a retryable conflict says so and changed nothing."})
 final class ArchiveCommand implements Runnable {
@@ -267,6 +267,33 @@ final class ArchiveCommand implements Runnable {
                 return ExitCodes.OK;
             } catch (ArchiveException e) {
                 return fail(e);
+            }
+        }
+    }
+
+    @Command(name = "export", mixinStandardHelpOptions = true, header = "Write the sign-off workbook of an archived "
+            + "record, re-computed from its stored raw data.")
+    static final class Export extends Common implements Callable<Integer> {
+        @Parameters(paramLabel = "ID", description = "The record's id.")
+        long id;
+        @Option(names = "--report", required = true, paramLabel = "FILE.xlsx", description = "The workbook to write.")
+        Path report;
+        @Option(names = "--overwrite", description = "Replace an existing file.")
+        boolean overwrite;
+
+        @Override
+        public Integer call() {
+            try (ChangeRecordArchive a = open()) {
+                var written = new ArchiveUseCase(a).export(id, report, overwrite);
+                out().printf(Locale.ROOT, "Wrote %s for record %d (record SHA-256 %s)%n", written.file(), id,
+                        written.sha256());
+                out().flush();
+                return ExitCodes.OK;
+            } catch (ArchiveException e) {
+                return fail(e);
+            } catch (java.io.IOException e) {
+                throw new UserInputException("cannot write %s (%s); check the folder, or give --overwrite to replace "
+                        + "an existing file", report, e.getMessage());
             }
         }
     }

@@ -95,6 +95,10 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--json", paramLabel = "FILE", description = "Also write the plan as JSON to FILE.")
     Path json;
 
+    @Option(names = "--chart", paramLabel = "FILE.png", description = "Also draw the power curve (power against "
+            + "the true difference, target marked) to a PNG file.")
+    Path chart;
+
     @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
     boolean help;
 
@@ -119,6 +123,14 @@ public final class PlanCommand implements Callable<Integer> {
                 PlanResult r = equivalencePlan();
                 out.print(PlanOutput.text(r));
                 document = PlanOutput.json(r);
+                if (chart != null) {
+                    try {
+                        org.holdpoint.workflow.PlanChartUseCase.write(r, null, chart);
+                        out.println("Power curve written to " + chart);
+                    } catch (RuntimeException e) {
+                        throw bad("cannot draw the power curve to " + chart + ": " + e.getMessage());
+                    }
+                }
             }
         } catch (StatsException e) {
             throw bad(e.getMessage());

@@ -114,6 +114,27 @@ public final class ArchiveUseCase {
     }
 
     /**
+     * Writes the sign-off workbook of an archived record, re-computed from its stored raw data (the
+     * sign-off block holds the signatures of the study file; the archive's signatures stay in the archive).
+     *
+     * @param id        the record's id
+     * @param target    the workbook
+     * @param overwrite whether an existing file may be replaced
+     * @return what was written
+     * @throws ArchiveException when the record does not exist
+     * @throws java.io.IOException when the file cannot be written
+     */
+    public ReportUseCase.Written export(long id, Path target, boolean overwrite) throws ArchiveException,
+            java.io.IOException {
+        Shown shown = show(id);
+        ChangeStudy study = shown.changeStudy();
+        StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        ReportOptions options = ReportOptions.withDefaults().withCharts(new StudyChartSource())
+                .withExisting(overwrite ? ReportOptions.ExistingFile.REPLACE : ReportOptions.ExistingFile.REFUSE);
+        return new ReportUseCase().write(study, result, options, target);
+    }
+
+    /**
      * Adds a signature to the current version of a study.
      *
      * @param id      the version id

@@ -1,0 +1,44 @@
+package org.holdpoint.workflow;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.net.URISyntaxException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.holdpoint.study.ChangeStudy;
+import org.holdpoint.study.Progress;
+import org.holdpoint.study.StudyResult;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Every schema version ever written stays readable: one stored study file per version
+ * (study-v1-demo.json: schema 1, written by holdpoint 0.1.0 for the bundled demo study).
+ */
+class StudyFileVersionsTest {
+
+    private static Path resource(String name) throws URISyntaxException {
+        return Path.of(StudyFileVersionsTest.class.getResource(name).toURI());
+    }
+
+    @Test
+    void schemaVersionOneIsReadAndReComputesToItsStoredVerdicts() throws Exception {
+        Path file = resource("study-v1-demo.json");
+        JsonNode stored = StudyFiles.tree(Files.readString(file));
+        assertThat(stored.path("schemaVersion").asInt()).isEqualTo(1);
+        ChangeStudy study = StudyFiles.read(file);
+        assertThat(study.change().id()).isEqualTo("CR-DEMO-0412");
+        assertThat(study.data().characteristics()).hasSize(7);
+        // the first value of the demo data file sample-data/boring-bar-insert.csv (row 2, column D)
+        assertThat(study.data().characteristics().get(0).before().sample().value(0)).isEqualTo(25.0132);
+        assertThat(study.data().characteristics().get(0).before().origin(0).cell()).isEqualTo("D2");
+        StudyResult again = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        List<String> storedStatus = new java.util.ArrayList<>();
+        stored.path("results").path("characteristics").forEach(c -> storedStatus.add(
+                c.path("verdict").path("status").asText()));
+        assertThat(again.characteristics().stream().map(r -> r.verdict().status().words()).toList())
+                .isEqualTo(storedStatus);
+        assertThat(again.changeVerified()).isEqualTo(stored.path("results").path("changeVerified").asBoolean());
+    }
+}
