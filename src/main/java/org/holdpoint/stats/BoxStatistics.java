@@ -1,7 +1,6 @@
 package org.holdpoint.stats;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -85,8 +84,7 @@ public record BoxStatistics(int n, double mean, double min, double q1, double me
             throw new StatsException("a box plot needs at least one value, got none");
         }
         double[] runOrder = sample.raw();
-        double[] sorted = runOrder.clone();
-        Arrays.sort(sorted);
+        double[] sorted = sample.sorted();
         double q1 = Quantiles.type7(sorted, 0.25);
         double median = Quantiles.type7(sorted, 0.5);
         double q3 = Quantiles.type7(sorted, 0.75);

@@ -1,7 +1,5 @@
 package org.holdpoint.stats;
 
-import java.util.Arrays;
-
 /**
  * Descriptive statistics of one group: n, mean, standard deviation (divisor n − 1), type-7 median,
  * minimum and maximum.
@@ -45,8 +43,7 @@ public record Descriptives(int n, double mean, double sd, double variance, doubl
     }
 
     static Descriptives of(Sample sample, Moments m) {
-        double[] sorted = sample.values();
-        Arrays.sort(sorted);
+        double[] sorted = sample.sorted();
         double variance = m.variance();
         return new Descriptives(m.n, m.mean(), Math.sqrt(variance), variance, Quantiles.median(sorted), sorted[0],
                 sorted[sorted.length - 1]);

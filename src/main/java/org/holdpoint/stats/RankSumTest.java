@@ -1,7 +1,6 @@
 package org.holdpoint.stats;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -82,10 +81,8 @@ public final class RankSumTest {
             throw new StatsException("the rank-sum test needs at least one value in each group, got %d before and "
                     + "%d after", before.size(), after.size());
         }
-        double[] a = after.values();
-        double[] b = before.values();
-        Arrays.sort(a);
-        Arrays.sort(b);
+        double[] a = after.sorted().clone();
+        double[] b = before.sorted().clone();
         int m = a.length;
         int n = b.length;
         long k = (long) m * n;

@@ -26,6 +26,8 @@ public final class Sample {
     private final double[] values;
     private final long[] unscaled;
     private final int scale;
+    /** The values in ascending order, computed once on first use (a benign race: every copy is equal). */
+    private volatile double[] sorted;
 
     private Sample(double[] values, long[] unscaled, int scale) {
         this.values = values;
@@ -162,6 +164,22 @@ public final class Sample {
      */
     public BigDecimal decimal(int i) {
         return unscaled != null ? BigDecimal.valueOf(unscaled[i], scale) : BigDecimal.valueOf(values[i]);
+    }
+
+    /**
+     * The values in ascending order, sorted once and shared; callers in this package must not modify
+     * the array (copy it first).
+     *
+     * @return the sorted values
+     */
+    double[] sorted() {
+        double[] s = sorted;
+        if (s == null) {
+            s = values.clone();
+            Arrays.sort(s);
+            sorted = s;
+        }
+        return s;
     }
 
     /** @return whether exact decimals are known for every value */

@@ -1,6 +1,5 @@
 package org.holdpoint.stats;
 
-import java.util.Arrays;
 
 /**
  * Tests about the spread of the after group relative to the before group: the F-test of the variance
@@ -94,9 +93,7 @@ public final class SpreadTests {
                 throw new StatsException("Brown-Forsythe needs at least 2 values per group, group %d has %d", g + 1,
                         x.length);
             }
-            double[] sorted = x.clone();
-            Arrays.sort(sorted);
-            double med = Quantiles.median(sorted);
+            double med = Quantiles.median(groups[g].sorted());
             z[g] = new double[x.length];
             for (int i = 0; i < x.length; i++) {
                 z[g][i] = Math.abs(x[i] - med);

@@ -42,6 +42,12 @@ final class CharacteristicChecks {
     static final double SHAPE_STRONG = 0.001;
     /** Fewer values than this per group make the t-based result fragile (common practice, no source). */
     static final int SMALL_N = 8;
+    /**
+     * The generalized ESD tests for at most ⌈n/10⌉ outliers, and never more than this many: the
+     * procedure is meant for a few outliers, and each step is a pass over the data (common practice,
+     * no source).
+     */
+    static final int ESD_MAX_OUTLIERS = 10;
 
     private CharacteristicChecks() {
     }
@@ -87,7 +93,8 @@ final class CharacteristicChecks {
         List<FlaggedValue> flagged = new ArrayList<>();
         try {
             grubbs = Grubbs.withDefaults().withAlpha(alpha).test(g.sample());
-            esd = GeneralizedEsd.withDefaults().withAlpha(alpha).test(g.sample());
+            int upTo = (int) Math.min(ESD_MAX_OUTLIERS, Math.max(1, (g.size() + 9L) / 10));
+            esd = GeneralizedEsd.withDefaults().withMaxOutliers(upTo).withAlpha(alpha).test(g.sample());
             for (int i : esd.outlierIndices()) {
                 flagged.add(new FlaggedValue(label, g.sample().value(i), g.origin(i), "generalized ESD (Rosner 1983)"));
             }
