@@ -350,7 +350,11 @@ public final class ArchiveBrowser {
                 + (v.supersedes() == null ? "" : "; supersedes archive id " + v.supersedes()));
         l.add("SHA-256 of the stored study: " + v.jsonSha256());
         for (var s : v.signatures()) {
-            l.add("Signed: " + s);
+            l.add("Signed in the archive: " + s.signer() + ", " + s.role() + ", " + s.meaning());
+        }
+        for (var s : o.study().signatures()) {
+            l.add("Signed in the study: " + s.stage().words() + " by " + s.name() + " (" + s.role() + "), "
+                    + s.meaning() + ", " + s.timestamp());
         }
         for (AuditEvent e : o.events()) {
             l.add("#" + e.seq() + "  " + SHOWN.format(e.when()) + "  " + e.kind().name().toLowerCase(java.util.Locale.ROOT)

@@ -469,11 +469,13 @@ public final class PlanForm {
         }
         l.add(new String[] {"Parts measured in all", Long.toString(r.totalUnits())});
         l.add(new String[] {"Achieved power (exact TOST)", pct(r.achievedPower())});
-        l.add(new String[] {"Power with one part fewer (n − 1)", r.powerAtPrevious() == null ? "not defined"
+        l.add(new String[] {"Power with one part fewer", r.powerAtPrevious() == null ? "not defined"
                 : pct(r.powerAtPrevious())});
-        l.add(new String[] {"Power of the t-test for a difference at the same n", pct(r.tTestPower())});
-        l.add(new String[] {"Margin, α, σ", "(" + fmt(r.marginLower()) + ", " + fmt(r.marginUpper()) + "), α = "
-                + fmt(r.alpha()) + ", σ = " + fmt(r.sd())});
+        l.add(new String[] {"t-test power for the expected difference", pct(r.tTestPower())});
+        String u = unit() == null ? "" : " " + unit();
+        l.add(new String[] {"Margin (L, U)", "(" + fmt(r.marginLower()) + ", " + fmt(r.marginUpper()) + ")" + u});
+        l.add(new String[] {"α, σ, expected difference", fmt(r.alpha()) + ", " + fmt(r.sd()) + u + ", "
+                + fmt(r.difference()) + u});
         return l;
     }
 

@@ -51,7 +51,7 @@ final class ArchiveDialog extends JDialog {
     private final JButton verify = new JButton("Verify archive");
     private final Rows rows = new Rows();
     private final JTable table = new JTable(rows);
-    private final JLabel openedBanner = new JLabel(" ");
+    private final JTextArea openedBanner = new JTextArea(2, 60);
     private final JTextArea openedText = new JTextArea();
     private final OpenedResults openedResults = new OpenedResults();
     private final JTextArea verification = new JTextArea(2, 60);
@@ -79,10 +79,17 @@ final class ArchiveDialog extends JDialog {
                     String v = (String) box.getSelectedItem();
                     browser.set(f, "any".equals(v) ? "" : v);
                 });
+                browser.addListener(ArchiveBrowser.Property.FILTERS, e -> {
+                    String v = browser.get(f).isEmpty() ? "any" : browser.get(f);
+                    if (!v.equals(box.getSelectedItem())) {
+                        box.setSelectedItem(v);
+                    }
+                });
                 c = box;
             } else {
                 JTextField t = new JTextField(f == Field.URL ? 40 : 14);
-                Bind.text(t, () -> browser.get(f), v -> browser.set(f, v));
+                Runnable refresh = Bind.text(t, () -> browser.get(f), v -> browser.set(f, v));
+                browser.addListener(ArchiveBrowser.Property.FILTERS, e -> refresh.run());
                 t.addActionListener(e -> browser.search());
                 c = t;
             }
@@ -119,8 +126,20 @@ final class ArchiveDialog extends JDialog {
             }
         });
         table.getSelectionModel().addListSelectionListener(e -> refreshEnabled());
+        int[] widths = {50, 150, 120, 330, 90, 110, 160, 140, 130};
+        for (int i = 0; i < widths.length; i++) {
+            table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+        }
         openedBanner.setName("archive.readOnly");
         openedBanner.setFont(openedBanner.getFont().deriveFont(java.awt.Font.BOLD));
+        openedBanner.setEditable(false);
+        openedBanner.setFocusable(false);
+        openedBanner.setLineWrap(true);
+        openedBanner.setWrapStyleWord(true);
+        openedBanner.setBackground(new java.awt.Color(0xFF, 0xF4, 0xD6));
+        openedBanner.setForeground(new java.awt.Color(0x5A, 0x3E, 0x00));
+        openedBanner.setBorder(BorderFactory.createCompoundBorder(BorderFactory.createLineBorder(
+                new java.awt.Color(0xE0, 0xB8, 0x4A)), BorderFactory.createEmptyBorder(6, 10, 6, 10)));
         openedText.setEditable(false);
         openedText.setLineWrap(true);
         openedText.setWrapStyleWord(true);
@@ -189,13 +208,23 @@ final class ArchiveDialog extends JDialog {
         filters.add(buttons, c);
         c.gridy++;
         filters.add(verification, c);
+        c.gridx = 9;
+        c.gridwidth = 1;
+        c.weightx = 1;
+        filters.add(javax.swing.Box.createHorizontalGlue(), c);
         JPanel detail = new JPanel(new BorderLayout(0, 6));
         detail.setBorder(BorderFactory.createEmptyBorder(6, 16, 12, 16));
         detail.add(openedBanner, BorderLayout.NORTH);
         JTable results = new JTable(openedResults);
         results.setName("archive.results");
-        results.setEnabled(false);
         results.setFillsViewportHeight(true);
+        results.setDefaultRenderer(org.holdpoint.ui.model.VerdictLook.class, new ResultsPanel.VerdictRenderer());
+        results.setDefaultRenderer(Double.class, new ResultsPanel.NumberRenderer());
+        results.setAutoResizeMode(JTable.AUTO_RESIZE_OFF);
+        int[] widths = {120, 150, 170, 45, 110, 190, 130, 70};
+        for (int i = 0; i < widths.length; i++) {
+            results.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+        }
         JSplitPane inner = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(openedText),
                 new JScrollPane(results));
         inner.setResizeWeight(0.5);
@@ -213,6 +242,11 @@ final class ArchiveDialog extends JDialog {
         setContentPane(root);
         getRootPane().setDefaultButton(search);
         refreshOpened();
+    }
+
+    /** Selects a row of the versions found (event thread; the screenshot tour). */
+    void selectRow(int row) {
+        table.setRowSelectionInterval(row, row);
     }
 
     private void openSelected() {
@@ -241,15 +275,15 @@ final class ArchiveDialog extends JDialog {
         var lines = browser.openedLines();
         if (lines.isEmpty()) {
             openedBanner.setText("Select a version and press Open read-only (or double-click it).");
-            openedBanner.setIcon(null);
+            openedBanner.setOpaque(false);
             openedText.setText("");
         } else {
             openedBanner.setText(lines.get(0));
-            openedBanner.setIcon(javax.swing.UIManager.getIcon("OptionPane.informationIcon"));
+            openedBanner.setOpaque(true);
             openedText.setText(String.join("\n", lines.subList(1, lines.size())));
             openedText.setCaretPosition(0);
         }
-        openedResults.fireTableStructureChanged();
+        openedResults.fireTableDataChanged();
     }
 
     private void refreshVerified() {
@@ -309,9 +343,13 @@ final class ArchiveDialog extends JDialog {
         }
 
         @Override
+        public Class<?> getColumnClass(int c) {
+            return cols[c].type();
+        }
+
+        @Override
         public Object getValueAt(int r, int c) {
-            Object v = t().value(r, cols[c]);
-            return v == null ? "" : v.toString();
+            return t().value(r, cols[c]);
         }
 
         @Override

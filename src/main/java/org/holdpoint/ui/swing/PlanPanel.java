@@ -135,8 +135,9 @@ final class PlanPanel extends JPanel {
         c.gridwidth = 3;
         left.add(Bind.heading("How many parts for the trial?"), c);
         c.gridy++;
-        left.add(Bind.hint("<html>The smallest number of parts whose exact TOST power reaches the target "
-                + "(σ taken as known).</html>"), c);
+        left.add(Bind.hint("<html><div style='width:380px'>The smallest number of parts whose exact TOST power "
+                + "reaches the target, σ taken as known. Take σ and the margin from the baseline (before) data of "
+                + "the current study, or type them.</div></html>"), c);
         c.gridy++;
         JPanel base = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         base.add(Bind.label("Characteristic ", 'C', characteristic));
@@ -184,7 +185,7 @@ final class PlanPanel extends JPanel {
         right.add(chart, BorderLayout.CENTER);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(left), right);
         split.setResizeWeight(0.0);
-        split.setDividerLocation(620);
+        split.setDividerLocation(580);
         split.setBorder(null);
         add(split, BorderLayout.CENTER);
     }
@@ -193,6 +194,9 @@ final class PlanPanel extends JPanel {
         updating = true;
         try {
             marginMode.setSelectedItem(form.marginMode());
+            if (form.characteristic() != null) {
+                characteristic.setSelectedItem(form.characteristic());
+            }
             parallel.setSelected(form.design() == Design.PARALLEL);
             paired.setSelected(form.design() == Design.PAIRED);
             for (Field f : Field.values()) {
