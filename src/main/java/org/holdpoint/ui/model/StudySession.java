@@ -17,7 +17,7 @@ import org.holdpoint.workflow.DataSources;
 import org.holdpoint.workflow.StudyService;
 
 /**
- * The presentation model of the whole window: the five steps' models, the data and results, whether
+ * The presentation model of the whole window: the six steps' models and the archive view, the data and results, whether
  * there is unsaved work, and the use cases started from the window (each run through the
  * {@link TaskRunner}, never on the event thread). Knows no Swing component; views listen to its
  * bound properties. Every method is called on the event thread, and every listener runs there.

@@ -44,7 +44,7 @@ import org.holdpoint.workflow.StudyService;
 import org.holdpoint.workflow.Version;
 
 /**
- * The Holdpoint window: the five steps of a change study on the left, the step in the middle, the
+ * The Holdpoint window: the six steps of a change study on the left, the step in the middle, the
  * overall verdict always on top and the cautions always at the bottom. Opens on the bundled demo
  * study, analysed. Built and used on the event thread only.
  */
