@@ -99,12 +99,14 @@ public final class PlanForm {
     private PlanResult result;
     private String resultFor = "";
     private PlanFromDataUseCase.Outcome all;
+    private boolean stale;
 
     PlanForm(StudySession session) {
         this.session = session;
         for (Field f : Field.values()) {
             values.put(f, f.initial);
         }
+        bound.addListener(Property.VALUES, e -> stale = result != null);
         session.addListener(StudySession.Property.DATA, e -> {
             List<String> names = characteristics();
             if (characteristic == null || !names.contains(characteristic)) {
@@ -426,8 +428,14 @@ public final class PlanForm {
 
     private void show(PlanResult r, String title) {
         result = r;
+        stale = false;
         resultFor = title;
         bound.fireChanged(Property.RESULT);
+    }
+
+    /** @return whether a value changed since the last plan was made */
+    public boolean stale() {
+        return stale;
     }
 
     /** @return the last plan, or null */

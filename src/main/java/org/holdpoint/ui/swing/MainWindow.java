@@ -65,6 +65,7 @@ public final class MainWindow extends JFrame {
     private DataPanel dataPanel;
     private CriteriaPanel criteriaPanel;
     private ChangePanel changePanel;
+    private PlanPanel planPanel;
     private Step current = Step.CHANGE;
     private ArchiveDialog archiveDialog;
 
@@ -159,7 +160,8 @@ public final class MainWindow extends JFrame {
         center.add(dataPanel, Step.DATA.name());
         center.add(criteriaPanel, Step.CRITERIA.name());
         center.add(resultsPanel, Step.RESULTS.name());
-        center.add(new PlanPanel(session), Step.PLAN.name());
+        planPanel = new PlanPanel(session);
+        center.add(planPanel, Step.PLAN.name());
         center.add(signOff, Step.SIGN_OFF.name());
         ButtonGroup g = new ButtonGroup();
         for (Step s : Step.values()) {
@@ -280,6 +282,7 @@ public final class MainWindow extends JFrame {
             case CHANGE -> changePanel.firstField();
             case DATA -> dataPanel.importButton();
             case RESULTS -> resultsPanel.focusTarget();
+            case PLAN -> planPanel.focusTarget();
             default -> null;
         };
         if (focus != null) {

@@ -118,7 +118,10 @@ final class PlanPanel extends JPanel {
         allPlans.setWrapStyleWord(true);
         allPlans.setOpaque(false);
         allPlans.setName("plan.allPlans");
-        form.addListener(PlanForm.Property.VALUES, e -> refreshValues());
+        form.addListener(PlanForm.Property.VALUES, e -> {
+            refreshValues();
+            refreshTitle();
+        });
         form.addListener(PlanForm.Property.CHARACTERISTICS, e -> refreshCharacteristics());
         form.addListener(PlanForm.Property.RESULT, e -> refreshResult());
         session.addListener(StudySession.Property.BUSY, e -> refreshEnabled());
@@ -165,12 +168,17 @@ final class PlanPanel extends JPanel {
             c.gridx = 1;
             c.fill = GridBagConstraints.HORIZONTAL;
             left.add(fields.get(f), c);
-            c.gridx = 2;
-            c.fill = GridBagConstraints.NONE;
+            c.gridy++;
+            c.gridx = 0;
+            c.gridwidth = 3;
+            c.insets = new Insets(0, 0, 4, 10);
             left.add(problems.get(f), c);
+            c.gridwidth = 1;
+            c.insets = new Insets(4, 0, 4, 10);
         }
         c.gridy++;
         c.gridx = 1;
+        c.fill = GridBagConstraints.NONE;
         left.add(plan, c);
         c.gridy++;
         c.weighty = 1;
@@ -205,7 +213,8 @@ final class PlanPanel extends JPanel {
                 labels.get(f).setVisible(used);
                 String p = form.problem(f);
                 problems.get(f).setText(p == null ? " " : "⚠ " + p);
-                problems.get(f).setVisible(used);
+                problems.get(f).setVisible(used && p != null);
+                fields.get(f).setToolTipText(p);
                 fields.get(f).putClientProperty("JComponent.outline", p == null ? null : "error");
             }
             labels.get(Field.SD).setText(form.design() == Design.PAIRED ? "sd of the differences σ"
@@ -257,9 +266,8 @@ final class PlanPanel extends JPanel {
             numbers.add(v, c);
             c.gridy++;
         }
+        refreshTitle();
         var r = form.result();
-        resultTitle.setText(r == null ? "No plan yet: type the values or take them from the baseline data"
-                : "Plan for " + form.resultFor() + " — target power " + Math.round(100 * r.targetPower()) + " %");
         var all = form.allPlans();
         if (all == null) {
             allPlans.setText("");
@@ -288,7 +296,19 @@ final class PlanPanel extends JPanel {
         numbers.repaint();
     }
 
+    private void refreshTitle() {
+        var r = form.result();
+        resultTitle.setText(r == null ? "No plan yet: type the values or take them from the baseline data"
+                : "Plan for " + form.resultFor() + " — target power " + Math.round(100 * r.targetPower()) + " %"
+                        + (form.stale() ? "  (values changed: press Plan)" : ""));
+    }
+
     private static String sizeWords(org.holdpoint.stats.PlanResult p) {
         return p.design() == Design.PAIRED ? p.n() + " pairs" : p.n() + " before + " + p.nAfter() + " after";
+    }
+
+    /** @return the component that gets the focus when the step opens */
+    javax.swing.JComponent focusTarget() {
+        return fromBaseline.isEnabled() ? fromBaseline : fields.get(Field.ALPHA);
     }
 }

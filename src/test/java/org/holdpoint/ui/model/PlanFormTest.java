@@ -84,6 +84,11 @@ class PlanFormTest {
                 "Parts after (n₂)=24", "Parts measured in all=48", "Achieved power (exact TOST)=81.5 %");
         assertThat(f.curveDifferences()).hasSameSizeAs(f.curvePower()).startsWith(-0.2).endsWith(0.2);
         assertThat(s.lastStatus()).isEqualTo("Planned: 24 before + 24 after.");
+        assertThat(f.stale()).isFalse();
+        f.set(Field.SD, "0.25");
+        assertThat(f.stale()).as("the plan shown no longer matches the values").isTrue();
+        f.plan();
+        assertThat(f.stale()).isFalse();
     }
 
     /** The step passes every typed setting on: the same plan as EquivalencePlan called directly. */

@@ -37,7 +37,20 @@ public final class PlanArchiveTour {
             return null;
         });
         WindowDriver.await("the plan", () -> !win.session().busy() && win.session().plan().result() != null, 60_000);
-        d.screenshot(out.resolve("window-plan.png"));
+        String suffix = theme == Themes.DARK ? "-dark" : "";
+        d.screenshot(out.resolve("window-plan" + suffix + ".png"));
+        // Values typed wrongly: the reason shows beside each field.
+        WindowDriver.onEdt(() -> {
+            win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.SD, "0,012");
+            win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.POWER, "1.2");
+            return null;
+        });
+        d.screenshot(out.resolve("window-plan-check" + suffix + ".png"));
+        WindowDriver.onEdt(() -> {
+            win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.SD, "0.0121286");
+            win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.POWER, "0.9");
+            return null;
+        });
         String url = "jdbc:h2:file:" + Files.createTempDirectory("holdpoint-tour-archive").resolve("db");
         WindowDriver.onEdt(() -> {
             win.session().archive().set(ArchiveBrowser.Field.URL, url);
@@ -74,7 +87,7 @@ public final class PlanArchiveTour {
         });
         WindowDriver.await("the verification", () -> !win.session().busy()
                 && win.session().archive().verified() != null, 60_000);
-        d.screenshot(out.resolve("window-archive.png"), win.archiveDialog());
+        d.screenshot(out.resolve("window-archive" + suffix + ".png"), win.archiveDialog());
         d.close();
         System.exit(0);
     }
