@@ -11,6 +11,7 @@ import org.holdpoint.stats.StatsException;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.Dataset;
 
 /**
  * Plans every characteristic of a study at once from its data: σ is the sd of the baseline (before)
@@ -61,10 +62,25 @@ public final class PlanFromDataUseCase {
             double difference) {
         AnalysisOutcome imported = new AnalyzeUseCase().importOnly(data, settingsFile,
                 AnalysisSettings.defaultSettings());
+        return run(imported.data(), imported.settings(), margin, plan, difference);
+    }
+
+    /**
+     * Plans every characteristic of data already imported (the window's Plan step).
+     *
+     * @param data       the study data (the before group is the baseline)
+     * @param settings   the criteria (each characteristic's margin and spec limits)
+     * @param margin     one margin for all characteristics, or null to take each one's from the criteria
+     * @param plan       the planning settings (α, design, ratio, target power); its margin is replaced
+     * @param difference the expected true difference after − before
+     * @return the plans
+     */
+    public static Outcome run(Dataset data, AnalysisSettings settings, Margin margin, EquivalencePlan plan,
+            double difference) {
         List<CharacteristicPlan> plans = new ArrayList<>();
         CharacteristicPlan driving = null;
-        for (CharacteristicData c : imported.data().characteristics()) {
-            CharacteristicSettings s = imported.settings().resolve(c.name());
+        for (CharacteristicData c : data.characteristics()) {
+            CharacteristicSettings s = settings.resolve(c.name());
             String unit = s.unit() != null ? s.unit() : c.unit();
             if (c.before().size() < 2) {
                 plans.add(new CharacteristicPlan(c.name(), unit, Double.NaN, null, null,

@@ -10,6 +10,8 @@ public enum Step {
     CRITERIA("Criteria", 'R', "Limits, margins and requirements"),
     /** Read the results. */
     RESULTS("Results", 'E', "Verdict per characteristic"),
+    /** Plan how many parts a trial needs. */
+    PLAN("Plan", 'P', "Parts needed for a target power"),
     /** Sign and save. */
     SIGN_OFF("Sign-off", 'S', "Sign, save and write the record");
 

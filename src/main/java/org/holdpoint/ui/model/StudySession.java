@@ -17,7 +17,7 @@ import org.holdpoint.workflow.DataSources;
 import org.holdpoint.workflow.StudyService;
 
 /**
- * The presentation model of the whole window: the five steps' models, the data and results, whether
+ * The presentation model of the whole window: the six steps' models and the archive view, the data and results, whether
  * there is unsaved work, and the use cases started from the window (each run through the
  * {@link TaskRunner}, never on the event thread). Knows no Swing component; views listen to its
  * bound properties. Every method is called on the event thread, and every listener runs there.
@@ -64,6 +64,8 @@ public final class StudySession {
     private final CriteriaTable criteria = new CriteriaTable();
     private final ResultsTable results = new ResultsTable();
     private final SignOffForm signOff;
+    private final PlanForm plan;
+    private final ArchiveBrowser archive;
     private Dataset data;
     private PreviewGrid preview = PreviewGrid.EMPTY;
     private Path criteriaFile;
@@ -84,6 +86,8 @@ public final class StudySession {
         this.runner = runner;
         this.recent = recent;
         this.signOff = new SignOffForm(clock);
+        this.plan = new PlanForm(this);
+        this.archive = new ArchiveBrowser(this, service);
         Runnable edited = () -> setDirty(true);
         change.onEdit(edited);
         criteria.onEdit(edited);
@@ -113,6 +117,16 @@ public final class StudySession {
     /** @return the Sign-off step */
     public SignOffForm signOff() {
         return signOff;
+    }
+
+    /** @return the Plan step */
+    public PlanForm plan() {
+        return plan;
+    }
+
+    /** @return the archive view (search, read-only opening, verification, saving) */
+    public ArchiveBrowser archive() {
+        return archive;
     }
 
     /** @return the recent files */
@@ -457,7 +471,7 @@ public final class StudySession {
         return lastStatus;
     }
 
-    private void status(String s) {
+    void status(String s) {
         String old = lastStatus;
         lastStatus = s;
         bound.fire(Property.STATUS, old, s);
@@ -480,6 +494,16 @@ public final class StudySession {
         }
         return new AnalysisSettings(Double.parseDouble(criteria.alpha()), equalVariances, holm, null, per, null,
                 exclusions);
+    }
+
+    /**
+     * The analysis settings as typed now.
+     *
+     * @return the settings
+     * @throws IllegalStateException when a criterion is not valid
+     */
+    AnalysisSettings currentSettings() {
+        return settings(criteria.toSettings());
     }
 
     private Map<String, CharacteristicSettings> typedCriteria() {
@@ -541,7 +565,7 @@ public final class StudySession {
         bound.fireChanged(Property.DATA);
     }
 
-    private <T> void start(String title, TaskRunner.Job<T> job, java.util.function.Consumer<T> onDone) {
+    <T> void start(String title, TaskRunner.Job<T> job, java.util.function.Consumer<T> onDone) {
         if (runner.busy()) {
             problem(new UserMessage("Please wait", "Another task is still running.",
                     "Wait for it to finish, or press Cancel."));

@@ -23,6 +23,16 @@ public record UserMessage(String title, String what, String whatToDo) {
         if (failure instanceof StudyProblem p) {
             return new UserMessage(p.kind().title(), p.getMessage(), p.kind().advice());
         }
+        if (failure instanceof org.holdpoint.study.ArchiveException a) {
+            return new UserMessage("The archive refused or failed", a.getMessage(), switch (a.reason()) {
+                case RETRYABLE_CONFLICT -> "Someone else saved at the same moment; nothing was changed. Try again.";
+                case PERMISSION_DENIED -> "Your database role may not do this; ask the archive's administrator.";
+                case NOT_FOUND -> "Search again; the list may be out of date.";
+                case REJECTED -> "Correct what the message names, then try again.";
+                default -> "Check the archive address (empty = the archive on this computer) and that the database "
+                        + "is reachable, then try again.";
+            });
+        }
         if (failure instanceof Progress.CancelledException) {
             return new UserMessage("Stopped", "The task was cancelled; nothing was changed.", "");
         }

@@ -29,6 +29,7 @@ import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JRadioButtonMenuItem;
 import javax.swing.JTextArea;
+import javax.swing.JTextField;
 import javax.swing.JToggleButton;
 import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
@@ -43,7 +44,7 @@ import org.holdpoint.workflow.StudyService;
 import org.holdpoint.workflow.Version;
 
 /**
- * The Holdpoint window: the five steps of a change study on the left, the step in the middle, the
+ * The Holdpoint window: the six steps of a change study on the left, the step in the middle, the
  * overall verdict always on top and the cautions always at the bottom. Opens on the bundled demo
  * study, analysed. Built and used on the event thread only.
  */
@@ -64,7 +65,9 @@ public final class MainWindow extends JFrame {
     private DataPanel dataPanel;
     private CriteriaPanel criteriaPanel;
     private ChangePanel changePanel;
+    private PlanPanel planPanel;
     private Step current = Step.CHANGE;
+    private ArchiveDialog archiveDialog;
 
     /**
      * Creates the window (event thread).
@@ -147,11 +150,18 @@ public final class MainWindow extends JFrame {
             public String workbookUnavailable() {
                 return null;
             }
+
+            @Override
+            public void saveToArchive() {
+                MainWindow.this.saveToArchive();
+            }
         });
         center.add(changePanel, Step.CHANGE.name());
         center.add(dataPanel, Step.DATA.name());
         center.add(criteriaPanel, Step.CRITERIA.name());
         center.add(resultsPanel, Step.RESULTS.name());
+        planPanel = new PlanPanel(session);
+        center.add(planPanel, Step.PLAN.name());
         center.add(signOff, Step.SIGN_OFF.name());
         ButtonGroup g = new ButtonGroup();
         for (Step s : Step.values()) {
@@ -272,6 +282,7 @@ public final class MainWindow extends JFrame {
             case CHANGE -> changePanel.firstField();
             case DATA -> dataPanel.importButton();
             case RESULTS -> resultsPanel.focusTarget();
+            case PLAN -> planPanel.focusTarget();
             default -> null;
         };
         if (focus != null) {
@@ -318,6 +329,10 @@ public final class MainWindow extends JFrame {
                 () -> saveStudy(false, null)));
         file.add(item("Save study as…", 'A', KeyStroke.getKeyStroke(KeyEvent.VK_S, menuMask()
                 | KeyEvent.SHIFT_DOWN_MASK), () -> saveStudy(true, null)));
+        file.addSeparator();
+        file.add(item("Change-record archive…", 'H', KeyStroke.getKeyStroke(KeyEvent.VK_R, menuMask()
+                | KeyEvent.SHIFT_DOWN_MASK), this::showArchive));
+        file.add(item("Save to the archive…", 'T', null, this::saveToArchive));
         file.addSeparator();
         file.add(item("Close", 'C', KeyStroke.getKeyStroke(KeyEvent.VK_Q, menuMask()), this::closeWindow));
         bar.add(file);
@@ -426,6 +441,39 @@ public final class MainWindow extends JFrame {
         }
         if (target != null) {
             session.save(target, then);
+        }
+    }
+
+    /** Shows the archive view (event thread). */
+    void showArchive() {
+        if (archiveDialog == null) {
+            archiveDialog = new ArchiveDialog(this, session);
+        }
+        archiveDialog.setVisible(true);
+        archiveDialog.toFront();
+    }
+
+    /** @return the archive view, or null before it was first shown */
+    ArchiveDialog archiveDialog() {
+        return archiveDialog;
+    }
+
+    private void saveToArchive() {
+        var signed = session.signOff().signatures();
+        JTextField actor = new JTextField(signed.isEmpty() ? "" : signed.get(signed.size() - 1).name(), 28);
+        JTextField reason = new JTextField(28);
+        JPanel p = new JPanel(new GridLayout(0, 1, 0, 4));
+        p.add(new JLabel("Archived by (printed name)"));
+        p.add(actor);
+        p.add(new JLabel("Reason (required when this change is already archived: it becomes a correction)"));
+        p.add(reason);
+        String url = session.archive().get(org.holdpoint.ui.model.ArchiveBrowser.Field.URL).trim();
+        p.add(new JLabel("Archive: " + (url.isEmpty() ? "the archive on this computer" : url)
+                + " (change it in File › Change-record archive…)"));
+        int a = JOptionPane.showConfirmDialog(this, p, "Save to the archive", JOptionPane.OK_CANCEL_OPTION,
+                JOptionPane.PLAIN_MESSAGE);
+        if (a == JOptionPane.OK_OPTION) {
+            session.archive().save(actor.getText(), reason.getText());
         }
     }
 

@@ -287,7 +287,7 @@ final class ResultsPanel extends JPanel {
     }
 
     /** The verdict's shape and words. */
-    private static final class VerdictRenderer extends DefaultTableCellRenderer {
+    static final class VerdictRenderer extends DefaultTableCellRenderer {
         private static final long serialVersionUID = 1L;
 
         @Override
@@ -302,7 +302,7 @@ final class ResultsPanel extends JPanel {
     }
 
     /** Numbers right-aligned, "undefined" for a missing value. */
-    private static final class NumberRenderer extends DefaultTableCellRenderer {
+    static final class NumberRenderer extends DefaultTableCellRenderer {
         private static final long serialVersionUID = 1L;
 
         NumberRenderer() {

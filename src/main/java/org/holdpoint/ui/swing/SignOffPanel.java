@@ -33,6 +33,7 @@ final class SignOffPanel extends JPanel {
     private final SignaturesModel signatures = new SignaturesModel();
     private final JButton save = new JButton("Save study file…");
     private final JButton workbook = new JButton("Write sign-off workbook…");
+    private final JButton archive = new JButton("Save to archive…");
     private final JLabel verdict = new JLabel(" ");
 
     /** What the step asks the window to do. */
@@ -45,6 +46,9 @@ final class SignOffPanel extends JPanel {
 
         /** @return why the workbook cannot be written in this build, or null when it can */
         String workbookUnavailable();
+
+        /** Saves the study to the change-record archive (asking who and why). */
+        void saveToArchive();
     }
 
     SignOffPanel(StudySession session, Actions actions) {
@@ -78,6 +82,10 @@ final class SignOffPanel extends JPanel {
         workbook.setMnemonic('W');
         workbook.setName("workbook");
         workbook.addActionListener(e -> actions.writeWorkbook());
+        archive.setMnemonic('A');
+        archive.setName("saveToArchive");
+        archive.setToolTipText("Archives the study as an immutable version (a correction supersedes the current one)");
+        archive.addActionListener(e -> actions.saveToArchive());
         session.signOff().addListener(SignOffForm.Property.SIGNATURES, e -> signatures.fireTableDataChanged());
         session.results().addListener(org.holdpoint.ui.model.ResultsTable.Property.RESULT, e -> refresh());
         session.addListener(StudySession.Property.BUSY, e -> refresh());
@@ -123,6 +131,7 @@ final class SignOffPanel extends JPanel {
         out.setBorder(BorderFactory.createEmptyBorder(0, 12, 16, 24));
         out.add(save);
         out.add(workbook);
+        out.add(archive);
         add(out, BorderLayout.SOUTH);
     }
 
@@ -161,6 +170,7 @@ final class SignOffPanel extends JPanel {
         verdict.setIcon(new VerdictIcon(session.results().overallLook(), 18));
         verdict.setText(session.results().overallWords());
         save.setEnabled(!session.busy() && session.data() != null);
+        archive.setEnabled(!session.busy() && session.data() != null);
         String why = actions.workbookUnavailable();
         workbook.setEnabled(!session.busy() && analysed && why == null);
         workbook.setToolTipText(why != null ? why : analysed ? "The sign-off workbook with the raw data embedded"

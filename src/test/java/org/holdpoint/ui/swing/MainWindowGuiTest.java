@@ -22,7 +22,8 @@ import org.junit.jupiter.api.Test;
 /**
  * Smoke test of the real window (needs a display, e.g. xvfb-run; skipped without one): it opens on the
  * demo study, analyses it again through the Analyse button, saves the study file and writes the
- * sign-off workbook through the window's model, and takes a screenshot into target/.
+ * sign-off workbook through the window's model, and takes a screenshot into target/; then plans from the
+ * baseline on the Plan step and searches, opens read-only and verifies a throwaway archive by the archive view's buttons.
  */
 @Tag("gui")
 class MainWindowGuiTest {
@@ -116,6 +117,68 @@ class MainWindowGuiTest {
             return null;
         });
         assertThat(WindowDriver.onEdt(w::isDisplayable)).isFalse();
+    }
+
+    @Test
+    void plansFromTheBaselineAndSearchesOpensAndVerifiesTheArchive() throws Exception {
+        org.holdpoint.Holdpoint.wire();
+        driver = new WindowDriver();
+        MainWindow w = driver.open(Themes.LIGHT, 1440, 900);
+        WindowDriver.onEdt(() -> {
+            w.session().openDemo();
+            return null;
+        });
+        WindowDriver.await("the demo study analysed", () -> w.session().results().result() != null, 60_000);
+
+        // Plan step: choose a characteristic and press "From the baseline data"; the sizes and the curve appear.
+        WindowDriver.onEdt(() -> {
+            w.show(Step.PLAN);
+            ((javax.swing.JComboBox<?>) find(w.getContentPane(), "plan.characteristic")).setSelectedItem("Bore depth");
+            ((JButton) find(w.getContentPane(), "plan.fromBaseline")).doClick();
+            return null;
+        });
+        WindowDriver.await("the plan", () -> !w.session().busy() && w.session().plan().result() != null, 60_000);
+        int n = WindowDriver.onEdt(() -> w.session().plan().result().n());
+        assertThat(WindowDriver.onEdt(() -> ((JLabel) find(w.getContentPane(), "plan.value.0")).getText()))
+                .isEqualTo(Integer.toString(n));
+        assertThat(WindowDriver.onEdt(() -> w.session().plan().resultFor())).isEqualTo("Bore depth");
+
+        // Archive view: save the study to a throwaway archive, then search, open read-only and verify by its buttons.
+        Path db = Files.createTempDirectory("holdpoint-gui-archive");
+        WindowDriver.onEdt(() -> {
+            w.session().archive().set(org.holdpoint.ui.model.ArchiveBrowser.Field.URL, "jdbc:h2:file:" + db.resolve("db"));
+            w.session().archive().save("A. Tester", "");
+            return null;
+        });
+        WindowDriver.await("archiving", () -> !w.session().busy() && w.session().archive().lastSaved() != null, 60_000);
+        WindowDriver.onEdt(() -> {
+            w.showArchive();
+            ((JButton) find(w.archiveDialog().getContentPane(), "archive.search")).doClick();
+            return null;
+        });
+        WindowDriver.await("the search", () -> !w.session().busy() && w.session().archive().rows().size() == 1, 60_000);
+        WindowDriver.onEdt(() -> {
+            w.archiveDialog().selectRow(0);
+            ((JButton) find(w.archiveDialog().getContentPane(), "archive.open")).doClick();
+            return null;
+        });
+        WindowDriver.await("the opened version", () -> !w.session().busy() && w.session().archive().opened() != null,
+                60_000);
+        assertThat(WindowDriver.onEdt(() -> ((javax.swing.text.JTextComponent) find(w.archiveDialog().getContentPane(),
+                "archive.readOnly")).getText())).startsWith("READ-ONLY");
+        WindowDriver.onEdt(() -> {
+            ((JButton) find(w.archiveDialog().getContentPane(), "archive.verify")).doClick();
+            return null;
+        });
+        WindowDriver.await("the verification", () -> !w.session().busy() && w.session().archive().verified() != null,
+                60_000);
+        assertThat(WindowDriver.onEdt(() -> ((javax.swing.text.JTextComponent) find(w.archiveDialog().getContentPane(),
+                "archive.verification")).getText())).startsWith("Intact");
+        assertThat(WindowDriver.onEdt(() -> w.session().lastProblem())).isNull();
+        WindowDriver.onEdt(() -> {
+            w.archiveDialog().dispose();
+            return null;
+        });
     }
 
     static JComponent find(java.awt.Container root, String name) {

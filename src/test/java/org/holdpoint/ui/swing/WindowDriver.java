@@ -77,6 +77,18 @@ final class WindowDriver {
         return img;
     }
 
+    /** Lets a window (e.g. a dialog) paint, then captures it into a PNG. */
+    BufferedImage screenshot(Path target, java.awt.Window w) throws Exception {
+        robot.waitForIdle();
+        Thread.sleep(400);
+        robot.waitForIdle();
+        Rectangle r = onEdt(w::getBounds);
+        BufferedImage img = robot.createScreenCapture(r);
+        Files.createDirectories(target.getParent());
+        ImageIO.write(img, "png", target.toFile());
+        return img;
+    }
+
     void close() throws Exception {
         if (window != null) {
             onEdt(() -> {
