@@ -10,6 +10,7 @@ import org.holdpoint.report.NamedImage;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.study.Progress;
 import org.holdpoint.study.StudyResult;
 
 /**
@@ -18,13 +19,30 @@ import org.holdpoint.study.StudyResult;
  */
 public final class StudyChartSource implements ChartSource {
     private final StudyCharts charts = StudyCharts.withDefaults();
+    private final Progress progress;
+
+    /** Charts without progress reports. */
+    public StudyChartSource() {
+        this(Progress.NONE);
+    }
+
+    /**
+     * Charts that report each characteristic to a progress port and stop when it is cancelled.
+     *
+     * @param progress the port, called on the caller's thread
+     */
+    public StudyChartSource(Progress progress) {
+        this.progress = progress;
+    }
 
     @Override
     public Map<String, List<NamedImage>> charts(ChangeStudy study, StudyResult result) {
         Map<String, List<NamedImage>> out = new LinkedHashMap<>();
         int n = result.characteristics().size();
         for (int i = 0; i < n; i++) {
+            progress.checkCancelled();
             CharacteristicResult r = result.characteristics().get(i);
+            progress.step("drawing the charts of " + r.name(), 0.8 * i / n);
             CharacteristicData data = study.data().characteristics().stream().filter(c -> c.name().equals(r.name()))
                     .findFirst().orElse(null);
             if (data == null) {

@@ -114,33 +114,13 @@ public final class StudyService {
      * @throws StudyProblem of kind {@link StudyProblem.Kind#CANNOT_WRITE}
      */
     public void writeWorkbook(ChangeStudy study, StudyResult result, Path target, Progress progress) {
-        byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(study, result));
-        String json = new String(canonical, java.nio.charset.StandardCharsets.UTF_8);
-        java.util.Map<String, java.util.List<org.holdpoint.report.NamedImage>> charts = new java.util.LinkedHashMap<>();
-        org.holdpoint.chart.StudyCharts sc = org.holdpoint.chart.StudyCharts.withDefaults();
-        int n = result.characteristics().size();
-        for (int i = 0; i < n; i++) {
-            progress.checkCancelled();
-            var r = result.characteristics().get(i);
-            progress.step("drawing the charts of " + r.name(), 0.8 * i / n);
-            var data = study.data().characteristics().stream().filter(c -> c.name().equals(r.name())).findFirst();
-            if (data.isEmpty()) {
-                continue;
-            }
-            java.util.List<org.holdpoint.report.NamedImage> images = new java.util.ArrayList<>();
-            for (var nc : sc.characteristicCharts(i + 1, n, r, data.get())) {
-                images.add(org.holdpoint.report.NamedImage.of(nc.fileName(), nc.png(sc.theme().scale())));
-            }
-            charts.put(r.name(), images);
-        }
-        progress.step("writing " + target.getFileName(), 0.85);
-        org.holdpoint.report.ReportInput input = new org.holdpoint.report.ReportInput(study, result, json,
-                StudyFiles.sha256(canonical), charts, Version.get(), java.time.OffsetDateTime.now()
-                .truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString(), null);
+        progress.step("drawing the charts", 0);
+        ReportOptions options = ReportOptions.withDefaults().withExisting(ReportOptions.ExistingFile.REPLACE)
+                .withCharts(new StudyChartSource(progress));
         try {
-            AtomicFiles.write(target, true, out -> org.holdpoint.report.SignoffWorkbook.withDefaultTemplate()
-                    .write(input, out));
-        } catch (IOException | org.holdpoint.report.ReportException | org.holdpoint.chart.ChartException e) {
+            new ReportUseCase().write(study, result, options, target);
+        } catch (IOException | SignoffException | org.holdpoint.report.ReportException
+                | org.holdpoint.chart.ChartException e) {
             throw new StudyProblem(StudyProblem.Kind.CANNOT_WRITE, e, "%s could not be written (%s)", target,
                     e.getMessage());
         }
