@@ -9,7 +9,10 @@ import java.util.Map;
 import org.holdpoint.workflow.ColumnMapping;
 import org.holdpoint.workflow.DataSources;
 
-/** The Data step's choice of files and sheets, as typed, chosen or dropped. Lives on the event thread. */
+/**
+ * The Data step's choice of files, sheets, layout and column mapping (blank = detected), as typed, chosen
+ * or dropped. Lives on the event thread.
+ */
 public final class DataForm {
     /** How the before and after values are supplied. */
     public enum Source {

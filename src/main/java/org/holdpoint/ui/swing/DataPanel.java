@@ -345,7 +345,7 @@ final class DataPanel extends JPanel {
         }
         List<String> chosen = session.detectedLayout();
         detected.setText(chosen.isEmpty() ? "Chosen by the import: see the import report."
-                : "Chosen by the import: " + String.join("\n", chosen));
+                : "Chosen by the import: " + String.join("\n", shortNames(chosen)));
         detected.setCaretPosition(0);
         previewTitle.setText(String.format(java.util.Locale.ROOT, "What was read (%,d of %,d cells shown; cells not "
                 + "used are marked)", g.rows().size(), g.total()));
@@ -354,6 +354,20 @@ final class DataPanel extends JPanel {
         Path cf = session.criteriaFile();
         criteriaInfo.setText(cf == null ? "No criteria file was found beside the data; criteria typed before are "
                 + "kept, the others are set on the next step." : "Criteria read from " + cf.getFileName() + " (edit them on the Criteria step).");
+    }
+
+    /** The import's lines with the chosen files named by file name only (the full paths are above). */
+    private List<String> shortNames(List<String> lines) {
+        List<String> out = new java.util.ArrayList<>();
+        for (String line : lines) {
+            for (Path p : new Path[] {form.file(), form.before(), form.after()}) {
+                if (p != null && p.getFileName() != null) {
+                    line = line.replace(p.toString(), p.getFileName().toString());
+                }
+            }
+            out.add(line);
+        }
+        return out;
     }
 
     /** @return the Import button (default button of this step) */
