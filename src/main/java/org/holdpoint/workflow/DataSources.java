@@ -15,9 +15,10 @@ import org.holdpoint.study.Layout;
  * @param beforeSheet sheet of {@code beforeFile}, or null
  * @param afterSheet  sheet of {@code afterFile}, or null
  * @param layout      the layout of the one file, or null to detect it (the import report states what was found)
+ * @param columns     the columns, labels and header row named by the user ({@link ColumnMapping#NONE}: detect all)
  */
 public record DataSources(Path file, Path beforeFile, Path afterFile, String sheet, String beforeSheet,
-        String afterSheet, Layout layout) {
+        String afterSheet, Layout layout, ColumnMapping columns) {
 
     /** Validates that exactly one of the two shapes is given. */
     public DataSources {
@@ -35,6 +36,23 @@ public record DataSources(Path file, Path beforeFile, Path afterFile, String she
         sheet = blankToNull(sheet);
         beforeSheet = blankToNull(beforeSheet);
         afterSheet = blankToNull(afterSheet);
+        columns = columns == null ? ColumnMapping.NONE : columns;
+    }
+
+    /**
+     * Sources with every column detected.
+     *
+     * @param file        the one file holding both groups, or null
+     * @param beforeFile  the before file, or null
+     * @param afterFile   the after file, or null
+     * @param sheet       sheet of {@code file}, or null
+     * @param beforeSheet sheet of {@code beforeFile}, or null
+     * @param afterSheet  sheet of {@code afterFile}, or null
+     * @param layout      the layout of the one file, or null to detect it
+     */
+    public DataSources(Path file, Path beforeFile, Path afterFile, String sheet, String beforeSheet,
+            String afterSheet, Layout layout) {
+        this(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, ColumnMapping.NONE);
     }
 
     /**
@@ -44,7 +62,7 @@ public record DataSources(Path file, Path beforeFile, Path afterFile, String she
      * @return the sources
      */
     public static DataSources of(Path file) {
-        return new DataSources(file, null, null, null, null, null, null);
+        return new DataSources(file, null, null, null, null, null, null, ColumnMapping.NONE);
     }
 
     /** @return the file beside which a criteria (settings) file is looked for: the one file, else the before file */
@@ -52,11 +70,13 @@ public record DataSources(Path file, Path beforeFile, Path afterFile, String she
         return file != null ? file : beforeFile;
     }
 
-    /** @return the import request for these sources, everything else detected */
+    /** @return the import request for these sources, with the named columns; everything else detected */
     ImportRequest toRequest() {
+        ColumnMapping m = columns;
         return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout,
-                layout == Layout.PAIRED, null, null,
-                null, null, null, null, null, null, null, null, null, null, null, null);
+                layout == Layout.PAIRED, m.group(), m.value(), m.characteristic(), m.before(), m.after(),
+                m.beforeLabel(), m.afterLabel(), m.unitId(), m.lot(), m.subgroup(), m.sequence(), null, null,
+                m.headerRow());
     }
 
     private static String blankToNull(String s) {

@@ -4,9 +4,15 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.EnumMap;
+import java.util.Map;
+import org.holdpoint.workflow.ColumnMapping;
 import org.holdpoint.workflow.DataSources;
 
-/** The Data step's choice of files and sheets, as typed, chosen or dropped. Lives on the event thread. */
+/**
+ * The Data step's choice of files, sheets, layout and column mapping (blank = detected), as typed, chosen
+ * or dropped. Lives on the event thread.
+ */
 public final class DataForm {
     /** How the before and after values are supplied. */
     public enum Source {
@@ -40,7 +46,63 @@ public final class DataForm {
         /** The sheet of the one file. */
         SHEET,
         /** The layout of the one file (null: detect). */
-        LAYOUT
+        LAYOUT,
+        /** A field of the column mapping (the new value is the {@link MappingField}'s text). */
+        MAPPING
+    }
+
+    private final Map<MappingField, String> mapping = new EnumMap<>(MappingField.class);
+
+    /**
+     * @param f the field
+     * @return the text typed in the mapping field ("" when blank: detected)
+     */
+    public String mapping(MappingField f) {
+        return mapping.getOrDefault(f, "");
+    }
+
+    /**
+     * @param f    the field
+     * @param text the text typed (blank: detect it)
+     */
+    public void setMapping(MappingField f, String text) {
+        String old = mapping(f);
+        mapping.put(f, text == null ? "" : text);
+        bound.fire(Property.MAPPING, old, mapping(f));
+    }
+
+    /**
+     * The column mapping as typed.
+     *
+     * @return the mapping
+     * @throws IllegalArgumentException in plain words when the header row is not a row number
+     */
+    public ColumnMapping columnMapping() {
+        String h = mapping(MappingField.HEADER_ROW).strip();
+        Integer header = null;
+        if (!h.isEmpty()) {
+            try {
+                header = Integer.valueOf(h);
+            } catch (NumberFormatException e) {
+                header = -1;
+            }
+            if (header < 1) {
+                throw new IllegalArgumentException("The header row \"" + h + "\" is not a row number.");
+            }
+        }
+        return new ColumnMapping(mapping(MappingField.GROUP), mapping(MappingField.VALUE),
+                mapping(MappingField.CHARACTERISTIC), mapping(MappingField.BEFORE), mapping(MappingField.AFTER),
+                mapping(MappingField.BEFORE_LABEL), mapping(MappingField.AFTER_LABEL), mapping(MappingField.UNIT_ID),
+                mapping(MappingField.LOT), mapping(MappingField.SUBGROUP), mapping(MappingField.SEQUENCE), header);
+    }
+
+    private void showMapping(ColumnMapping m) {
+        String[] v = {m.group(), m.value(), m.characteristic(), m.before(), m.after(), m.beforeLabel(),
+            m.afterLabel(), m.unitId(), m.lot(), m.subgroup(), m.sequence(),
+            m.headerRow() == null ? null : m.headerRow().toString()};
+        for (MappingField f : MappingField.values()) {
+            setMapping(f, v[f.ordinal()]);
+        }
     }
 
     private org.holdpoint.study.Layout layout;
@@ -167,20 +229,20 @@ public final class DataForm {
      * The files to import.
      *
      * @return the sources
-     * @throws IllegalArgumentException saying which file is still to be chosen
+     * @throws IllegalArgumentException saying which file is still to be chosen, or that the header row is not a number
      */
     public DataSources toSources() {
         if (source == Source.ONE_FILE) {
             if (file == null) {
                 throw new IllegalArgumentException("Choose the data file first (or drop it on the window).");
             }
-            return new DataSources(file, null, null, sheet, null, null, layout);
+            return new DataSources(file, null, null, sheet, null, null, layout, columnMapping());
         }
         if (before == null || after == null) {
             throw new IllegalArgumentException(before == null ? "Choose the before file first."
                     : "Choose the after file first.");
         }
-        return new DataSources(null, before, after, null, sheet, sheet, null);
+        return new DataSources(null, before, after, null, sheet, sheet, null, columnMapping());
     }
 
     /**
@@ -200,6 +262,7 @@ public final class DataForm {
             setAfter(s.afterFile());
             setSheet(s.beforeSheet());
         }
+        showMapping(s.columns());
     }
 
     /**

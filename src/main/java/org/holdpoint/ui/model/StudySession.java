@@ -139,6 +139,20 @@ public final class StudySession {
         return data;
     }
 
+    /**
+     * What the last import chose for the layout, header row and columns (detected or as named), in the
+     * words of the import report, so the user can see it beside the mapping fields.
+     *
+     * @return the lines, empty before an import
+     */
+    public List<String> detectedLayout() {
+        if (data == null) {
+            return List.of();
+        }
+        return data.report().messages().stream().filter(m -> m.contains(": layout ") || m.contains(": header in row "))
+                .toList();
+    }
+
     /** @return the preview of the imported data */
     public PreviewGrid preview() {
         return preview;

@@ -26,6 +26,7 @@ import javax.swing.UIManager;
 import javax.swing.table.AbstractTableModel;
 import javax.swing.table.DefaultTableCellRenderer;
 import org.holdpoint.ui.model.DataForm;
+import org.holdpoint.ui.model.MappingField;
 import org.holdpoint.ui.model.PreviewGrid;
 import org.holdpoint.ui.model.StudySession;
 import org.holdpoint.ui.model.UserMessage;
@@ -53,6 +54,23 @@ final class DataPanel extends JPanel {
     private final javax.swing.JTextArea report = new javax.swing.JTextArea();
     private final JLabel previewTitle = Bind.heading("What was read");
     private final JLabel criteriaInfo = Bind.hint(" ");
+    private final java.util.EnumMap<MappingField, JTextField> mapping = new java.util.EnumMap<>(MappingField.class);
+    private final List<Runnable> mappingRefresh = new java.util.ArrayList<>();
+    /** Wraps to the width it is given; asks for little width so a long line never widens the form. */
+    private final javax.swing.JTextArea detected = new javax.swing.JTextArea(2, 20) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public java.awt.Dimension getPreferredSize() {
+            java.awt.Dimension d = super.getPreferredSize();
+            return new java.awt.Dimension(Math.min(d.width, 200), d.height);
+        }
+    };
+    /** The mapping fields as laid out: three rows of four (group and labels; columns; traceability). */
+    private static final MappingField[][] MAPPING_ROWS = {
+        {MappingField.GROUP, MappingField.BEFORE_LABEL, MappingField.AFTER_LABEL, MappingField.VALUE},
+        {MappingField.CHARACTERISTIC, MappingField.BEFORE, MappingField.AFTER, MappingField.HEADER_ROW},
+        {MappingField.UNIT_ID, MappingField.LOT, MappingField.SUBGROUP, MappingField.SEQUENCE}};
 
     DataPanel(StudySession session, Dialogs dialogs) {
         super(new BorderLayout());
@@ -94,6 +112,22 @@ final class DataPanel extends JPanel {
             int i = layout.getSelectedIndex();
             form.setLayout(i <= 0 ? null : LAYOUTS.get(i - 1));
         });
+        for (MappingField f : MappingField.values()) {
+            JTextField t = new JTextField(f == MappingField.HEADER_ROW ? 4 : 7);
+            t.setName("data.mapping." + f.name().toLowerCase(java.util.Locale.ROOT));
+            t.setToolTipText(f.label() + ": " + f.hint());
+            t.putClientProperty("JTextField.placeholderText", "detect");
+            mapping.put(f, t);
+            mappingRefresh.add(Bind.text(t, () -> form.mapping(f), v -> form.setMapping(f, v)));
+        }
+        detected.setName("data.detected");
+        detected.setEditable(false);
+        detected.setLineWrap(true);
+        detected.setWrapStyleWord(true);
+        detected.setOpaque(false);
+        detected.setFocusable(false);
+        detected.setBorder(BorderFactory.createEmptyBorder());
+        detected.setFont(UIManager.getFont("Label.font"));
         importButton.setMnemonic('I');
         importButton.setName("import");
         importButton.putClientProperty("JButton.buttonType", "default");
@@ -152,7 +186,14 @@ final class DataPanel extends JPanel {
         c.weightx = 0;
         top.add(Bind.label("Sheet", 'E', sheet), c);
         c.gridx = 1;
-        JPanel sheetRow = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
+        JPanel sheetRow = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0)) {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public java.awt.Dimension getMinimumSize() {
+                return getPreferredSize(); // never wrap the Import button out of sight
+            }
+        };
         sheetRow.add(sheet);
         sheetRow.add(javax.swing.Box.createHorizontalStrut(12));
         sheetRow.add(Bind.label("Layout ", 'L', layout));
@@ -162,6 +203,17 @@ final class DataPanel extends JPanel {
         sheetRow.add(javax.swing.Box.createHorizontalStrut(24));
         sheetRow.add(importButton);
         top.add(sheetRow, c);
+        c.gridy++;
+        c.gridx = 0;
+        c.anchor = GridBagConstraints.FIRST_LINE_START;
+        top.add(new JLabel("Columns"), c);
+        c.gridx = 1;
+        c.gridwidth = 2;
+        c.fill = GridBagConstraints.HORIZONTAL;
+        top.add(mappingPanel(), c);
+        c.gridwidth = 1;
+        c.fill = GridBagConstraints.NONE;
+        c.anchor = GridBagConstraints.LINE_START;
         c.gridy++;
         c.gridx = 1;
         top.add(criteriaInfo, c);
@@ -178,6 +230,51 @@ final class DataPanel extends JPanel {
         split.setResizeWeight(0.62);
         split.setBorder(BorderFactory.createEmptyBorder(8, 24, 16, 24));
         add(split, BorderLayout.CENTER);
+    }
+
+    /** The optional column mapping (blank = detected) and, below it, what the last import chose. */
+    private JPanel mappingPanel() {
+        JPanel p = new JPanel(new GridBagLayout());
+        GridBagConstraints c = new GridBagConstraints();
+        c.anchor = GridBagConstraints.LINE_START;
+        c.gridx = 0;
+        c.gridy = 0;
+        c.gridwidth = 8;
+        c.insets = new Insets(0, 0, 2, 0);
+        p.add(Bind.hint("Leave a field blank to let the import find it; name a column by its header or its "
+                + "letters (A, B, …)."), c);
+        c.gridwidth = 1;
+        for (MappingField[] row : MAPPING_ROWS) {
+            c.gridy++;
+            c.gridx = 0;
+            for (MappingField f : row) {
+                c.insets = new Insets(2, c.gridx == 0 ? 0 : 12, 2, 6);
+                c.weightx = 0;
+                c.fill = GridBagConstraints.NONE;
+                p.add(new JLabel(f.label()) {
+                    private static final long serialVersionUID = 1L;
+
+                    {
+                        setLabelFor(mapping.get(f));
+                        setHorizontalAlignment(TRAILING);
+                    }
+                }, c);
+                c.gridx++;
+                c.insets = new Insets(2, 0, 2, 0);
+                c.fill = GridBagConstraints.HORIZONTAL;
+                c.weightx = 1;
+                p.add(mapping.get(f), c);
+                c.gridx++;
+            }
+        }
+        c.gridy++;
+        c.gridx = 0;
+        c.gridwidth = 8;
+        c.weightx = 1;
+        c.fill = GridBagConstraints.HORIZONTAL;
+        c.insets = new Insets(4, 0, 0, 0);
+        p.add(detected, c);
+        return p;
     }
 
     private static void row(JPanel p, GridBagConstraints c, JLabel label, JComponent field, JButton button) {
@@ -218,6 +315,7 @@ final class DataPanel extends JPanel {
         chooseAfter.setEnabled(!one);
         swap.setEnabled(!one);
         layout.setEnabled(one);
+        mappingRefresh.forEach(Runnable::run);
         int want = form.layout() == null ? 0 : LAYOUTS.indexOf(form.layout()) + 1;
         if (layout.getSelectedIndex() != want) {
             layout.setSelectedIndex(want);
@@ -242,8 +340,13 @@ final class DataPanel extends JPanel {
             previewTitle.setText("What was read");
             report.setText("Nothing imported yet.");
             criteriaInfo.setText(" ");
+            detected.setText("Chosen by the import: nothing imported yet.");
             return;
         }
+        List<String> chosen = session.detectedLayout();
+        detected.setText(chosen.isEmpty() ? "Chosen by the import: see the import report."
+                : "Chosen by the import: " + String.join("\n", shortNames(chosen)));
+        detected.setCaretPosition(0);
         previewTitle.setText(String.format(java.util.Locale.ROOT, "What was read (%,d of %,d cells shown; cells not "
                 + "used are marked)", g.rows().size(), g.total()));
         report.setText(String.join("\n", PreviewGrid.reportLines(session.data().report())));
@@ -251,6 +354,20 @@ final class DataPanel extends JPanel {
         Path cf = session.criteriaFile();
         criteriaInfo.setText(cf == null ? "No criteria file was found beside the data; criteria typed before are "
                 + "kept, the others are set on the next step." : "Criteria read from " + cf.getFileName() + " (edit them on the Criteria step).");
+    }
+
+    /** The import's lines with the chosen files named by file name only (the full paths are above). */
+    private List<String> shortNames(List<String> lines) {
+        List<String> out = new java.util.ArrayList<>();
+        for (String line : lines) {
+            for (Path p : new Path[] {form.file(), form.before(), form.after()}) {
+                if (p != null && p.getFileName() != null) {
+                    line = line.replace(p.toString(), p.getFileName().toString());
+                }
+            }
+            out.add(line);
+        }
+        return out;
     }
 
     /** @return the Import button (default button of this step) */

@@ -47,6 +47,7 @@ public final class ScreenshotTour {
             return null;
         });
         d.screenshot(out.resolve("3-criteria-check" + suffix + ".png"));
+        java.nio.file.Path demo = win.session().dataForm().file();
         // A messy copy of the demo data: unusable cells are marked in the preview and listed in the report.
         java.nio.file.Path messy = java.nio.file.Files.createTempDirectory("holdpoint-tour").resolve("messy.csv");
         java.util.List<String> lines = new java.util.ArrayList<>(java.nio.file.Files.readAllLines(
@@ -68,6 +69,34 @@ public final class ScreenshotTour {
             return null;
         });
         d.screenshot(out.resolve("2-data-skipped" + suffix + ".png"));
+        // The same data under headers and labels the import cannot guess: mapped by hand on the Data step.
+        java.nio.file.Path mapped = messy.resolveSibling("gauge-log.csv");
+        java.util.List<String> renamed = new java.util.ArrayList<>();
+        renamed.add("Feature,Stage,Serial,Reading");
+        java.util.List<String> demoLines = java.nio.file.Files.readAllLines(demo);
+        for (String line : demoLines.subList(1, demoLines.size())) {
+            renamed.add(line.replace(",before,", ",old,").replace(",after,", ",new,"));
+        }
+        java.nio.file.Files.write(mapped, renamed);
+        WindowDriver.onEdt(() -> {
+            org.holdpoint.ui.model.DataForm f = win.session().dataForm();
+            f.setFile(mapped);
+            f.setMapping(org.holdpoint.ui.model.MappingField.GROUP, "Stage");
+            f.setMapping(org.holdpoint.ui.model.MappingField.BEFORE_LABEL, "old");
+            f.setMapping(org.holdpoint.ui.model.MappingField.AFTER_LABEL, "new");
+            f.setMapping(org.holdpoint.ui.model.MappingField.VALUE, "Reading");
+            f.setMapping(org.holdpoint.ui.model.MappingField.CHARACTERISTIC, "Feature");
+            f.setMapping(org.holdpoint.ui.model.MappingField.UNIT_ID, "Serial");
+            win.session().importAndAnalyse();
+            return null;
+        });
+        WindowDriver.await("the mapped import", () -> !win.session().busy() && win.session().data() != null
+                && win.session().data().report().skippedTotal() == 0, 60_000);
+        WindowDriver.onEdt(() -> {
+            win.show(Step.DATA);
+            return null;
+        });
+        d.screenshot(out.resolve("2-data-mapped" + suffix + ".png"));
         d.close();
         System.exit(0);
     }
