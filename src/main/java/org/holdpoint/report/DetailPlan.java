@@ -89,7 +89,8 @@ final class DetailPlan {
             }
             row += CHART_ROWS;
         }
-        return row + 1;
+        s.rowBreaks.add(row);
+        return new ChecksPlan(plan, s, c0).section(row + 1, index, c);
     }
 
     static int lines(String text, int perLine) {
