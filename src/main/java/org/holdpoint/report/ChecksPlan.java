@@ -60,7 +60,7 @@ final class ChecksPlan {
         List<String> notes = new ArrayList<>();
         int row = shape(r + 2, n, k, notes);
         rank(r + 2, n, k, d, notes);
-        row = Math.max(row, r + 17) + 1;
+        row = Math.max(row, r + 15) + 1;
         row = capability(row, n, c, k, d, notes);
         s.text(row, c0, "Recommendation", Style.HEADER, n + ": recommendation header");
         s.merge(row, row, c0, c0 + 5);
@@ -95,7 +95,7 @@ final class ChecksPlan {
                 Style.P_VALUE, 0, n + ": Anderson-Darling p");
         row(r + 5, "Values flagged as possible outliers", (double) k.before().flagged().size(),
                 (double) k.after().flagged().size(), Style.INTEGER, 0, n + ": flagged count");
-        s.text(r + 6, c0, "Flagged values (flagged, never dropped)", Style.HEADER, n + ": flagged header");
+        s.text(r + 6, c0, "Flagged values (never dropped)", Style.HEADER, n + ": flagged header");
         s.text(r + 6, c0 + 1, "", Style.HEADER, n + ": flagged header");
         s.text(r + 6, c0 + 2, "", Style.HEADER, n + ": flagged header");
         s.merge(r + 6, r + 6, c0 + 1, c0 + 2);
@@ -132,15 +132,19 @@ final class ChecksPlan {
             return;
         }
         boolean paired = rs == null;
-        pairText(r + 1, col, "Test", paired ? "Wilcoxon signed rank (paired)" : "Wilcoxon\u2013Mann\u2013Whitney rank sum",
-                n + ": rank test");
+        pairText(r + 1, col, paired ? "Test (Wilcoxon, paired)" : "Test (Wilcoxon\u2013Mann\u2013Whitney)",
+                paired ? "signed rank" : "rank sum", n + ": rank test");
         pair(r + 2, col, paired ? "V (sum of positive ranks)" : "U of the after sample",
                 paired ? sr.v() : rs.u(), Style.NUMBER, 1, n + (paired ? ": V" : ": U"));
         Double p = paired ? sr.p() : rs.p();
         pair(r + 3, col, "p (two-sided)", p, Style.P_VALUE, 0, n + ": rank p");
         RankMethod m = paired ? sr.method() : rs.method();
-        pairText(r + 4, col, "Method", m.word() + (m == RankMethod.NORMAL ? " (tie and continuity corrected)" : ""),
+        pairText(r + 4, col, "Method of p and interval", m == RankMethod.NORMAL ? "normal approx." : m.word(),
                 n + ": rank method");
+        if (m == RankMethod.NORMAL) {
+            notes.add("Rank comparison: p and interval from the normal approximation with tie and continuity "
+                    + "corrections (exact only for small samples without ties).");
+        }
         pair(r + 5, col, "Hodges\u2013Lehmann shift", paired ? sr.shift() : rs.shift(), Style.NUMBER, d,
                 n + ": Hodges-Lehmann shift");
         RankInterval ci = paired ? sr.ci() : rs.ci();
@@ -154,8 +158,8 @@ final class ChecksPlan {
             notes.add("Rank comparison: p is undefined for these samples (all values equal).");
         }
         if (e == null) {
-            pairText(r + 9, col, "Rank-based equivalence", "not assessed (no margin set)",
-                    n + ": rank equivalence conclusion");
+            pairText(r + 9, col, "Rank-based equivalence", "not assessed", n + ": rank equivalence conclusion");
+            notes.add("Rank-based equivalence: not assessed, no margin set.");
             return;
         }
         pairText(r + 9, col, "Rank-based equivalence", e.conclusion().words(), n + ": rank equivalence conclusion");
@@ -195,15 +199,18 @@ final class ChecksPlan {
         capRow(r + 4, "Cp (within subgroups)", b, a, CapabilityResult::cp, n + ": Cp");
         capRow(r + 5, "Cpk (within subgroups)", b, a, CapabilityResult::cpk, n + ": Cpk");
         row(r + 6, "Expected ppm below LSL", b == null ? null : b.ppmBelow(), a == null ? null : a.ppmBelow(),
-                Style.NUMBER, 1, n + ": ppm below LSL");
+                Style.NUMBER, 2, n + ": ppm below LSL");
         row(r + 7, "Expected ppm above USL", b == null ? null : b.ppmAbove(), a == null ? null : a.ppmAbove(),
-                Style.NUMBER, 1, n + ": ppm above USL");
+                Style.NUMBER, 2, n + ": ppm above USL");
         int col = c0 + 4;
         s.text(r, col, "Capability requirement", Style.HEADER, n + ": requirement header");
         s.text(r, col + 1, "", Style.HEADER, n + ": requirement header");
         Double req = c.settings().capabilityRequirement();
         pair(r + 1, col, "Required Ppk (on the lower bound)", req, Style.NUMBER, 2, n + ": capability requirement");
         pairText(r + 2, col, "After group's lower bound", met(k.capabilityMet(), req), n + ": capability met");
+        if (req != null && k.capabilityMet() == null) {
+            notes.add("Capability requirement: not judged, the after group's lower bound of Ppk is undefined.");
+        }
         String est = any.estimator() == null ? "none: Cp and Cpk need a subgroup column"
                 : any.estimator().description();
         s.text(r + 3, col, "Within-subgroup sd estimator", Style.LABEL, n + ": within estimator label");
@@ -219,9 +226,9 @@ final class ChecksPlan {
             return "no requirement set";
         }
         if (met == null) {
-            return "not judged: bound undefined";
+            return "not judged";
         }
-        return met ? "meets the requirement" : "does not meet the requirement";
+        return met ? "meets it" : "does not meet it";
     }
 
     private void capRow(int r, String label, CapabilityResult b, CapabilityResult a,
@@ -252,6 +259,10 @@ final class ChecksPlan {
     private void pairText(int row, int col, String label, String value, String what) {
         s.text(row, col, label, Style.LABEL, what + " label");
         s.text(row, col + 1, value, Style.CELL_WRAP, what);
+        int lines = DetailPlan.lines(value, DetailPlan.WIDTHS[5] - 2);
+        if (lines > 1) {
+            s.height(row, lines * 12f + 2);
+        }
     }
 
     private static Double finite(Double v) {

@@ -23,8 +23,8 @@ final class WorkbookPlan {
     static final String[] SUMMARY_HEADERS = {"#", "Characteristic", "Unit", "n before / after", "Mean before",
         "Mean after", "Difference (after \u2212 before)", "%s CI of the difference", "Margin (L, U)",
         "%s CI (equivalence)", "Equivalence conclusion", "Variance ratio (after / before)", "F-test p",
-        "Brown\u2013Forsythe p", "Sd growth", "Capability: after Ppk lower bound vs requirement", "Verdict"};
-    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 27, 24, 15};
+        "Brown\u2013Forsythe p", "Sd growth", "Capability: after-group Ppk lower bound vs required", "Verdict"};
+    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 27, 20, 15};
 
     final ReportInput input;
     final Map<TemplateName, Anchor> anchors;
@@ -160,7 +160,7 @@ final class WorkbookPlan {
         s.number(row, c0 + 13, c.levene() == null ? null : c.levene().p(), Style.P_VALUE, 0,
                 n + ": Brown-Forsythe p");
         s.text(row, c0 + 14, sdGrowth(c), Style.CELL, n + ": sd growth");
-        s.text(row, c0 + 15, capability(c), Style.CELL_WRAP, n + ": capability");
+        s.text(row, c0 + 15, capability(c), Style.CELL, n + ": capability");
         s.text(row, c0 + 16, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
                 n + ": verdict");
     }
@@ -177,7 +177,7 @@ final class WorkbookPlan {
         return "(" + fixed(lower, decimals) + ", " + fixed(upper, decimals) + ")";
     }
 
-    private static String fixed(Double v, int decimals) {
+    static String fixed(Double v, int decimals) {
         if (v == null) {
             return "none";
         }
@@ -200,7 +200,7 @@ final class WorkbookPlan {
      * The Summary's capability cell: the after group's lower confidence bound of Ppk against the requirement.
      *
      * @param c the result
-     * @return e.g. "met: bound 1.52 > 1.33", or "" without specification limits
+     * @return e.g. "met: 1.520 > 1.33", or "" without specification limits
      */
     static String capability(CharacteristicResult c) {
         var k = c.checks();
@@ -211,16 +211,16 @@ final class WorkbookPlan {
         Double req = c.settings().capabilityRequirement();
         Double lb = cap.ppkLower();
         if (lb == null || !Double.isFinite(lb)) {
-            return req == null ? "bound undefined (see Details)" : "not judged: bound undefined (see Details)";
+            return "undefined (see Details)";
         }
         if (req == null) {
-            return "bound " + Texts.num(lb) + ", no requirement set";
+            return fixed(lb, 3) + " (no requirement)";
         }
         Boolean met = k.capabilityMet();
         if (met == null) {
             return "not judged (see Details)";
         }
-        return (met ? "met: bound " : "not met: bound ") + Texts.num(lb) + (met ? " > " : " \u2264 ") + Texts.num(req);
+        return (met ? "met: " : "not met: ") + fixed(lb, 3) + (met ? " > " : " \u2264 ") + Texts.num(req);
     }
 
     private void rawHeader() {
