@@ -189,6 +189,11 @@ final class ChecksPlan {
         addNotes(notes, "capability before", b == null ? List.of() : b.notes());
         addNotes(notes, "capability after", a == null ? List.of() : a.notes());
         CapabilityResult any = a != null ? a : b;
+        if (any.lsl() == null || any.usl() == null) {
+            notes.add("Capability: one-sided specification (only " + (any.lsl() == null ? "USL" : "LSL")
+                    + "), so Pp and the expected ppm " + (any.lsl() == null ? "below LSL" : "above USL")
+                    + " do not exist; Ppk is " + (any.lsl() == null ? "Ppu" : "Ppl") + ".");
+        }
         String lvl = Texts.percent(1 - any.alpha());
         s.text(r, c0, "Capability (normal model)", Style.HEADER, n + ": capability header");
         s.text(r, c0 + 1, "Before", Style.HEADER, n + ": capability before header");
