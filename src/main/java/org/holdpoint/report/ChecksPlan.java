@@ -108,7 +108,7 @@ final class ChecksPlan {
         List<String> lines = new ArrayList<>();
         for (FlaggedValue f : g.flagged()) {
             lines.add(Texts.num(f.value()) + " at " + (f.origin() == null ? "unknown cell" : f.origin().describe())
-                    + " (" + f.test() + ")");
+                    + "; " + f.test());
         }
         String text = lines.isEmpty() ? "none" : String.join("\n", lines);
         s.text(row, c0, group.substring(0, 1).toUpperCase(java.util.Locale.ROOT) + group.substring(1), Style.LABEL,

@@ -356,6 +356,37 @@ class SignoffWorkbookTest {
         assertThat(r3.differences()).singleElement().satisfies(x -> assertThat(x.what()).contains("capability"));
     }
 
+    @Test
+    void pairedRankComparisonAndFlaggedValuesAreShownWithTheirCells() throws IOException {
+        ChangeStudy study = ReportFixtures.pairedWithOutlier();
+        StudyResult result = ReportFixtures.analyze(study);
+        Path f = dir.resolve("paired.xlsx");
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults(), f);
+        var wall = result.characteristics().get(1).checks();
+        var torque = result.characteristics().get(2).checks();
+        assertThat(torque.signedRank()).isNotNull();
+        try (XSSFWorkbook wb = open(f)) {
+            Sheet d = wb.getSheet("Details");
+            int w = rowOf(d, 0, "2. Wall thickness: shape, distribution-free comparison and capability", 0);
+            int after = rowOf(d, 0, "After", rowOf(d, 0, "Flagged values (never dropped)", w));
+            String shown = text(d, "B" + (after + 1));
+            assertThat(wall.after().flagged()).isNotEmpty();
+            for (var fv : wall.after().flagged()) {
+                assertThat(shown).contains(fv.origin().describe());
+            }
+            // the far value 2.611 is the last after value: rows 25..34 hold the wall's before values, 35..44 after
+            assertThat(shown).contains("2.611 at honing-trial.csv, cell D44");
+            int t = rowOf(d, 0, "3. Tightening torque: shape, distribution-free comparison and capability", w);
+            int v = rowOf(d, 4, "V (sum of positive ranks)", t);
+            assertThat(d.getRow(v).getCell(5).getNumericCellValue()).isEqualTo(torque.signedRank().v());
+            assertThat(text(d, "F" + (rowOf(d, 4, "Test (Wilcoxon, paired)", t) + 1))).isEqualTo("signed rank");
+            // torque has neither limits nor a margin
+            assertThat(text(d, "A" + (rowOf(d, 0, "Capability", t) + 2)))
+                    .isEqualTo("not assessed: no specification limits set");
+        }
+        assertThat(verify(f).differences()).isEmpty();
+    }
+
     /** @return the 0-based row at or after {@code from} whose cell in column {@code col} holds {@code text} */
     private static int rowOf(Sheet sh, int col, String text, int from) {
         for (int r = from; r <= sh.getLastRowNum(); r++) {
