@@ -128,7 +128,8 @@ final class WorkbookPlan {
                 Verdict.Status.FAILED) + " \u00b7 " + Texts.status(Verdict.Status.INCONCLUSIVE) + " \u00b7 "
                 + Texts.status(Verdict.Status.NOT_ASSESSED) + ". Difference = after \u2212 before. Difference "
                 + "intervals are " + ci + ", equivalence intervals " + eq + " (two one-sided tests at \u03b1 = "
-                + Texts.num(alpha) + "). An empty cell means the value does not apply or is undefined; the "
+                + Texts.num(alpha) + "). Capability: the after group's lower confidence bound of Ppk against the "
+                + "required value. An empty cell means the value does not apply or is undefined; the "
                 + "Details sheet says why.";
         s.text(row + 1, c0, legend, Style.NOTE, "summary legend");
         s.merge(row + 1, row + 1, c0, c0 + SUMMARY_HEADERS.length - 1);
