@@ -51,7 +51,7 @@ final class TextBlocks {
         java.util.function.BiConsumer<String, String> put = (label, text) -> {
             s.text(row[0], a.column(), label, Style.LABEL, "method: " + label + " label");
             s.text(row[0], a.column() + 1, text, Style.WRAP, "method: " + label);
-            s.height(row[0], DetailPlan.lines(text, 135) * 11.5f + 3);
+            s.height(row[0], DetailPlan.lines(text, 105) * 11.5f + 3);
             row[0]++;
         };
         s.text(row[0]++, a.column(), "Method and settings", Style.HEADING, "method heading");
