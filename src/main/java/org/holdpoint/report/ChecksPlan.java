@@ -58,6 +58,13 @@ final class ChecksPlan {
             return r + 4;
         }
         List<String> notes = new ArrayList<>();
+        for (String x : c.notes()) {
+            String l = x.toLowerCase(java.util.Locale.ROOT);
+            if (l.contains("outlier") || l.contains("order checks") || l.contains("independence")
+                    || l.contains("single lot") || l.contains("capability not computed")) {
+                notes.add(x);
+            }
+        }
         int row = shape(r + 2, n, k, notes);
         rank(r + 2, n, k, d, notes);
         row = Math.max(row, r + 15) + 1;
@@ -101,7 +108,24 @@ final class ChecksPlan {
         s.merge(r + 6, r + 6, c0 + 1, c0 + 2);
         int row = r + 7;
         row = flagged(row, n, "before", k.before());
-        return flagged(row, n, "after", k.after());
+        row = flagged(row, n, "after", k.after());
+        GroupChecks gb = k.before();
+        GroupChecks ga = k.after();
+        if (gb.lag1() != null || ga.lag1() != null || gb.runs() != null || ga.runs() != null) {
+            row(row++, "Lag-1 autocorrelation (run order)", gb.lag1() == null ? null : gb.lag1().r1(),
+                    ga.lag1() == null ? null : ga.lag1().r1(), Style.NUMBER, 4, n + ": lag-1 autocorrelation");
+            row(row++, "Lag-1 p (approximate)", gb.lag1() == null ? null : gb.lag1().pRefined(),
+                    ga.lag1() == null ? null : ga.lag1().pRefined(), Style.P_VALUE, 0, n + ": lag-1 p");
+            row(row++, "Runs about the median", gb.runs() == null ? null : (double) gb.runs().runs(),
+                    ga.runs() == null ? null : (double) ga.runs().runs(), Style.INTEGER, 0, n + ": runs");
+            row(row++, "Runs test p", gb.runs() == null ? null : gb.runs().p(),
+                    ga.runs() == null ? null : ga.runs().p(), Style.P_VALUE, 0, n + ": runs p");
+        }
+        if (gb.lots() != null || ga.lots() != null) {
+            row(row++, "Lots", gb.lots() == null ? null : (double) gb.lots(),
+                    ga.lots() == null ? null : (double) ga.lots(), Style.INTEGER, 0, n + ": lots");
+        }
+        return row;
     }
 
     private int flagged(int row, String n, String group, GroupChecks g) {
