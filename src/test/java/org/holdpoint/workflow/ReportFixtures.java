@@ -107,6 +107,40 @@ final class ReportFixtures {
         return new ChangeStudy(s.change(), d, s.settings(), s.signatures());
     }
 
+    /**
+     * The fixture with the bore measured in run order, in subgroups of three from two lots per group.
+     *
+     * @return the study
+     */
+    static ChangeStudy withOrder() {
+        ChangeStudy s = study();
+        List<CharacteristicData> chars = new ArrayList<>(s.data().characteristics());
+        chars.set(0, new CharacteristicData(chars.get(0).name(), "mm", ordered(BORE_BEFORE, 2, "B"),
+                ordered(BORE_AFTER, 14, "A"), false, List.of()));
+        Dataset d = new Dataset(chars, s.data().inputs(), s.data().report());
+        return new ChangeStudy(s.change(), d, s.settings(), s.signatures());
+    }
+
+    private static GroupData ordered(String[] values, int firstRow, String prefix) {
+        int n = values.length;
+        int[] rows = new int[n];
+        int[] cols = new int[n];
+        String[] units = new String[n];
+        String[] lots = new String[n];
+        String[] subgroups = new String[n];
+        String[] sequence = new String[n];
+        for (int i = 0; i < n; i++) {
+            rows[i] = firstRow + i;
+            cols[i] = 4;
+            units[i] = String.format(java.util.Locale.ROOT, "VB-%04d", rows[i]);
+            lots[i] = prefix + "-LOT-" + (i < n / 2 ? 1 : 2);
+            subgroups[i] = prefix + "-SG-" + (i / 3 + 1);
+            sequence[i] = Integer.toString(i + 1);
+        }
+        return new GroupData(Sample.ofDecimals(values), "honing-trial.csv", null, rows, cols, units, lots, subgroups,
+                sequence);
+    }
+
     private static String[] first(String[] values, int n) {
         return java.util.Arrays.copyOf(values, Math.min(n, values.length));
     }

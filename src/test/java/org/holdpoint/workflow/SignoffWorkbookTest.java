@@ -387,6 +387,31 @@ class SignoffWorkbookTest {
         assertThat(verify(f).differences()).isEmpty();
     }
 
+    @Test
+    void orderLotsAndWithinCapabilityAreShownWhenTheDataCarryThem() throws IOException {
+        ChangeStudy study = ReportFixtures.withOrder();
+        StudyResult result = ReportFixtures.analyze(study);
+        Path f = dir.resolve("order.xlsx");
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults(), f);
+        var k = result.characteristics().get(0).checks();
+        assertThat(k.after().lag1()).isNotNull();
+        assertThat(k.after().capability().cpk()).isNotNull();
+        try (XSSFWorkbook wb = open(f)) {
+            Sheet d = wb.getSheet("Details");
+            int top = rowOf(d, 0, "1. Bore diameter: shape, distribution-free comparison and capability", 0);
+            int lag = rowOf(d, 0, "Lag-1 autocorrelation (run order)", top);
+            assertThat(d.getRow(lag).getCell(2).getNumericCellValue()).isEqualTo(k.after().lag1().r1());
+            assertThat(d.getRow(rowOf(d, 0, "Runs about the median", top)).getCell(1).getNumericCellValue())
+                    .isEqualTo(k.before().runs().runs());
+            assertThat(d.getRow(rowOf(d, 0, "Lots", top)).getCell(2).getNumericCellValue()).isEqualTo(2.0);
+            assertThat(d.getRow(rowOf(d, 0, "Cpk (within subgroups)", top)).getCell(2).getNumericCellValue())
+                    .isEqualTo(k.after().capability().cpk());
+            assertThat(text(d, "F" + (rowOf(d, 4, "Within-subgroup sd estimator", top) + 1)))
+                    .isEqualTo(k.after().capability().estimator().description());
+        }
+        assertThat(verify(f).differences()).isEmpty();
+    }
+
     /** @return the 0-based row at or after {@code from} whose cell in column {@code col} holds {@code text} */
     private static int rowOf(Sheet sh, int col, String text, int from) {
         for (int r = from; r <= sh.getLastRowNum(); r++) {
