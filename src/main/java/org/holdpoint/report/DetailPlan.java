@@ -73,7 +73,8 @@ final class DetailPlan {
         List<NamedImage> charts = plan.input.chartsOf(n);
         int count = plan.chartCount(n);
         for (int i = 0; i < count; i += 2) {
-            if (i >= 2 && i % 4 == 0) {
+            // the first page holds the blocks and one row of two charts; each further page three rows
+            if (i >= 2 && (i - 2) % 6 == 0) {
                 s.rowBreaks.add(row - 1);
             }
             for (int j = i; j < Math.min(i + 2, count); j++) {
@@ -89,7 +90,8 @@ final class DetailPlan {
             }
             row += CHART_ROWS;
         }
-        return row + 1;
+        s.rowBreaks.add(row);
+        return new ChecksPlan(plan, s, c0).section(row + 1, index, c);
     }
 
     static int lines(String text, int perLine) {

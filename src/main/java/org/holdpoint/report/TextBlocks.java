@@ -51,7 +51,7 @@ final class TextBlocks {
         java.util.function.BiConsumer<String, String> put = (label, text) -> {
             s.text(row[0], a.column(), label, Style.LABEL, "method: " + label + " label");
             s.text(row[0], a.column() + 1, text, Style.WRAP, "method: " + label);
-            s.height(row[0], DetailPlan.lines(text, 135) * 11.5f + 3);
+            s.height(row[0], DetailPlan.lines(text, 105) * 11.5f + 3);
             row[0]++;
         };
         s.text(row[0]++, a.column(), "Method and settings", Style.HEADING, "method heading");
@@ -79,6 +79,20 @@ final class TextBlocks {
                 + "(Hyndman & Fan 1996, type 7).");
         put.accept("Descriptives", "Standard deviation with divisor n \u2212 1, from a compensated two-pass "
                 + "algorithm on the exact decimals of the data.");
+        put.accept("Shape and outliers", "Shapiro\u2013Wilk W with Royston's approximation (AS R94, 1995), for 3 to "
+                + "5000 values; Anderson\u2013Darling A\u00b2 with estimated mean and sd, its p from the adjusted "
+                + "A\u00b2(1 + 0.75/n + 2.25/n\u00b2) (D'Agostino & Stephens 1986). Outliers: Grubbs' two-sided test "
+                + "and the generalized ESD (Rosner 1983); flagged values are shown with their cell and never dropped.");
+        put.accept("Distribution-free comparison", "Wilcoxon\u2013Mann\u2013Whitney rank sum (independent samples) or "
+                + "Wilcoxon signed rank (paired): two-sided p, exact for small samples without ties, otherwise the "
+                + "normal approximation with tie and continuity corrections; the Hodges\u2013Lehmann shift (median of "
+                + "the pairwise differences, or of the Walsh averages when paired) with its " + ci + " interval from "
+                + "order statistics and the level achieved; the rank-based equivalence conclusion from the " + eq
+                + " interval against the same margin.");
+        put.accept("Capability", "When limits are set: Pp and Ppk from the overall sd with the lower confidence "
+                + "bound of Ppk (Bissell 1990); Cp and Cpk from the within-subgroup sd only with a subgroup column "
+                + "(the estimator is named); expected parts per million outside each limit under a normal model. A "
+                + "capability requirement is judged on the after group's lower bound of Ppk, not on the estimate.");
         for (CharacteristicResult c : plan.input.result().characteristics()) {
             put.accept("Margin: " + c.name(), marginText(set, c));
         }

@@ -23,8 +23,8 @@ final class WorkbookPlan {
     static final String[] SUMMARY_HEADERS = {"#", "Characteristic", "Unit", "n before / after", "Mean before",
         "Mean after", "Difference (after \u2212 before)", "%s CI of the difference", "Margin (L, U)",
         "%s CI (equivalence)", "Equivalence conclusion", "Variance ratio (after / before)", "F-test p",
-        "Brown\u2013Forsythe p", "Sd growth", "Verdict"};
-    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 27, 15};
+        "Brown\u2013Forsythe p", "Sd growth", "Capability: after-group Ppk lower bound vs required", "Verdict"};
+    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 27, 20, 15};
 
     final ReportInput input;
     final Map<TemplateName, Anchor> anchors;
@@ -128,7 +128,8 @@ final class WorkbookPlan {
                 Verdict.Status.FAILED) + " \u00b7 " + Texts.status(Verdict.Status.INCONCLUSIVE) + " \u00b7 "
                 + Texts.status(Verdict.Status.NOT_ASSESSED) + ". Difference = after \u2212 before. Difference "
                 + "intervals are " + ci + ", equivalence intervals " + eq + " (two one-sided tests at \u03b1 = "
-                + Texts.num(alpha) + "). An empty cell means the value does not apply or is undefined; the "
+                + Texts.num(alpha) + "). Capability: the after group's lower confidence bound of Ppk against the "
+                + "required value. An empty cell means the value does not apply or is undefined; the "
                 + "Details sheet says why.";
         s.text(row + 1, c0, legend, Style.NOTE, "summary legend");
         s.merge(row + 1, row + 1, c0, c0 + SUMMARY_HEADERS.length - 1);
@@ -160,7 +161,8 @@ final class WorkbookPlan {
         s.number(row, c0 + 13, c.levene() == null ? null : c.levene().p(), Style.P_VALUE, 0,
                 n + ": Brown-Forsythe p");
         s.text(row, c0 + 14, sdGrowth(c), Style.CELL, n + ": sd growth");
-        s.text(row, c0 + 15, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
+        s.text(row, c0 + 15, capability(c), Style.CELL, n + ": capability");
+        s.text(row, c0 + 16, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
                 n + ": verdict");
     }
 
@@ -176,7 +178,7 @@ final class WorkbookPlan {
         return "(" + fixed(lower, decimals) + ", " + fixed(upper, decimals) + ")";
     }
 
-    private static String fixed(Double v, int decimals) {
+    static String fixed(Double v, int decimals) {
         if (v == null) {
             return "none";
         }
@@ -193,6 +195,33 @@ final class WorkbookPlan {
         }
         return (g.met() ? "met: " : "not met: ") + "bound " + Texts.num(g.upperBound()) + (g.met() ? " < " : " \u2265 ")
                 + Texts.num(g.limit());
+    }
+
+    /**
+     * The Summary's capability cell: the after group's lower confidence bound of Ppk against the requirement.
+     *
+     * @param c the result
+     * @return e.g. "met: 1.520 > 1.33", or "" without specification limits
+     */
+    static String capability(CharacteristicResult c) {
+        var k = c.checks();
+        var cap = k == null || k.after() == null ? null : k.after().capability();
+        if (cap == null) {
+            return "";
+        }
+        Double req = c.settings().capabilityRequirement();
+        Double lb = cap.ppkLower();
+        if (lb == null || !Double.isFinite(lb)) {
+            return "undefined (see Details)";
+        }
+        if (req == null) {
+            return fixed(lb, 3) + " (no requirement)";
+        }
+        Boolean met = k.capabilityMet();
+        if (met == null) {
+            return "not judged (see Details)";
+        }
+        return (met ? "met: " : "not met: ") + fixed(lb, 3) + (met ? " > " : " \u2264 ") + Texts.num(req);
     }
 
     private void rawHeader() {

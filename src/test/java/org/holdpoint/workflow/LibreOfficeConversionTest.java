@@ -40,9 +40,10 @@ class LibreOfficeConversionTest {
         run(soffice, "--convert-to", "pdf", "--outdir", dir.toString(), xlsx.toString());
         Path pdf = dir.resolve("signoff.pdf");
         assertThat(pdf).exists();
-        // Summary 1 + Sign-off 1 + Details 3 (a page break before each characteristic) + Method 1
-        // + Import report 1 + Cautions 1 + Raw data 1 = 9; the hidden record sheet is not printed
-        assertThat(pages(pdf)).isEqualTo(9);
+        // Summary 1 + Sign-off 1 + Details 6 (per characteristic a page with the t-based blocks and its two
+        // charts, then a page of shape, rank comparison and capability) + Method 1 + Import report 1
+        // + Cautions 1 + Raw data 1 = 12; the hidden record sheet is not printed
+        assertThat(pages(pdf)).isEqualTo(12);
         String pdftotext = onPath("pdftotext");
         if (pdftotext != null) {
             run(pdftotext, pdf.toString(), dir.resolve("signoff.txt").toString());

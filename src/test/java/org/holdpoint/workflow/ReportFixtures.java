@@ -87,6 +87,60 @@ final class ReportFixtures {
         return new ChangeStudy(change, data, settings, List.of());
     }
 
+    /**
+     * The fixture with one far value in the wall thickness after the change (row 32 of the file) and the torque
+     * measured twice on the same eight units (paired).
+     *
+     * @return the study
+     */
+    static ChangeStudy pairedWithOutlier() {
+        ChangeStudy s = study();
+        List<CharacteristicData> chars = new ArrayList<>(s.data().characteristics());
+        int[] row = {2};
+        String[] wallAfter = WALL_AFTER.clone();
+        wallAfter[wallAfter.length - 1] = "2.611";
+        chars.set(1, characteristic("Wall thickness", "mm", WALL_BEFORE, wallAfter, new int[] {25}));
+        GroupData before = group(TORQUE_BEFORE, new int[] {45}, 45);
+        GroupData after = group(TORQUE_AFTER, new int[] {53}, 45);
+        chars.set(2, new CharacteristicData("Tightening torque", "N m", before, after, true, List.of()));
+        Dataset d = new Dataset(chars, s.data().inputs(), s.data().report());
+        return new ChangeStudy(s.change(), d, s.settings(), s.signatures());
+    }
+
+    /**
+     * The fixture with the bore measured in run order, in subgroups of three from two lots per group.
+     *
+     * @return the study
+     */
+    static ChangeStudy withOrder() {
+        ChangeStudy s = study();
+        List<CharacteristicData> chars = new ArrayList<>(s.data().characteristics());
+        chars.set(0, new CharacteristicData(chars.get(0).name(), "mm", ordered(BORE_BEFORE, 2, "B"),
+                ordered(BORE_AFTER, 14, "A"), false, List.of()));
+        Dataset d = new Dataset(chars, s.data().inputs(), s.data().report());
+        return new ChangeStudy(s.change(), d, s.settings(), s.signatures());
+    }
+
+    private static GroupData ordered(String[] values, int firstRow, String prefix) {
+        int n = values.length;
+        int[] rows = new int[n];
+        int[] cols = new int[n];
+        String[] units = new String[n];
+        String[] lots = new String[n];
+        String[] subgroups = new String[n];
+        String[] sequence = new String[n];
+        for (int i = 0; i < n; i++) {
+            rows[i] = firstRow + i;
+            cols[i] = 4;
+            units[i] = String.format(java.util.Locale.ROOT, "VB-%04d", rows[i]);
+            lots[i] = prefix + "-LOT-" + (i < n / 2 ? 1 : 2);
+            subgroups[i] = prefix + "-SG-" + (i / 3 + 1);
+            sequence[i] = Integer.toString(i + 1);
+        }
+        return new GroupData(Sample.ofDecimals(values), "honing-trial.csv", null, rows, cols, units, lots, subgroups,
+                sequence);
+    }
+
     private static String[] first(String[] values, int n) {
         return java.util.Arrays.copyOf(values, Math.min(n, values.length));
     }
@@ -97,6 +151,11 @@ final class ReportFixtures {
     }
 
     private static GroupData group(String[] values, int[] row) {
+        return group(values, row, -1);
+    }
+
+    /** @param unitBase the first unit number, or -1 to number the units by their rows */
+    private static GroupData group(String[] values, int[] row, int unitBase) {
         int n = values.length;
         int[] rows = new int[n];
         int[] cols = new int[n];
@@ -104,7 +163,7 @@ final class ReportFixtures {
         for (int i = 0; i < n; i++) {
             rows[i] = row[0]++;
             cols[i] = 4;
-            units[i] = String.format(java.util.Locale.ROOT, "VB-%04d", rows[i]);
+            units[i] = String.format(java.util.Locale.ROOT, "VB-%04d", unitBase < 0 ? rows[i] : unitBase + i);
         }
         return new GroupData(Sample.ofDecimals(values), "honing-trial.csv", null, rows, cols, units, null, null,
                 null);

@@ -100,7 +100,7 @@ class SignoffWorkbookTest {
                 Arguments.of("Details", "F10", (Consumer<Cell>) c -> c.setCellValue(-0.005), "margin L"),
                 Arguments.of("Sign-off", "D5", (Consumer<Cell>) c -> c.setCellValue("2026-11-25T16:00:00Z"),
                         "sign-off prepared: date and time"),
-                Arguments.of("Summary", "P15", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
+                Arguments.of("Summary", "Q15", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
                         "verdict"));
     }
 
@@ -251,6 +251,177 @@ class SignoffWorkbookTest {
                 "CR-2026-0118")));
         VerifyResult forged = new VerifyUseCase().verify(edited, null, Progress.NONE);
         assertThat(forged.seal()).isEqualTo(VerifyResult.SealState.INVALID);
+    }
+
+    /** The fixture with a capability requirement of 1.33 on the bore (common practice, no source). */
+    static ChangeStudy withRequirement() {
+        ChangeStudy s = ReportFixtures.study();
+        java.util.Map<String, org.holdpoint.study.CharacteristicSettings> per = new java.util.LinkedHashMap<>(
+                s.settings().perCharacteristic());
+        var bore = per.get("Bore diameter");
+        per.put("Bore diameter", new org.holdpoint.study.CharacteristicSettings(bore.unit(), bore.spec(),
+                bore.margin(), bore.sdGrowthLimit(), 1.33, bore.paired()));
+        var set = s.settings();
+        return new ChangeStudy(s.change(), s.data(), new org.holdpoint.study.AnalysisSettings(set.alpha(),
+                set.equalVariances(), set.holm(), set.defaults(), per, set.overrides(), set.exclusions()),
+                s.signatures());
+    }
+
+    @Test
+    void checksAndCapabilityAreShownAsAnalysedAndAgreeWithR() throws IOException {
+        ChangeStudy study = withRequirement();
+        StudyResult result = ReportFixtures.analyze(study);
+        Path f = dir.resolve("checks.xlsx");
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults().withCharts(ReportFixtures.charts()),
+                f);
+        var k = result.characteristics().get(0).checks();
+        try (XSSFWorkbook wb = open(f)) {
+            Sheet d = wb.getSheet("Details");
+            int top = rowOf(d, 0, "1. Bore diameter: shape, distribution-free comparison and capability", 0);
+            assertThat(rowOf(d, 0, "Shape and outliers", top)).isGreaterThan(top);
+            assertThat(rowOf(d, 4, "Distribution-free comparison", top)).isGreaterThan(top);
+            assertThat(rowOf(d, 0, "Capability (normal model)", top)).isGreaterThan(top);
+            assertThat(rowOf(d, 0, "Recommendation", top)).isGreaterThan(top);
+            int sw = rowOf(d, 0, "Shapiro\u2013Wilk p", top);
+            assertThat(d.getRow(sw).getCell(1).getNumericCellValue()).isEqualTo(k.before().normality().shapiroP());
+            assertThat(d.getRow(sw).getCell(2).getNumericCellValue()).isEqualTo(k.after().normality().shapiroP());
+            // R 4.2.2: shapiro.test(b)$p.value = 0.99992512270710288, shapiro.test(a)$p.value = 0.93267189542326445
+            // (b, a = ReportFixtures.BORE_BEFORE, BORE_AFTER); agreement 1e-4 as the issue asks
+            assertThat(d.getRow(sw).getCell(1).getNumericCellValue()).isCloseTo(0.99992512270710288, within(1e-4));
+            assertThat(d.getRow(sw).getCell(2).getNumericCellValue()).isCloseTo(0.93267189542326445, within(1e-4));
+            int w = rowOf(d, 0, "Shapiro\u2013Wilk W", top);
+            // R 4.2.2: shapiro.test(b)$statistic = 0.99144970898298312, shapiro.test(a)$statistic = 0.97222663955638877
+            assertThat(d.getRow(w).getCell(1).getNumericCellValue()).isCloseTo(0.99144970898298312, within(1e-6));
+            assertThat(d.getRow(w).getCell(2).getNumericCellValue()).isCloseTo(0.97222663955638877, within(1e-6));
+            int ad = rowOf(d, 0, "Anderson\u2013Darling A\u00b2 (unadjusted)", top);
+            // R 4.2.2, nortest 1.0-4: ad.test(b)$statistic = 0.10793434383144351, ad.test(a)$statistic = 0.15401131959409398
+            assertThat(d.getRow(ad).getCell(1).getNumericCellValue()).isCloseTo(0.10793434383144351, within(1e-9));
+            assertThat(d.getRow(ad).getCell(2).getNumericCellValue()).isCloseTo(0.15401131959409398, within(1e-9));
+            int u = rowOf(d, 4, "U of the after sample", top);
+            int p = rowOf(d, 4, "p (two-sided)", top);
+            // R 4.2.2: wilcox.test(a, b, conf.int = TRUE): W = 81.5, p-value = 0.6030953205939058 (normal, ties)
+            assertThat(d.getRow(u).getCell(5).getNumericCellValue()).isEqualTo(81.5);
+            assertThat(d.getRow(p).getCell(5).getNumericCellValue()).isEqualTo(k.rankSum().p())
+                    .isCloseTo(0.6030953205939058, within(1e-8));
+            assertThat(text(d, "F" + (rowOf(d, 4, "Method of p and interval", top) + 1))).startsWith("normal");
+            int hl = rowOf(d, 4, "Hodges\u2013Lehmann shift", top);
+            assertThat(d.getRow(hl).getCell(5).getNumericCellValue()).isEqualTo(k.rankSum().shift());
+            assertThat(d.getRow(hl + 1).getCell(5).getNumericCellValue()).isEqualTo(k.rankSum().ciLower());
+            assertThat(d.getRow(hl + 2).getCell(5).getNumericCellValue()).isEqualTo(k.rankSum().ciUpper());
+            assertThat(text(d, "F" + (rowOf(d, 4, "Rank-based equivalence", top) + 1)))
+                    .isEqualTo(k.rankSum().equivalence().conclusion().words());
+            int lb = rowOf(d, 0, "95 % lower bound of Ppk (Bissell)", top);
+            var cap = k.after().capability();
+            assertThat(d.getRow(lb).getCell(2).getNumericCellValue()).isEqualTo(cap.ppkLower());
+            // R 4.2.2: ppk <- min((25.021 - mean(a))/(3*sd(a)), (mean(a) - 25)/(3*sd(a))) = 5.4185432184876703;
+            // ppk - qnorm(0.95)*sqrt(1/(9*12) + ppk^2/(2*11)) = 3.511766582525409 (Bissell 1990)
+            assertThat(cap.ppkLower()).isCloseTo(3.511766582525409, within(1e-9));
+            assertThat(d.getRow(rowOf(d, 0, "Ppk (overall sd)", top)).getCell(2).getNumericCellValue())
+                    .isCloseTo(5.4185432184876703, within(1e-9));
+            // no subgroup column: Cp and Cpk are empty cells, never 0 or NaN, and the notes say why
+            Cell cp = d.getRow(rowOf(d, 0, "Cp (within subgroups)", top)).getCell(2);
+            assertThat(cp.getCellType()).isEqualTo(CellType.BLANK);
+            assertThat(text(d, "F" + (rowOf(d, 4, "After group's lower bound", top) + 1)))
+                    .isEqualTo("meets it");
+            assertThat(text(d, "A" + (rowOf(d, 0, "Recommendation", top) + 2))).isEqualTo(k.recommendation());
+            Sheet summary = wb.getSheet("Summary");
+            assertThat(text(summary, "P14")).startsWith("Capability");
+            assertThat(text(summary, "P15")).isEqualTo("met: 3.512 > 1.33");
+            // torque has no specification limits: an empty capability cell
+            assertThat(text(summary, "P17")).isEmpty();
+        }
+        assertThat(verify(f).differences()).isEmpty();
+        int top;
+        String ppkCell;
+        String pCell;
+        try (XSSFWorkbook wb = open(f)) {
+            Sheet d = wb.getSheet("Details");
+            top = rowOf(d, 0, "1. Bore diameter: shape, distribution-free comparison and capability", 0);
+            ppkCell = "C" + (rowOf(d, 0, "95 % lower bound of Ppk (Bissell)", top) + 1);
+            pCell = "F" + (rowOf(d, 4, "p (two-sided)", top) + 1);
+        }
+        VerifyResult r1 = verify(edit(f, "Details", ppkCell, c -> c.setCellValue(1.40)));
+        assertThat(r1.status()).isEqualTo(VerifyResult.Status.EDITED);
+        assertThat(r1.differences()).singleElement().satisfies(x -> {
+            assertThat(x.sheet()).isEqualTo("Details");
+            assertThat(x.cell()).isEqualTo(ppkCell);
+            assertThat(x.what()).contains("Ppk lower bound");
+        });
+        VerifyResult r2 = verify(edit(f, "Details", pCell, c -> c.setCellValue(0.0401)));
+        assertThat(r2.differences()).singleElement().satisfies(x -> {
+            assertThat(x.cell()).isEqualTo(pCell);
+            assertThat(x.what()).contains("rank p");
+        });
+        VerifyResult r3 = verify(edit(f, "Summary", "P15", c -> c.setCellValue("met: 1.500 > 1.33")));
+        assertThat(r3.differences()).singleElement().satisfies(x -> assertThat(x.what()).contains("capability"));
+    }
+
+    @Test
+    void pairedRankComparisonAndFlaggedValuesAreShownWithTheirCells() throws IOException {
+        ChangeStudy study = ReportFixtures.pairedWithOutlier();
+        StudyResult result = ReportFixtures.analyze(study);
+        Path f = dir.resolve("paired.xlsx");
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults(), f);
+        var wall = result.characteristics().get(1).checks();
+        var torque = result.characteristics().get(2).checks();
+        assertThat(torque.signedRank()).isNotNull();
+        try (XSSFWorkbook wb = open(f)) {
+            Sheet d = wb.getSheet("Details");
+            int w = rowOf(d, 0, "2. Wall thickness: shape, distribution-free comparison and capability", 0);
+            int after = rowOf(d, 0, "After", rowOf(d, 0, "Flagged values (never dropped)", w));
+            String shown = text(d, "B" + (after + 1));
+            assertThat(wall.after().flagged()).isNotEmpty();
+            for (var fv : wall.after().flagged()) {
+                assertThat(shown).contains(fv.origin().describe());
+            }
+            // the far value 2.611 is the last after value: rows 25..34 hold the wall's before values, 35..44 after
+            assertThat(shown).contains("2.611 at honing-trial.csv, cell D44");
+            int t = rowOf(d, 0, "3. Tightening torque: shape, distribution-free comparison and capability", w);
+            int v = rowOf(d, 4, "V (sum of positive ranks)", t);
+            assertThat(d.getRow(v).getCell(5).getNumericCellValue()).isEqualTo(torque.signedRank().v());
+            assertThat(text(d, "F" + (rowOf(d, 4, "Test (Wilcoxon, paired)", t) + 1))).isEqualTo("signed rank");
+            // torque has neither limits nor a margin
+            assertThat(text(d, "A" + (rowOf(d, 0, "Capability", t) + 2)))
+                    .isEqualTo("not assessed: no specification limits set");
+        }
+        assertThat(verify(f).differences()).isEmpty();
+    }
+
+    @Test
+    void orderLotsAndWithinCapabilityAreShownWhenTheDataCarryThem() throws IOException {
+        ChangeStudy study = ReportFixtures.withOrder();
+        StudyResult result = ReportFixtures.analyze(study);
+        Path f = dir.resolve("order.xlsx");
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults(), f);
+        var k = result.characteristics().get(0).checks();
+        assertThat(k.after().lag1()).isNotNull();
+        assertThat(k.after().capability().cpk()).isNotNull();
+        try (XSSFWorkbook wb = open(f)) {
+            Sheet d = wb.getSheet("Details");
+            int top = rowOf(d, 0, "1. Bore diameter: shape, distribution-free comparison and capability", 0);
+            int lag = rowOf(d, 0, "Lag-1 autocorrelation (run order)", top);
+            assertThat(d.getRow(lag).getCell(2).getNumericCellValue()).isEqualTo(k.after().lag1().r1());
+            assertThat(d.getRow(rowOf(d, 0, "Runs about the median", top)).getCell(1).getNumericCellValue())
+                    .isEqualTo(k.before().runs().runs());
+            assertThat(d.getRow(rowOf(d, 0, "Lots", top)).getCell(2).getNumericCellValue()).isEqualTo(2.0);
+            assertThat(d.getRow(rowOf(d, 0, "Cpk (within subgroups)", top)).getCell(2).getNumericCellValue())
+                    .isEqualTo(k.after().capability().cpk());
+            assertThat(text(d, "F" + (rowOf(d, 4, "Within-subgroup sd estimator", top) + 1)))
+                    .isEqualTo(k.after().capability().estimator().description());
+        }
+        assertThat(verify(f).differences()).isEmpty();
+    }
+
+    /** @return the 0-based row at or after {@code from} whose cell in column {@code col} holds {@code text} */
+    private static int rowOf(Sheet sh, int col, String text, int from) {
+        for (int r = from; r <= sh.getLastRowNum(); r++) {
+            var row = sh.getRow(r);
+            Cell c = row == null ? null : row.getCell(col);
+            if (c != null && c.getCellType() == CellType.STRING && c.getStringCellValue().equals(text)) {
+                return r;
+            }
+        }
+        throw new AssertionError("no \"" + text + "\" in column " + col + " from row " + (from + 1));
     }
 
     static XSSFWorkbook open(Path f) throws IOException {
