@@ -73,10 +73,11 @@ public record DataSources(Path file, Path beforeFile, Path afterFile, String she
     /** @return the import request for these sources, with the named columns; everything else detected */
     ImportRequest toRequest() {
         ColumnMapping m = columns;
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout,
-                layout == Layout.PAIRED, m.group(), m.value(), m.characteristic(), m.before(), m.after(),
-                m.beforeLabel(), m.afterLabel(), m.unitId(), m.lot(), m.subgroup(), m.sequence(), null, null,
-                m.headerRow());
+        ImportOptions o = file != null ? ImportOptions.file(file) : ImportOptions.files(beforeFile, afterFile);
+        return o.sheets(sheet, beforeSheet, afterSheet).layout(layout, layout == Layout.PAIRED)
+                .columns(m.group(), m.value(), m.characteristic(), m.before(), m.after())
+                .labels(m.beforeLabel(), m.afterLabel()).traceColumns(m.unitId(), m.lot(), m.subgroup(), m.sequence())
+                .text(null, null, m.headerRow()).toRequest();
     }
 
     private static String blankToNull(String s) {
