@@ -13,7 +13,6 @@ import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Signature;
 import org.holdpoint.study.Exclusion;
-import org.holdpoint.study.Layout;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.SpecLimits;
 import org.holdpoint.workflow.AnalysisOutcome;
@@ -54,7 +53,7 @@ final class AnalyzeCommand implements Callable<Integer> {
     Path file;
 
     @CommandLine.ArgGroup(exclusive = false, heading = "%nInput%n", order = 1)
-    InputOptions input = new InputOptions();
+    InputArguments input = new InputArguments();
 
     @CommandLine.ArgGroup(exclusive = false, heading = "%nCriteria (apply to every characteristic)%n", order = 2)
     CriteriaOptions criteria = new CriteriaOptions();
@@ -122,66 +121,6 @@ final class AnalyzeCommand implements Callable<Integer> {
         Path signPublicKey;
     }
 
-    static final class InputOptions {
-        @Option(names = "--before", paramLabel = "FILE", description = "File of the before group (with --after).")
-        Path before;
-        @Option(names = "--after", paramLabel = "FILE", description = "File of the after group (with --before).")
-        Path after;
-        @Option(names = "--sheet", paramLabel = "NAME|INDEX", description = "Sheet to read (default: the first "
-                + "sheet that holds data).")
-        String sheet;
-        @Option(names = "--before-sheet", paramLabel = "NAME|INDEX", description = "Sheet of the before file.")
-        String beforeSheet;
-        @Option(names = "--after-sheet", paramLabel = "NAME|INDEX", description = "Sheet of the after file.")
-        String afterSheet;
-        @Option(names = "--layout", paramLabel = "LAYOUT", description = "stacked, side-by-side, wide or paired "
-                + "(default: detected and stated in the output).", converter = LayoutConverter.class)
-        Layout layout;
-        @Option(names = "--paired", description = "The same units were measured before and after: match the "
-                + "before and after values by unit id and use the paired tests.")
-        boolean paired;
-        @Option(names = "--group-column", paramLabel = "COLUMN", description = "Header of the column that says "
-                + "before or after.")
-        String groupColumn;
-        @Option(names = "--value-column", paramLabel = "COLUMN", description = "Header of the value column.")
-        String valueColumn;
-        @Option(names = {"--characteristic-column", "--characteristic"}, paramLabel = "COLUMN",
-                description = "Header of the column naming the characteristic (stacked layout).")
-        String characteristicColumn;
-        @Option(names = "--before-column", paramLabel = "COLUMN", description = "Header of the before column.")
-        String beforeColumn;
-        @Option(names = "--after-column", paramLabel = "COLUMN", description = "Header of the after column.")
-        String afterColumn;
-        @Option(names = "--before-label", paramLabel = "TEXT", description = "Group label of before rows "
-                + "(default: before).")
-        String beforeLabel;
-        @Option(names = "--after-label", paramLabel = "TEXT", description = "Group label of after rows "
-                + "(default: after).")
-        String afterLabel;
-        @Option(names = "--unit-column", paramLabel = "COLUMN", description = "Header of the part unit or serial "
-                + "id column (default: unit, when present).")
-        String unitColumn;
-        @Option(names = "--lot-column", paramLabel = "COLUMN", description = "Header of the lot or batch column.")
-        String lotColumn;
-        @Option(names = "--subgroup-column", paramLabel = "COLUMN", description = "Header of the subgroup column.")
-        String subgroupColumn;
-        @Option(names = "--sequence-column", paramLabel = "COLUMN", description = "Header of the sequence or "
-                + "timestamp column.")
-        String sequenceColumn;
-        @Option(names = "--delimiter", paramLabel = "CHAR", description = "Field delimiter of a text file "
-                + "(default: detected). Use 'tab' for a tab.")
-        String delimiter;
-        @Option(names = "--decimal", paramLabel = "CHAR", description = "Decimal separator of a text file: . or , "
-                + "(default: detected).")
-        Character decimal;
-        @Option(names = "--header-row", paramLabel = "ROW", description = "1-based row of the header (default: "
-                + "detected).")
-        Integer headerRow;
-        @Option(names = "--settings", paramLabel = "FILE", description = "Per-characteristic criteria file (CSV "
-                + "or JSON).")
-        Path settings;
-    }
-
     static final class CriteriaOptions {
         @Option(names = "--margin", paramLabel = "D", description = "Symmetric equivalence margin (-D, D) in the "
                 + "characteristic's unit.")
@@ -235,21 +174,6 @@ final class AnalyzeCommand implements Callable<Integer> {
                 + "criteria, raw values with their origins, exclusions, sign-off, results) as a study file, e.g. for "
                 + "'holdpoint archive add'.")
         Path saveStudy;
-    }
-
-    /** Converts layout names such as side-by-side. */
-    static final class LayoutConverter implements CommandLine.ITypeConverter<Layout> {
-        @Override
-        public Layout convert(String value) {
-            String v = value.trim().toLowerCase(java.util.Locale.ROOT).replace('-', '_').replace(' ', '_');
-            for (Layout l : Layout.values()) {
-                if (l.name().toLowerCase(java.util.Locale.ROOT).equals(v) && l != Layout.SEPARATE) {
-                    return l;
-                }
-            }
-            throw new CommandLine.TypeConversionException("'" + value + "' is not a layout; use stacked, "
-                    + "side-by-side, wide or paired");
-        }
     }
 
     @Override
@@ -385,38 +309,7 @@ final class AnalyzeCommand implements Callable<Integer> {
     }
 
     ImportOptions importOptions() {
-        InputOptions in = input;
-        if (file == null && (in.before == null || in.after == null)) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "give a data FILE, or both --before FILE and --after FILE");
-        }
-        if (file != null && (in.before != null || in.after != null)) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "give either a data FILE or --before/--after files, not both");
-        }
-        for (Path p : new Path[] {file, in.before, in.after}) {
-            if (p != null && !Files.exists(p)) {
-                throw new UserInputException("%s: file not found; check the path", p);
-            }
-        }
-        Character delim = null;
-        if (in.delimiter != null) {
-            String d = in.delimiter.equalsIgnoreCase("tab") ? "\t" : in.delimiter;
-            if (d.length() != 1) {
-                throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--delimiter must be one character or 'tab', got '" + in.delimiter + "'");
-            }
-            delim = d.charAt(0);
-        }
-        if (in.decimal != null && in.decimal != '.' && in.decimal != ',') {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--decimal must be . or ,");
-        }
-        ImportOptions o = file != null ? ImportOptions.file(file) : ImportOptions.files(in.before, in.after);
-        return o.sheets(in.sheet, in.beforeSheet, in.afterSheet).layout(in.layout, in.paired)
-                .columns(in.groupColumn, in.valueColumn, in.characteristicColumn, in.beforeColumn, in.afterColumn)
-                .labels(in.beforeLabel, in.afterLabel)
-                .traceColumns(in.unitColumn, in.lotColumn, in.subgroupColumn, in.sequenceColumn)
-                .text(delim, in.decimal, in.headerRow);
+        return input.toImportOptions(spec.commandLine(), file);
     }
 
     AnalysisSettings settings() {
