@@ -63,6 +63,18 @@ final class InputArguments {
     @Option(names = "--header-row", paramLabel = "ROW", description = "1-based row of the header (default: "
             + "detected).")
     Integer headerRow;
+    @Option(names = "--before-header-row", paramLabel = "ROW", description = "1-based header row of the before "
+            + "file when it differs from the after file's (two-file input).")
+    Integer beforeHeaderRow;
+    @Option(names = "--after-header-row", paramLabel = "ROW", description = "1-based header row of the after file "
+            + "(two-file input).")
+    Integer afterHeaderRow;
+    @Option(names = "--only", paramLabel = "NAME", description = "Analyse only this characteristic; repeatable. "
+            + "(A settings file that lists characteristics already limits the analysis to them.)")
+    java.util.List<String> only = new java.util.ArrayList<>();
+    @Option(names = "--ignore-column", paramLabel = "NAME", description = "Leave this column out (not a "
+            + "characteristic, or not part of this study); repeatable.")
+    java.util.List<String> ignore = new java.util.ArrayList<>();
     @Option(names = "--settings", paramLabel = "FILE", description = "Per-characteristic criteria file (CSV "
             + "or JSON).")
     Path settings;
@@ -106,7 +118,23 @@ final class InputArguments {
                 .columns(in.groupColumn, in.valueColumn, in.characteristicColumn, in.beforeColumn, in.afterColumn)
                 .labels(in.beforeLabel, in.afterLabel)
                 .traceColumns(in.unitColumn, in.lotColumn, in.subgroupColumn, in.sequenceColumn)
-                .text(delim, in.decimal, in.headerRow);
+                .text(delim, in.decimal, in.headerRow).headerRows(headerRow(cl, "--before-header-row",
+                        in.beforeHeaderRow, file), headerRow(cl, "--after-header-row", in.afterHeaderRow, file))
+                .choose(in.only, in.ignore);
+    }
+
+    private static Integer headerRow(CommandLine cl, String option, Integer row, Path file) {
+        if (row == null) {
+            return null;
+        }
+        if (file != null) {
+            throw new CommandLine.ParameterException(cl, option + " is for two-file input (--before and --after); "
+                    + "with one file use --header-row");
+        }
+        if (row < 1) {
+            throw new CommandLine.ParameterException(cl, option + " is counted from 1, got " + row);
+        }
+        return row;
     }
 
     /** Converts layout names such as side-by-side. */

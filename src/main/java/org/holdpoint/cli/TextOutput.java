@@ -32,6 +32,7 @@ final class TextOutput {
             case FAILED -> "[x]";
             case INCONCLUSIVE -> "[?]";
             case NOT_ASSESSED -> "[-]";
+            case NOT_ASSESSABLE -> "[/]";
         };
     }
 
@@ -108,14 +109,22 @@ final class TextOutput {
             String interval = eq == null ? "-" : "(" + Format.num(eq.ciLower(), 4) + ", "
                     + Format.num(eq.ciUpper(), 4) + ")";
             String margin = eq == null ? "none set" : marginText(eq);
-            String conclusion = eq == null ? "not assessed" : eq.conclusion().words();
+            boolean unassessable = r.verdict().status() == Verdict.Status.NOT_ASSESSABLE;
+            String conclusion = unassessable ? "not assessable (see below)" : eq == null ? "not assessed"
+                    : eq.conclusion().words();
+            if (unassessable && r.margin() != null) {
+                margin = r.margin().lower() != null && r.margin().upper() != null ? "(" + Format.num(r.margin().lower(), 4)
+                        + ", " + Format.num(r.margin().upper(), 4) + ")" : "one-sided";
+            }
             out.printf(Locale.ROOT, fmt, mark(r.verdict().status()), clip(r.name(), 24),
-                    clip(r.unit() == null ? "" : r.unit(), 6), r.before().n() + "/" + r.after().n(),
-                    Format.num(r.before().mean()), Format.num(r.after().mean()), Format.num(t.estimate(), 4), interval,
-                    margin, conclusion + (r.verdict().status() == Verdict.Status.FAILED && eq != null
+                    clip(r.unit() == null ? "" : r.unit(), 6), (r.before() == null ? 0 : r.before().n()) + "/"
+                            + (r.after() == null ? 0 : r.after().n()),
+                    r.before() == null ? "-" : Format.num(r.before().mean()),
+                    r.after() == null ? "-" : Format.num(r.after().mean()), t == null ? "-" : Format.num(t.estimate(), 4),
+                    interval, margin, conclusion + (r.verdict().status() == Verdict.Status.FAILED && eq != null
                             && eq.conclusion().claimHolds() ? " (limit not met)" : ""));
         }
-        out.println("Marks: [=] passed  [x] failed  [?] inconclusive  [-] not assessed");
+        out.println("Marks: [=] passed  [x] failed  [?] inconclusive  [-] not assessed  [/] not assessable");
     }
 
     private static String marginText(EquivalenceResult eq) {
@@ -131,10 +140,12 @@ final class TextOutput {
         printGroup("before", r.before());
         printGroup("after ", r.after());
         TTestResult t = r.decidingTest();
-        out.printf(Locale.ROOT, "  %s: t = %s, df = %s, p = %s%s; difference %s, %s CI (%s, %s)%n",
+        if (t != null) {
+            out.printf(Locale.ROOT, "  %s: t = %s, df = %s, p = %s%s; difference %s, %s CI (%s, %s)%n",
                 t.method().description(), Format.num(t.t()), Format.num(t.df()), Format.p(t.p()),
                 r.holmP() == null ? "" : " (Holm-adjusted " + Format.p(r.holmP()) + ")", Format.num(t.estimate()),
                 Format.percent(t.confidenceLevel()), Format.num(t.ciLower()), Format.num(t.ciUpper()));
+        }
         if (!r.paired() && r.method() != org.holdpoint.stats.LocationMethod.POOLED && r.pooled() != null) {
             out.printf(Locale.ROOT, "  (for reference, pooled two-sample t: t = %s, df = %s, p = %s; not used for "
                     + "the verdict because equal variances were not asserted)%n", Format.num(r.pooled().t()),
@@ -234,6 +245,10 @@ final class TextOutput {
     }
 
     private void printGroup(String label, Descriptives d) {
+        if (d == null) {
+            out.printf(Locale.ROOT, "  %s n = 0 (no usable value)%n", label);
+            return;
+        }
         out.printf(Locale.ROOT, "  %s n = %d, mean = %s, sd = %s, median = %s, min = %s, max = %s%n", label, d.n(),
                 Format.num(d.mean()), Format.num(d.sd()), Format.num(d.median()), Format.num(d.min()),
                 Format.num(d.max()));

@@ -66,21 +66,151 @@ public final class DataImporter {
         SkipLog log = new SkipLog();
         Map<String, LayoutReader.Accum> accums = new LinkedHashMap<>();
         List<InputInfo> inputs = new ArrayList<>();
+        Choosing choosing = new Choosing(r.choice());
         if (one) {
-            Source s = readSource(r.file(), r.sheet(), r, Plan.Role.BOTH, log, accums);
+            Source s = readSource(r.file(), r.sheet(), r, Plan.Role.BOTH, log, accums, choosing);
             inputs.add(new InputInfo(s.name, s.sha256, s.sheet, s.plan.layout(), "data"));
+            choosing.chooseStacked(accums, log);
+            choosing.check();
             return finish(r, List.of(s), accums, inputs, log, s.plan.paired());
         }
         Map<String, LayoutReader.Accum> bAcc = new LinkedHashMap<>();
         Map<String, LayoutReader.Accum> aAcc = new LinkedHashMap<>();
         Source b = readSource(r.beforeFile(), r.beforeSheet() != null ? r.beforeSheet() : r.sheet(), r,
-                Plan.Role.BEFORE, log, bAcc);
+                Plan.Role.BEFORE, log, bAcc, choosing);
         Source a = readSource(r.afterFile(), r.afterSheet() != null ? r.afterSheet() : r.sheet(), r, Plan.Role.AFTER,
-                log, aAcc);
+                log, aAcc, choosing);
         inputs.add(new InputInfo(b.name, b.sha256, b.sheet, Layout.SEPARATE, "before"));
         inputs.add(new InputInfo(a.name, a.sha256, a.sheet, Layout.SEPARATE, "after"));
+        choosing.chooseStacked(bAcc, log);
+        choosing.chooseStacked(aAcc, log);
+        choosing.check();
         merge(bAcc, aAcc, accums, b, a, log);
         return finish(r, List.of(b, a), accums, inputs, log, r.paired() || b.plan.paired() || a.plan.paired());
+    }
+
+    /**
+     * The user's choice of characteristics applied to the files read: which columns are kept, and the
+     * check that every name chosen or ignored exists (a name that matches nothing is refused with the
+     * closest names, so that a misspelt criteria row never leaves a characteristic unjudged in silence).
+     */
+    private static final class Choosing {
+        private final ColumnChoice choice;
+        private final List<String> onlyKeys;
+        private final List<String> ignoreKeys;
+        /** Characteristic names found (key to name as written), over every file read. */
+        private final Map<String, String> found = new LinkedHashMap<>();
+        /** Every header name found (key to name as written), for --ignore-column. */
+        private final Map<String, String> columns = new LinkedHashMap<>();
+
+        Choosing(ColumnChoice choice) {
+            this.choice = choice;
+            this.onlyKeys = choice.onlyKeys();
+            this.ignoreKeys = choice.ignoreKeys();
+        }
+
+        private String why(String key) {
+            if (ignoreKeys.contains(key)) {
+                return "left out by the user's choice (ignored column)";
+            }
+            if (!onlyKeys.isEmpty() && !onlyKeys.contains(key)) {
+                return "not in the criteria, not analysed" + (choice.onlySource() == null ? ""
+                        : " (only the characteristics of " + choice.onlySource() + " are analysed)");
+            }
+            return null;
+        }
+
+        /** The plan with the characteristic columns the choice leaves out set aside. */
+        Plan choose(Plan plan) {
+            Header h = plan.header();
+            for (int c = 0; c < h.width(); c++) {
+                ColumnNames.Name n = h.name(c);
+                if (n != null) {
+                    columns.putIfAbsent(n.key(), n.raw().strip());
+                }
+            }
+            List<Plan.Target> kept = new ArrayList<>();
+            Map<Integer, String> more = new LinkedHashMap<>();
+            for (Plan.Target t : plan.targets()) {
+                if (t.name() == null) {
+                    kept.add(t);
+                    continue;
+                }
+                String key = ColumnNames.key(t.name());
+                found.putIfAbsent(key, t.name());
+                String why = why(key);
+                if (why == null) {
+                    kept.add(t);
+                } else if (t.column() >= 0) {
+                    more.put(t.column(), why);
+                } else {
+                    more.put(t.beforeCol(), why);
+                    more.put(t.afterCol(), why);
+                }
+            }
+            for (int c = 0; c < h.width(); c++) {
+                ColumnNames.Name n = h.name(c);
+                if (n != null && ignoreKeys.contains(n.key()) && !more.containsKey(c)
+                        && !plan.setAside().containsKey(c)) {
+                    more.put(c, "left out by the user's choice (ignored column)");
+                }
+            }
+            return more.isEmpty() ? plan : plan.withTargets(kept, more);
+        }
+
+        /** Stacked files name their characteristics per row: the choice is applied to what was read. */
+        void chooseStacked(Map<String, LayoutReader.Accum> accums, SkipLog log) {
+            List<String> dropped = new ArrayList<>();
+            var it = accums.entrySet().iterator();
+            while (it.hasNext()) {
+                LayoutReader.Accum a = it.next().getValue();
+                String key = ColumnNames.key(a.name);
+                found.putIfAbsent(key, a.name);
+                if (why(key) != null) {
+                    dropped.add("\"" + a.name + "\"");
+                    it.remove();
+                }
+            }
+            if (!dropped.isEmpty()) {
+                log.message(String.format(Locale.ROOT, "characteristics %s: %s", dropped.size() > 12
+                        ? String.join(", ", dropped.subList(0, 12)) + " and " + (dropped.size() - 12) + " more"
+                        : String.join(", ", dropped), !onlyKeys.isEmpty() ? "not in the criteria, not analysed"
+                                : "left out by the user's choice"));
+            }
+        }
+
+        /** Refuses a chosen or ignored name that matches nothing, naming the closest names found. */
+        void check() {
+            List<String> problems = new ArrayList<>();
+            for (int i = 0; i < onlyKeys.size(); i++) {
+                if (!found.containsKey(onlyKeys.get(i))) {
+                    problems.add(String.format(Locale.ROOT, "%s: the characteristic \"%s\" matches no "
+                            + "characteristic in the data%s", choice.onlySource() == null ? "the choice"
+                                    : choice.onlySource(), choice.only().get(i), Closest.describe(choice.only().get(i),
+                                            found.values())));
+                }
+            }
+            for (int i = 0; i < ignoreKeys.size(); i++) {
+                if (!columns.containsKey(ignoreKeys.get(i)) && !found.containsKey(ignoreKeys.get(i))) {
+                    List<String> all = new ArrayList<>(columns.values());
+                    all.addAll(found.values());
+                    problems.add(String.format(Locale.ROOT, "the column to ignore \"%s\" is not in the data%s",
+                            choice.ignore().get(i), Closest.describe(choice.ignore().get(i), all)));
+                }
+            }
+            if (!problems.isEmpty()) {
+                throw new ImportException("%s. Correct the name%s (case, spaces and a unit in brackets do not "
+                        + "matter) or remove %s", String.join("; ", problems), problems.size() == 1 ? "" : "s",
+                        problems.size() == 1 ? "it" : "them");
+            }
+            if (!onlyKeys.isEmpty() || !ignoreKeys.isEmpty()) {
+                boolean any = found.keySet().stream().anyMatch(k -> why(k) == null);
+                if (!any) {
+                    throw new ImportException("every characteristic in the data is left out by the choice of columns; "
+                            + "choose at least one to analyse");
+                }
+            }
+        }
     }
 
     /** A file read: its name, hash, sheet and plan, and the labels that matched no group. */
@@ -88,7 +218,7 @@ public final class DataImporter {
     }
 
     private Source readSource(Path path, String sheet, ImportRequest r, Plan.Role role, SkipLog log,
-            Map<String, LayoutReader.Accum> accums) {
+            Map<String, LayoutReader.Accum> accums, Choosing choosing) {
         String name = path.toString();
         FileKind kind = FileKind.sniff(path, name);
         String sha = Sha256.of(path, name);
@@ -110,13 +240,25 @@ public final class DataImporter {
             throw new ImportException(e, "file %s could not be read: %s. The file may be damaged; open it in its "
                     + "program, save a fresh copy and try again", name, e.getMessage());
         }
-        Header header = HeaderDetector.detect(data, r.headerRow());
+        Header header = HeaderDetector.detect(data, r.headerRowFor(role), labelKey(r.beforeLabel(), "before"),
+                labelKey(r.afterLabel(), "after"));
         if (header.row() > 1) {
             log.message(String.format(Locale.ROOT, "%s: header in row %d (rows above it are not read)", data.where(),
                     header.row()));
         }
-        Plan plan = LayoutResolver.resolve(data, header, r, role, stem(path));
+        if (header.unitsRow() > 0) {
+            log.message(String.format(Locale.ROOT, "%s: row %d holds the units of measure (read as units, not as "
+                    + "data)", data.where(), header.unitsRow()));
+        }
+        Plan plan = choosing.choose(LayoutResolver.resolve(data, header, r, role, stem(path)));
         log.message(describePlan(data, plan, r.layout() != null));
+        if (!plan.setAside().isEmpty()) {
+            List<String> aside = new ArrayList<>();
+            for (Map.Entry<Integer, String> e : plan.setAside().entrySet()) {
+                aside.add(col(plan.header(), e.getKey()) + ": " + e.getValue());
+            }
+            log.message(data.where() + ": columns not read as characteristics: " + String.join("; ", aside));
+        }
         if (data.sheet() != null && data.numbersFromText() > 0) {
             log.message(String.format(Locale.ROOT, "%s: %,d numbers stored as text were read as numbers", data.where(),
                     data.numbersFromText()));
@@ -127,6 +269,10 @@ public final class DataImporter {
             a.unknownLabels.addAll(unknown);
         }
         return new Source(name, sha, data.sheet(), plan, unknown);
+    }
+
+    private static String labelKey(String label, String dflt) {
+        return ColumnNames.key(label == null ? dflt : label);
     }
 
     private static String stem(Path path) {
@@ -151,6 +297,18 @@ public final class DataImporter {
         }
         if (p.charCol() >= 0) {
             sb.append("; characteristic column ").append(col(p.header(), p.charCol()));
+        }
+        if (p.unitCol() >= 0) {
+            sb.append("; unit id column ").append(col(p.header(), p.unitCol()));
+        }
+        if (p.lotCol() >= 0) {
+            sb.append("; lot column ").append(col(p.header(), p.lotCol()));
+        }
+        if (p.subgroupCol() >= 0) {
+            sb.append("; subgroup column ").append(col(p.header(), p.subgroupCol()));
+        }
+        if (p.sequenceCol() >= 0) {
+            sb.append("; run order from ").append(col(p.header(), p.sequenceCol()));
         }
         List<String> t = new ArrayList<>();
         for (Plan.Target target : p.targets()) {
@@ -181,7 +339,7 @@ public final class DataImporter {
             if (col == null) {
                 continue;
             }
-            int from = col.firstAtOrAfter(h.row() + 1);
+            int from = col.firstAtOrAfter(h.dataStart());
             if (h.name(c) == null) {
                 for (int i = from; i < col.size(); i++) {
                     log.skip(null, new Origin(data.file(), data.sheet(), col.row(i), c + 1), SkipReason.OUTSIDE_COLUMNS,
@@ -199,7 +357,7 @@ public final class DataImporter {
     }
 
     private static boolean used(Plan p, int c) {
-        if (c == p.groupCol() || c == p.charCol() || c == p.unitCol() || c == p.lotCol() || c == p.subgroupCol()
+        if (p.setAside().containsKey(c) || c == p.groupCol() || c == p.charCol() || c == p.unitCol() || c == p.lotCol() || c == p.subgroupCol()
                 || c == p.sequenceCol() || c == p.uomCol()) {
             return true;
         }
@@ -261,37 +419,112 @@ public final class DataImporter {
         Map<String, Long> used = new LinkedHashMap<>();
         long total = 0;
         List<String> problems = new ArrayList<>();
-        for (LayoutReader.Accum a : accums.values()) {
-            String p = missingGroup(a, sources);
+        Set<String> incomplete = new java.util.HashSet<>();
+        for (Map.Entry<String, LayoutReader.Accum> e : accums.entrySet()) {
+            String p = missingGroup(e.getValue(), sources);
             if (p != null) {
                 problems.add(p);
+                incomplete.add(e.getKey());
             }
         }
-        if (!problems.isEmpty()) {
+        if (problems.size() == accums.size()) {
             throw new ImportException("%s%s", problems.size() > 3 ? problems.size() + " characteristics cannot be "
                     + "analysed; the first: " : "", String.join("; ", problems.subList(0, Math.min(3,
                             problems.size()))));
         }
-        for (LayoutReader.Accum a : accums.values()) {
+        for (String p : problems) {
+            log.message(p + " (reported as not assessable; the other characteristics are analysed)");
+        }
+        for (Map.Entry<String, LayoutReader.Accum> e : accums.entrySet()) {
+            LayoutReader.Accum a = e.getValue();
             GroupBuilder b = a.before;
             GroupBuilder f = a.after;
+            if (b == null) {
+                b = f.emptyCopy();
+            }
+            if (f == null) {
+                f = b.emptyCopy();
+            }
             List<String> unmatched = List.of();
-            if (paired) {
-                Pairing.Matched m = Pairing.match(a.name, b, f, log);
-                b = m.before();
-                f = m.after();
-                unmatched = m.unmatched();
+            if (paired && !incomplete.contains(e.getKey())) {
+                try {
+                    Pairing.Matched m = Pairing.match(a.name, b, f, log);
+                    b = m.before();
+                    f = m.after();
+                    unmatched = m.unmatched();
+                } catch (ImportException noPair) {
+                    // reported on this characteristic (not assessable); the other characteristics go on
+                    log.message(noPair.getMessage() + " (reported as not assessable)");
+                    unmatched = unitIds(b, f);
+                    b = b.emptyCopy();
+                    f = f.emptyCopy();
+                }
                 if (!unmatched.isEmpty()) {
                     log.message(String.format(Locale.ROOT, "characteristic %s: %d unit(s) found in only one group, left "
                             + "out of the paired analysis: %s", a.name, unmatched.size(), unmatched.size() > 20
                                     ? String.join(", ", unmatched.subList(0, 20)) + ", …" : String.join(", ", unmatched)));
                 }
+            } else if (paired) {
+                b = b.emptyCopy();
+                f = f.emptyCopy();
             }
             out.add(new CharacteristicData(a.name, a.unit, b.build(), f.build(), paired, unmatched));
             used.put(a.name, (long) b.size() + f.size());
             total += b.size() + f.size();
         }
+        if (!paired) {
+            String hint = pairingHint(out);
+            if (hint != null) {
+                log.message(hint);
+            }
+        }
         return new Dataset(out, inputs, log.report(total, used));
+    }
+
+    /** Every unit id of both groups, in order, without repeats. */
+    private static List<String> unitIds(GroupBuilder b, GroupBuilder f) {
+        java.util.LinkedHashSet<String> ids = new java.util.LinkedHashSet<>();
+        for (GroupBuilder g : new GroupBuilder[] {b, f}) {
+            for (int i = 0; i < g.size(); i++) {
+                if (g.unit(i) != null) {
+                    ids.add(g.unit(i));
+                }
+            }
+        }
+        return new ArrayList<>(ids);
+    }
+
+    /** Share of common unit ids from which the data are said to look paired (common practice, no source). */
+    static final double PAIRING_HINT_OVERLAP = 0.8;
+
+    /**
+     * When the before and the after group carry the same unit ids (at least 80 % of the ids of the smaller
+     * group occur in both) but the data are read as independent groups: a hint to pair them.
+     */
+    static String pairingHint(List<CharacteristicData> data) {
+        for (CharacteristicData c : data) {
+            if (!c.before().hasUnits() || !c.after().hasUnits() || c.before().size() < 2 || c.after().size() < 2) {
+                continue;
+            }
+            Set<String> b = new java.util.HashSet<>();
+            for (int i = 0; i < c.before().size(); i++) {
+                b.add(c.before().unit(i));
+            }
+            Set<String> a = new java.util.HashSet<>();
+            for (int i = 0; i < c.after().size(); i++) {
+                a.add(c.after().unit(i));
+            }
+            long common = a.stream().filter(b::contains).count();
+            int smaller = Math.min(a.size(), b.size());
+            if (smaller >= 2 && common >= PAIRING_HINT_OVERLAP * smaller) {
+                return String.format(Locale.ROOT, "PAIRING HINT: %d of the %d unit ids of characteristic \"%s\" occur "
+                        + "in both the before and the after group, so the same parts seem to have been measured "
+                        + "twice, but they were analysed as independent groups. If so, analyse again with --paired "
+                        + "(in the window: the layout \"paired\" on the Data step); the values are then "
+                        + "matched by unit id and the paired tests are used", common, smaller, c.name());
+            }
+        }
+        return null;
     }
 
     /** A message when a characteristic lacks the before or the after values, else null. */

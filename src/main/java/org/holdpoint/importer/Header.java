@@ -7,14 +7,30 @@ import java.util.List;
  * The header row of a sheet: its 1-based row and the parsed name of each 0-based column (null for a
  * column without a header).
  *
- * @param row   the 1-based header row
- * @param names the names per column
+ * @param row      the 1-based header row
+ * @param names    the names per column
+ * @param unitsRow the 1-based row of units of measure directly under the header, or 0 when there is none
  */
-record Header(int row, List<ColumnNames.Name> names) {
+record Header(int row, List<ColumnNames.Name> names, int unitsRow) {
 
     /** Copies the list (nulls allowed). */
     Header {
         names = java.util.Collections.unmodifiableList(new ArrayList<>(names));
+    }
+
+    /**
+     * A header without a units row.
+     *
+     * @param row   the 1-based header row
+     * @param names the names per column
+     */
+    Header(int row, List<ColumnNames.Name> names) {
+        this(row, names, 0);
+    }
+
+    /** @return the first row that may hold data: below the header and its units row */
+    int dataStart() {
+        return (unitsRow > 0 ? unitsRow : row) + 1;
     }
 
     /** @return the number of columns the header spans (up to its last named column) */

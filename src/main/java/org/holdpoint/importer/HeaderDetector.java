@@ -7,8 +7,12 @@ import java.util.List;
  * Finds the header row: the last row without numbers above the first run of three data rows (rows
  * holding a number) whose texts occur only once in their columns (repeated texts are
  * group labels or text values, i.e. data); title rows above the header are passed over. Merged header cells lend their text to
- * every column they span; a merged cell spanning several columns in the row above the header becomes
- * a prefix ("Bore (mm)" over "before" and "after" gives "Bore before" and "Bore after", unit mm).
+ * every column they span. A merged cell spanning several columns in the row above the header names
+ * the characteristic only over group labels ("Bore (mm)" over "before" and "after" gives "Bore before"
+ * and "Bore after", unit mm); over real names ("Dimensions" over "Overall length" and "Width") it is a
+ * band and is not part of the names. A row of units of measure directly under the header (cells that
+ * are all units or blank, such as "mm", "g", "°C", "µm") is recognised, not read as data, and lends
+ * its unit to every name that carries none.
  */
 final class HeaderDetector {
     /** How many rows from the top are searched for the header. */
@@ -25,6 +29,18 @@ final class HeaderDetector {
      * @throws ImportException for an empty sheet or one without a header
      */
     static Header detect(SheetData data, Integer given) {
+        return detect(data, given, "before", "after");
+    }
+
+    /**
+     * @param data        the sheet
+     * @param given       the 1-based header row the user named, or null to detect
+     * @param beforeLabel the comparison key of the before label
+     * @param afterLabel  the comparison key of the after label
+     * @return the header
+     * @throws ImportException for an empty sheet or one without a header
+     */
+    static Header detect(SheetData data, Integer given, String beforeLabel, String afterLabel) {
         if (data.cellCount() == 0) {
             throw new ImportException("%s holds no data (it is empty). Choose the sheet or file that holds the "
                     + "measurements", data.where());
@@ -79,7 +95,102 @@ final class HeaderDetector {
                 }
             }
         }
-        return new Header(row, names(data, row));
+        int unitsRow = 0;
+        if (given == null && row > 1 && unitsRow(data, row) && nonBlank[row - 1] && !number[row - 1]) {
+            unitsRow = row;
+            row = row - 1;
+        } else if (row < data.lastRow() && unitsRow(data, row + 1)) {
+            unitsRow = row + 1;
+        }
+        List<ColumnNames.Name> names = names(data, row, beforeLabel, afterLabel);
+        if (unitsRow > 0) {
+            names = withUnits(data, names, unitsRow);
+        }
+        return new Header(row, names, unitsRow);
+    }
+
+    /** Words that are units of measure (compared in lower case), for recognising a units row. */
+    private static final java.util.Set<String> UNIT_WORDS = java.util.Set.of("mm", "cm", "m", "km", "µm", "μm", "um",
+            "nm", "in", "inch", "ft", "mil", "µin", "uin", "g", "kg", "mg", "t", "n", "kn", "mn", "knm", "pa",
+            "kpa", "mpa", "gpa", "bar", "mbar", "psi", "ksi", "hrc", "hrb", "hra", "hv", "hv10", "hv30", "hb", "hbw",
+            "s", "ms", "µs", "min", "h", "hz", "khz", "rpm", "1/min", "v", "mv", "a", "ma", "w", "kw", "ω", "ohm",
+            "°", "deg", "°c", "°f", "k", "c", "f", "%", "‰", "ppm", "l", "ml", "db", "lux", "j", "kj", "rad", "mrad",
+            "gf", "kgf", "lbf", "lb", "oz", "ra", "rz", "mm2", "mm3", "mm²", "mm³", "cm²", "cm³", "m²", "m³", "n·m",
+            "n m", "-", "—", "–", "1", "pcs", "stk");
+    /** Labels that may open a units row in its first cell. */
+    private static final java.util.Set<String> UNIT_ROW_LABELS = java.util.Set.of("unit", "units", "uom", "einheit",
+            "einheiten", "unit of measure", "dimension");
+
+    /** Whether a row holds only units of measure (and blanks), at least one of them, and no number. */
+    static boolean unitsRow(SheetData data, int row) {
+        int units = 0;
+        for (int c = 0; c < data.columnCount(); c++) {
+            SheetColumn col = data.column(c);
+            if (col == null) {
+                continue;
+            }
+            int i = col.indexOfRow(row);
+            if (i < 0) {
+                continue;
+            }
+            if (col.kind(i) == CellKind.NUMBER) {
+                return false;
+            }
+            String t = data.display(col, i);
+            if (t == null || t.isBlank()) {
+                continue;
+            }
+            if (isUnit(t)) {
+                units++;
+            } else if (!UNIT_ROW_LABELS.contains(ColumnNames.key(t).replace(":", "").strip())) {
+                return false;
+            }
+        }
+        return units > 0;
+    }
+
+    /** A unit of measure, bare or in brackets, possibly a quotient or product of units ("N·m", "mm/s", "l/min"). */
+    static boolean isUnit(String text) {
+        String t = text.strip().toLowerCase(java.util.Locale.ROOT);
+        if (t.length() >= 2 && (t.startsWith("(") && t.endsWith(")") || t.startsWith("[") && t.endsWith("]"))) {
+            t = t.substring(1, t.length() - 1).strip();
+        }
+        if (t.isEmpty() || t.length() > 16) {
+            return false;
+        }
+        if (UNIT_WORDS.contains(t)) {
+            return true;
+        }
+        for (String part : t.split("[/·*]")) {
+            String p = part.strip();
+            if (!UNIT_WORDS.contains(p) && !UNIT_WORDS.contains(p.replaceAll("[\\^]?[0-9²³]+$", ""))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static List<ColumnNames.Name> withUnits(SheetData data, List<ColumnNames.Name> names, int unitsRow) {
+        List<ColumnNames.Name> out = new ArrayList<>();
+        for (int c = 0; c < names.size(); c++) {
+            ColumnNames.Name n = names.get(c);
+            String u = data.display(unitsRow, c);
+            if (n != null && n.unit() == null && u != null && isUnit(u)) {
+                String unit = u.strip();
+                if (unit.length() >= 2 && (unit.startsWith("(") || unit.startsWith("["))) {
+                    unit = unit.substring(1, unit.length() - 1).strip();
+                }
+                n = new ColumnNames.Name(n.raw(), n.display(), n.key(), unit);
+            }
+            out.add(n);
+        }
+        return out;
+    }
+
+    /** Whether a header text is a group label, alone or with a unit ("before", "After (mm)"). */
+    private static boolean isLabel(String text, String beforeLabel, String afterLabel) {
+        String k = ColumnNames.parse(text).key();
+        return k.equals(beforeLabel) || k.equals(afterLabel);
     }
 
     /**
@@ -146,7 +257,7 @@ final class HeaderDetector {
         return bestStart;
     }
 
-    private static List<ColumnNames.Name> names(SheetData data, int row) {
+    private static List<ColumnNames.Name> names(SheetData data, int row, String beforeLabel, String afterLabel) {
         int width = 0;
         String[] texts = new String[data.columnCount()];
         for (int c = 0; c < data.columnCount(); c++) {
@@ -168,7 +279,7 @@ final class HeaderDetector {
                         String lower = texts[c];
                         if (lower == null || lower.isBlank()) {
                             texts[c] = prefix;
-                        } else {
+                        } else if (isLabel(lower, beforeLabel, afterLabel)) {
                             ColumnNames.Name l = ColumnNames.parse(lower);
                             String unit = l.unit() != null ? l.unit() : p.unit();
                             texts[c] = p.display() + " " + l.display() + (unit == null ? "" : " (" + unit + ")");

@@ -29,12 +29,57 @@ import org.holdpoint.study.Layout;
  * @param delimiter            text field delimiter; null to detect
  * @param decimalSeparator     '.' or ','; null to detect
  * @param headerRow            1-based header row; null to detect
+ * @param beforeHeaderRow      1-based header row of the before file (two-file input); null: as headerRow
+ * @param afterHeaderRow       1-based header row of the after file (two-file input); null: as headerRow
+ * @param choice               which characteristics to analyse; null means every characteristic column
  */
 public record ImportRequest(Path file, Path beforeFile, Path afterFile, String sheet, String beforeSheet,
         String afterSheet, Layout layout, boolean paired, String groupColumn, String valueColumn,
         String characteristicColumn, String beforeColumn, String afterColumn, String beforeLabel, String afterLabel,
         String unitIdColumn, String lotColumn, String subgroupColumn, String sequenceColumn, Character delimiter,
-        Character decimalSeparator, Integer headerRow) {
+        Character decimalSeparator, Integer headerRow, Integer beforeHeaderRow, Integer afterHeaderRow,
+        ColumnChoice choice) {
+
+    /** A request with no column choice means every column; the header rows are validated here. */
+    public ImportRequest {
+        choice = choice == null ? ColumnChoice.ALL : choice;
+        for (Integer h : new Integer[] {headerRow, beforeHeaderRow, afterHeaderRow}) {
+            if (h != null && h < 1) {
+                throw new ImportException("a header row is counted from 1, got %d", h);
+            }
+        }
+    }
+
+    /**
+     * The header row to use for one group's file.
+     *
+     * @param role which file: the one file, the before file or the after file
+     * @return the 1-based row, or null to detect
+     */
+    Integer headerRowFor(Plan.Role role) {
+        return switch (role) {
+            case BEFORE -> beforeHeaderRow != null ? beforeHeaderRow : headerRow;
+            case AFTER -> afterHeaderRow != null ? afterHeaderRow : headerRow;
+            case BOTH -> headerRow;
+        };
+    }
+
+    /**
+     * @param beforeRow the 1-based header row of the before file (null: as the common header row)
+     * @param afterRow  the 1-based header row of the after file (null: as the common header row)
+     * @return this request with the per-file header rows replaced
+     */
+    public ImportRequest withHeaderRows(Integer beforeRow, Integer afterRow) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeRow, afterRow, choice);
+    }
+
+    /**
+     * @param newChoice which characteristics to analyse
+     * @return this request with the column choice replaced
+     */
+    public ImportRequest withChoice(ColumnChoice newChoice) {
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, newChoice);
+    }
 
     /**
      * A request with everything detected.
@@ -44,7 +89,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      */
     public static ImportRequest of(Path file) {
         return new ImportRequest(file, null, null, null, null, null, null, false, null, null, null, null, null, null,
-                null, null, null, null, null, null, null, null);
+                null, null, null, null, null, null, null, null, null, null, null);
     }
 
     /**
@@ -52,7 +97,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with sheet replaced
      */
     public ImportRequest withSheet(String sheet) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -60,7 +105,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with beforeSheet replaced
      */
     public ImportRequest withBeforeSheet(String beforeSheet) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -68,7 +113,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with afterSheet replaced
      */
     public ImportRequest withAfterSheet(String afterSheet) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -76,7 +121,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with layout replaced
      */
     public ImportRequest withLayout(Layout layout) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -84,7 +129,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with paired replaced
      */
     public ImportRequest withPaired(boolean paired) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -92,7 +137,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with groupColumn replaced
      */
     public ImportRequest withGroupColumn(String groupColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -100,7 +145,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with valueColumn replaced
      */
     public ImportRequest withValueColumn(String valueColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -108,7 +153,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with characteristicColumn replaced
      */
     public ImportRequest withCharacteristicColumn(String characteristicColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -116,7 +161,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with beforeColumn replaced
      */
     public ImportRequest withBeforeColumn(String beforeColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -124,7 +169,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with afterColumn replaced
      */
     public ImportRequest withAfterColumn(String afterColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -132,7 +177,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with unitIdColumn replaced
      */
     public ImportRequest withUnitIdColumn(String unitIdColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -140,7 +185,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with lotColumn replaced
      */
     public ImportRequest withLotColumn(String lotColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -148,7 +193,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with subgroupColumn replaced
      */
     public ImportRequest withSubgroupColumn(String subgroupColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -156,7 +201,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with sequenceColumn replaced
      */
     public ImportRequest withSequenceColumn(String sequenceColumn) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -164,7 +209,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with delimiter replaced
      */
     public ImportRequest withDelimiter(Character delimiter) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -172,7 +217,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with decimalSeparator replaced
      */
     public ImportRequest withDecimalSeparator(Character decimalSeparator) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -180,7 +225,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with headerRow replaced
      */
     public ImportRequest withHeaderRow(Integer headerRow) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -189,7 +234,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      * @return this request with the labels replaced
      */
     public ImportRequest withLabels(String beforeLabel, String afterLabel) {
-        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+        return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired, groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel, unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow, beforeHeaderRow, afterHeaderRow, choice);
     }
 
     /**
@@ -201,6 +246,6 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
      */
     public static ImportRequest ofTwo(Path beforeFile, Path afterFile) {
         return new ImportRequest(null, beforeFile, afterFile, null, null, null, null, false, null, null, null, null,
-                null, null, null, null, null, null, null, null, null, null);
+                null, null, null, null, null, null, null, null, null, null, null, null, null);
     }
 }

@@ -45,7 +45,7 @@ final class LayoutReader {
         this.plan = plan;
         this.log = log;
         this.accums = accums;
-        this.first = plan.header().row() + 1;
+        this.first = plan.header().dataStart();
         this.rows = rowsWithData();
     }
 

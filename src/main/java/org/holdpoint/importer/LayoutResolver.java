@@ -29,6 +29,7 @@ final class LayoutResolver {
     private final Plan.Role role;
     private final String defaultName;
     private final Set<Integer> reserved = new HashSet<>();
+    private final java.util.SortedMap<Integer, String> setAside = new java.util.TreeMap<>();
 
     private LayoutResolver(SheetData data, Header header, ImportRequest req, Plan.Role role, String defaultName) {
         this.data = data;
@@ -57,13 +58,30 @@ final class LayoutResolver {
             throw new ImportException("the before label \"%s\" and the after label \"%s\" must be two different, "
                     + "non-blank texts", req.beforeLabel(), req.afterLabel());
         }
-        int unitCol = role(req.unitIdColumn(), ColumnNames.UNIT_ID, "unit id");
-        int lotCol = role(req.lotColumn(), ColumnNames.LOT, "lot");
-        int subgroupCol = role(req.subgroupColumn(), ColumnNames.SUBGROUP, "subgroup");
-        int sequenceCol = role(req.sequenceColumn(), ColumnNames.SEQUENCE, "sequence");
-        int uomCol = role(null, ColumnNames.MEASUREMENT_UNIT, "unit of measure");
-        int charCol = role(req.characteristicColumn(), ColumnNames.CHARACTERISTIC, "characteristic");
+        int unitCol = role(req.unitIdColumn(), ColumnNames.Trace.UNIT_ID, "unit id");
+        int lotCol = role(req.lotColumn(), ColumnNames.Trace.LOT, "lot");
+        int subgroupCol = role(req.subgroupColumn(), ColumnNames.Trace.SUBGROUP, "subgroup");
+        int sequenceCol = role(req.sequenceColumn(), ColumnNames.Trace.SEQUENCE, "sequence");
+        if (sequenceCol < 0) {
+            sequenceCol = role(null, ColumnNames.Trace.DATE, "date");
+        }
+        int uomCol = role(null, ColumnNames.Trace.MEASUREMENT_UNIT, "unit of measure");
+        int charCol = named(req.characteristicColumn(), "characteristic");
+        if (charCol < 0) {
+            charCol = findAny(ColumnNames.CHARACTERISTIC);
+        }
+        if (charCol >= 0) {
+            reserved.add(charCol);
+        }
         int groupCol = named(req.groupColumn(), "group");
+        for (int c = 0; c < header.width(); c++) {
+            ColumnNames.Name n = header.name(c);
+            ColumnNames.Trace t = n == null ? null : ColumnNames.trace(n.key());
+            if (t != null && !reserved.contains(c) && c != groupCol) {
+                reserved.add(c);
+                setAside.put(c, t.words() + " (a trace column, not a characteristic)");
+            }
+        }
         boolean groupNamed = groupCol >= 0;
         if (groupCol < 0) {
             groupCol = findAny(ColumnNames.GROUP);
@@ -171,8 +189,9 @@ final class LayoutResolver {
                     + "column option; pairs are never matched by row position", data.where(), header.row(),
                     header.describe());
         }
+        setAside.remove(groupCol);
         return new Plan(layout, paired, role, header, groupCol, charCol, targets, unitCol, lotCol, subgroupCol,
-                sequenceCol, uomCol, bKey, aKey);
+                sequenceCol, uomCol, bKey, aKey, setAside);
     }
 
     private Plan.Target target(int col, boolean perRowName) {
@@ -250,10 +269,15 @@ final class LayoutResolver {
         return out.isBlank() ? display : out.strip();
     }
 
-    private int role(String given, Set<String> synonyms, String what) {
+    private int role(String given, ColumnNames.Trace trace, String what) {
         int c = named(given, what);
         if (c < 0) {
-            c = findAny(synonyms);
+            for (int k = 0; k < header.width() && c < 0; k++) {
+                ColumnNames.Name n = header.name(k);
+                if (n != null && !reserved.contains(k) && ColumnNames.trace(n.key()) == trace) {
+                    c = k;
+                }
+            }
         }
         if (c >= 0) {
             reserved.add(c);
@@ -299,13 +323,13 @@ final class LayoutResolver {
     private int labelColumn(String bKey, String aKey) {
         for (int c = 0; c < data.columnCount(); c++) {
             SheetColumn col = data.column(c);
-            if (col == null || reserved.contains(c)) {
+            if (col == null || reserved.contains(c) && !setAside.containsKey(c)) {
                 continue;
             }
             boolean seenB = false;
             boolean seenA = false;
             boolean other = false;
-            for (int i = col.firstAtOrAfter(header.row() + 1); i < col.size() && !other; i++) {
+            for (int i = col.firstAtOrAfter(header.dataStart()); i < col.size() && !other; i++) {
                 if (col.kind(i) == CellKind.NUMBER) {
                     other = true;
                     break;
@@ -332,7 +356,7 @@ final class LayoutResolver {
         if (col == null) {
             return false;
         }
-        for (int i = col.firstAtOrAfter(header.row() + 1); i < col.size(); i++) {
+        for (int i = col.firstAtOrAfter(header.dataStart()); i < col.size(); i++) {
             CellKind k = col.kind(i);
             if (k == CellKind.NUMBER || k == CellKind.OTHER_SEPARATOR || k == CellKind.NOT_FINITE) {
                 return true;

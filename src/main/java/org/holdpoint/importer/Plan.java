@@ -20,9 +20,12 @@ import org.holdpoint.study.Layout;
  * @param uomCol      unit-of-measure column (stacked with a characteristic column)
  * @param beforeKey   the before label's key
  * @param afterKey    the after label's key
+ * @param setAside    columns recognised as trace columns (or left out by the user's choice) that are not read
+ *                    as characteristics, with what each was taken as, in column order
  */
 record Plan(Layout layout, boolean paired, Role role, Header header, int groupCol, int charCol, List<Target> targets,
-        int unitCol, int lotCol, int subgroupCol, int sequenceCol, int uomCol, String beforeKey, String afterKey) {
+        int unitCol, int lotCol, int subgroupCol, int sequenceCol, int uomCol, String beforeKey, String afterKey,
+        java.util.SortedMap<Integer, String> setAside) {
 
     /** Which groups a sheet holds. */
     enum Role {
@@ -49,5 +52,18 @@ record Plan(Layout layout, boolean paired, Role role, Header header, int groupCo
     /** Copies the targets. */
     Plan {
         targets = List.copyOf(targets);
+        setAside = java.util.Collections.unmodifiableSortedMap(new java.util.TreeMap<>(setAside));
+    }
+
+    /**
+     * @param kept the targets to read
+     * @param more further columns set aside, with why
+     * @return this plan reading only {@code kept}
+     */
+    Plan withTargets(List<Target> kept, java.util.Map<Integer, String> more) {
+        java.util.SortedMap<Integer, String> all = new java.util.TreeMap<>(setAside);
+        all.putAll(more);
+        return new Plan(layout, paired, role, header, groupCol, charCol, kept, unitCol, lotCol, subgroupCol,
+                sequenceCol, uomCol, beforeKey, afterKey, all);
     }
 }

@@ -59,6 +59,19 @@ final class DetailPlan {
         s.height(r + 1, lines(reasons, 80) * 12f + 4);
         descriptives(r + 3, n, c, d);
         criteria(r + 3, n, c, d);
+        if (c.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+            s.text(r + 13, c0, "No test was computed: the data of this characteristic cannot show a change (see the "
+                    + "verdict above). The other characteristics were analysed.", Style.WRAP, n + ": not assessable");
+            s.merge(r + 13, r + 13, c0, c0 + 5);
+            s.height(r + 13, 28f);
+            s.text(r + 15, c0, "Notes", Style.HEADER, n + ": notes header");
+            s.merge(r + 15, r + 15, c0, c0 + 5);
+            String notes = c.notes().isEmpty() ? "none" : String.join("\n", c.notes());
+            s.text(r + 16, c0, notes, Style.WRAP, n + ": notes");
+            s.merge(r + 16, r + 16, c0, c0 + 5);
+            s.height(r + 16, lines(notes, 110) * 12f + 4);
+            return r + 18;
+        }
         difference(r + 13, n, c, d);
         equivalence(r + 13, n, c, d);
         spread(r + 23, n, c);
@@ -119,13 +132,16 @@ final class DetailPlan {
         Descriptives b = c.before();
         Descriptives a = c.after();
         int dd = WorkbookPlan.dataDecimals(plan.data(n));
-        row(r + 1, "n", (double) b.n(), (double) a.n(), Style.INTEGER, 0, n + ": n");
-        row(r + 2, "Mean", b.mean(), a.mean(), Style.NUMBER, d, n + ": mean");
-        row(r + 3, "Standard deviation (n \u2212 1)", WorkbookPlan.finite(b.sd()), WorkbookPlan.finite(a.sd()),
-                Style.NUMBER, d, n + ": sd");
-        row(r + 4, "Median (quantile type 7)", b.median(), a.median(), Style.NUMBER, d, n + ": median");
-        row(r + 5, "Minimum", b.min(), a.min(), Style.NUMBER, dd, n + ": minimum");
-        row(r + 6, "Maximum", b.max(), a.max(), Style.NUMBER, dd, n + ": maximum");
+        row(r + 1, "n", b == null ? 0.0 : b.n(), a == null ? 0.0 : a.n(), Style.INTEGER, 0, n + ": n");
+        row(r + 2, "Mean", b == null ? null : b.mean(), a == null ? null : a.mean(), Style.NUMBER, d, n + ": mean");
+        row(r + 3, "Standard deviation (n \u2212 1)", b == null ? null : WorkbookPlan.finite(b.sd()),
+                a == null ? null : WorkbookPlan.finite(a.sd()), Style.NUMBER, d, n + ": sd");
+        row(r + 4, "Median (quantile type 7)", b == null ? null : b.median(), a == null ? null : a.median(),
+                Style.NUMBER, d, n + ": median");
+        row(r + 5, "Minimum", b == null ? null : b.min(), a == null ? null : a.min(), Style.NUMBER, dd,
+                n + ": minimum");
+        row(r + 6, "Maximum", b == null ? null : b.max(), a == null ? null : a.max(), Style.NUMBER, dd,
+                n + ": maximum");
     }
 
     private void row(int r, String label, Double before, Double after, Style style, int d, String what) {

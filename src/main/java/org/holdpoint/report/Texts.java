@@ -51,6 +51,7 @@ final class Texts {
             case FAILED -> "\u2716";
             case INCONCLUSIVE -> "?";
             case NOT_ASSESSED -> "\u2013";
+            case NOT_ASSESSABLE -> "\u2298";
         };
     }
 
@@ -63,7 +64,7 @@ final class Texts {
             case PASSED -> Style.PASSED;
             case FAILED -> Style.FAILED;
             case INCONCLUSIVE -> Style.INCONCLUSIVE;
-            case NOT_ASSESSED -> Style.NOT_ASSESSED;
+            case NOT_ASSESSED, NOT_ASSESSABLE -> Style.NOT_ASSESSED;
         };
     }
 

@@ -142,18 +142,21 @@ final class WorkbookPlan {
         s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
         s.text(row, c0 + 1, n, Style.CELL, n + ": name");
         s.text(row, c0 + 2, c.unit() == null ? "" : c.unit(), Style.CELL, n + ": unit");
-        s.text(row, c0 + 3, c.before().n() + " / " + c.after().n(), Style.CELL, n + ": n before / after");
-        s.number(row, c0 + 4, c.before().mean(), Style.NUMBER, d, n + ": mean before");
-        s.number(row, c0 + 5, c.after().mean(), Style.NUMBER, d, n + ": mean after");
+        s.text(row, c0 + 3, (c.before() == null ? 0 : c.before().n()) + " / " + (c.after() == null ? 0 : c.after().n()),
+                Style.CELL, n + ": n before / after");
+        s.number(row, c0 + 4, c.before() == null ? null : c.before().mean(), Style.NUMBER, d, n + ": mean before");
+        s.number(row, c0 + 5, c.after() == null ? null : c.after().mean(), Style.NUMBER, d, n + ": mean after");
         var t = c.decidingTest();
-        s.number(row, c0 + 6, t.estimate(), Style.NUMBER, d, n + ": difference");
-        s.text(row, c0 + 7, interval(t.ciLower(), t.ciUpper(), d), Style.CELL, n + ": CI of the difference");
+        s.number(row, c0 + 6, t == null ? null : t.estimate(), Style.NUMBER, d, n + ": difference");
+        s.text(row, c0 + 7, t == null ? "" : interval(t.ciLower(), t.ciUpper(), d), Style.CELL,
+                n + ": CI of the difference");
         s.text(row, c0 + 8, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
                 Style.CELL, n + ": margin");
         EquivalenceResult eq = c.decidingTost();
         s.text(row, c0 + 9, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL,
                 n + ": equivalence CI");
-        s.text(row, c0 + 10, eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL,
+        s.text(row, c0 + 10, c.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE
+                ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL,
                 n + ": equivalence conclusion");
         s.number(row, c0 + 11, c.variance() == null ? null : c.variance().ratio(), Style.NUMBER, 3,
                 n + ": variance ratio");

@@ -44,6 +44,16 @@ public record AnalysisSettings(double alpha, boolean equalVariances, boolean hol
      * @return the resolved criteria
      */
     public CharacteristicSettings resolve(String name) {
-        return defaults.overriddenBy(perCharacteristic.get(name)).overriddenBy(overrides);
+        CharacteristicSettings own = perCharacteristic.get(name);
+        if (own == null) {
+            String key = NameKeys.key(name);
+            for (Map.Entry<String, CharacteristicSettings> e : perCharacteristic.entrySet()) {
+                if (NameKeys.key(e.getKey()).equals(key)) {
+                    own = e.getValue();
+                    break;
+                }
+            }
+        }
+        return defaults.overriddenBy(own).overriddenBy(overrides);
     }
 }

@@ -24,7 +24,12 @@ public record Verdict(Status status, List<String> reasons) {
         /** Equivalence could not be shown either way: more data are needed. */
         INCONCLUSIVE("inconclusive"),
         /** No margin was set, so equivalence was not assessed. */
-        NOT_ASSESSED("not assessed");
+        NOT_ASSESSED("not assessed"),
+        /**
+         * The data cannot be assessed at all (no variation at the measurement resolution, too few values,
+         * no usable value in a group); the reasons say why. The other characteristics are analysed.
+         */
+        NOT_ASSESSABLE("not assessable");
 
         private final String words;
 

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import org.holdpoint.importer.ColumnChoice;
 import org.holdpoint.importer.DataImporter;
 import org.holdpoint.importer.ImportException;
 import org.holdpoint.importer.ImportRequest;
@@ -75,11 +76,17 @@ public final class AnalyzeUseCase {
             CharacteristicSettings defaults = settings.defaults().overriddenBy(fileDefaults);
             merged = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(), defaults, per,
                     settings.overrides(), settings.exclusions());
+            if (!per.isEmpty() && request.choice().only().isEmpty()) {
+                // the criteria list the characteristics: only those are analysed, and a row that matches no
+                // column is refused (with the closest names) instead of leaving a characteristic unjudged
+                effective = effective.withChoice(new ColumnChoice(List.copyOf(per.keySet()),
+                        request.choice().ignore(), "the settings file " + found));
+            }
             boolean pairedWanted = Boolean.TRUE.equals(defaults.paired())
                     || per.values().stream().anyMatch(c -> Boolean.TRUE.equals(c.paired()));
             if (pairedWanted && !request.paired()) {
                 // the criteria say the same units were measured twice: match them by unit id when reading
-                effective = request.withPaired(true);
+                effective = effective.withPaired(true);
             }
         }
         progress.step("reading the data", 0);

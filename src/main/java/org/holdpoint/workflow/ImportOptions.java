@@ -1,6 +1,8 @@
 package org.holdpoint.workflow;
 
 import java.nio.file.Path;
+import java.util.List;
+import org.holdpoint.importer.ColumnChoice;
 import org.holdpoint.importer.ImportRequest;
 import org.holdpoint.study.Layout;
 
@@ -31,6 +33,10 @@ public final class ImportOptions {
     private Character delimiter;
     private Character decimalSeparator;
     private Integer headerRow;
+    private Integer beforeHeaderRow;
+    private Integer afterHeaderRow;
+    private List<String> only = List.of();
+    private List<String> ignore = List.of();
 
     /**
      * One file holding both groups.
@@ -135,6 +141,28 @@ public final class ImportOptions {
     }
 
     /**
+     * @param before 1-based header row of the before file in a two-file study (null: detect or as the common one)
+     * @param after  1-based header row of the after file (null: detect or as the common one)
+     * @return this builder
+     */
+    public ImportOptions headerRows(Integer before, Integer after) {
+        beforeHeaderRow = before;
+        afterHeaderRow = after;
+        return this;
+    }
+
+    /**
+     * @param onlyNames   analyse only these characteristics (empty: all)
+     * @param ignoreNames leave these columns out
+     * @return this builder
+     */
+    public ImportOptions choose(List<String> onlyNames, List<String> ignoreNames) {
+        only = List.copyOf(onlyNames);
+        ignore = List.copyOf(ignoreNames);
+        return this;
+    }
+
+    /**
      * Text-file details; each may be null (detected).
      *
      * @param delim   field delimiter
@@ -152,6 +180,7 @@ public final class ImportOptions {
     ImportRequest toRequest() {
         return new ImportRequest(file, beforeFile, afterFile, sheet, beforeSheet, afterSheet, layout, paired,
                 groupColumn, valueColumn, characteristicColumn, beforeColumn, afterColumn, beforeLabel, afterLabel,
-                unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow);
+                unitIdColumn, lotColumn, subgroupColumn, sequenceColumn, delimiter, decimalSeparator, headerRow,
+                beforeHeaderRow, afterHeaderRow, new ColumnChoice(only, ignore, only.isEmpty() ? null : "--only"));
     }
 }

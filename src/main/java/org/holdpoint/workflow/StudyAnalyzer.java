@@ -52,21 +52,26 @@ public final class StudyAnalyzer {
         for (CharacteristicData c : data.characteristics()) {
             progress.checkCancelled();
             progress.step("analysing " + c.name(), (double) i++ / data.characteristics().size());
+            CharacteristicResult r;
             try {
-                CharacteristicResult r = analyzeOne(c, settings);
-                double unusable = data.report().unusableFraction(c.name());
-                if (unusable > UNUSABLE_LIMIT) {
-                    List<String> notes = new ArrayList<>(r.notes());
-                    notes.add(String.format(Locale.ROOT, "%.0f %% of this characteristic's cells could not be used "
-                            + "(see the import report); check the data before relying on the result", unusable * 100));
-                    r = r.with(r.holmP(), r.verdict(), notes);
-                }
-                results.add(r);
+                r = analyzeOne(c, settings);
             } catch (StatsException e) {
-                problems.add("characteristic \"" + c.name() + "\": " + e.getMessage());
+                // reported on this characteristic only; the rest of the study goes on
+                r = notAssessable(c, settings, e.getMessage());
             }
+            if (r.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+                problems.add("characteristic \"" + c.name() + "\": " + String.join("; ", r.verdict().reasons()));
+            }
+            double unusable = data.report().unusableFraction(c.name());
+            if (unusable > UNUSABLE_LIMIT) {
+                List<String> notes = new ArrayList<>(r.notes());
+                notes.add(String.format(Locale.ROOT, "%.0f %% of this characteristic's cells could not be used "
+                        + "(see the import report); check the data before relying on the result", unusable * 100));
+                r = r.with(r.holmP(), r.verdict(), notes);
+            }
+            results.add(r);
         }
-        if (!problems.isEmpty()) {
+        if (problems.size() == results.size()) {
             throw new AnalysisException(problems);
         }
         if (settings.holm()) {
@@ -80,15 +85,21 @@ public final class StudyAnalyzer {
 
     /** Holm (1979) adjustment of the deciding difference p-values across characteristics, as R's p.adjust. */
     private static List<CharacteristicResult> holm(List<CharacteristicResult> results) {
-        double[] p = new double[results.size()];
-        for (int i = 0; i < p.length; i++) {
-            p[i] = results.get(i).decidingTest().p();
+        List<Integer> tested = new ArrayList<>();
+        for (int i = 0; i < results.size(); i++) {
+            if (results.get(i).decidingTest() != null) {
+                tested.add(i);
+            }
+        }
+        double[] p = new double[tested.size()];
+        for (int k = 0; k < p.length; k++) {
+            p[k] = results.get(tested.get(k)).decidingTest().p();
         }
         double[] adjusted = org.holdpoint.stats.Holm.adjust(p);
-        List<CharacteristicResult> out = new ArrayList<>();
-        for (int i = 0; i < p.length; i++) {
-            CharacteristicResult r = results.get(i);
-            out.add(r.with(adjusted[i], r.verdict(), r.notes()));
+        List<CharacteristicResult> out = new ArrayList<>(results);
+        for (int k = 0; k < p.length; k++) {
+            CharacteristicResult r = results.get(tested.get(k));
+            out.set(tested.get(k), r.with(adjusted[k], r.verdict(), r.notes()));
         }
         return out;
     }
@@ -111,6 +122,10 @@ public final class StudyAnalyzer {
         double alpha = study.alpha();
         Sample before = c.before().sample();
         Sample after = c.after().sample();
+        String unassessable = assessability(c);
+        if (unassessable != null) {
+            return notAssessable(data, study, unassessable);
+        }
         checkSizes(before, after);
         GroupPair pair = GroupPair.of(before, after);
         Margin margin = s.margin() == null ? null : s.margin().resolve(s.spec());
@@ -170,6 +185,94 @@ public final class StudyAnalyzer {
                 pairedTest, tost, tostPooled, variance, levene, growth, null, method, checks,
                 new org.holdpoint.study.Verdict(org.holdpoint.study.Verdict.Status.NOT_ASSESSED, List.of()), notes);
         return Verdicts.judge(draft);
+    }
+
+    /**
+     * Why a characteristic's data cannot be assessed at all, or null when they can: a group without a
+     * usable value, a group of one value, no pair to form, or no variation at the measurement
+     * resolution in either group. Derived from the data alone, so that a re-computation from the stored
+     * raw values gives the same words.
+     */
+    static String assessability(CharacteristicData c) {
+        int nb = c.before().size();
+        int na = c.after().size();
+        if (c.paired() && nb == 0 && na == 0 && !c.unmatchedUnits().isEmpty()) {
+            return "no unit id occurs in both the before and the after group, so no pair can be formed; check that "
+                    + "both groups use the same unit ids";
+        }
+        if (nb == 0 || na == 0) {
+            String which = nb == 0 && na == 0 ? "either group" : nb == 0 ? "the before group" : "the after group";
+            return "no usable value in " + which + " (the import report lists the cells that could not be used and "
+                    + "why)";
+        }
+        if (nb < 2 || na < 2) {
+            String which = nb < 2 ? "before" : "after";
+            return String.format(Locale.ROOT, "the %s group has only %d value; at least 2 per group are needed",
+                    which, Math.min(nb, na));
+        }
+        Sample b = c.before().sample();
+        Sample a = c.after().sample();
+        if (constant(b) && constant(a)) {
+            String unit = c.unit() == null ? "" : " " + c.unit();
+            String resolution = resolution(b, a);
+            return String.format(Locale.ROOT, "no variation in either group: every before value is %s%s and every "
+                    + "after value is %s%s%s, so the gauge cannot show a change at this resolution; check the "
+                    + "measurement system", shown(b), unit, shown(a), unit,
+                    resolution == null ? "" : " (values recorded to " + resolution + unit + ")");
+        }
+        return null;
+    }
+
+    private static boolean constant(Sample s) {
+        double first = s.value(0);
+        for (int i = 1; i < s.size(); i++) {
+            if (s.value(i) != first) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static String shown(Sample s) {
+        return s.hasExactDecimals() ? s.decimal(0).toPlainString() : Format.num(s.value(0));
+    }
+
+    /** The finest step of the recorded values (10^-decimals), or null when the values are not exact decimals. */
+    private static String resolution(Sample b, Sample a) {
+        if (!b.hasExactDecimals() || !a.hasExactDecimals()) {
+            return null;
+        }
+        int scale = 0;
+        for (Sample s : new Sample[] {b, a}) {
+            for (int i = 0; i < s.size(); i++) {
+                scale = Math.max(scale, s.decimal(i).scale());
+            }
+        }
+        return java.math.BigDecimal.ONE.movePointLeft(scale).toPlainString();
+    }
+
+    /**
+     * The result of a characteristic that cannot be assessed: descriptives where a group has values,
+     * no test, the verdict "not assessable" with the reason.
+     */
+    static CharacteristicResult notAssessable(CharacteristicData c, AnalysisSettings study, String reason) {
+        CharacteristicSettings s = study.resolve(c.name());
+        Margin margin = null;
+        try {
+            margin = s.margin() == null ? null : s.margin().resolve(s.spec());
+        } catch (StatsException e) {
+            reason = reason + "; the margin cannot be resolved: " + e.getMessage();
+        }
+        Descriptives db = c.before().size() > 0 ? Descriptives.of(c.before().sample()) : null;
+        Descriptives da = c.after().size() > 0 ? Descriptives.of(c.after().sample()) : null;
+        boolean paired = s.paired() != null ? s.paired() : c.paired();
+        String unit = s.unit() != null ? s.unit() : c.unit();
+        List<String> notes = new ArrayList<>();
+        return new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, null, null, null, null, null, null,
+                null, null, null, paired ? LocationMethod.PAIRED
+                        : study.equalVariances() ? LocationMethod.POOLED : LocationMethod.WELCH, null,
+                new org.holdpoint.study.Verdict(org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE, List.of(reason)),
+                notes);
     }
 
     private static void checkSizes(Sample before, Sample after) {

@@ -20,6 +20,9 @@ final class Verdicts {
     }
 
     static CharacteristicResult judge(CharacteristicResult r) {
+        if (r.verdict().status() == Status.NOT_ASSESSABLE) {
+            return r;
+        }
         List<String> reasons = new ArrayList<>();
         Status status;
         EquivalenceResult eq = r.decidingTost();
@@ -81,11 +84,15 @@ final class Verdicts {
         }
         int n = results.size();
         boolean verified = failing.isEmpty();
+        long unassessable = results.stream().filter(r -> r.verdict().status() == Status.NOT_ASSESSABLE).count();
         String summary = verified
                 ? String.format(Locale.ROOT, "CHANGE VERIFIED: all %d characteristic%s passed (equivalent within the "
                         + "agreed margin, every limit set met).", n, n == 1 ? "" : "s")
-                : String.format(Locale.ROOT, "CHANGE NOT VERIFIED: %d of %d characteristic%s did not pass.",
-                        failing.size(), n, n == 1 ? "" : "s");
+                : String.format(Locale.ROOT, "CHANGE NOT VERIFIED: %d of %d characteristic%s did not pass%s.",
+                        failing.size(), n, n == 1 ? "" : "s", unassessable == 0 ? ""
+                                : String.format(Locale.ROOT, "; %d could not be assessed from the data, and the change "
+                                        + "cannot be verified until %s", unassessable, unassessable == 1 ? "it is"
+                                                : "they are"));
         return new StudyResult(results, verified, summary, failing);
     }
 }

@@ -15,7 +15,9 @@ public enum VerdictLook {
     /** Inconclusive: a triangle with a question mark. */
     INCONCLUSIVE(Shape.TRIANGLE_QUERY, "inconclusive", 1),
     /** Not assessed (no margin): a hollow ring with a dash. */
-    NOT_ASSESSED(Shape.RING_DASH, "not assessed", 2);
+    NOT_ASSESSED(Shape.RING_DASH, "not assessed", 2),
+    /** Not assessable (the data cannot show a change): an unfilled square with a slash. */
+    NOT_ASSESSABLE(Shape.SQUARE_SLASH, "not assessable", 0);
 
     /** The shapes drawn by the window; each differs in outline, not only in colour. */
     public enum Shape {
@@ -26,7 +28,9 @@ public enum VerdictLook {
         /** A filled triangle with a question mark. */
         TRIANGLE_QUERY,
         /** An unfilled circle with a dash. */
-        RING_DASH
+        RING_DASH,
+        /** An unfilled square with a diagonal slash. */
+        SQUARE_SLASH
     }
 
     private final Shape shape;
@@ -49,6 +53,7 @@ public enum VerdictLook {
             case FAILED -> FAILED;
             case INCONCLUSIVE -> INCONCLUSIVE;
             case NOT_ASSESSED -> NOT_ASSESSED;
+            case NOT_ASSESSABLE -> NOT_ASSESSABLE;
         };
     }
 

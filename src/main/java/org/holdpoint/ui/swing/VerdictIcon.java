@@ -40,7 +40,7 @@ public final class VerdictIcon implements Icon {
             case PASSED -> PASS;
             case FAILED -> FAIL;
             case INCONCLUSIVE -> UNSURE;
-            case NOT_ASSESSED -> NONE;
+            case NOT_ASSESSED, NOT_ASSESSABLE -> NONE;
         };
     }
 
@@ -95,6 +95,13 @@ public final class VerdictIcon implements Icon {
                     g2.setStroke(new BasicStroke(w, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
                     g2.drawLine((int) Math.round(s * 0.32), (int) Math.round(s / 2), (int) Math.round(s * 0.68),
                             (int) Math.round(s / 2));
+                }
+                case SQUARE_SLASH -> {
+                    g2.setStroke(new BasicStroke(w));
+                    g2.draw(new java.awt.geom.Rectangle2D.Double(w / 2 + 0.5, w / 2 + 0.5, s - w - 1, s - w - 1));
+                    g2.setStroke(new BasicStroke(w, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+                    g2.drawLine((int) Math.round(s * 0.28), (int) Math.round(s * 0.72), (int) Math.round(s * 0.72),
+                            (int) Math.round(s * 0.28));
                 }
             }
         } finally {
