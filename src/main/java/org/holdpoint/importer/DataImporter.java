@@ -446,25 +446,23 @@ public final class DataImporter {
                 f = b.emptyCopy();
             }
             List<String> unmatched = List.of();
-            if (paired && !incomplete.contains(e.getKey())) {
-                try {
-                    Pairing.Matched m = Pairing.match(a.name, b, f, log);
-                    b = m.before();
-                    f = m.after();
-                    unmatched = m.unmatched();
-                } catch (ImportException noPair) {
-                    // reported on this characteristic (not assessable); the other characteristics go on
-                    log.message(noPair.getMessage() + " (reported as not assessable)");
-                    unmatched = unitIds(b, f);
-                    b = b.emptyCopy();
-                    f = f.emptyCopy();
-                }
+            if (paired && !incomplete.contains(e.getKey()) && (accums.size() == 1 || shareUnitId(b, f))) {
+                Pairing.Matched m = Pairing.match(a.name, b, f, log);
+                b = m.before();
+                f = m.after();
+                unmatched = m.unmatched();
                 if (!unmatched.isEmpty()) {
                     log.message(String.format(Locale.ROOT, "characteristic %s: %d unit(s) found in only one group, left "
                             + "out of the paired analysis: %s", a.name, unmatched.size(), unmatched.size() > 20
                                     ? String.join(", ", unmatched.subList(0, 20)) + ", …" : String.join(", ", unmatched)));
                 }
             } else if (paired) {
+                if (!incomplete.contains(e.getKey())) {
+                    // no pair can be formed: reported on this characteristic (not assessable); the others go on
+                    log.message(String.format(Locale.ROOT, "characteristic %s: no unit id occurs in both the before "
+                            + "and the after group, so no pair can be formed (reported as not assessable)", a.name));
+                    unmatched = unitIds(b, f);
+                }
                 b = b.emptyCopy();
                 f = f.emptyCopy();
             }
@@ -479,6 +477,19 @@ public final class DataImporter {
             }
         }
         return new Dataset(out, inputs, log.report(total, used));
+    }
+
+    private static boolean shareUnitId(GroupBuilder b, GroupBuilder f) {
+        Set<String> ids = new java.util.HashSet<>();
+        for (int i = 0; i < b.size(); i++) {
+            ids.add(b.unit(i));
+        }
+        for (int i = 0; i < f.size(); i++) {
+            if (ids.contains(f.unit(i))) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Every unit id of both groups, in order, without repeats. */

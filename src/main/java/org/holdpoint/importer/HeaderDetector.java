@@ -117,6 +117,9 @@ final class HeaderDetector {
             "°", "deg", "°c", "°f", "k", "c", "f", "%", "‰", "ppm", "l", "ml", "db", "lux", "j", "kj", "rad", "mrad",
             "gf", "kgf", "lbf", "lb", "oz", "ra", "rz", "mm2", "mm3", "mm²", "mm³", "cm²", "cm³", "m²", "m³", "n·m",
             "n m", "-", "—", "–", "1", "pcs", "stk");
+    /** Placeholders for missing values that read like quotients of units ("n/a": newton per ampere). */
+    private static final java.util.Set<String> NOT_UNITS = java.util.Set.of("n/a", "n.a.", "n.a", "na", "k.a.",
+            "n/v", "nv", "n/m");
     /** Labels that may open a units row in its first cell. */
     private static final java.util.Set<String> UNIT_ROW_LABELS = java.util.Set.of("unit", "units", "uom", "einheit",
             "einheiten", "unit of measure", "dimension");
@@ -155,7 +158,7 @@ final class HeaderDetector {
         if (t.length() >= 2 && (t.startsWith("(") && t.endsWith(")") || t.startsWith("[") && t.endsWith("]"))) {
             t = t.substring(1, t.length() - 1).strip();
         }
-        if (t.isEmpty() || t.length() > 16) {
+        if (t.isEmpty() || t.length() > 16 || NOT_UNITS.contains(t)) {
             return false;
         }
         if (UNIT_WORDS.contains(t)) {

@@ -251,6 +251,14 @@ public final class ResultJson {
 
     private static ObjectNode descriptives(Descriptives d) {
         ObjectNode o = F.objectNode();
+        if (d == null) {
+            // a group without a usable value (a characteristic that is not assessable)
+            o.put("n", 0);
+            for (String k : new String[] {"mean", "sd", "median", "min", "max"}) {
+                o.putNull(k);
+            }
+            return o;
+        }
         o.put("n", d.n());
         num(o, "mean", d.mean());
         num(o, "sd", d.sd());

@@ -218,7 +218,8 @@ public final class StudyAnalyzer {
             return String.format(Locale.ROOT, "no variation in either group: every before value is %s%s and every "
                     + "after value is %s%s%s, so the gauge cannot show a change at this resolution; check the "
                     + "measurement system", shown(b), unit, shown(a), unit,
-                    resolution == null ? "" : " (values recorded to " + resolution + unit + ")");
+                    resolution == null ? "" : resolution.equals("1") ? " (values recorded as whole numbers)"
+                            : " (values recorded to " + resolution + unit + ")");
         }
         return null;
     }

@@ -18,46 +18,46 @@ import org.apache.poi.ss.util.CellRangeAddress;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 
 /** Writes small test workbooks (POI's object model is fine for writing test files). */
-final class Workbooks {
+public final class Workbooks {
     private Workbooks() {
     }
 
     /** A cell holding a spreadsheet error value. */
-    record Err(FormulaError error) {
+    public record Err(FormulaError error) {
     }
 
     /** A formula; {@code evaluate} stores its cached result. */
-    record Formula(String text) {
+    public record Formula(String text) {
     }
 
     /** A merged range to add to a sheet, 0-based. */
-    record Merge(int firstRow, int lastRow, int firstCol, int lastCol) {
+    public record Merge(int firstRow, int lastRow, int firstCol, int lastCol) {
     }
 
     /** One sheet: its name, its rows (null = empty row, null cell = blank), merged ranges. */
-    record SheetSpec(String name, List<Object[]> rows, List<Merge> merges) {
-        SheetSpec(String name, List<Object[]> rows) {
+    public record SheetSpec(String name, List<Object[]> rows, List<Merge> merges) {
+        public SheetSpec(String name, List<Object[]> rows) {
             this(name, rows, List.of());
         }
     }
 
-    static Path xlsx(Path file, boolean evaluate, SheetSpec... sheets) {
+    public static Path xlsx(Path file, boolean evaluate, SheetSpec... sheets) {
         return write(new XSSFWorkbook(), file, evaluate, sheets);
     }
 
-    static Path xls(Path file, boolean evaluate, SheetSpec... sheets) {
+    public static Path xls(Path file, boolean evaluate, SheetSpec... sheets) {
         return write(new HSSFWorkbook(), file, evaluate, sheets);
     }
 
-    static Path xlsx(Path file, Object[]... rows) {
+    public static Path xlsx(Path file, Object[]... rows) {
         return xlsx(file, true, new SheetSpec("Data", java.util.Arrays.asList(rows)));
     }
 
-    static Path xls(Path file, Object[]... rows) {
+    public static Path xls(Path file, Object[]... rows) {
         return xls(file, true, new SheetSpec("Data", java.util.Arrays.asList(rows)));
     }
 
-    static Object[] row(Object... cells) {
+    public static Object[] row(Object... cells) {
         return cells;
     }
 

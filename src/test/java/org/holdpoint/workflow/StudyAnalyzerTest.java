@@ -117,6 +117,29 @@ class StudyAnalyzerTest {
                 List.of()));
         assertThatThrownBy(() -> new StudyAnalyzer().analyze(d, AnalysisSettings.defaultSettings(), Progress.NONE))
                 .isInstanceOf(AnalysisException.class).hasMessageContaining("Flat")
-                .hasMessageContaining("zero spread");
+                .hasMessageContaining("no variation in either group");
+    }
+
+    @Test
+    void aCharacteristicThatCannotBeAssessedLeavesTheOthersAnalysed() {
+        CharacteristicData flat = new CharacteristicData("Flat", "mm", GroupData.typed(Sample.ofDecimals("0.500",
+                "0.500", "0.500"), "b"), GroupData.typed(Sample.ofDecimals("0.500", "0.500"), "a"), false, List.of());
+        CharacteristicData one = new CharacteristicData("One", "mm", GroupData.typed(Sample.of(1.2), "b"),
+                GroupData.typed(Sample.of(1.1, 1.3, 1.2), "a"), false, List.of());
+        CharacteristicData ok = new CharacteristicData("Ok", "mm", GroupData.typed(Sample.of(1.1, 1.3, 1.2), "b"),
+                GroupData.typed(Sample.of(1.0, 1.2, 1.4), "a"), false, List.of());
+        Dataset d = new Dataset(List.of(flat, one, ok), List.of(), new ImportReport(14, java.util.Map.of(),
+                List.of(), List.of()));
+        var result = new StudyAnalyzer().analyze(d, AnalysisSettings.defaultSettings(), Progress.NONE);
+        var flatResult = result.characteristics().get(0);
+        assertThat(flatResult.verdict().status()).isEqualTo(org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE);
+        assertThat(flatResult.verdict().reasons().get(0)).contains("every before value is 0.500 mm",
+                "values recorded to 0.001 mm", "check the measurement system");
+        assertThat(flatResult.decidingTest()).isNull();
+        assertThat(result.characteristics().get(1).verdict().reasons().get(0))
+                .contains("the before group has only 1 value");
+        assertThat(result.characteristics().get(2).decidingTest()).isNotNull();
+        assertThat(result.changeVerified()).isFalse();
+        assertThat(result.summary()).contains("2 could not be assessed");
     }
 }

@@ -1,0 +1,294 @@
+package org.holdpoint.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Random;
+import org.holdpoint.cli.AnalyzeCommandTest.Run;
+import org.holdpoint.importer.Workbooks;
+import org.holdpoint.importer.Workbooks.Merge;
+import org.holdpoint.importer.Workbooks.SheetSpec;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Files shaped like real measuring-machine, lab and production-system exports (title rows, merged
+ * band rows, units rows, trace columns, text cells such as "n/a" and "OOT", a column constant at the
+ * gauge's resolution), generated here in invented scenarios, run through {@code holdpoint analyze} as a
+ * user runs it. These check the import and verdict rules of docs/import.md, not numbers: the numbers of
+ * the tests themselves are checked against outside references elsewhere.
+ */
+class ShopFloorExportsTest {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    private static Run run(String... args) {
+        return AnalyzeCommandTest.run(args);
+    }
+
+    private static JsonNode characteristic(JsonNode json, String name) {
+        for (JsonNode c : json.path("characteristics")) {
+            if (c.path("name").asText().equals(name)) {
+                return c;
+            }
+        }
+        return null;
+    }
+
+    private static List<String> names(JsonNode json) {
+        List<String> out = new ArrayList<>();
+        json.path("characteristics").forEach(c -> out.add(c.path("name").asText()));
+        return out;
+    }
+
+    /**
+     * A wide export of 56 characteristics of a turned shaft where one column (a go/no-go slot depth
+     * recorded at the gauge's resolution) is 0.500 in every row: the other 55 are analysed.
+     */
+    @Test
+    void oneConstantColumnOfFiftySixDoesNotCostTheOtherFiftyFive(@TempDir Path dir) throws Exception {
+        Random rnd = new Random(56);
+        StringBuilder sb = new StringBuilder("phase");
+        for (int k = 1; k <= 56; k++) {
+            sb.append(",").append(k == 31 ? "Slot depth" : "Dim " + k);
+        }
+        sb.append('\n');
+        for (String phase : new String[] {"before", "after"}) {
+            for (int i = 0; i < 25; i++) {
+                sb.append(phase);
+                for (int k = 1; k <= 56; k++) {
+                    double v = k == 31 ? 0.5 : 10 + k + 0.01 * rnd.nextGaussian();
+                    sb.append(',').append(String.format(Locale.ROOT, "%.3f", v));
+                }
+                sb.append('\n');
+            }
+        }
+        Path csv = Files.writeString(dir.resolve("shaft-op40.csv"), sb.toString(), StandardCharsets.UTF_8);
+        Path json = dir.resolve("r.json");
+        Run r = run("analyze", csv.toString(), "--margin", "0.02", "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode out = JSON.readTree(json.toFile());
+        assertThat(out.path("characteristics")).hasSize(56);
+        JsonNode slot = characteristic(out, "Slot depth");
+        assertThat(slot.path("verdict").path("status").asText()).isEqualTo("not assessable");
+        assertThat(slot.path("verdict").path("reasons").get(0).asText()).contains("no variation in either group",
+                "0.500", "values recorded to 0.001", "check the measurement system");
+        assertThat(slot.has("welch")).isFalse();
+        int analysed = 0;
+        for (JsonNode c : out.path("characteristics")) {
+            if (c.has("welch") && c.has("tost")) {
+                analysed++;
+            }
+        }
+        assertThat(analysed).isEqualTo(55);
+        assertThat(out.path("verdict").path("changeVerified").asBoolean()).isFalse();
+        assertThat(out.path("verdict").path("summary").asText()).contains("1 could not be assessed");
+        assertThat(r.out()).contains("[/] Slot depth", "not assessable");
+    }
+
+    /** Nothing that can be analysed: the whole study is bad input. */
+    @Test
+    void aStudyWhereNothingCanBeAnalysedExitsTwo(@TempDir Path dir) throws Exception {
+        Path csv = Files.writeString(dir.resolve("setting.csv"), "phase,Mould temp\nbefore,85\nbefore,85\n"
+                + "after,85\nafter,85\n", StandardCharsets.UTF_8);
+        Run r = run("analyze", csv.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("Mould temp", "no variation");
+    }
+
+    private static List<Object[]> housingRows(String phase, int n, int firstSerial, double shift, Random rnd,
+            int extraTitleRows) {
+        List<Object[]> rows = new ArrayList<>();
+        rows.add(Workbooks.row("Dimensional report - sensor housing SH-220 rev C"));
+        rows.add(Workbooks.row("Exported by the line 3 measuring machine"));
+        for (int i = 0; i < extraTitleRows; i++) {
+            rows.add(Workbooks.row("Operator note: probe recalibrated"));
+        }
+        rows.add(Workbooks.row("Traceability", null, null, null, null, "Dimensions", null, null, null, "Form", null,
+                "Process"));
+        rows.add(Workbooks.row("Part serial", "Resin lot", "Cavity", "Meas. date", "Phase", "Overall length", "Width",
+                "Pin hole dia", "Weight", "Flatness", "Wall thickness", "Mould temp"));
+        rows.add(Workbooks.row(null, null, null, null, null, "mm", "mm", "mm", "g", "mm", "mm", "°C"));
+        for (int k = 0; k < n; k++) {
+            rows.add(Workbooks.row(String.format(Locale.ROOT, "SH%05d", firstSerial + k),
+                    phase.equals("before") ? "R-2291" : "V-0317", (double) (1 + k % 4),
+                    LocalDate.of(2026, 11, 2).plusDays(k), phase,
+                    Math.round((42 + shift + 0.008 * rnd.nextGaussian()) * 1000) / 1000.0,
+                    k == n - 3 ? "n/a" : Math.round((18.5 + 0.006 * rnd.nextGaussian()) * 1000) / 1000.0,
+                    Math.round((3.2 + 0.004 * rnd.nextGaussian()) * 1000) / 1000.0,
+                    k == n - 5 ? "OOT" : Math.round((12.4 + 0.05 * rnd.nextGaussian()) * 100) / 100.0,
+                    Math.round(Math.exp(-3.6 + 0.35 * rnd.nextGaussian()) * 1000) / 1000.0, 1.5, 85.0));
+        }
+        return rows;
+    }
+
+    private static Path housing(Path file, String phase, int firstSerial, double shift, int extraTitleRows, long seed) {
+        int band = 2 + extraTitleRows;
+        return Workbooks.xlsx(file, true, new SheetSpec("CMM export", housingRows(phase, 30, firstSerial, shift,
+                new Random(seed), extraTitleRows), List.of(new Merge(band, band, 0, 4), new Merge(band, band, 5, 8),
+                        new Merge(band, band, 9, 10))));
+    }
+
+    /**
+     * Two measuring-machine exports of an injection-moulded housing (before and after a resin supplier
+     * change): title rows, a merged band row, a units row, trace columns, the header in different rows.
+     */
+    @Test
+    void measuringMachineExportsWithBandsUnitsAndTraceColumnsAreReadAsTheyCome(@TempDir Path dir) throws Exception {
+        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 1);
+        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0.002, 1, 2);
+        Path json = dir.resolve("r.json");
+        Run r = run("analyze", "--before", before.toString(), "--after", after.toString(), "--margin", "0.02",
+                "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode out = JSON.readTree(json.toFile());
+        // band texts are not part of the names; trace columns (serial, lot, cavity, date) are not characteristics
+        assertThat(names(out)).containsExactly("Overall length", "Width", "Pin hole dia", "Weight", "Flatness",
+                "Wall thickness", "Mould temp");
+        assertThat(characteristic(out, "Overall length").path("unit").asText()).isEqualTo("mm");
+        assertThat(characteristic(out, "Weight").path("unit").asText()).isEqualTo("g");
+        assertThat(characteristic(out, "Mould temp").path("unit").asText()).isEqualTo("°C");
+        assertThat(characteristic(out, "Wall thickness").path("verdict").path("status").asText())
+                .isEqualTo("not assessable");
+        assertThat(characteristic(out, "Mould temp").path("verdict").path("status").asText())
+                .isEqualTo("not assessable");
+        assertThat(characteristic(out, "Overall length").path("verdict").path("status").asText())
+                .isEqualTo("passed");
+        // the units row is not data: no "mm" text cell is reported as unusable
+        assertThat(r.out()).doesNotContain("(\"mm\")").contains("row 5 holds the units of measure",
+                "row 6 holds the units of measure", "\"Cavity\" (C): process grouping",
+                "unit id column \"Part serial\" (A)", "lot column \"Resin lot\" (B)", "run order from \"Meas. date\" (D)",
+                "cell G33 - text, not a number (\"n/a\")");
+    }
+
+    /** The header rows of the two files given one by one. */
+    @Test
+    void eachFileMayHaveItsOwnHeaderRow(@TempDir Path dir) throws Exception {
+        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 3);
+        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0, 2, 4);
+        Run r = run("analyze", "--before", before.toString(), "--after", after.toString(), "--before-header-row",
+                "4", "--after-header-row", "6", "--only", "Overall length", "--only", "width");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("header in row 4", "header in row 6", "Overall length", "Width")
+                .contains("\"Pin hole dia\" (H): not in the criteria, not analysed");
+        Run wrong = run("analyze", before.toString(), "--before-header-row", "4");
+        assertThat(wrong.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(wrong.err()).contains("--before-header-row is for two-file input");
+    }
+
+    /** The settings file decides what is analysed, and a misspelt row stops the run with the closest name. */
+    @Test
+    void theCriteriaChooseTheCharacteristicsAndAMisspeltRowIsRefused(@TempDir Path dir) throws Exception {
+        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 5);
+        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0, 0, 6);
+        Path settings = Files.writeString(dir.resolve("criteria.csv"), "characteristic,unit,lsl,nominal,usl,margin\n"
+                + "Overall length,mm,41.95,42,42.05,0.01\nPin hole diameter,mm,3.185,3.2,3.215,0.003\n",
+                StandardCharsets.UTF_8);
+        Run bad = run("analyze", "--before", before.toString(), "--after", after.toString(), "--settings",
+                settings.toString());
+        assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(bad.err()).contains("criteria.csv", "\"Pin hole diameter\" matches no characteristic",
+                "did you mean \"Pin hole dia\"");
+        Files.writeString(settings, "characteristic,unit,lsl,nominal,usl,margin\n"
+                + "Overall length,mm,41.95,42,42.05,0.01\nPIN_HOLE_DIA (mm),mm,3.185,3.2,3.215,0.003\n",
+                StandardCharsets.UTF_8);
+        Path json = dir.resolve("r.json");
+        Run ok = run("analyze", "--before", before.toString(), "--after", after.toString(), "--settings",
+                settings.toString(), "--json", json.toString());
+        assertThat(ok.code()).as(ok.err()).isZero();
+        JsonNode out = JSON.readTree(json.toFile());
+        assertThat(names(out)).containsExactly("Overall length", "Pin hole dia");
+        // the criteria row written in another spelling applies to its characteristic
+        assertThat(characteristic(out, "Pin hole dia").path("tost").path("upperMargin").asDouble()).isEqualTo(0.003);
+        assertThat(ok.out()).contains("\"Width\" (G): not in the criteria, not analysed");
+    }
+
+    @Test
+    void ignoredColumnsAreLeftOutAndAnUnknownOneIsRefused(@TempDir Path dir) throws Exception {
+        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 7);
+        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0, 0, 8);
+        Path json = dir.resolve("r.json");
+        Run r = run("analyze", "--before", before.toString(), "--after", after.toString(), "--ignore-column",
+                "Mould temp", "--ignore-column", "wall thickness", "--margin", "0.05", "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(names(JSON.readTree(json.toFile()))).containsExactly("Overall length", "Width", "Pin hole dia",
+                "Weight", "Flatness");
+        Run bad = run("analyze", "--before", before.toString(), "--after", after.toString(), "--ignore-column",
+                "Mold temp");
+        assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(bad.err()).contains("\"Mold temp\" is not in the data", "\"Mould temp\"");
+    }
+
+    /** German export of a lab: trace columns named in German are recognised. */
+    @Test
+    void germanTraceColumnsAreNotCharacteristics(@TempDir Path dir) throws Exception {
+        StringBuilder sb = new StringBuilder("Seriennummer;Los;Kavität;Zeitstempel;Zustand;Härte HV10;Zugfestigkeit\n");
+        Random rnd = new Random(9);
+        for (String phase : new String[] {"vorher", "nachher"}) {
+            for (int i = 0; i < 12; i++) {
+                sb.append(String.format(Locale.GERMANY, "%s-%03d;L%d;%d;2026-11-%02d 08:%02d;%s;%.1f;%.1f%n",
+                        phase.substring(0, 2), i, 4 + i % 2, 1 + i % 2, 3 + i % 20, i, phase,
+                        300 + 5 * rnd.nextGaussian(), 620 + 8 * rnd.nextGaussian()));
+            }
+        }
+        Path csv = Files.write(dir.resolve("labor.csv"), sb.toString().getBytes(java.nio.charset.Charset
+                .forName("windows-1252")));
+        Path json = dir.resolve("r.json");
+        Run r = run("analyze", csv.toString(), "--group-column", "Zustand", "--before-label", "vorher",
+                "--after-label", "nachher", "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(names(JSON.readTree(json.toFile()))).containsExactly("Härte HV10", "Zugfestigkeit");
+        assertThat(r.out()).contains("unit id column \"Seriennummer\"", "lot column \"Los\"",
+                "run order from \"Zeitstempel\"", "\"Kavität\" (C): process grouping");
+    }
+
+    /** The same parts measured twice but read as independent groups: the output says how to pair them. */
+    @Test
+    void theSameUnitIdsInBothGroupsGiveAPairingHint(@TempDir Path dir) throws Exception {
+        StringBuilder sb = new StringBuilder("serial,phase,Bore\n");
+        Random rnd = new Random(23);
+        for (String phase : new String[] {"before", "after"}) {
+            for (int i = 1; i <= 23; i++) {
+                sb.append(String.format(Locale.ROOT, "P%02d,%s,%.4f%n", i, phase, 25 + 0.01 * rnd.nextGaussian()));
+            }
+        }
+        Path csv = Files.writeString(dir.resolve("remeasured.csv"), sb.toString(), StandardCharsets.UTF_8);
+        Run r = run("analyze", csv.toString(), "--margin", "0.01");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("PAIRING HINT: 23 of the 23 unit ids", "--paired");
+        Run paired = run("analyze", csv.toString(), "--margin", "0.01", "--paired");
+        assertThat(paired.code()).as(paired.err()).isZero();
+        assertThat(paired.out()).doesNotContain("PAIRING HINT").contains("paired");
+    }
+
+    /** A characteristic whose after values are all unusable text is not assessable; the others go on. */
+    @Test
+    void aCharacteristicWithoutUsableValuesIsNotAssessable(@TempDir Path dir) throws Exception {
+        StringBuilder sb = new StringBuilder("phase,Length,Burr height\n");
+        Random rnd = new Random(4);
+        for (String phase : new String[] {"before", "after"}) {
+            for (int i = 0; i < 10; i++) {
+                sb.append(String.format(Locale.ROOT, "%s,%.3f,%s%n", phase, 80 + 0.02 * rnd.nextGaussian(),
+                        phase.equals("after") ? "not measured" : String.format(Locale.ROOT, "%.3f",
+                                0.05 + 0.01 * rnd.nextDouble())));
+            }
+        }
+        Path csv = Files.writeString(dir.resolve("deburr.csv"), sb.toString(), StandardCharsets.UTF_8);
+        Path json = dir.resolve("r.json");
+        Run r = run("analyze", csv.toString(), "--margin", "0.05", "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode out = JSON.readTree(json.toFile());
+        assertThat(characteristic(out, "Burr height").path("verdict").path("status").asText())
+                .isEqualTo("not assessable");
+        assertThat(characteristic(out, "Burr height").path("verdict").path("reasons").get(0).asText())
+                .contains("no usable value in the after group");
+        assertThat(characteristic(out, "Length").path("verdict").path("status").asText()).isEqualTo("passed");
+    }
+}
