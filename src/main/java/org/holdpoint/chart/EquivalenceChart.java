@@ -96,6 +96,10 @@ public final class EquivalenceChart {
             CharacteristicResult r = results.get(row);
             EquivalenceResult t = r.decidingTost();
             left[row] = rowLabel(r);
+            if (r.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+                right[row] = "not assessable (see the verdict)";
+                continue;
+            }
             if (t == null || r.margin() == null) {
                 right[row] = "not assessed (no margin)";
                 continue;

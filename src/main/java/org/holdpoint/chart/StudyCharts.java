@@ -120,10 +120,13 @@ public final class StudyCharts {
      * @param count    the number of characteristics in the study (prefix width)
      * @param result   its analysis (spec limits, unit)
      * @param data     its data
-     * @return the three charts
+     * @return the three charts, or none when a group has no value (a characteristic that is not assessable)
      */
     public List<NamedChart> characteristicCharts(int position, int count, CharacteristicResult result,
             CharacteristicData data) {
+        if (data.before().size() == 0 || data.after().size() == 0) {
+            return List.of();
+        }
         SpecLimits limits = result.settings() == null ? SpecLimits.NONE : result.settings().spec();
         CharacteristicData d = data.unit() == null && result.unit() != null ? new CharacteristicData(data.name(),
                 result.unit(), data.before(), data.after(), data.paired(), data.unmatchedUnits()) : data;

@@ -333,6 +333,13 @@ public final class StudyFiles {
         }
         ArrayNode msgs = o.putArray("messages");
         r.messages().forEach(msgs::add);
+        // per characteristic, so that a re-computation flags the same characteristics with many unusable cells
+        if (!r.usedPerCharacteristic().isEmpty() || !r.skippedPerCharacteristic().isEmpty()) {
+            ObjectNode used = o.putObject("usedPerCharacteristic");
+            r.usedPerCharacteristic().forEach(used::put);
+            ObjectNode skipped = o.putObject("skippedPerCharacteristic");
+            r.skippedPerCharacteristic().forEach(skipped::put);
+        }
         return o;
     }
 
@@ -347,7 +354,12 @@ public final class StudyFiles {
         }
         List<String> msgs = new ArrayList<>();
         o.path("messages").forEach(m -> msgs.add(m.asText()));
-        return new ImportReport(o.path("valuesUsed").asLong(), counts, cells, msgs);
+        Map<String, Long> used = new java.util.LinkedHashMap<>();
+        o.path("usedPerCharacteristic").fields().forEachRemaining(e -> used.put(e.getKey(), e.getValue().asLong()));
+        Map<String, Long> skipped = new java.util.LinkedHashMap<>();
+        o.path("skippedPerCharacteristic").fields().forEachRemaining(e -> skipped.put(e.getKey(),
+                e.getValue().asLong()));
+        return new ImportReport(o.path("valuesUsed").asLong(), counts, cells, msgs, used, skipped);
     }
 
     private static ObjectNode characteristic(CharacteristicData c) {

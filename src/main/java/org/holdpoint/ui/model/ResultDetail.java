@@ -41,6 +41,15 @@ public final class ResultDetail {
         r.verdict().reasons().forEach(x -> verdict.add(new Line("Because", x)));
         s.add(new Section("Verdict", verdict));
         s.add(groups(r.before(), r.after(), r.unit()));
+        if (r.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+            s.add(new Section("Not assessable", List.of(new Line("", "No test was computed: the data of this "
+                    + "characteristic cannot show a change (the reason is above). The other characteristics were "
+                    + "analysed."))));
+            if (!r.notes().isEmpty()) {
+                s.add(new Section("Notes", r.notes().stream().map(n -> new Line("", n)).toList()));
+            }
+            return s;
+        }
         s.add(difference(r.decidingTest()));
         EquivalenceResult eq = r.decidingTost();
         if (eq != null) {
@@ -55,6 +64,10 @@ public final class ResultDetail {
 
     private static Section groups(Descriptives b, Descriptives a, String unit) {
         String u = unit == null || unit.isEmpty() ? "" : " (" + unit + ")";
+        if (b == null || a == null) {
+            return new Section("Before and after" + u, List.of(new Line("n", (b == null ? 0 : b.n()) + "  →  "
+                    + (a == null ? 0 : a.n()) + "  (a group without a usable value)")));
+        }
         return new Section("Before and after" + u, List.of(
                 new Line("n", b.n() + "  →  " + a.n()),
                 new Line("Mean", Format.num(b.mean()) + "  →  " + Format.num(a.mean())),

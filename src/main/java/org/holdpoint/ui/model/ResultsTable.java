@@ -153,7 +153,7 @@ public final class ResultsTable {
             case CHARACTERISTIC -> r.name();
             case CONCLUSION -> VerdictLook.finding(r);
             case UNIT -> r.unit() == null ? "" : r.unit();
-            case DIFFERENCE -> r.decidingTest().estimate();
+            case DIFFERENCE -> r.decidingTest() == null ? null : r.decidingTest().estimate();
             case INTERVAL -> eq == null ? "" : "(" + Format.num(eq.ciLower()) + ", " + Format.num(eq.ciUpper()) + ")";
             case MARGIN -> margin(r.margin());
             case SD_RATIO -> r.variance() == null ? null : Math.sqrt(r.variance().ratio());
@@ -192,7 +192,7 @@ public final class ResultsTable {
         }
         StringBuilder sb = new StringBuilder();
         for (VerdictLook l : List.of(VerdictLook.PASSED, VerdictLook.FAILED, VerdictLook.INCONCLUSIVE,
-                VerdictLook.NOT_ASSESSED)) {
+                VerdictLook.NOT_ASSESSED, VerdictLook.NOT_ASSESSABLE)) {
             long n = result.characteristics().stream().filter(c -> VerdictLook.of(c.verdict().status()) == l).count();
             if (n > 0) {
                 sb.append(sb.length() == 0 ? "" : ", ").append(n).append(' ').append(l.words());

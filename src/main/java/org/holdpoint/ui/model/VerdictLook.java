@@ -89,6 +89,9 @@ public enum VerdictLook {
      * @return the words
      */
     public static String finding(CharacteristicResult r) {
+        if (r.verdict().status() == Verdict.Status.NOT_ASSESSABLE) {
+            return String.join("; ", r.verdict().reasons());
+        }
         var eq = r.decidingTost();
         String c = eq == null ? "no margin set" : eq.conclusion().words();
         boolean spreadFailed = r.sdGrowth() != null && !r.sdGrowth().met();
