@@ -5,6 +5,7 @@ import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.List;
 import java.util.Map;
 import org.holdpoint.importer.DataImporter;
 import org.holdpoint.importer.ImportException;
@@ -56,6 +57,7 @@ public final class StudyService {
             progress.checkCancelled();
             Path found = sources.file() == null ? null : SettingsReader.findBeside(sources.file()).orElse(null);
             Map<String, CharacteristicSettings> criteria = found == null ? Map.of() : new SettingsReader().read(found);
+            checkCriteriaNames(data, criteria, found);
             return new Imported(data, criteria, found);
         } catch (ImportException | StatsException e) {
             throw new StudyProblem(StudyProblem.Kind.BAD_INPUT, e, "%s", e.getMessage());
@@ -63,6 +65,59 @@ public final class StudyService {
             throw new StudyProblem(StudyProblem.Kind.BAD_INPUT, e, "%s cannot be read: %s", sources.mainFile(),
                     e.getCause().getMessage());
         }
+    }
+
+    /** A criteria row that names no characteristic of the data is refused, with the closest names. */
+    private static void checkCriteriaNames(Dataset data, Map<String, CharacteristicSettings> criteria, Path file) {
+        java.util.Set<String> keys = new java.util.HashSet<>();
+        List<String> names = new java.util.ArrayList<>();
+        for (org.holdpoint.study.CharacteristicData c : data.characteristics()) {
+            keys.add(org.holdpoint.study.NameKeys.key(c.name()));
+            names.add(c.name());
+        }
+        List<String> problems = new java.util.ArrayList<>();
+        for (String n : criteria.keySet()) {
+            if (!SettingsReader.DEFAULTS.equals(n) && !keys.contains(org.holdpoint.study.NameKeys.key(n))) {
+                problems.add("the characteristic \"" + n + "\" matches no characteristic in the data"
+                        + org.holdpoint.importer.Closest.describe(n, names));
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new ImportException("the criteria file %s: %s. Correct the name%s in the criteria file (case, spaces "
+                    + "and a unit in brackets do not matter) or remove %s", file, String.join("; ", problems),
+                    problems.size() == 1 ? "" : "s", problems.size() == 1 ? "it" : "them");
+        }
+    }
+
+    /**
+     * The data restricted to the chosen characteristics (matched by their comparison key); the others are
+     * named in the import report as not analysed.
+     *
+     * @param data   the data
+     * @param chosen the names to keep
+     * @param why    why the others are left out, in words
+     * @return the restricted data (the same object when nothing is left out)
+     */
+    public static Dataset only(Dataset data, java.util.Collection<String> chosen, String why) {
+        java.util.Set<String> keys = new java.util.HashSet<>();
+        chosen.forEach(n -> keys.add(org.holdpoint.study.NameKeys.key(n)));
+        List<org.holdpoint.study.CharacteristicData> kept = new java.util.ArrayList<>();
+        List<String> left = new java.util.ArrayList<>();
+        for (org.holdpoint.study.CharacteristicData c : data.characteristics()) {
+            if (keys.contains(org.holdpoint.study.NameKeys.key(c.name()))) {
+                kept.add(c);
+            } else {
+                left.add("\"" + c.name() + "\"");
+            }
+        }
+        if (left.isEmpty() || kept.isEmpty()) {
+            return data;
+        }
+        var r = data.report();
+        List<String> messages = new java.util.ArrayList<>(r.messages());
+        messages.add("not analysed (" + why + "): " + String.join(", ", left));
+        return new Dataset(kept, data.inputs(), new org.holdpoint.study.ImportReport(r.valuesUsed(), r.skipCounts(),
+                r.firstSkipped(), messages, r.usedPerCharacteristic(), r.skippedPerCharacteristic()));
     }
 
     /**

@@ -7,15 +7,12 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Random;
 import org.holdpoint.cli.AnalyzeCommandTest.Run;
-import org.holdpoint.importer.Workbooks;
-import org.holdpoint.importer.Workbooks.Merge;
-import org.holdpoint.importer.Workbooks.SheetSpec;
+import org.holdpoint.importer.ShopFloorFiles;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -103,47 +100,14 @@ class ShopFloorExportsTest {
         assertThat(r.err()).contains("Mould temp", "no variation");
     }
 
-    private static List<Object[]> housingRows(String phase, int n, int firstSerial, double shift, Random rnd,
-            int extraTitleRows) {
-        List<Object[]> rows = new ArrayList<>();
-        rows.add(Workbooks.row("Dimensional report - sensor housing SH-220 rev C"));
-        rows.add(Workbooks.row("Exported by the line 3 measuring machine"));
-        for (int i = 0; i < extraTitleRows; i++) {
-            rows.add(Workbooks.row("Operator note: probe recalibrated"));
-        }
-        rows.add(Workbooks.row("Traceability", null, null, null, null, "Dimensions", null, null, null, "Form", null,
-                "Process"));
-        rows.add(Workbooks.row("Part serial", "Resin lot", "Cavity", "Meas. date", "Phase", "Overall length", "Width",
-                "Pin hole dia", "Weight", "Flatness", "Wall thickness", "Mould temp"));
-        rows.add(Workbooks.row(null, null, null, null, null, "mm", "mm", "mm", "g", "mm", "mm", "°C"));
-        for (int k = 0; k < n; k++) {
-            rows.add(Workbooks.row(String.format(Locale.ROOT, "SH%05d", firstSerial + k),
-                    phase.equals("before") ? "R-2291" : "V-0317", (double) (1 + k % 4),
-                    LocalDate.of(2026, 11, 2).plusDays(k), phase,
-                    Math.round((42 + shift + 0.008 * rnd.nextGaussian()) * 1000) / 1000.0,
-                    k == n - 3 ? "n/a" : Math.round((18.5 + 0.006 * rnd.nextGaussian()) * 1000) / 1000.0,
-                    Math.round((3.2 + 0.004 * rnd.nextGaussian()) * 1000) / 1000.0,
-                    k == n - 5 ? "OOT" : Math.round((12.4 + 0.05 * rnd.nextGaussian()) * 100) / 100.0,
-                    Math.round(Math.exp(-3.6 + 0.35 * rnd.nextGaussian()) * 1000) / 1000.0, 1.5, 85.0));
-        }
-        return rows;
-    }
-
-    private static Path housing(Path file, String phase, int firstSerial, double shift, int extraTitleRows, long seed) {
-        int band = 2 + extraTitleRows;
-        return Workbooks.xlsx(file, true, new SheetSpec("CMM export", housingRows(phase, 30, firstSerial, shift,
-                new Random(seed), extraTitleRows), List.of(new Merge(band, band, 0, 4), new Merge(band, band, 5, 8),
-                        new Merge(band, band, 9, 10))));
-    }
-
     /**
      * Two measuring-machine exports of an injection-moulded housing (before and after a resin supplier
      * change): title rows, a merged band row, a units row, trace columns, the header in different rows.
      */
     @Test
     void measuringMachineExportsWithBandsUnitsAndTraceColumnsAreReadAsTheyCome(@TempDir Path dir) throws Exception {
-        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 1);
-        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0.002, 1, 2);
+        Path before = ShopFloorFiles.housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 1);
+        Path after = ShopFloorFiles.housing(dir.resolve("after.xlsx"), "after", 2000, 0.002, 1, 2);
         Path json = dir.resolve("r.json");
         Run r = run("analyze", "--before", before.toString(), "--after", after.toString(), "--margin", "0.02",
                 "--json", json.toString());
@@ -171,8 +135,8 @@ class ShopFloorExportsTest {
     /** The header rows of the two files given one by one. */
     @Test
     void eachFileMayHaveItsOwnHeaderRow(@TempDir Path dir) throws Exception {
-        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 3);
-        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0, 2, 4);
+        Path before = ShopFloorFiles.housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 3);
+        Path after = ShopFloorFiles.housing(dir.resolve("after.xlsx"), "after", 2000, 0, 2, 4);
         Run r = run("analyze", "--before", before.toString(), "--after", after.toString(), "--before-header-row",
                 "4", "--after-header-row", "6", "--only", "Overall length", "--only", "width");
         assertThat(r.code()).as(r.err()).isZero();
@@ -186,8 +150,8 @@ class ShopFloorExportsTest {
     /** The settings file decides what is analysed, and a misspelt row stops the run with the closest name. */
     @Test
     void theCriteriaChooseTheCharacteristicsAndAMisspeltRowIsRefused(@TempDir Path dir) throws Exception {
-        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 5);
-        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0, 0, 6);
+        Path before = ShopFloorFiles.housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 5);
+        Path after = ShopFloorFiles.housing(dir.resolve("after.xlsx"), "after", 2000, 0, 0, 6);
         Path settings = Files.writeString(dir.resolve("criteria.csv"), "characteristic,unit,lsl,nominal,usl,margin\n"
                 + "Overall length,mm,41.95,42,42.05,0.01\nPin hole diameter,mm,3.185,3.2,3.215,0.003\n",
                 StandardCharsets.UTF_8);
@@ -212,8 +176,8 @@ class ShopFloorExportsTest {
 
     @Test
     void ignoredColumnsAreLeftOutAndAnUnknownOneIsRefused(@TempDir Path dir) throws Exception {
-        Path before = housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 7);
-        Path after = housing(dir.resolve("after.xlsx"), "after", 2000, 0, 0, 8);
+        Path before = ShopFloorFiles.housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 7);
+        Path after = ShopFloorFiles.housing(dir.resolve("after.xlsx"), "after", 2000, 0, 0, 8);
         Path json = dir.resolve("r.json");
         Run r = run("analyze", "--before", before.toString(), "--after", after.toString(), "--ignore-column",
                 "Mould temp", "--ignore-column", "wall thickness", "--margin", "0.05", "--json", json.toString());

@@ -6,6 +6,8 @@ import java.util.List;
 public enum CriteriaColumn {
     /** The characteristic's name (not editable). */
     CHARACTERISTIC("Characteristic", null),
+    /** Whether the characteristic is analysed (yes) or left out of this study (no). */
+    ANALYSE("Analyse", List.of("yes", "no")),
     /** Unit of measure. */
     UNIT("Unit", null),
     /** Lower specification limit. */

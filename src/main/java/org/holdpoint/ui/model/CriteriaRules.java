@@ -23,7 +23,7 @@ final class CriteriaRules {
             case LSL, NOMINAL -> numberProblem(t, col == CriteriaColumn.NOMINAL ? nominalProblem(r) : null);
             case USL -> numberProblem(t, uslProblem(r));
             case MARGIN -> marginProblem(r);
-            case MARGIN_IN, PAIRED -> col.choices().contains(t) ? null : "choose one of " + String.join(", ",
+            case MARGIN_IN, PAIRED, ANALYSE -> col.choices().contains(t) ? null : "choose one of " + String.join(", ",
                     col.choices());
             case SD_GROWTH -> positive(t, "the sd-growth limit", "1.25");
             case CAPABILITY -> positive(t, "the capability requirement", "1.33");

@@ -185,7 +185,18 @@ public final class CriteriaTable {
         rows.clear();
         for (CharacteristicData c : data) {
             String[] kept = typed.get(c.name());
-            rows.add(kept != null ? kept : fromSettings(c.name(), c.unit(), found.get(c.name())));
+            CharacteristicSettings own = found.get(c.name());
+            if (own == null) {
+                String key = org.holdpoint.study.NameKeys.key(c.name());
+                own = found.entrySet().stream().filter(e -> org.holdpoint.study.NameKeys.key(e.getKey()).equals(key))
+                        .map(Map.Entry::getValue).findFirst().orElse(null);
+            }
+            String[] row = kept != null ? kept : fromSettings(c.name(), c.unit(), own);
+            if (kept == null && own == null && found.keySet().stream().anyMatch(k -> !"*".equals(k))) {
+                // the criteria file lists characteristics and this is not one of them: not analysed unless chosen
+                row[CriteriaColumn.ANALYSE.ordinal()] = "no";
+            }
+            rows.add(row);
         }
         bound.fireChanged(Property.ROWS);
     }
@@ -223,6 +234,19 @@ public final class CriteriaTable {
     }
 
     /**
+     * @return the names of the characteristics chosen for the analysis (column "Analyse" is yes), in row order
+     */
+    public List<String> chosen() {
+        List<String> out = new ArrayList<>();
+        for (String[] r : rows) {
+            if (!"no".equals(r[CriteriaColumn.ANALYSE.ordinal()])) {
+                out.add(r[CriteriaColumn.CHARACTERISTIC.ordinal()]);
+            }
+        }
+        return out;
+    }
+
+    /**
      * @param property the property
      * @param listener told of changes, on the event thread
      */
@@ -240,6 +264,7 @@ public final class CriteriaTable {
         r[CriteriaColumn.CHARACTERISTIC.ordinal()] = name;
         r[CriteriaColumn.MARGIN_IN.ordinal()] = IN_UNITS;
         r[CriteriaColumn.PAIRED.ordinal()] = FROM_DATA;
+        r[CriteriaColumn.ANALYSE.ordinal()] = "yes";
         String unit = s != null && s.unit() != null ? s.unit() : dataUnit;
         r[CriteriaColumn.UNIT.ordinal()] = unit == null ? "" : unit;
         if (s == null) {

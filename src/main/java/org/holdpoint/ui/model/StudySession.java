@@ -268,7 +268,13 @@ public final class StudySession {
             step(Step.CRITERIA);
             return;
         }
-        Dataset d = data;
+        if (criteria.chosen().isEmpty()) {
+            problem(new UserMessage("Nothing chosen", "Every characteristic is set to \"no\" in the Analyse column.",
+                    "Choose at least one characteristic to analyse on the Criteria step."));
+            step(Step.CRITERIA);
+            return;
+        }
+        Dataset d = chosenData();
         start("Analysing", p -> service.analyze(d, settings, p), r -> {
             results.show(r);
             setDirty(true);
@@ -450,7 +456,15 @@ public final class StudySession {
         if (data == null) {
             throw new IllegalStateException("there are no data yet");
         }
-        return new ChangeStudy(change.toDescription(), data, settings(criteria.toSettings()), signOff.signatures());
+        return new ChangeStudy(change.toDescription(), chosenData(), settings(criteria.toSettings()),
+                signOff.signatures());
+    }
+
+    /** The data of the characteristics chosen on the Criteria step (all of them while nothing is chosen). */
+    private Dataset chosenData() {
+        List<String> chosen = criteria.chosen();
+        return chosen.isEmpty() || criteria.rowCount() == 0 ? data
+                : StudyService.only(data, chosen, "set to \"no\" in the Analyse column of the Criteria step");
     }
 
     /**
@@ -546,8 +560,13 @@ public final class StudySession {
         per.putAll(typed);
         StudyResult r = null;
         UserMessage problem = null;
+        Dataset chosenData = imported.data();
+        if (imported.criteria().keySet().stream().anyMatch(k -> !"*".equals(k)) && typed.isEmpty()) {
+            // a criteria file beside the data lists characteristics: only those are analysed at first
+            chosenData = StudyService.only(chosenData, imported.criteria().keySet(), "not in the criteria file");
+        }
         try {
-            r = service.analyze(imported.data(), new AnalysisSettings(wide.alpha(), wide.equalVariances(),
+            r = service.analyze(chosenData, new AnalysisSettings(wide.alpha(), wide.equalVariances(),
                     wide.holm(), null, per, null, List.of()), p);
         } catch (org.holdpoint.workflow.StudyProblem e) {
             problem = UserMessage.of(e);

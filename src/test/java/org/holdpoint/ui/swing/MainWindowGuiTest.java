@@ -181,6 +181,70 @@ class MainWindowGuiTest {
         });
     }
 
+    /**
+     * Two measuring-machine exports with title rows, bands, a units row, trace columns and two constant
+     * columns: the window shows every characteristic, the two constant ones as not assessable with the
+     * reason in the Finding column, and a characteristic set to "no" in the Analyse column is left out.
+     */
+    @Test
+    void showsNotAssessableCharacteristicsAndLetsTheUserChooseWhatIsAnalysed() throws Exception {
+        Path dir = Files.createTempDirectory("holdpoint-shop-floor");
+        Path before = org.holdpoint.importer.ShopFloorFiles.housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0,
+                11);
+        Path after = org.holdpoint.importer.ShopFloorFiles.housing(dir.resolve("after.xlsx"), "after", 2000, 0.002, 1,
+                12);
+        driver = new WindowDriver();
+        MainWindow w = driver.open(Themes.LIGHT, 1440, 900);
+        WindowDriver.onEdt(() -> {
+            var f = w.session().dataForm();
+            f.setSource(org.holdpoint.ui.model.DataForm.Source.TWO_FILES);
+            f.setBefore(before);
+            f.setAfter(after);
+            w.session().importAndAnalyse();
+            return null;
+        });
+        WindowDriver.await("the exports analysed", () -> !w.session().busy() && w.session().results().result() != null
+                && w.session().results().rowCount() == 7, 60_000);
+        var table = w.session().results();
+        int unassessable = 0;
+        for (int r = 0; r < table.rowCount(); r++) {
+            if (table.value(r, org.holdpoint.ui.model.ResultColumn.VERDICT)
+                    == org.holdpoint.ui.model.VerdictLook.NOT_ASSESSABLE) {
+                unassessable++;
+                assertThat(String.valueOf(table.value(r, org.holdpoint.ui.model.ResultColumn.CONCLUSION)))
+                        .contains("no variation in either group");
+            }
+        }
+        assertThat(unassessable).isEqualTo(2);
+        Files.createDirectories(OUT);
+        WindowDriver.onEdt(() -> {
+            w.show(Step.RESULTS);
+            return null;
+        });
+        driver.screenshot(OUT.resolve("shop-floor-results.png"));
+        WindowDriver.onEdt(() -> {
+            var c = w.session().criteria();
+            for (int r = 0; r < c.rowCount(); r++) {
+                if (c.name(r).equals("Mould temp")) {
+                    c.set(r, org.holdpoint.ui.model.CriteriaColumn.ANALYSE, "no");
+                }
+            }
+            w.show(Step.CRITERIA);
+            return null;
+        });
+        driver.screenshot(OUT.resolve("shop-floor-criteria.png"));
+        Object first = WindowDriver.onEdt(() -> w.session().results().result());
+        WindowDriver.onEdt(() -> {
+            w.session().analyse();
+            return null;
+        });
+        WindowDriver.await("the second analysis", () -> !w.session().busy()
+                && w.session().results().result() != first, 60_000);
+        assertThat(WindowDriver.onEdt(() -> w.session().results().rowCount())).isEqualTo(6);
+        assertThat(WindowDriver.onEdt(() -> w.session().study().data().report().messages()))
+                .anyMatch(m -> m.contains("not analysed") && m.contains("Mould temp"));
+    }
+
     static JComponent find(java.awt.Container root, String name) {
         for (java.awt.Component c : root.getComponents()) {
             if (name.equals(c.getName()) && c instanceof JComponent j) {
