@@ -11,6 +11,7 @@ import org.holdpoint.study.ChangeDescription;
 import org.holdpoint.study.ChangeKind;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.CriteriaCheck;
 import org.holdpoint.study.Signature;
 import org.holdpoint.study.Exclusion;
 import org.holdpoint.study.MarginSpec;
@@ -313,12 +314,26 @@ final class AnalyzeCommand implements Callable<Integer> {
     }
 
     AnalysisSettings settings() {
-        if (!(method.alpha > 0 && method.alpha < 0.5)) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "--alpha must lie strictly between 0 and 0.5, got " + method.alpha);
+        String alphaProblem = CriteriaCheck.alpha(method.alpha);
+        if (alphaProblem != null) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--alpha: " + alphaProblem);
         }
         CriteriaOptions c = criteria;
         MarginSpec margin = marginSpec(c);
+        // the one set of criteria rules, reported on the option that holds the value
+        for (CriteriaCheck.Problem p : CriteriaCheck.check(c.lsl, c.nominal, c.usl, margin, c.sdGrowthLimit,
+                null)) {
+            String option = switch (p.field()) {
+                case LSL -> "--lsl";
+                case NOMINAL -> "--nominal";
+                case USL -> "--usl";
+                case MARGIN -> c.margin != null ? "--margin" : c.marginPercent != null ? "--margin-percent"
+                        : c.marginLower != null ? "--margin-lower" : "--margin-upper";
+                case SD_GROWTH_LIMIT -> "--sd-growth-limit";
+                default -> throw new IllegalStateException("not an analyze option: " + p.field());
+            };
+            throw new CommandLine.ParameterException(spec.commandLine(), option + ": " + p.message());
+        }
         CharacteristicSettings overrides = new CharacteristicSettings(c.unit, new SpecLimits(c.lsl, c.nominal, c.usl),
                 margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null);
         List<Exclusion> exclusions = new ArrayList<>();
@@ -342,28 +357,16 @@ final class AnalyzeCommand implements Callable<Integer> {
                     "give one kind of margin: --margin, or --margin-lower/--margin-upper, or --margin-percent");
         }
         if (c.margin != null) {
-            if (!(c.margin > 0)) {
+            if (!(c.margin > 0) || !Double.isFinite(c.margin)) {
                 throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--margin must be positive (the margin is (-D, D)), got " + c.margin);
+                        "--margin must be a positive number D (the margin is (-D, D)), got " + c.margin);
             }
             return new MarginSpec(MarginSpec.Kind.ABSOLUTE, -c.margin, c.margin);
         }
         if (c.marginLower != null || c.marginUpper != null) {
-            if (c.marginLower != null && !(c.marginLower < 0)) {
-                throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--margin-lower must be negative (the margin must contain 0), got " + c.marginLower);
-            }
-            if (c.marginUpper != null && !(c.marginUpper > 0)) {
-                throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--margin-upper must be positive (the margin must contain 0), got " + c.marginUpper);
-            }
             return new MarginSpec(MarginSpec.Kind.ABSOLUTE, c.marginLower, c.marginUpper);
         }
         if (c.marginPercent != null) {
-            if (!(c.marginPercent > 0)) {
-                throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--margin-percent must be positive, got " + c.marginPercent);
-            }
             return new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, c.marginPercent, c.marginPercent);
         }
         return null;

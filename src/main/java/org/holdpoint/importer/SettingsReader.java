@@ -18,6 +18,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.CriteriaCheck;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.SpecLimits;
 
@@ -226,20 +227,21 @@ public final class SettingsReader {
         Double lsl = number(v, "lsl", w, dec);
         Double nominal = number(v, "nominal", w, dec);
         Double usl = number(v, "usl", w, dec);
-        if (lsl != null && usl != null && !(lsl < usl)) {
-            throw w.bad("lsl", v.get("lsl"), "must be below usl (" + v.get("usl") + ")");
-        }
-        if (nominal != null && (lsl != null && nominal < lsl || usl != null && nominal > usl)) {
-            throw w.bad("nominal", v.get("nominal"), "must lie between lsl and usl");
-        }
         MarginSpec margin = margin(v, w, dec);
         Double sdGrowth = number(v, "sd_growth_limit", w, dec);
-        if (sdGrowth != null && !(sdGrowth > 0)) {
-            throw w.bad("sd_growth_limit", v.get("sd_growth_limit"), "must be a positive ratio such as 1.2");
-        }
         Double capMin = number(v, "capability_min", w, dec);
-        if (capMin != null && !(capMin > 0)) {
-            throw w.bad("capability_min", v.get("capability_min"), "must be a positive index such as 1.33");
+        // the one set of criteria rules (study.CriteriaCheck), reported on the column that holds the value
+        for (CriteriaCheck.Problem p : CriteriaCheck.check(lsl, nominal, usl, margin, sdGrowth, capMin)) {
+            String col = switch (p.field()) {
+                case LSL -> "lsl";
+                case NOMINAL -> "nominal";
+                case USL -> "usl";
+                case MARGIN -> marginColumn(v);
+                case SD_GROWTH_LIMIT -> "sd_growth_limit";
+                case CAPABILITY_REQUIREMENT -> "capability_min";
+                default -> throw new IllegalStateException("not a settings-file field: " + p.field());
+            };
+            throw w.bad(col, v.get(col), "is not accepted: " + p.message());
         }
         Boolean paired = bool(v, "paired", w);
         try {
@@ -269,46 +271,33 @@ public final class SettingsReader {
                     "is symmetric; give either it or the lower/upper margins, not both");
         }
         if (sym != null) {
-            positive(sym, "margin", v, w);
+            if (!(sym > 0)) {
+                throw w.bad("margin", v.get("margin"), "must be positive (the margin is ± this amount in the "
+                        + "characteristic's unit)");
+            }
             return new MarginSpec(MarginSpec.Kind.ABSOLUTE, -sym, sym);
         }
         if (lo != null || hi != null) {
-            if (lo != null && !(lo < 0)) {
-                throw w.bad("margin_lower", v.get("margin_lower"), "must be negative: it is the lower bound L of the "
-                        + "margin (L, U) for after − before, e.g. -0.02");
-            }
-            if (hi != null && !(hi > 0)) {
-                throw w.bad("margin_upper", v.get("margin_upper"), "must be positive: it is the upper bound U of the "
-                        + "margin (L, U) for after − before, e.g. 0.02");
-            }
             return new MarginSpec(MarginSpec.Kind.ABSOLUTE, lo, hi);
         }
         if (pct != null) {
-            percent(pct, "margin_percent", v, w);
             return new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, pct, pct);
         }
         if (pctLo != null || pctHi != null) {
-            if (pctLo != null) {
-                percent(pctLo, "margin_percent_lower", v, w);
-            }
-            if (pctHi != null) {
-                percent(pctHi, "margin_percent_upper", v, w);
-            }
             return new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, pctLo, pctHi);
         }
         return null;
     }
 
-    private static void positive(double x, String col, Map<String, String> v, Where w) {
-        if (!(x > 0)) {
-            throw w.bad(col, v.get(col), "must be positive (the margin is ± this amount in the characteristic's unit)");
+    /** The margin column the row uses (for messages). */
+    private static String marginColumn(Map<String, String> v) {
+        for (String c : List.of("margin", "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower",
+                "margin_percent_upper")) {
+            if (v.get(c) != null) {
+                return c;
+            }
         }
-    }
-
-    private static void percent(double x, String col, Map<String, String> v, Where w) {
-        if (!(x > 0 && x < 100)) {
-            throw w.bad(col, v.get(col), "must be a percentage of the tolerance width between 0 and 100 (e.g. 10)");
-        }
+        return "margin";
     }
 
     private static Double number(Map<String, String> v, String col, Where w, char dec) {

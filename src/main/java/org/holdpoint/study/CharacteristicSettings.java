@@ -1,5 +1,7 @@
 package org.holdpoint.study;
 
+import java.util.List;
+
 /**
  * The criteria for one characteristic; any field may be null (not set). Settings are merged:
  * {@link #overriddenBy(CharacteristicSettings)} takes every field the other sets.
@@ -20,12 +22,10 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
     /** Normalises a null spec to {@link SpecLimits#NONE}. */
     public CharacteristicSettings {
         spec = spec == null ? SpecLimits.NONE : spec;
-        if (sdGrowthLimit != null && !(sdGrowthLimit > 0)) {
-            throw new org.holdpoint.stats.StatsException("the sd-growth limit must be positive, got %s", sdGrowthLimit);
-        }
-        if (capabilityRequirement != null && !(capabilityRequirement > 0)) {
-            throw new org.holdpoint.stats.StatsException("the capability requirement must be positive, got %s",
-                    capabilityRequirement);
+        List<CriteriaCheck.Problem> problems = CriteriaCheck.check(spec.lsl(), spec.nominal(),
+                spec.usl(), margin, sdGrowthLimit, capabilityRequirement);
+        if (!problems.isEmpty()) {
+            throw new org.holdpoint.stats.StatsException("%s", problems.get(0).message());
         }
     }
 

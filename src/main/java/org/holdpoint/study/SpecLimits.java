@@ -13,8 +13,9 @@ public record SpecLimits(Double lsl, Double nominal, Double usl) {
 
     /** Validates the limits. */
     public SpecLimits {
-        if (lsl != null && usl != null && !(lsl < usl)) {
-            throw new org.holdpoint.stats.StatsException("LSL (%s) must be below USL (%s)", lsl, usl);
+        String problem = CriteriaCheck.limitsProblem(lsl, usl);
+        if (problem != null) {
+            throw new org.holdpoint.stats.StatsException("%s", problem);
         }
     }
 

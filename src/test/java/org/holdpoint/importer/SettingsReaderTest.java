@@ -76,10 +76,11 @@ class SettingsReaderTest {
                 .isInstanceOf(ImportException.class).hasMessageContaining("a.csv, line 2, column lsl")
                 .hasMessageContaining("\"abc\" is not a number");
         assertThatThrownBy(() -> r.read(write(dir, "b.csv", "characteristic,lsl,usl\nbore,2,1\n")))
-                .isInstanceOf(ImportException.class).hasMessageContaining("must be below usl");
+                .isInstanceOf(ImportException.class).hasMessageContaining("column usl")
+                .hasMessageContaining("the USL (1) must be above the LSL (2)");
         assertThatThrownBy(() -> r.read(write(dir, "c.csv", "characteristic,margin_lower\nbore,0.1\n")))
                 .isInstanceOf(ImportException.class).hasMessageContaining("column margin_lower")
-                .hasMessageContaining("must be negative");
+                .hasMessageContaining("must be below 0");
         assertThatThrownBy(() -> r.read(write(dir, "d.csv", "characteristic,margn\nbore,0.1\n")))
                 .isInstanceOf(ImportException.class).hasMessageContaining("unknown column \"margn\"");
         assertThatThrownBy(() -> r.read(write(dir, "e.csv", "characteristic,margin,margin_percent\nbore,0.1,5\n")))

@@ -38,25 +38,20 @@ final class CriteriaRules {
     }
 
     private static String uslProblem(String[] r) {
-        Double lsl = number(r[CriteriaColumn.LSL.ordinal()]);
-        Double usl = number(r[CriteriaColumn.USL.ordinal()]);
-        if (lsl != null && usl != null && !(lsl < usl)) {
-            return "must be above LSL (" + text(lsl) + ")";
-        }
-        return null;
+        return specProblem(r, org.holdpoint.study.CriteriaCheck.Field.USL);
     }
 
     private static String nominalProblem(String[] r) {
-        Double lsl = number(r[CriteriaColumn.LSL.ordinal()]);
-        Double nom = number(r[CriteriaColumn.NOMINAL.ordinal()]);
-        Double usl = number(r[CriteriaColumn.USL.ordinal()]);
-        if (nom == null) {
-            return null;
-        }
-        if (lsl != null && nom < lsl || usl != null && nom > usl) {
-            return "must lie between LSL and USL";
-        }
-        return null;
+        return specProblem(r, org.holdpoint.study.CriteriaCheck.Field.NOMINAL);
+    }
+
+    /** The one set of criteria rules (study.CriteriaCheck) applied to the limits as typed. */
+    private static String specProblem(String[] r, org.holdpoint.study.CriteriaCheck.Field field) {
+        return org.holdpoint.study.CriteriaCheck.check(number(r[CriteriaColumn.LSL.ordinal()]),
+                number(r[CriteriaColumn.NOMINAL.ordinal()]), number(r[CriteriaColumn.USL.ordinal()]), null, null, null)
+                .stream()
+                .filter(p -> p.field() == field).map(org.holdpoint.study.CriteriaCheck.Problem::message).findFirst()
+                .orElse(null);
     }
 
     private static String positive(String t, String what, String example) {
@@ -64,7 +59,9 @@ final class CriteriaRules {
             return notANumber(t);
         }
         Double v = number(t);
-        return v == null || v > 0 ? null : what + " must be above 0, e.g. " + example;
+        var problems = what.contains("sd-growth") ? org.holdpoint.study.CriteriaCheck.check(null, null, null, null, v,
+                null) : org.holdpoint.study.CriteriaCheck.check(null, null, null, null, null, v);
+        return problems.isEmpty() ? null : problems.get(0).message();
     }
 
     private static String marginProblem(String[] r) {
@@ -78,11 +75,14 @@ final class CriteriaRules {
         } catch (IllegalArgumentException e) {
             return e.getMessage();
         }
-        if (percent && (number(r[CriteriaColumn.LSL.ordinal()]) == null
-                || number(r[CriteriaColumn.USL.ordinal()]) == null)) {
-            return "a margin in % of tolerance needs both LSL and USL";
-        }
-        return null;
+        return org.holdpoint.study.CriteriaCheck.resolvable(percent ? new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE,
+                1.0, 1.0) : null, specOrNone(number(r[CriteriaColumn.LSL.ordinal()]),
+                        number(r[CriteriaColumn.USL.ordinal()])));
+    }
+
+    private static SpecLimits specOrNone(Double lsl, Double usl) {
+        return org.holdpoint.study.CriteriaCheck.limitsProblem(lsl, usl) == null ? new SpecLimits(lsl, null, usl)
+                : SpecLimits.NONE;
     }
 
     /**
@@ -117,13 +117,11 @@ final class CriteriaRules {
         }
         if (percent) {
             lo = lo == null ? null : Math.abs(lo);
-            if (lo != null && lo == 0 || hi != null && !(hi > 0)) {
-                throw new IllegalArgumentException("percentages of the tolerance must be above 0");
-            }
-            return new Bounds(lo, hi);
         }
-        if (lo != null && !(lo < 0) || hi != null && !(hi > 0)) {
-            throw new IllegalArgumentException("the margin must contain 0: L below 0, U above 0");
+        String problem = org.holdpoint.study.CriteriaCheck.margin(new MarginSpec(percent
+                ? MarginSpec.Kind.PERCENT_OF_TOLERANCE : MarginSpec.Kind.ABSOLUTE, lo, hi));
+        if (problem != null) {
+            throw new IllegalArgumentException(problem);
         }
         return new Bounds(lo, hi);
     }

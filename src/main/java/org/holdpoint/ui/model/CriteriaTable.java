@@ -169,7 +169,7 @@ public final class CriteriaTable {
         if (a == null) {
             return CriteriaRules.isNumber(alpha) ? "α is required" : "α must be a number such as 0.05";
         }
-        return a > 0 && a < 0.5 ? null : "α must lie strictly between 0 and 0.5";
+        return org.holdpoint.study.CriteriaCheck.alpha(a);
     }
 
     /**

@@ -213,14 +213,14 @@ public final class PlanForm {
             return t.contains(",") ? "Use a point as the decimal mark, e.g. 0.05." : "Enter a number, e.g. 0.05.";
         }
         return switch (f) {
-            case ALPHA -> v > 0 && v < 0.5 ? null : "α must be between 0 and 0.5 (usually 0.05).";
+            case ALPHA -> org.holdpoint.study.CriteriaCheck.alpha(v);
             case SYMMETRIC -> v > 0 ? null : "D must be positive: the margin is −D to +D.";
             case LOWER -> v < 0 ? null : "L must be negative: the margin must contain 0.";
             case UPPER -> v > 0 ? null : "U must be positive: the margin must contain 0.";
             case DIFFERENCE -> differenceProblem(v);
             case SD -> v > 0 ? null : "σ must be positive.";
             case POWER -> powerProblem(v);
-            case RATIO -> v > 0 && v <= 100 ? null : "The ratio must be positive (1 = equal groups).";
+            case RATIO -> org.holdpoint.study.CriteriaCheck.allocationRatio(v);
         };
     }
 

@@ -50,11 +50,12 @@ class CriteriaTableTest {
         assertThat(t.problem(0, CriteriaColumn.LSL)).isEqualTo("\"abc\" is not a number");
         t.set(0, CriteriaColumn.LSL, "5");
         t.set(0, CriteriaColumn.USL, "4");
-        assertThat(t.problem(0, CriteriaColumn.USL)).isEqualTo("must be above LSL (5)");
-        assertThat(t.rowProblem(0)).isEqualTo("USL: must be above LSL (5)");
+        assertThat(t.problem(0, CriteriaColumn.USL)).isEqualTo("the USL (4) must be above the LSL (5)");
+        assertThat(t.rowProblem(0)).isEqualTo("USL: the USL (4) must be above the LSL (5)");
         t.set(0, CriteriaColumn.NOMINAL, "7");
         t.set(0, CriteriaColumn.USL, "6");
-        assertThat(t.problem(0, CriteriaColumn.NOMINAL)).isEqualTo("must lie between LSL and USL");
+        assertThat(t.problem(0, CriteriaColumn.NOMINAL)).isEqualTo("the nominal value (7) must lie between the LSL "
+                + "and the USL");
         assertThatThrownBy(t::toSettings).isInstanceOf(IllegalStateException.class).hasMessageContaining("\"A\"")
                 .hasMessageContaining("Nominal");
     }
@@ -67,7 +68,7 @@ class CriteriaTableTest {
         assertThat(t.problem(0, CriteriaColumn.MARGIN)).contains("must contain 0");
         t.set(0, CriteriaColumn.MARGIN, "10");
         t.set(0, CriteriaColumn.MARGIN_IN, CriteriaTable.IN_PERCENT);
-        assertThat(t.problem(0, CriteriaColumn.MARGIN)).isEqualTo("a margin in % of tolerance needs both LSL and USL");
+        assertThat(t.problem(0, CriteriaColumn.MARGIN)).isEqualTo("a margin in % of the tolerance needs both the LSL and the USL");
         t.set(0, CriteriaColumn.MARGIN_IN, "percent");
         assertThat(t.problem(0, CriteriaColumn.MARGIN_IN)).startsWith("choose one of");
         t.set(0, CriteriaColumn.SD_GROWTH, "0");
@@ -114,7 +115,7 @@ class CriteriaTableTest {
     @Test
     void alphaIsValidatedAsTyped() {
         t.setAlpha("0.5");
-        assertThat(t.alphaProblem()).isEqualTo("α must lie strictly between 0 and 0.5");
+        assertThat(t.alphaProblem()).contains("α must lie strictly between 0 and 0.5");
         t.setAlpha("x");
         assertThat(t.alphaProblem()).isEqualTo("α must be a number such as 0.05");
         t.setAlpha("0.025");

@@ -54,7 +54,7 @@ class PlanFormTest {
         f.set(Field.LOWER, "0.1");
         assertThat(f.problem(Field.LOWER)).contains("negative");
         f.set(Field.RATIO, "0");
-        assertThat(f.problem(Field.RATIO)).contains("positive");
+        assertThat(f.problem(Field.RATIO)).contains("above 0");
         f.setDesign(Design.PAIRED);
         assertThat(f.problem(Field.RATIO)).as("no ratio for pairs").isNull();
         assertThat(f.firstProblem()).isEqualTo(Field.LOWER);
