@@ -149,8 +149,9 @@ public final class StudySession {
         if (data == null) {
             return List.of();
         }
-        return data.report().messages().stream().filter(m -> m.contains(": layout ") || m.contains(": header in row "))
-                .toList();
+        return data.report().messages().stream().filter(m -> m.contains(": layout ") || m.contains(": header in row ")
+                || m.contains("holds the units of measure") || m.contains("columns not read as characteristics")
+                || m.startsWith("PAIRING HINT") || m.contains("reported as not assessable")).toList();
     }
 
     /** @return the preview of the imported data */
