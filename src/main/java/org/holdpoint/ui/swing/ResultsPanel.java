@@ -301,17 +301,28 @@ final class ResultsPanel extends JPanel {
         }
     }
 
-    /** Numbers right-aligned, "undefined" for a missing value. */
+    /** Numbers right-aligned, "undefined" for a missing value, a dash where nothing was computed. */
     static final class NumberRenderer extends DefaultTableCellRenderer {
         private static final long serialVersionUID = 1L;
+        private boolean notComputed;
 
         NumberRenderer() {
             setHorizontalAlignment(RIGHT);
         }
 
         @Override
+        public java.awt.Component getTableCellRendererComponent(JTable t, Object value, boolean selected,
+                boolean focus, int row, int column) {
+            Object look = t.getModel().getValueAt(t.convertRowIndexToModel(row), ResultColumn.VERDICT.ordinal());
+            notComputed = look == org.holdpoint.ui.model.VerdictLook.NOT_ASSESSABLE;
+            java.awt.Component c = super.getTableCellRendererComponent(t, value, selected, focus, row, column);
+            setToolTipText(notComputed ? "not computed: the characteristic is not assessable (see its reason)" : null);
+            return c;
+        }
+
+        @Override
         protected void setValue(Object v) {
-            setText(v == null ? "undefined" : Format.num((Double) v));
+            setText(v == null ? notComputed ? "\u2014" : "undefined" : Format.num((Double) v));
         }
     }
 
