@@ -21,20 +21,45 @@ record ListFilter(String where, Object[] params) {
     static ListFilter of(ArchiveQuery q) {
         List<String> clauses = new ArrayList<>();
         List<Object> params = new ArrayList<>();
-        add(clauses, params, Sql.WHERE_PART, q.partNumber());
-        add(clauses, params, Sql.WHERE_CHARACTERISTIC, q.characteristic());
+        add(clauses, params, Sql.WHERE_PART, pattern(q.partNumber()));
+        add(clauses, params, Sql.WHERE_CHARACTERISTIC, pattern(q.characteristic()));
         add(clauses, params, Sql.WHERE_CHANGE_KIND, q.changeKind());
         add(clauses, params, Sql.WHERE_VERDICT, q.verdict());
         // stored times are truncated to microseconds, so the bounds are too
         add(clauses, params, Sql.WHERE_CREATED_FROM, micros(q.createdFrom()));
         add(clauses, params, Sql.WHERE_CREATED_TO, micros(q.createdTo()));
-        add(clauses, params, Sql.WHERE_SIGNER, q.signer());
+        add(clauses, params, Sql.WHERE_SIGNER, pattern(q.signer()));
         add(clauses, params, Sql.WHERE_CHANGE_ID, q.changeId());
         if (q.versions() == ArchiveQuery.Versions.CURRENT) {
             clauses.add(Sql.WHERE_CURRENT);
         }
         String where = clauses.isEmpty() ? "" : " WHERE " + String.join(" AND ", clauses);
         return new ListFilter(where, params.toArray());
+    }
+
+    /**
+     * Searching as people search: case does not matter, and the text matches anywhere in the name
+     * ("hx" finds "HX-220-B"); with a {@code *} the text is a pattern ("HX-*-B"), {@code *} standing
+     * for any run of characters. The LIKE wildcards {@code %} and {@code _} typed by the user are taken
+     * literally (escaped with {@code !}).
+     *
+     * @param text the user's text, or null
+     * @return the LIKE pattern in lower case, or null
+     */
+    static String pattern(String text) {
+        if (text == null || text.isBlank()) {
+            return null;
+        }
+        String t = text.strip().toLowerCase(java.util.Locale.ROOT);
+        StringBuilder sb = new StringBuilder();
+        for (char ch : t.toCharArray()) {
+            switch (ch) {
+                case '!', '%', '_' -> sb.append('!').append(ch);
+                case '*' -> sb.append('%');
+                default -> sb.append(ch);
+            }
+        }
+        return t.indexOf('*') >= 0 ? sb.toString() : "%" + sb + "%";
     }
 
     private static Instant micros(Instant t) {

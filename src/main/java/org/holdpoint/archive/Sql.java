@@ -107,15 +107,15 @@ final class Sql {
             + " FROM signature g JOIN study s ON s.id = g.study_id";
     static final String LIST_SIGNATURES_TAIL = " ORDER BY g.study_id, g.signed_at, g.id";
 
-    static final String WHERE_PART = "s.part_key = LOWER(?)";
+    static final String WHERE_PART = "s.part_key LIKE ? ESCAPE '!'";
     static final String WHERE_CHARACTERISTIC = "EXISTS (SELECT 1 FROM study_characteristic c2"
-            + " WHERE c2.study_id = s.id AND c2.name_key = LOWER(?))";
+            + " WHERE c2.study_id = s.id AND c2.name_key LIKE ? ESCAPE '!')";
     static final String WHERE_CHANGE_KIND = "s.change_kind_key = LOWER(?)";
     static final String WHERE_VERDICT = "LOWER(s.verdict) = LOWER(?)";
     static final String WHERE_CREATED_FROM = "s.created_at >= ?";
     static final String WHERE_CREATED_TO = "s.created_at < ?";
     static final String WHERE_SIGNER = "EXISTS (SELECT 1 FROM signature g2"
-            + " WHERE g2.study_id = s.id AND g2.signer_key = LOWER(?))";
+            + " WHERE g2.study_id = s.id AND g2.signer_key LIKE ? ESCAPE '!')";
     static final String WHERE_CHANGE_ID = "s.change_id = ?";
     static final String WHERE_CURRENT = "NOT EXISTS (SELECT 1 FROM study n2 WHERE n2.supersedes_id = s.id)";
 

@@ -127,9 +127,11 @@ final class ArchiveCommand implements Runnable {
 
     @Command(name = "list", mixinStandardHelpOptions = true, header = "List archived change records.")
     static final class ListStudies extends Common implements Callable<Integer> {
-        @Option(names = "--part", paramLabel = "NUMBER", description = "Only this part number.")
+        @Option(names = "--part", paramLabel = "TEXT", description = "Only part numbers containing TEXT (any case; "
+                + "* for any run of characters, as in HX-*-B).")
         String part;
-        @Option(names = "--characteristic", paramLabel = "NAME", description = "Only records with this characteristic.")
+        @Option(names = "--characteristic", paramLabel = "TEXT", description = "Only records with a characteristic "
+                + "whose name contains TEXT (any case; * as a wildcard).")
         String characteristic;
         @Option(names = "--kind", paramLabel = "KIND", description = "Only this kind of change (tooling, machine, "
                 + "material, supplier, method, other).")
@@ -138,9 +140,11 @@ final class ArchiveCommand implements Runnable {
         String verdict;
         @Option(names = "--from", paramLabel = "DATE", description = "Archived on or after this date (yyyy-mm-dd).")
         String from;
-        @Option(names = "--to", paramLabel = "DATE", description = "Archived before this date (yyyy-mm-dd).")
+        @Option(names = "--to", paramLabel = "DATE", description = "Archived on or before this date (yyyy-mm-dd; the "
+                + "whole day counts).")
         String to;
-        @Option(names = "--signer", paramLabel = "NAME", description = "Only records signed by this person.")
+        @Option(names = "--signer", paramLabel = "TEXT", description = "Only records signed by a person whose name "
+                + "contains TEXT (any case; * as a wildcard).")
         String signer;
         @Option(names = "--all-versions", description = "Include superseded versions.")
         boolean all;
@@ -186,7 +190,9 @@ final class ArchiveCommand implements Runnable {
                 return option.equals("--from") ? Instant.EPOCH : Instant.parse("9999-12-31T00:00:00Z");
             }
             try {
-                return LocalDate.parse(text).atStartOfDay(ZoneOffset.UTC).toInstant();
+                LocalDate d = LocalDate.parse(text);
+                // --to includes its whole day
+                return (option.equals("--to") ? d.plusDays(1) : d).atStartOfDay(ZoneOffset.UTC).toInstant();
             } catch (DateTimeParseException e) {
                 throw new CommandLine.ParameterException(spec.commandLine(), option + " needs a date as yyyy-mm-dd, "
                         + "got '" + text + "'");

@@ -85,6 +85,15 @@ class JdbcArchiveTest {
         assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("4711").withCharacteristic("Wall")))
                 .containsExactly(b.id());
         assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("9999"))).isEmpty();
+        // people search by part of a name, in any case, or with * for any run of characters
+        assertThat(ids(ArchiveQuery.withDefaults().withSigner("QUINN"))).containsExactly(c.id());
+        assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("47"))).containsExactly(b.id(), a.id());
+        assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("0*5"))).containsExactly(c.id());
+        assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("7*"))).isEmpty();
+        assertThat(ids(ArchiveQuery.withDefaults().withCharacteristic("orq"))).containsExactly(c.id());
+        // LIKE wildcards typed by the user are taken literally
+        assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("4_11"))).isEmpty();
+        assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("%"))).isEmpty();
 
         StudyVersion listed = archive.list(ArchiveQuery.withDefaults().withChangeId("CR-3")).get(0);
         assertThat(listed.characteristics()).containsExactly("Bore", "Torque");
