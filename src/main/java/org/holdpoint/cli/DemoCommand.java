@@ -74,8 +74,9 @@ final class DemoCommand implements Callable<Integer> {
             if (in == null) {
                 throw new UserInputException("the bundled sample file %s is missing from this build", name);
             }
-            Path tmp = Files.createTempFile(out, "." + name, ".part");
-            Files.copy(in, tmp, StandardCopyOption.REPLACE_EXISTING);
+            // a plain new file (createTempFile's owner-only permissions would survive the move)
+            Path tmp = out.resolve("." + name + "." + Long.toHexString(System.nanoTime()) + ".part");
+            Files.copy(in, tmp);
             Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         }
         return target;

@@ -51,7 +51,8 @@ public final class TemplateGenerator {
         Path target = Path.of(args.length > 0 ? args[0] : "templates/holdpoint-default.xlsx");
         Path dir = target.toAbsolutePath().getParent();
         Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, ".template", ".part");
+        // a plain new file (createTempFile's owner-only permissions would survive the move)
+        Path tmp = dir.resolve(".template." + Long.toHexString(System.nanoTime()) + ".part");
         try {
             Files.write(tmp, build());
             Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);

@@ -11,7 +11,10 @@ import java.nio.file.StandardCopyOption;
 
 /**
  * Writes output files atomically: into a temporary file in the target's folder, then one move, so a
- * reader never sees a half-written file and a failure leaves nothing behind.
+ * reader never sees a half-written file and a failure leaves nothing behind. The temporary file is
+ * created as any new file is, so the output gets the permissions the user's umask gives (a workbook in
+ * a shared folder can be read by the others); only a private key is created readable by its owner
+ * alone.
  */
 public final class AtomicFiles {
     private AtomicFiles() {
@@ -47,6 +50,23 @@ public final class AtomicFiles {
      * @throws IOException when it cannot be written (nothing is left behind)
      */
     public static void write(Path target, boolean overwrite, Writer writer) throws IOException {
+        write(target, overwrite, false, writer);
+    }
+
+    /**
+     * Writes a file readable and writable by its owner only (a private key), atomically.
+     *
+     * @param target    the file
+     * @param writer    produces the content
+     * @throws IOException when it cannot be written or exists (nothing is left behind)
+     */
+    public static void writePrivate(Path target, Writer writer) throws IOException {
+        write(target, false, true, writer);
+    }
+
+    private static final java.security.SecureRandom RANDOM = new java.security.SecureRandom();
+
+    private static void write(Path target, boolean overwrite, boolean ownerOnly, Writer writer) throws IOException {
         Path abs = target.toAbsolutePath();
         Path dir = abs.getParent();
         if (!overwrite && Files.exists(abs)) {
@@ -55,9 +75,20 @@ public final class AtomicFiles {
         if (dir != null) {
             Files.createDirectories(dir);
         }
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".part");
+        // a plain new file, not createTempFile: its owner-only permissions would survive the move
+        Path tmp = (dir == null ? Path.of("") : dir).resolve("." + abs.getFileName() + "."
+                + Long.toHexString(RANDOM.nextLong() & Long.MAX_VALUE) + ".part");
         try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
+            java.util.Set<java.nio.file.OpenOption> options = java.util.Set.of(
+                    java.nio.file.StandardOpenOption.CREATE_NEW, java.nio.file.StandardOpenOption.WRITE);
+            java.nio.channels.SeekableByteChannel ch;
+            if (ownerOnly && tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+                ch = Files.newByteChannel(tmp, options, java.nio.file.attribute.PosixFilePermissions.asFileAttribute(
+                        java.nio.file.attribute.PosixFilePermissions.fromString("rw-------")));
+            } else {
+                ch = Files.newByteChannel(tmp, options);
+            }
+            try (OutputStream out = java.nio.channels.Channels.newOutputStream(ch)) {
                 writer.write(out);
             }
             try {

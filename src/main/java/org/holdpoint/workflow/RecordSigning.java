@@ -41,7 +41,7 @@ public final class RecordSigning {
         try {
             KeyPair pair = KeyPairGenerator.getInstance(ALGORITHM).generateKeyPair();
             AtomicFiles.write(publicFile, false, out -> out.write(pem("PUBLIC KEY", pair.getPublic().getEncoded())));
-            AtomicFiles.write(privateFile, false, out -> out.write(pem("PRIVATE KEY",
+            AtomicFiles.writePrivate(privateFile, out -> out.write(pem("PRIVATE KEY",
                     pair.getPrivate().getEncoded())));
             return fingerprint(pair.getPublic());
         } catch (GeneralSecurityException e) {
