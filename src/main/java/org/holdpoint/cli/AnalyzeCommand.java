@@ -190,16 +190,19 @@ final class AnalyzeCommand implements Callable<Integer> {
         } else {
             text.print(outcome.data(), outcome.settings(), outcome.result());
         }
+        // one record for every output of this run: the signature is stamped once, so the study file, the
+        // workbook's embedded record and the archived version are the same document with the same SHA-256
+        Signature sig = signOff();
+        ChangeStudy study = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(),
+                sig == null ? List.of() : List.of(new Signature(sig.stage(), sig.name(), sig.role(), sig.meaning(),
+                        java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString())));
         if (output.saveStudy != null) {
-            Signature sig = signOff();
-            ChangeStudy study = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(),
-                    sig == null ? List.of() : List.of(new Signature(sig.stage(), sig.name(), sig.role(), sig.meaning(),
-                            java.time.OffsetDateTime.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS)
-                                    .toString())));
             try {
                 org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), output.saveStudy);
-                spec.commandLine().getOut().printf(java.util.Locale.ROOT, "Saved the study file %s%n",
-                        output.saveStudy);
+                spec.commandLine().getOut().printf(java.util.Locale.ROOT, "Saved the study file %s%n  record SHA-256 "
+                        + "%s%n", output.saveStudy, org.holdpoint.workflow.StudyFiles.sha256(
+                                org.holdpoint.workflow.StudyFiles.canonical(org.holdpoint.workflow.StudyFiles.toJson(
+                                        study, outcome.result()))));
                 spec.commandLine().getOut().flush();
             } catch (IOException e) {
                 throw new UserInputException("cannot write the study file %s (%s); check the folder is writable",
@@ -207,7 +210,7 @@ final class AnalyzeCommand implements Callable<Integer> {
             }
         }
         if (report.file != null) {
-            writeReport(outcome);
+            writeReport(outcome, study);
         }
         if (output.json != null) {
             try {
@@ -231,11 +234,10 @@ final class AnalyzeCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private void writeReport(AnalysisOutcome outcome) {
-        ChangeStudy study = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(), List.of());
+    private void writeReport(AnalysisOutcome outcome, ChangeStudy study) {
         ReportOptions options = ReportOptions.withDefaults().withTemplate(report.template)
                 .withExisting(report.overwrite ? ReportOptions.ExistingFile.REPLACE : ReportOptions.ExistingFile.REFUSE)
-                .withSignOff(signOff()).withCharts(new org.holdpoint.workflow.StudyChartSource());
+                .withCharts(new org.holdpoint.workflow.StudyChartSource());
         if (report.signKey != null) {
             options = options.withSigningKey(report.signKey, report.signPublicKey);
         }

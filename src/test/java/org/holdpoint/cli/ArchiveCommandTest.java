@@ -24,6 +24,44 @@ class ArchiveCommandTest {
         Holdpoint.wire();
     }
 
+    private static String sha(String text, String after) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile(java.util.regex.Pattern.quote(after)
+                + "\\s*([0-9a-f]{64})").matcher(text);
+        assertThat(m.find()).as(after + " in: " + text).isTrue();
+        return m.group(1);
+    }
+
+    /**
+     * One run writing the workbook and the study file, signed: the workbook's record, the study file and
+     * the archived version are one document with one SHA-256 (the signature is stamped once per run).
+     */
+    @Test
+    void theWorkbookTheStudyFileAndTheArchiveShowOneHash(@TempDir Path dir) throws Exception {
+        String url = "jdbc:h2:file:" + dir.resolve("archive").toAbsolutePath() + "/db";
+        Path demo = dir.resolve("demo");
+        assertThat(AnalyzeCommandTest.run("demo", "--out", demo.toString()).code()).isZero();
+        Path study = dir.resolve("study.json");
+        Path workbook = dir.resolve("signoff.xlsx");
+        AnalyzeCommandTest.Run saved = AnalyzeCommandTest.run("analyze", demo.resolve("boring-bar-insert.csv")
+                .toString(), "--save-study", study.toString(), "--report", workbook.toString(), "--change-id",
+                "CR-78", "--title", "Second-source insert", "--part", "PH-2210", "--signed-by", "T. Oyelaran",
+                "--role", "process engineer", "--meaning", "prepared the study");
+        assertThat(saved.code()).as(saved.err()).isZero();
+        String fromStudy = sha(saved.out(), "Saved the study file " + study + System.lineSeparator()
+                + "  record SHA-256");
+        String fromWorkbook = sha(saved.out(), "Wrote the sign-off workbook " + workbook + System.lineSeparator()
+                + "  record SHA-256");
+        AnalyzeCommandTest.Run verified = AnalyzeCommandTest.run("verify", workbook.toString());
+        assertThat(verified.code()).as(verified.out() + verified.err()).isZero();
+        AnalyzeCommandTest.Run add = AnalyzeCommandTest.run("archive", "add", study.toString(), "--archive", url,
+                "--actor", "T. Oyelaran");
+        assertThat(add.code()).as(add.err()).isZero();
+        String archived = sha(add.out(), "(SHA-256");
+        assertThat(fromWorkbook).isEqualTo(fromStudy);
+        assertThat(sha(verified.out(), "SHA-256")).isEqualTo(fromStudy);
+        assertThat(archived).isEqualTo(fromStudy);
+    }
+
     @Test
     void aStudyIsArchivedFoundSignedCorrectedAndVerified(@TempDir Path dir) throws Exception {
         String url = "jdbc:h2:file:" + dir.resolve("archive").toAbsolutePath() + "/db";
