@@ -172,7 +172,8 @@ public final class DataImporter {
                 }
             }
             if (!dropped.isEmpty()) {
-                log.message(String.format(Locale.ROOT, "characteristics %s: %s", dropped.size() > 12
+                log.message(String.format(Locale.ROOT, "%s %s: %s", dropped.size() == 1 ? "characteristic"
+                        : "characteristics", dropped.size() > 12
                         ? String.join(", ", dropped.subList(0, 12)) + " and " + (dropped.size() - 12) + " more"
                         : String.join(", ", dropped), !onlyKeys.isEmpty() ? "not in the criteria, not analysed"
                                 : "left out by the user's choice"));
