@@ -247,6 +247,13 @@ public final class DataImporter {
             log.message(String.format(Locale.ROOT, "%s: header in row %d (rows above it are not read)", data.where(),
                     header.row()));
         }
+        if (header.limitRowsEnd() > 0) {
+            int first = Math.max(header.row(), header.unitsRow()) + 1;
+            log.message(String.format(Locale.ROOT, "%s: %s %s nominal values or limits (not read as data; enter the "
+                    + "limits as criteria)", data.where(), first == header.limitRowsEnd() ? "row " + first
+                            : "rows " + first + " to " + header.limitRowsEnd(), first == header.limitRowsEnd()
+                                    ? "holds" : "hold"));
+        }
         if (header.unitsRow() > 0) {
             log.message(String.format(Locale.ROOT, "%s: row %d holds the units of measure (read as units, not as "
                     + "data)", data.where(), header.unitsRow()));

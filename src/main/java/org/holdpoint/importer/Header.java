@@ -10,8 +10,10 @@ import java.util.List;
  * @param row      the 1-based header row
  * @param names    the names per column
  * @param unitsRow the 1-based row of units of measure directly under the header, or 0 when there is none
+ * @param limitRowsEnd the last 1-based row of the rows of nominal values and limits under the header (and
+ *                 its units row), or 0 when there are none
  */
-record Header(int row, List<ColumnNames.Name> names, int unitsRow) {
+record Header(int row, List<ColumnNames.Name> names, int unitsRow, int limitRowsEnd) {
 
     /** Copies the list (nulls allowed). */
     Header {
@@ -25,12 +27,12 @@ record Header(int row, List<ColumnNames.Name> names, int unitsRow) {
      * @param names the names per column
      */
     Header(int row, List<ColumnNames.Name> names) {
-        this(row, names, 0);
+        this(row, names, 0, 0);
     }
 
-    /** @return the first row that may hold data: below the header and its units row */
+    /** @return the first row that may hold data: below the header, its units row and its limit rows */
     int dataStart() {
-        return (unitsRow > 0 ? unitsRow : row) + 1;
+        return Math.max(limitRowsEnd, unitsRow > 0 ? unitsRow : row) + 1;
     }
 
     /** @return the number of columns the header spans (up to its last named column) */

@@ -106,7 +106,44 @@ final class HeaderDetector {
         if (unitsRow > 0) {
             names = withUnits(data, names, unitsRow);
         }
-        return new Header(row, names, unitsRow);
+        int limitsEnd = 0;
+        for (int r = Math.max(row, unitsRow) + 1; r <= data.lastRow() && limitRow(data, r); r++) {
+            limitsEnd = r;
+        }
+        return new Header(row, names, unitsRow, limitsEnd);
+    }
+
+    /**
+     * Labels of the rows of nominal values and tolerances that measuring-machine exports put between the
+     * header and the measurements (English and German); such rows are not measurements.
+     */
+    private static final java.util.Set<String> LIMIT_ROW_LABELS = java.util.Set.of("nominal", "nom", "target",
+            "usl", "lsl", "upper limit", "lower limit", "upper tol", "lower tol", "upper tolerance", "lower tolerance",
+            "tol+", "tol-", "+tol", "-tol", "tol +", "tol -", "utol", "ltol", "max limit", "min limit", "soll",
+            "sollwert", "nennmaß", "nennmass", "ogw", "ugw", "obere toleranz", "untere toleranz", "ot", "ut",
+            "oberer grenzwert", "unterer grenzwert", "spec", "specification", "upper spec", "lower spec");
+
+    /** Whether a row's first text cell (left of any number) labels it as nominal values or limits. */
+    static boolean limitRow(SheetData data, int row) {
+        for (int c = 0; c < data.columnCount(); c++) {
+            SheetColumn col = data.column(c);
+            if (col == null) {
+                continue;
+            }
+            int i = col.indexOfRow(row);
+            if (i < 0) {
+                continue;
+            }
+            if (col.kind(i) == CellKind.NUMBER) {
+                return false;
+            }
+            String t = data.display(col, i);
+            if (t != null && !t.isBlank()) {
+                String k = t.strip().toLowerCase(java.util.Locale.ROOT).replace(":", "").replace(".", "").strip();
+                return LIMIT_ROW_LABELS.contains(k) || LIMIT_ROW_LABELS.contains(ColumnNames.key(t));
+            }
+        }
+        return false;
     }
 
     /** Words that are units of measure (compared in lower case), for recognising a units row. */

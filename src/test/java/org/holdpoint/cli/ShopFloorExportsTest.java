@@ -263,4 +263,33 @@ class ShopFloorExportsTest {
         assertThat(verified.code()).as(verified.out() + verified.err()).isZero();
         assertThat(verified.out()).contains("INTACT").doesNotContain("differ from those this version computes");
     }
+    /**
+     * Measuring-machine exports that put the nominal and the tolerances between the header and the
+     * measurements (one file per group): those rows are not measurements.
+     */
+    @Test
+    void rowsOfNominalsAndTolerancesUnderTheHeaderAreNotData(@TempDir Path dir) throws Exception {
+        Random rnd = new Random(21);
+        Path[] files = new Path[2];
+        for (int g = 0; g < 2; g++) {
+            StringBuilder sb = new StringBuilder("Inspection report, spindle housing op 30\n\n");
+            sb.append("Part,Bore X,Bore Y\n");
+            sb.append("Nominal,30.000,30.000\nUpper tol,0.015,0.015\nLower tol,-0.015,-0.015\n");
+            for (int i = 0; i < 12; i++) {
+                sb.append(String.format(Locale.ROOT, "P%03d,%.4f,%.4f%n", 100 * g + i, 30 + 0.004 * rnd.nextGaussian(),
+                        30 + 0.004 * rnd.nextGaussian()));
+            }
+            files[g] = Files.writeString(dir.resolve(g == 0 ? "before.csv" : "after.csv"), sb.toString(),
+                    StandardCharsets.UTF_8);
+        }
+        Path json = dir.resolve("r.json");
+        Run r = run("analyze", "--before", files[0].toString(), "--after", files[1].toString(), "--margin", "0.005",
+                "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode out = JSON.readTree(json.toFile());
+        assertThat(names(out)).containsExactly("Bore X", "Bore Y");
+        assertThat(characteristic(out, "Bore X").path("before").path("n").asInt()).isEqualTo(12);
+        assertThat(characteristic(out, "Bore X").path("before").path("min").asDouble()).isGreaterThan(29.9);
+        assertThat(r.out()).contains("rows 4 to 6 hold nominal values or limits (not read as data");
+    }
 }
