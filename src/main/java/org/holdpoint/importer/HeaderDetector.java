@@ -125,25 +125,38 @@ final class HeaderDetector {
 
     /** Whether a row's first text cell (left of any number) labels it as nominal values or limits. */
     static boolean limitRow(SheetData data, int row) {
-        for (int c = 0; c < data.columnCount(); c++) {
-            SheetColumn col = data.column(c);
-            if (col == null) {
-                continue;
-            }
-            int i = col.indexOfRow(row);
-            if (i < 0) {
-                continue;
-            }
-            if (col.kind(i) == CellKind.NUMBER) {
+        for (String t : texts(data, row)) {
+            if (t == null) {
                 return false;
             }
-            String t = data.display(col, i);
-            if (t != null && !t.isBlank()) {
+            if (!t.isBlank()) {
                 String k = t.strip().toLowerCase(java.util.Locale.ROOT).replace(":", "").replace(".", "").strip();
                 return LIMIT_ROW_LABELS.contains(k) || LIMIT_ROW_LABELS.contains(ColumnNames.key(t));
             }
         }
         return false;
+    }
+
+    /**
+     * The cells of a row from left to right: each text ("" when blank), and null for a number (and
+     * nothing after it, since a row with a number is neither a units row nor a labelled limit row).
+     */
+    private static List<String> texts(SheetData data, int row) {
+        List<String> out = new ArrayList<>();
+        for (int c = 0; c < data.columnCount(); c++) {
+            SheetColumn col = data.column(c);
+            int i = col == null ? -1 : col.indexOfRow(row);
+            if (i < 0) {
+                continue;
+            }
+            if (col.kind(i) == CellKind.NUMBER) {
+                out.add(null);
+                return out;
+            }
+            String t = data.display(col, i);
+            out.add(t == null ? "" : t);
+        }
+        return out;
     }
 
     /** Words that are units of measure (compared in lower case), for recognising a units row. */
@@ -164,20 +177,11 @@ final class HeaderDetector {
     /** Whether a row holds only units of measure (and blanks), at least one of them, and no number. */
     static boolean unitsRow(SheetData data, int row) {
         int units = 0;
-        for (int c = 0; c < data.columnCount(); c++) {
-            SheetColumn col = data.column(c);
-            if (col == null) {
-                continue;
-            }
-            int i = col.indexOfRow(row);
-            if (i < 0) {
-                continue;
-            }
-            if (col.kind(i) == CellKind.NUMBER) {
+        for (String t : texts(data, row)) {
+            if (t == null) {
                 return false;
             }
-            String t = data.display(col, i);
-            if (t == null || t.isBlank()) {
+            if (t.isBlank()) {
                 continue;
             }
             if (isUnit(t)) {

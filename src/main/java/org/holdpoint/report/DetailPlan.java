@@ -64,24 +64,14 @@ final class DetailPlan {
                     + "verdict above). The other characteristics were analysed.", Style.WRAP, n + ": not assessable");
             s.merge(r + 13, r + 13, c0, c0 + 5);
             s.height(r + 13, 28f);
-            s.text(r + 15, c0, "Notes", Style.HEADER, n + ": notes header");
-            s.merge(r + 15, r + 15, c0, c0 + 5);
-            String notes = c.notes().isEmpty() ? "none" : String.join("\n", c.notes());
-            s.text(r + 16, c0, notes, Style.WRAP, n + ": notes");
-            s.merge(r + 16, r + 16, c0, c0 + 5);
-            s.height(r + 16, lines(notes, 110) * 12f + 4);
+            notes(r + 15, n, c);
             return r + 18;
         }
         difference(r + 13, n, c, d);
         equivalence(r + 13, n, c, d);
         spread(r + 23, n, c);
         design(r + 23, n, c);
-        s.text(r + 34, c0, "Notes", Style.HEADER, n + ": notes header");
-        s.merge(r + 34, r + 34, c0, c0 + 5);
-        String notes = c.notes().isEmpty() ? "none" : String.join("\n", c.notes());
-        s.text(r + 35, c0, notes, Style.WRAP, n + ": notes");
-        s.merge(r + 35, r + 35, c0, c0 + 5);
-        s.height(r + 35, lines(notes, 110) * 12f + 4);
+        notes(r + 34, n, c);
         int row = r + 37;
         List<NamedImage> charts = plan.input.chartsOf(n);
         int count = plan.chartCount(n);
@@ -105,6 +95,16 @@ final class DetailPlan {
         }
         s.rowBreaks.add(row);
         return new ChecksPlan(plan, s, c0).section(row + 1, index, c);
+    }
+
+    /** The notes heading at row r and the notes below it. */
+    private void notes(int r, String n, CharacteristicResult c) {
+        s.text(r, c0, "Notes", Style.HEADER, n + ": notes header");
+        s.merge(r, r, c0, c0 + 5);
+        String notes = c.notes().isEmpty() ? "none" : String.join("\n", c.notes());
+        s.text(r + 1, c0, notes, Style.WRAP, n + ": notes");
+        s.merge(r + 1, r + 1, c0, c0 + 5);
+        s.height(r + 1, lines(notes, 110) * 12f + 4);
     }
 
     static int lines(String text, int perLine) {
