@@ -5,11 +5,8 @@ import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.io.Reader;
 import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
 import java.nio.charset.Charset;
 import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -50,26 +47,9 @@ final class CsvReader {
     static SheetData read(Path path, String name, Character delimiter, Character decimalSeparator,
             List<String> messages) {
         byte[] head = readHead(path, name);
-        int bom = 0;
-        Charset cs;
-        if (head.length >= 3 && (head[0] & 0xff) == 0xEF && (head[1] & 0xff) == 0xBB && (head[2] & 0xff) == 0xBF) {
-            cs = StandardCharsets.UTF_8;
-            bom = 3;
-        } else if (head.length >= 2 && (head[0] & 0xff) == 0xFF && (head[1] & 0xff) == 0xFE) {
-            cs = StandardCharsets.UTF_16LE;
-            bom = 2;
-        } else if (head.length >= 2 && (head[0] & 0xff) == 0xFE && (head[1] & 0xff) == 0xFF) {
-            cs = StandardCharsets.UTF_16BE;
-            bom = 2;
-        } else {
-            for (byte b : head) {
-                if (b == 0) {
-                    throw new ImportException("file %s is not a text file (it holds binary data) and not a workbook "
-                            + "either. Export the data as .xlsx, .xls or .csv and try again", name);
-                }
-            }
-            cs = validUtf8(head) ? StandardCharsets.UTF_8 : Charset.forName("windows-1252");
-        }
+        TextEncoding.Detected enc = TextEncoding.detect(head, name);
+        int bom = enc.bom();
+        Charset cs = enc.charset();
         String sample = new String(head, bom, head.length - bom, cs);
         char delim = delimiter != null ? delimiter : detectDelimiter(sample);
         char dec = decimalSeparator != null ? decimalSeparator : detectDecimal(sample, delim);
@@ -151,15 +131,6 @@ final class CsvReader {
         }
     }
 
-    private static boolean validUtf8(byte[] b) {
-        try {
-            StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(b));
-            return true;
-        } catch (CharacterCodingException e) {
-            return false;
-        }
-    }
 
     /**
      * The delimiter whose count per line is the same on most lines (tab, then semicolon, comma, bar on

@@ -3,9 +3,10 @@ package org.holdpoint.importer;
 import com.fasterxml.jackson.core.JacksonException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Iterator;
@@ -32,6 +33,9 @@ import org.holdpoint.study.SpecLimits;
 public final class SettingsReader {
     /** The name of the entry that holds defaults for every characteristic. */
     public static final String DEFAULTS = "*";
+
+    /** Larger than any real settings file (one line per characteristic). */
+    private static final long MAX_BYTES = 16L << 20;
 
     /** The columns (CSV) or keys (JSON) a settings file may use. */
     public static final List<String> COLUMNS = List.of("characteristic", "unit", "lsl", "nominal", "usl", "margin",
@@ -76,15 +80,18 @@ public final class SettingsReader {
     public Map<String, CharacteristicSettings> read(Path file) {
         String name = file.toString();
         FileKind.sniff(file, name);
-        String text;
+        byte[] bytes;
         try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
+            if (Files.size(file) > MAX_BYTES) {
+                throw new ImportException("settings file %s is larger than %d MB; a settings file has one line per "
+                        + "characteristic. Check that the right file was given", name, MAX_BYTES >> 20);
+            }
+            bytes = Files.readAllBytes(file);
         } catch (IOException e) {
-            throw new ImportException(e, "settings file %s cannot be read as UTF-8 text (%s)", name, e.getMessage());
+            throw new ImportException(e, "settings file %s cannot be read (%s); check that it exists and is readable",
+                    name, e.getMessage());
         }
-        if (text.startsWith("\uFEFF")) {
-            text = text.substring(1);
-        }
+        String text = TextEncoding.decode(bytes, name).text();
         if (name.toLowerCase(Locale.ROOT).endsWith(".json") || text.stripLeading().startsWith("{")) {
             return readJson(name, text);
         }
@@ -178,6 +185,66 @@ public final class SettingsReader {
             }
         }
         return out;
+    }
+
+    /**
+     * One characteristic's criteria as a settings file's JSON entry: the same keys as a settings file
+     * (docs/settings-file.md), so the criteria have one spelling wherever they are written (settings
+     * files, study files). Absent values are left out.
+     *
+     * @param s the criteria
+     * @return the entry, e.g. {"lsl": 9.95, "usl": 10.05, "margin": 0.01}
+     */
+    public static ObjectNode toJson(CharacteristicSettings s) {
+        ObjectNode o = JsonNodeFactory.instance.objectNode();
+        if (s.unit() != null) {
+            o.put("unit", s.unit());
+        }
+        putIf(o, "lsl", s.spec().lsl());
+        putIf(o, "nominal", s.spec().nominal());
+        putIf(o, "usl", s.spec().usl());
+        MarginSpec m = s.margin();
+        if (m != null) {
+            boolean abs = m.kind() == MarginSpec.Kind.ABSOLUTE;
+            boolean symmetric = m.lower() != null && m.upper() != null
+                    && (abs ? -m.lower() == m.upper() : m.lower().equals(m.upper()));
+            if (symmetric) {
+                o.put(abs ? "margin" : "margin_percent", m.upper());
+            } else {
+                putIf(o, abs ? "margin_lower" : "margin_percent_lower", m.lower());
+                putIf(o, abs ? "margin_upper" : "margin_percent_upper", m.upper());
+            }
+        }
+        putIf(o, "sd_growth_limit", s.sdGrowthLimit());
+        putIf(o, "capability_min", s.capabilityRequirement());
+        if (s.paired() != null) {
+            o.put("paired", s.paired());
+        }
+        return o;
+    }
+
+    /**
+     * Reads one JSON entry written by {@link #toJson} (or by hand, as in a settings file), with the
+     * settings file's rules.
+     *
+     * @param file  the file name for messages
+     * @param entry the entry's name for messages (a characteristic or "defaults")
+     * @param node  the entry
+     * @return the criteria
+     * @throws ImportException naming file, entry and key for a bad value
+     */
+    public static CharacteristicSettings fromJson(String file, String entry, JsonNode node) {
+        Map<String, String> values = jsonValues(file, entry, node);
+        values.put("characteristic", entry);
+        Map<String, CharacteristicSettings> out = new LinkedHashMap<>();
+        add(out, values, new Where(file, "entry \"" + entry + "\""), '.');
+        return out.get(entry);
+    }
+
+    private static void putIf(ObjectNode o, String key, Double v) {
+        if (v != null) {
+            o.put(key, v);
+        }
     }
 
     private static Map<String, String> jsonValues(String name, String entry, JsonNode node) {
