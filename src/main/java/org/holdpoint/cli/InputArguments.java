@@ -57,8 +57,8 @@ final class InputArguments {
     @Option(names = "--delimiter", paramLabel = "CHAR", description = "Field delimiter of a text file "
             + "(default: detected). Use 'tab' for a tab.")
     String delimiter;
-    @Option(names = "--decimal", paramLabel = "CHAR", description = "Decimal separator of a text file: . or , "
-            + "(default: detected).")
+    @Option(names = "--decimal", paramLabel = "CHAR", description = "Decimal separator of numbers written as "
+            + "text, in any file kind: . or , (default: detected per text file, per column in a workbook).")
     Character decimal;
     @Option(names = "--header-row", paramLabel = "ROW", description = "1-based row of the header (default: "
             + "detected).")

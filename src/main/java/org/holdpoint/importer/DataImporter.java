@@ -241,6 +241,13 @@ public final class DataImporter {
             throw new ImportException(e, "file %s could not be read: %s. The file may be damaged; open it in its "
                     + "program, save a fresh copy and try again", name, e.getMessage());
         }
+        if (!data.otherSeparatorColumns().isEmpty()) {
+            List<String> cols = new ArrayList<>();
+            data.otherSeparatorColumns().forEach(c -> cols.add(org.holdpoint.study.Origin.columnName(c + 1)));
+            log.message(String.format(Locale.ROOT, "%s: column%s %s hold%s numbers stored as text with a decimal "
+                    + "comma; read as numbers", data.where(), cols.size() == 1 ? "" : "s", String.join(", ", cols),
+                    cols.size() == 1 ? "s" : ""));
+        }
         Header header = HeaderDetector.detect(data, r.headerRowFor(role), labelKey(r.beforeLabel(), "before"),
                 labelKey(r.afterLabel(), "after"));
         if (header.row() > 1) {

@@ -201,7 +201,7 @@ final class LayoutReader {
         SheetColumn vcol = value.col;
         CellKind kind = vcol.kind(vi);
         if (kind == CellKind.OTHER_SEPARATOR) {
-            throw mixedSeparators(r, col, data.text(vcol.payload(vi)));
+            throw mixedSeparators(col);
         }
         if (kind != CellKind.NUMBER) {
             skip(a, before, r, col, kind.skipReason(), data.text(vcol.payload(vi)));
@@ -219,12 +219,11 @@ final class LayoutReader {
         }
     }
 
-    private ImportException mixedSeparators(int r, int col, String text) {
+    private ImportException mixedSeparators(int col) {
         char sep = data.decimalSeparator();
-        return new ImportException("%s, cell %s: \"%s\" is written with a decimal %s, but this file's numbers use a "
-                + "decimal %s (mixed decimal separators). Export the data again with one decimal separator, or give "
-                + "the decimal separator if it was detected wrongly", data.where(), Origin.columnName(col + 1) + r,
-                text, sep == '.' ? "comma" : "point", sep == '.' ? "point" : "comma");
+        return new ImportException("%s, column %s: numbers are written %s (mixed decimal separators; '%s' is in "
+                + "force). Correct those cells to one decimal separator, or give the one the numbers use with "
+                + "--decimal", data.where(), Origin.columnName(col + 1), data.separatorCells(col), sep);
     }
 
     private void skip(Accum a, boolean before, int r, int col, SkipReason reason, String text) {

@@ -51,6 +51,13 @@ final class SheetColumn {
         size++;
     }
 
+    /** Replaces the kind and payload of the i-th cell (a text re-read as a number). */
+    void set(int i, CellKind kind, int scale, long payload) {
+        kinds[i] = (byte) kind.ordinal();
+        scales[i] = (byte) scale;
+        payloads[i] = payload;
+    }
+
     /** @return the 1-based row of the i-th cell */
     int row(int i) {
         return rows[i];

@@ -24,9 +24,17 @@ final class SheetData {
     private final List<String> texts = new ArrayList<>();
     private final List<int[]> merged = new ArrayList<>();
     private final DecimalParser parser;
+    /** Numeric cells store their number with a point whatever the separator of text numbers. */
+    private final DecimalParser stored = new DecimalParser('.');
     private String[] keys = new String[16];
     private int capacityHint = 8;
     private long numbersFromText;
+    /** Whether numbers stored as text take their decimal separator per column (workbooks, none given). */
+    private boolean decimalPerColumn;
+    /** Per column: up to 3 rows of numbers stored as text with this sheet's separator, then with the other. */
+    private final Map<Integer, int[]> ownSeparatorRows = new HashMap<>();
+    private final Map<Integer, int[]> otherSeparatorRows = new HashMap<>();
+    private final List<Integer> otherSeparatorColumns = new ArrayList<>();
 
     /**
      * @param file             the file name as given
@@ -176,11 +184,11 @@ final class SheetData {
      * @return false when the text is not a number (nothing added)
      */
     boolean addNumberText(int row, int col, CharSequence text) {
-        int r = parser.parse(text);
+        int r = stored.parse(text);
         if (r == DecimalParser.EXACT) {
-            addExact(row, col, parser.unscaled, parser.scale);
-        } else if (r == DecimalParser.DOUBLE_ONLY && Double.isFinite(parser.value)) {
-            addDouble(row, col, parser.value);
+            addExact(row, col, stored.unscaled, stored.scale);
+        } else if (r == DecimalParser.DOUBLE_ONLY && Double.isFinite(stored.value)) {
+            addDouble(row, col, stored.value);
         } else {
             return false;
         }
@@ -250,8 +258,61 @@ final class SheetData {
     void addPrepared(int row, int col, CellKind kind, int scale, long payload) {
         if (kind == CellKind.NUMBER) {
             numbersFromText++;
+            if (scale != 0) {
+                note(ownSeparatorRows, row, col);
+            }
+        } else if (kind == CellKind.OTHER_SEPARATOR) {
+            note(otherSeparatorRows, row, col);
         }
         col(row, col).add(row, kind, scale, payload);
+    }
+
+    private static void note(Map<Integer, int[]> m, int row, int col) {
+        int[] rows = m.get(col);
+        if (rows == null) {
+            m.put(col, new int[] {1, row, 0, 0});
+        } else if (rows[0] < 3) {
+            rows[++rows[0]] = row;
+        }
+    }
+
+    /**
+     * Numbers stored as text in a workbook take their decimal separator per column: a column whose
+     * text numbers all use the other separator than this sheet's (a decimal comma where '.' is in
+     * force) is read with that one; a column that mixes both is refused with its cells named. Used
+     * when the user gave no decimal separator (docs/import.md, "Numbers stored as text").
+     */
+    void decimalPerColumn() {
+        this.decimalPerColumn = true;
+    }
+
+    /** @return the 0-based columns whose text numbers were read with the other decimal separator */
+    List<Integer> otherSeparatorColumns() {
+        return otherSeparatorColumns;
+    }
+
+    /**
+     * The cells of a column that hold numbers stored as text with each separator, for a message.
+     *
+     * @param col 0-based column
+     * @return e.g. "with a decimal comma in J5, J9; with a decimal point in J6"
+     */
+    String separatorCells(int col) {
+        char own = parser.separator();
+        return "with a decimal " + (own == '.' ? "comma" : "point") + " in " + cells(otherSeparatorRows.get(col), col)
+                + (ownSeparatorRows.containsKey(col) ? "; with a decimal " + (own == '.' ? "point" : "comma") + " in "
+                        + cells(ownSeparatorRows.get(col), col) : "");
+    }
+
+    private static String cells(int[] rows, int col) {
+        if (rows == null) {
+            return "no cell";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (int i = 1; i <= rows[0]; i++) {
+            sb.append(i > 1 ? ", " : "").append(org.holdpoint.study.Origin.columnName(col + 1)).append(rows[i]);
+        }
+        return sb.toString();
     }
 
     private void addPrepared(int row, int col) {
@@ -275,6 +336,38 @@ final class SheetData {
                 columns[i].sortIfNeeded();
             }
         }
+        if (decimalPerColumn) {
+            DecimalParser other = new DecimalParser(parser.separator() == '.' ? ',' : '.');
+            for (int col : new java.util.TreeSet<>(otherSeparatorRows.keySet())) {
+                if (!ownSeparatorRows.containsKey(col) && readWith(other, columns[col])) {
+                    otherSeparatorColumns.add(col);
+                }
+            }
+        }
+    }
+
+    /** Reads a column's other-separator texts as numbers; false (nothing changed) if one does not read. */
+    private boolean readWith(DecimalParser other, SheetColumn c) {
+        for (int i = 0; i < c.size(); i++) {
+            if (c.kind(i) == CellKind.OTHER_SEPARATOR) {
+                int r = other.parse(text(c.payload(i)).strip());
+                if (r == DecimalParser.NOT_A_NUMBER || r == DecimalParser.DOUBLE_ONLY && !Double.isFinite(other.value)) {
+                    return false;
+                }
+            }
+        }
+        for (int i = 0; i < c.size(); i++) {
+            if (c.kind(i) == CellKind.OTHER_SEPARATOR) {
+                int r = other.parse(text(c.payload(i)).strip());
+                if (r == DecimalParser.EXACT) {
+                    c.set(i, CellKind.NUMBER, other.scale, other.unscaled);
+                } else {
+                    c.set(i, CellKind.NUMBER, -1, Double.doubleToRawLongBits(other.value));
+                }
+                numbersFromText++;
+            }
+        }
+        return true;
     }
 
     /**

@@ -173,8 +173,8 @@ class BadFileCorpusTest {
         cases.add(c("mixed decimal separators (csv)", d -> text(d, "mixed.csv",
                 "phase;value\nbefore;10,5\nbefore;10,6\nafter;10.7\nafter;10,8\n"), "mixed decimal separators"));
         cases.add(c("mixed decimal separators (xlsx, text cells)", d -> Workbooks.xlsx(d.resolve("mixed.xlsx"),
-                row("phase", "value"), row("before", 1.5), row("before", "1,6"), row("after", 1.7),
-                row("after", 1.8)), "cell B3"));
+                row("phase", "value"), row("before", "1.5"), row("before", "1,6"), row("after", 1.7),
+                row("after", 1.8)), "with a decimal comma in B3; with a decimal point in B2"));
         cases.add(c("NaN and Infinity as text", d -> text(d, "nan.csv",
                 "phase,value\nbefore,1\nbefore,2\nafter,NaN\nafter,Infinity\nafter,-Infinity\n"),
                 "not a finite number"));
