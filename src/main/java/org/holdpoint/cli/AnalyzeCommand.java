@@ -158,8 +158,9 @@ final class AnalyzeCommand implements Callable<Integer> {
         boolean equalVariances;
         @Option(names = "--holm", description = "Holm-adjust the difference p-values across characteristics.")
         boolean holm;
-        @Option(names = "--exclude", paramLabel = "CELL=REASON", description = "Leave out the value at CELL "
-                + "(e.g. C12 or Data!C12) for the stated reason; repeatable. The reason is recorded.")
+        @Option(names = "--exclude", paramLabel = "[before:|after:][SHEET!]CELL=REASON", description = "Leave out "
+                + "the value at one cell of one file (e.g. C12, Data!C12, after:J31) for the stated reason; "
+                + "repeatable. before:/after: is needed when both files have the cell. The reason is recorded.")
         List<String> exclude = new ArrayList<>();
     }
 
@@ -340,12 +341,11 @@ final class AnalyzeCommand implements Callable<Integer> {
                 margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null);
         List<Exclusion> exclusions = new ArrayList<>();
         for (String e : method.exclude) {
-            int eq = e.indexOf('=');
-            if (eq <= 0 || eq == e.length() - 1) {
-                throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--exclude needs CELL=REASON (a reason is required), got '" + e + "'");
+            try {
+                exclusions.add(Exclusion.parse(null, e));
+            } catch (IllegalArgumentException bad) {
+                throw new CommandLine.ParameterException(spec.commandLine(), "--exclude: " + bad.getMessage());
             }
-            exclusions.add(new Exclusion(null, e.substring(0, eq).trim(), e.substring(eq + 1).trim()));
         }
         return new AnalysisSettings(method.alpha, method.equalVariances, method.holm, null, null, overrides,
                 exclusions);

@@ -83,7 +83,7 @@ final class RawDataRows implements Iterator<ShownCell[]> {
             new ShownCell(row, c0 + 2, (double) (i + 1), Style.INTEGER, 0, null),
             new ShownCell(row, c0 + 3, g.sample().value(i), Style.NUMBER, decimals, null),
             text(4, c.unit()), text(5, o.file()), text(6, o.sheet()), text(7, o.cell()), text(8, g.unit(i)),
-            text(9, g.lot(i)), text(10, g.subgroup(i)), text(11, g.sequence(i)), text(12, exclusion(c.name(), o))};
+            text(9, g.lot(i)), text(10, g.subgroup(i)), text(11, g.sequence(i)), text(12, exclusion(c.name(), o, group == 0))};
         row++;
         i++;
         skipEmpty();
@@ -94,16 +94,14 @@ final class RawDataRows implements Iterator<ShownCell[]> {
         return new ShownCell(row, c0 + col, value == null ? "" : value, Style.CELL, 0, null);
     }
 
-    private String exclusion(String name, Origin o) {
+    private String exclusion(String name, Origin o, boolean before) {
         for (Exclusion e : exclusions) {
-            if (e.characteristic() != null && !e.characteristic().equals(name)) {
+            if (e.characteristic() != null
+                    && !org.holdpoint.study.NameKeys.key(e.characteristic()).equals(
+                            org.holdpoint.study.NameKeys.key(name))) {
                 continue;
             }
-            String cell = e.cell();
-            int bang = cell.lastIndexOf('!');
-            String sheet = bang < 0 ? null : cell.substring(0, bang).replace("'", "");
-            String ref = (bang < 0 ? cell : cell.substring(bang + 1)).replace("$", "").trim();
-            if (ref.equalsIgnoreCase(o.cell()) && (sheet == null || sheet.equals(o.sheet()))) {
+            if (e.matches(o, before)) {
                 return e.reason();
             }
         }

@@ -100,7 +100,7 @@ final class TextBlocks {
             put.accept("Exclusions", "none");
         }
         for (Exclusion e : set.exclusions()) {
-            put.accept("Exclusion " + e.cell(), (e.characteristic() == null ? "" : e.characteristic() + ": ")
+            put.accept("Exclusion " + e.reference(), (e.characteristic() == null ? "" : e.characteristic() + ": ")
                     + e.reason());
         }
         put.accept("Study record", "The canonical study record (JSON, with every raw value and its origin, the "

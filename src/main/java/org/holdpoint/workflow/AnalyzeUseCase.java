@@ -51,6 +51,10 @@ public final class AnalyzeUseCase {
 
     AnalysisOutcome run(ImportRequest request, Path settingsFile, AnalysisSettings settings, Progress progress) {
         AnalysisOutcome read = read(request, settingsFile, settings, progress);
+        List<String> bad = Exclusions.problems(read.data(), read.settings().exclusions());
+        if (!bad.isEmpty()) {
+            throw new AnalysisException(bad);
+        }
         StudyResult result = analyzer.analyze(read.data(), read.settings(), progress);
         progress.step("done", 1);
         return new AnalysisOutcome(read.data(), read.settings(), result, read.settingsFile());

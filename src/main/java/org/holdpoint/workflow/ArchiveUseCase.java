@@ -63,7 +63,7 @@ public final class ArchiveUseCase {
                 + " characteristic(s) with holdpoint " + Version.get() + ": " + result.summary(), "archiving"));
         for (Exclusion e : study.settings().exclusions()) {
             history.add(new AuditEvent.Draft(AuditEvent.Kind.EXCLUSION_ADDED, actor, now, "excluded the value at "
-                    + e.cell() + (e.characteristic() == null ? "" : " of " + e.characteristic()), e.reason()));
+                    + e.reference() + (e.characteristic() == null ? "" : " of " + e.characteristic()), e.reason()));
         }
         var version = org.holdpoint.study.NewStudyVersion.of(change.id(), change.title(), change.kind().words(),
                 change.partNumber(), change.revision(), names, result.changeVerified() ? "verified" : "not verified",

@@ -63,12 +63,17 @@ public final class ResultJson {
         ArrayNode failing = verdict.putArray("failing");
         result.failing().forEach(failing::add);
         ArrayNode exclusions = root.putArray("exclusions");
-        settings.exclusions().forEach(e -> {
+        // exactly what was left out: one entry per value, with its file, sheet, cell and value
+        for (Exclusions.Hit h : Exclusions.hits(data, settings.exclusions())) {
             ObjectNode o = exclusions.addObject();
-            o.put("characteristic", e.characteristic());
-            o.put("cell", e.cell());
-            o.put("reason", e.reason());
-        });
+            o.put("characteristic", h.characteristic());
+            o.put("group", h.before() ? "before" : "after");
+            o.put("file", h.origin().file());
+            o.put("sheet", h.origin().sheet());
+            o.put("cell", h.origin().cell());
+            o.put("value", h.value());
+            o.put("reason", h.exclusion().reason());
+        }
         ArrayNode cautions = root.putArray("cautions");
         Cautions.TEXT.forEach(cautions::add);
         return root;
@@ -125,7 +130,7 @@ public final class ResultJson {
         s.exclusions().forEach(e -> {
             ObjectNode o = ex.addObject();
             o.put("characteristic", e.characteristic());
-            o.put("cell", e.cell());
+            o.put("cell", e.reference());
             o.put("reason", e.reason());
         });
         return n;
@@ -209,8 +214,8 @@ public final class ResultJson {
         } else {
             n.putNull("margin");
         }
-        numOrNull(n, "sdGrowthLimit", s.sdGrowthLimit());
-        numOrNull(n, "capabilityRequirement", s.capabilityRequirement());
+        numOrNull(n, "sd_growth_limit", s.sdGrowthLimit());
+        numOrNull(n, "capability_min", s.capabilityRequirement());
         return n;
     }
 

@@ -20,6 +20,7 @@ import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.holdpoint.importer.SettingsReader;
 import org.holdpoint.stats.Sample;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.ChangeDescription;
@@ -49,7 +50,7 @@ import org.holdpoint.study.StudyResult;
  */
 public final class StudyFiles {
     /** The schema version this code writes. */
-    public static final int SCHEMA_VERSION = 1;
+    public static final int SCHEMA_VERSION = 2;
     private static final JsonNodeFactory F = JsonNodeFactory.instance;
     private static final ObjectMapper CANONICAL = new ObjectMapper()
             .enable(com.fasterxml.jackson.core.JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN);
@@ -205,7 +206,7 @@ public final class StudyFiles {
         }
         try {
             ChangeDescription change = readChange(root.path("change"));
-            AnalysisSettings settings = readSettings(root.path("settings"));
+            AnalysisSettings settings = readSettings(root.path("settings"), version, name);
             List<InputInfo> inputs = new ArrayList<>();
             for (JsonNode i : root.path("inputs")) {
                 inputs.add(new InputInfo(text(i, "file"), text(i, "sha256"), text(i, "sheet"),
@@ -266,48 +267,46 @@ public final class StudyFiles {
         for (Exclusion e : s.exclusions()) {
             ObjectNode x = ex.addObject();
             x.put("characteristic", e.characteristic());
+            x.put("group", e.group() == null ? null : e.group().label());
             x.put("cell", e.cell());
             x.put("reason", e.reason());
         }
         return o;
     }
 
-    private static AnalysisSettings readSettings(JsonNode o) {
+    private static AnalysisSettings readSettings(JsonNode o, int version, String name) {
         Map<String, CharacteristicSettings> per = new LinkedHashMap<>();
-        o.path("perCharacteristic").fields().forEachRemaining(e -> per.put(e.getKey(), readCriteria(e.getValue())));
+        o.path("perCharacteristic").fields().forEachRemaining(e -> per.put(e.getKey(),
+                readCriteria(e.getValue(), version, name, e.getKey())));
         List<Exclusion> ex = new ArrayList<>();
         for (JsonNode x : o.path("exclusions")) {
-            ex.add(new Exclusion(text(x, "characteristic"), text(x, "cell"), text(x, "reason")));
+            String group = text(x, "group");
+            ex.add(new Exclusion(text(x, "characteristic"), group == null ? null
+                    : Exclusion.Group.valueOf(group.toUpperCase(java.util.Locale.ROOT)), text(x, "cell"),
+                    text(x, "reason")));
         }
         return new AnalysisSettings(o.path("alpha").asDouble(0.05), o.path("equalVariances").asBoolean(false),
-                o.path("holm").asBoolean(false), readCriteria(o.path("defaults")), per,
-                readCriteria(o.path("overrides")), ex);
+                o.path("holm").asBoolean(false), readCriteria(o.path("defaults"), version, name, "defaults"), per,
+                readCriteria(o.path("overrides"), version, name, "overrides"), ex);
     }
 
+    /** The criteria in a settings file's spelling (one spelling everywhere, docs/settings-file.md). */
     private static ObjectNode criteria(CharacteristicSettings s) {
-        ObjectNode o = F.objectNode();
-        o.put("unit", s.unit());
-        o.put("lsl", s.spec().lsl());
-        o.put("nominal", s.spec().nominal());
-        o.put("usl", s.spec().usl());
-        if (s.margin() == null) {
-            o.putNull("margin");
-        } else {
-            ObjectNode m = o.putObject("margin");
-            m.put("kind", s.margin().kind().name());
-            m.put("lower", s.margin().lower());
-            m.put("upper", s.margin().upper());
-        }
-        o.put("sdGrowthLimit", s.sdGrowthLimit());
-        o.put("capabilityRequirement", s.capabilityRequirement());
-        o.put("paired", s.paired());
-        return o;
+        return SettingsReader.toJson(s);
     }
 
-    private static CharacteristicSettings readCriteria(JsonNode o) {
+    private static CharacteristicSettings readCriteria(JsonNode o, int version, String name, String entry) {
         if (o.isMissingNode() || o.isNull()) {
             return CharacteristicSettings.EMPTY;
         }
+        if (version >= 2) {
+            try {
+                return SettingsReader.fromJson(name, entry, o);
+            } catch (org.holdpoint.importer.ImportException e) {
+                throw new StudyFileException("%s: the criteria are damaged (%s)", name, e.getMessage());
+            }
+        }
+        // schema 1 wrote its own spelling (margin {kind, lower, upper}, sdGrowthLimit, capabilityRequirement)
         JsonNode m = o.path("margin");
         MarginSpec margin = m.isObject() ? new MarginSpec(MarginSpec.Kind.valueOf(m.get("kind").asText()),
                 dbl(m, "lower"), dbl(m, "upper")) : null;

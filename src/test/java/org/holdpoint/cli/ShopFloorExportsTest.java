@@ -292,4 +292,141 @@ class ShopFloorExportsTest {
         assertThat(characteristic(out, "Bore X").path("before").path("min").asDouble()).isGreaterThan(29.9);
         assertThat(r.out()).contains("rows 4 to 6 hold nominal values or limits (not read as data");
     }
+
+    /** The value a workbook holds at a cell of its first sheet, read with POI (not with Holdpoint). */
+    private static double cellValue(Path xlsx, String ref) throws Exception {
+        try (var wb = org.apache.poi.ss.usermodel.WorkbookFactory.create(xlsx.toFile(), null, true)) {
+            var cr = new org.apache.poi.ss.util.CellReference(ref);
+            return wb.getSheetAt(0).getRow(cr.getRow()).getCell(cr.getCol()).getNumericCellValue();
+        }
+    }
+
+    /**
+     * An exclusion names one cell of one file: in a two-file study the same cell exists in both files,
+     * so it needs before: or after:; a cell that holds no used value is refused; the JSON lists exactly
+     * the one value left out, with file, sheet, cell, value and reason.
+     */
+    @Test
+    void anExclusionNamesOneCellOfOneFile(@TempDir Path dir) throws Exception {
+        Path before = ShopFloorFiles.housing(dir.resolve("before.xlsx"), "before", 1000, 0, 0, 7);
+        Path after = ShopFloorFiles.housing(dir.resolve("after.xlsx"), "after", 2000, 0, 0, 8);
+        String[] common = {"analyze", "--before", before.toString(), "--after", after.toString(), "--only",
+            "Overall length", "--margin", "0.02"};
+        Run both = run(concat(common, "--exclude", "F10=probe touched a burr"));
+        assertThat(both.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(both.err()).contains("F10 is in both files", "write before:F10 or after:F10");
+        Run typo = run(concat(common, "--exclude", "after:Z99=typo"));
+        assertThat(typo.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(typo.err()).contains("after:Z99", "no value used in the analysis");
+        Run header = run(concat(common, "--exclude", "after:F4=header"));
+        assertThat(header.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        Run syntax = run(concat(common, "--exclude", "after:F10"));
+        assertThat(syntax.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(syntax.err()).contains("[before:|after:][SHEET!]CELL=REASON");
+        Path json = dir.resolve("r.json");
+        Run ok = run(concat(common, "--exclude", "after:'CMM export'!F10=probe touched a burr", "--json",
+                json.toString()));
+        assertThat(ok.code()).as(ok.err()).isZero();
+        JsonNode out = JSON.readTree(json.toFile());
+        assertThat(out.path("exclusions")).hasSize(1);
+        JsonNode x = out.path("exclusions").get(0);
+        assertThat(x.path("characteristic").asText()).isEqualTo("Overall length");
+        assertThat(x.path("group").asText()).isEqualTo("after");
+        assertThat(x.path("file").asText()).endsWith("after.xlsx");
+        assertThat(x.path("sheet").asText()).isEqualTo("CMM export");
+        assertThat(x.path("cell").asText()).isEqualTo("F10");
+        assertThat(x.path("value").asDouble()).isEqualTo(cellValue(after, "F10"));
+        assertThat(x.path("reason").asText()).isEqualTo("probe touched a burr");
+        JsonNode len = characteristic(out, "Overall length");
+        assertThat(len.path("before").path("n").asInt()).isEqualTo(30);
+        assertThat(len.path("after").path("n").asInt()).isEqualTo(29);
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
+    }
+
+    /**
+     * A settings file saved by an office program in Windows-1252 or UTF-16 (with its byte-order mark)
+     * is read like a data file in those encodings; the characteristic names with Ø and ° match.
+     */
+    @Test
+    void settingsFilesInWindows1252AndUtf16AreRead(@TempDir Path dir) throws Exception {
+        Random rnd = new Random(1252);
+        StringBuilder sb = new StringBuilder("Phase;Bohrung Ø;Temperatur °C\n");
+        for (String phase : new String[] {"vorher", "nachher"}) {
+            for (int i = 0; i < 20; i++) {
+                sb.append(phase.equals("vorher") ? "before" : "after").append(';')
+                        .append(String.format(Locale.GERMANY, "%.3f", 8 + 0.004 * rnd.nextGaussian())).append(';')
+                        .append(String.format(Locale.GERMANY, "%.1f", 60 + 0.5 * rnd.nextGaussian())).append('\n');
+            }
+        }
+        Path data = Files.write(dir.resolve("bohrung.csv"), sb.toString().getBytes("windows-1252"));
+        String criteria = "characteristic;unit;lsl;usl;margin\nBohrung Ø;mm;7,98;8,02;0,004\n"
+                + "Temperatur °C;°C;55;65;1\n";
+        for (java.nio.charset.Charset cs : new java.nio.charset.Charset[] {java.nio.charset.Charset.forName(
+                "windows-1252"), StandardCharsets.UTF_16LE, StandardCharsets.UTF_8}) {
+            byte[] body = criteria.getBytes(cs);
+            byte[] bom = cs.equals(StandardCharsets.UTF_16LE) ? new byte[] {(byte) 0xFF, (byte) 0xFE} : new byte[0];
+            byte[] bytes = new byte[bom.length + body.length];
+            System.arraycopy(bom, 0, bytes, 0, bom.length);
+            System.arraycopy(body, 0, bytes, bom.length, body.length);
+            Path settings = Files.write(dir.resolve("criteria-" + cs.name() + ".csv"), bytes);
+            Path json = dir.resolve("r-" + cs.name() + ".json");
+            Run r = run("analyze", data.toString(), "--settings", settings.toString(), "--json", json.toString());
+            assertThat(r.code()).as(cs + ": " + r.err()).isZero();
+            JsonNode out = JSON.readTree(json.toFile());
+            assertThat(names(out)).as(cs.name()).containsExactly("Bohrung Ø", "Temperatur °C");
+            assertThat(characteristic(out, "Bohrung Ø").path("tost").path("upperMargin").asDouble()).isEqualTo(0.004);
+            assertThat(characteristic(out, "Temperatur °C").path("criteria").path("lsl").asDouble()).isEqualTo(55);
+        }
+    }
+
+    /**
+     * Numbers pasted into a workbook as text with a decimal comma (as a German-locale spreadsheet keeps
+     * them) are read when their column is consistent; a column mixing comma and point is refused with
+     * its cells named; --decimal applies to workbooks too.
+     */
+    @Test
+    void decimalCommaTextInAWorkbookIsReadPerColumn(@TempDir Path dir) throws Exception {
+        List<Object[]> rows = new ArrayList<>();
+        rows.add(org.holdpoint.importer.Workbooks.row("Messprotokoll Welle 4711"));
+        rows.add(org.holdpoint.importer.Workbooks.row("Phase", "Durchmesser", "Länge"));
+        Random rnd = new Random(44);
+        List<java.math.BigDecimal> diameters = new ArrayList<>();
+        for (int i = 0; i < 40; i++) {
+            String d = String.format(Locale.ROOT, "%.3f", 12.5 + 0.003 * rnd.nextGaussian());
+            diameters.add(new java.math.BigDecimal(d));
+            rows.add(org.holdpoint.importer.Workbooks.row(i < 20 ? "before" : "after", d.replace('.', ','),
+                    Math.round((80 + 0.02 * rnd.nextGaussian()) * 100) / 100.0));
+        }
+        Path xlsx = org.holdpoint.importer.Workbooks.xlsx(dir.resolve("welle.xlsx"), rows.toArray(new Object[0][]));
+        Path json = dir.resolve("r.json");
+        Run r = run("analyze", xlsx.toString(), "--margin", "0.01", "--json", json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("column B holds numbers stored as text with a decimal comma; read as numbers");
+        JsonNode d = characteristic(JSON.readTree(json.toFile()), "Durchmesser");
+        java.math.BigDecimal sum = diameters.subList(0, 20).stream().reduce(java.math.BigDecimal.ZERO,
+                java.math.BigDecimal::add);
+        assertThat(d.path("before").path("n").asInt()).isEqualTo(20);
+        assertThat(d.path("before").path("mean").asDouble()).isCloseTo(sum.doubleValue() / 20,
+                org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(d.path("before").path("min").asDouble()).isEqualTo(
+                diameters.subList(0, 20).stream().min(java.math.BigDecimal::compareTo).orElseThrow().doubleValue());
+        // a column mixing the two separators: the cells of each kind are named
+        rows.set(5, org.holdpoint.importer.Workbooks.row("before", "12.502", 80.01));
+        Path mixed = org.holdpoint.importer.Workbooks.xlsx(dir.resolve("gemischt.xlsx"), rows.toArray(new Object[0][]));
+        Run bad = run("analyze", mixed.toString(), "--margin", "0.01");
+        assertThat(bad.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(bad.err()).contains("gemischt.xlsx", "column B", "with a decimal comma in B3, B4, B5",
+                "with a decimal point in B6");
+        // --decimal . says the text numbers use a point: the comma ones are then refused, with their cells
+        Run point = run("analyze", xlsx.toString(), "--margin", "0.01", "--decimal", ".");
+        assertThat(point.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(point.err()).contains("column B", "with a decimal comma in B3");
+        Run comma = run("analyze", xlsx.toString(), "--margin", "0.01", "--decimal", ",");
+        assertThat(comma.code()).as(comma.err()).isZero();
+    }
 }

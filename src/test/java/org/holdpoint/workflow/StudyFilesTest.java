@@ -85,4 +85,53 @@ class StudyFilesTest {
         Files.writeString(other, "[1,2]", StandardCharsets.UTF_8);
         assertThatThrownBy(() -> StudyFiles.read(other)).hasMessageContaining("not a Holdpoint study file");
     }
+
+    /**
+     * The criteria have one spelling: the study file's per-characteristic criteria, copied into a JSON
+     * settings file as they are, read back as the same criteria (docs/settings-file.md,
+     * docs/study-file.md); every kind of margin and an exclusion's group survive the round trip.
+     */
+    @Test
+    void criteriaAreSpelledAsInASettingsFileAndSurviveTheRoundTrip(@TempDir Path dir) throws Exception {
+        ChangeStudy base = study();
+        Map<String, CharacteristicSettings> per = new java.util.LinkedHashMap<>();
+        per.put("Shaft length", new CharacteristicSettings("mm", new SpecLimits(9999999.0, 10000000.0, 10000001.0),
+                new MarginSpec(MarginSpec.Kind.ABSOLUTE, -0.25, 0.25), 1.3, 1.33, false));
+        per.put("Flatness", new CharacteristicSettings("mm", new SpecLimits(null, null, 0.05),
+                new MarginSpec(MarginSpec.Kind.ABSOLUTE, null, 0.02), null, 1.0, null));
+        per.put("Bore", new CharacteristicSettings(null, new SpecLimits(11.99, null, 12.01),
+                new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, 5.0, 12.5), 1.2, null, true));
+        per.put("Web", new CharacteristicSettings(null, new SpecLimits(2.0, null, 3.0),
+                new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, 10.0, 10.0), null, null, null));
+        per.put("Burr", new CharacteristicSettings(null, new SpecLimits(null, null, 0.1),
+                new MarginSpec(MarginSpec.Kind.ABSOLUTE, -0.01, 0.03), null, null, null));
+        CharacteristicSettings defaults = new CharacteristicSettings(null, new SpecLimits(null, null, null),
+                new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, 10.0, 10.0), 1.5, null, null);
+        AnalysisSettings settings = new AnalysisSettings(0.05, false, false, defaults, per, null,
+                List.of(new Exclusion("Shaft length", Exclusion.Group.AFTER, "B3", "gauge dropped"),
+                        new Exclusion(null, null, "Data!C4", "typed twice")));
+        ChangeStudy study = new ChangeStudy(base.change(), base.data(), settings, base.signatures());
+        StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        Path file = dir.resolve("study.json");
+        StudyFiles.write(study, result, file);
+        ChangeStudy back = StudyFiles.read(file);
+        assertThat(back.settings()).isEqualTo(settings);
+        com.fasterxml.jackson.databind.JsonNode tree = StudyFiles.tree(Files.readString(file));
+        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(2);
+        com.fasterxml.jackson.databind.JsonNode saved = tree.path("settings");
+        assertThat(saved.path("perCharacteristic").path("Shaft length").path("margin").asDouble()).isEqualTo(0.25);
+        assertThat(saved.path("perCharacteristic").path("Web").path("margin_percent").asDouble()).isEqualTo(10);
+        assertThat(saved.path("perCharacteristic").path("Burr").path("margin_lower").asDouble()).isEqualTo(-0.01);
+        assertThat(saved.path("exclusions").get(0).path("group").asText()).isEqualTo("after");
+        // the same objects as a settings file, read by the settings reader
+        com.fasterxml.jackson.databind.node.ObjectNode asSettings =
+                com.fasterxml.jackson.databind.node.JsonNodeFactory.instance.objectNode();
+        asSettings.set("defaults", saved.path("defaults"));
+        asSettings.set("characteristics", saved.path("perCharacteristic"));
+        Path settingsFile = Files.writeString(dir.resolve("criteria.json"), asSettings.toString(),
+                StandardCharsets.UTF_8);
+        Map<String, CharacteristicSettings> read = new org.holdpoint.importer.SettingsReader().read(settingsFile);
+        assertThat(read.remove(org.holdpoint.importer.SettingsReader.DEFAULTS)).isEqualTo(defaults);
+        assertThat(read).isEqualTo(per);
+    }
 }

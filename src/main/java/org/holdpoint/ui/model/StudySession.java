@@ -297,18 +297,28 @@ public final class StudySession {
         if (c == null) {
             return "Choose a characteristic of the current data.";
         }
-        String t = cell == null ? "" : cell.trim().toUpperCase(java.util.Locale.ROOT);
-        if (!t.matches("([^!]+!)?[A-Z]{1,3}[1-9][0-9]*")) {
-            return "Give the cell of the value as a column letter and row number, e.g. D12.";
+        Exclusion.Target t;
+        try {
+            t = Exclusion.target(cell == null ? "" : cell);
+        } catch (IllegalArgumentException e) {
+            return "Give the cell of the value as a column letter and row number, e.g. D12 (after:D12 when both "
+                    + "files have that cell).";
         }
-        if (!holds(c.before(), t) && !holds(c.after(), t)) {
-            return "Cell " + t + " holds no value of \"" + characteristic + "\"; see the Data step for the cells read.";
+        Exclusion probe = new Exclusion(characteristic, t.group(), t.cell(), "probe");
+        boolean inBefore = holds(c.before(), probe, true);
+        boolean inAfter = holds(c.after(), probe, false);
+        if (!inBefore && !inAfter) {
+            return "Cell " + probe.reference() + " holds no value of \"" + characteristic
+                    + "\"; see the Data step for the cells read.";
+        }
+        if (inBefore && inAfter) {
+            return "Cell " + t.cell() + " is in both files: write before:" + t.cell() + " or after:" + t.cell() + ".";
         }
         if (reason == null || reason.isBlank()) {
             return "Say why the value is left out; the record keeps the reason.";
         }
         List<Exclusion> l = new java.util.ArrayList<>(exclusions);
-        l.add(new Exclusion(characteristic, t, reason.trim()));
+        l.add(new Exclusion(characteristic, t.group(), t.cell(), reason.trim()));
         exclusions = List.copyOf(l);
         setDirty(true);
         analyse();
@@ -329,10 +339,9 @@ public final class StudySession {
         }
     }
 
-    private static boolean holds(org.holdpoint.study.GroupData g, String cell) {
-        String bare = cell.contains("!") ? cell.substring(cell.indexOf('!') + 1) : cell;
+    private static boolean holds(org.holdpoint.study.GroupData g, Exclusion e, boolean before) {
         for (int i = 0; i < g.size(); i++) {
-            if (g.origin(i).cell().equals(bare)) {
+            if (e.matches(g.origin(i), before)) {
                 return true;
             }
         }
