@@ -199,11 +199,15 @@ final class AnalyzeCommand implements Callable<Integer> {
                         java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString())));
         if (output.saveStudy != null) {
             try {
-                org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), output.saveStudy);
+                // the record names the key that signs the workbook, so both carry the same document
+                String signingKey = report.signPublicKey == null ? null
+                        : org.holdpoint.workflow.RecordSigning.fingerprint(
+                                org.holdpoint.workflow.RecordSigning.readPublic(report.signPublicKey));
+                org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), output.saveStudy, signingKey);
                 spec.commandLine().getOut().printf(java.util.Locale.ROOT, "Saved the study file %s%n  record SHA-256 "
                         + "%s%n", output.saveStudy, org.holdpoint.workflow.StudyFiles.sha256(
                                 org.holdpoint.workflow.StudyFiles.canonical(org.holdpoint.workflow.StudyFiles.toJson(
-                                        study, outcome.result()))));
+                                        study, outcome.result(), signingKey))));
                 spec.commandLine().getOut().flush();
             } catch (IOException e) {
                 throw new UserInputException("cannot write the study file %s (%s); check the folder is writable",

@@ -19,8 +19,9 @@ import picocli.CommandLine.Parameters;
                 + "signature, when signed), re-computes every result from the embedded raw data with this version, "
                 + "and compares each value shown on the visible sheets with the re-computation. Lists every "
                 + "difference with its sheet and cell. The file is only read, never changed."},
-        footer = {"", "Exit codes: 0 intact, 1 edited (every difference listed), 2 not a Holdpoint sign-off "
-                + "workbook or unreadable."})
+        footer = {"", "Exit codes: 0 intact, 1 edited (every difference listed; with --key also a workbook not "
+                + "signed with that key), 2 not a Holdpoint sign-off workbook, unreadable, or a key file that is not "
+                + "an Ed25519 public key."})
 final class VerifyCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -63,6 +64,7 @@ final class VerifyCommand implements Callable<Integer> {
     private static String seal(VerifyResult r) {
         return switch (r.seal()) {
             case UNSIGNED -> "none (the record was not signed with a key)";
+            case MISSING -> "NONE: the record is not signed with the expected key";
             case VALID -> "valid Ed25519 signature by key SHA-256 " + r.keyFingerprint();
             case OTHER_KEY -> "valid, but by key SHA-256 " + r.keyFingerprint() + ", NOT the key given";
             case INVALID -> "INVALID: the signature does not match the record";

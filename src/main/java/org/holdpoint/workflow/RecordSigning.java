@@ -23,6 +23,9 @@ import org.holdpoint.report.RecordSeal;
  * and {@code openssl pkey -pubout} write. A key's fingerprint is the SHA-256 of its X.509 encoding.
  */
 public final class RecordSigning {
+    /** Far larger than any key file (an Ed25519 PEM has about 120 bytes). */
+    private static final long MAX_KEY_BYTES = 64 * 1024;
+
     /** The JCA algorithm name. */
     public static final String ALGORITHM = "Ed25519";
 
@@ -142,6 +145,15 @@ public final class RecordSigning {
     private static byte[] der(Path file, String type) {
         byte[] bytes;
         try {
+            if (!Files.isRegularFile(file)) {
+                throw new StudyFileException("%s is not a key file (%s); give the path of the .pem file", file,
+                        Files.isDirectory(file) ? "it is a folder" : Files.exists(file) ? "it is a device or pipe"
+                                : "it does not exist");
+            }
+            if (Files.size(file) > MAX_KEY_BYTES) {
+                throw new StudyFileException("%s is not a key file (%d bytes; an Ed25519 key file has a few hundred); "
+                        + "give the path of the .pem file", file, Files.size(file));
+            }
             bytes = Files.readAllBytes(file);
         } catch (IOException e) {
             throw new StudyFileException("%s: cannot read the key file (%s); check the path", file, e.getMessage());

@@ -74,7 +74,9 @@ public final class ReportUseCase {
         }
         String now = Instant.now(clock).truncatedTo(ChronoUnit.SECONDS).toString();
         ChangeStudy recorded = withSignOff(study, options.signOff(), now);
-        byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(recorded, result));
+        String signingKey = options.publicKey() == null ? null
+                : RecordSigning.fingerprint(RecordSigning.readPublic(options.publicKey()));
+        byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(recorded, result, signingKey));
         String json = new String(canonical, StandardCharsets.UTF_8);
         String sha = StudyFiles.sha256(canonical);
         RecordSeal seal = options.privateKey() == null ? null

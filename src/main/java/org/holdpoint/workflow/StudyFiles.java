@@ -70,11 +70,28 @@ public final class StudyFiles {
      * @return the tree
      */
     public static ObjectNode toJson(ChangeStudy study, StudyResult result) {
+        return toJson(study, result, null);
+    }
+
+    /**
+     * The study and its results as a JSON tree, naming the key that will sign it.
+     *
+     * @param study      the study
+     * @param result     its results
+     * @param signingKey the SHA-256 fingerprint of the public key whose Ed25519 signature will seal this
+     *                   record, or null when it is not signed; part of the signed content, so that a removed
+     *                   or replaced signature is found by {@code verify} (docs/signoff-workbook.md)
+     * @return the tree
+     */
+    public static ObjectNode toJson(ChangeStudy study, StudyResult result, String signingKey) {
         ObjectNode root = F.objectNode();
         root.put("schemaVersion", SCHEMA_VERSION);
         ObjectNode tool = root.putObject("tool");
         tool.put("name", "holdpoint");
         tool.put("version", Version.get());
+        if (signingKey != null) {
+            root.put("signingKey", signingKey);
+        }
         root.set("change", change(study.change()));
         root.set("settings", settings(study.settings()));
         ArrayNode inputs = root.putArray("inputs");
@@ -147,7 +164,21 @@ public final class StudyFiles {
      * @throws IOException when it cannot be written
      */
     public static void write(ChangeStudy study, StudyResult result, Path target) throws IOException {
-        ObjectNode tree = toJson(study, result);
+        write(study, result, target, null);
+    }
+
+    /**
+     * Writes a study file that names the key its workbook record is signed with.
+     *
+     * @param study      the study
+     * @param result     its results
+     * @param target     the file
+     * @param signingKey the signing key's fingerprint, or null
+     * @throws IOException when it cannot be written
+     */
+    public static void write(ChangeStudy study, StudyResult result, Path target, String signingKey)
+            throws IOException {
+        ObjectNode tree = toJson(study, result, signingKey);
         AtomicFiles.writeText(target, PRETTY.writeValueAsString(tree) + System.lineSeparator());
     }
 

@@ -53,6 +53,8 @@ public record VerifyResult(Status status, String changeId, String sha256, boolea
     public enum SealState {
         /** The record was not signed. */
         UNSIGNED,
+        /** No signature, although a key was given or the record names the key that signed it. */
+        MISSING,
         /** Signed, the signature is valid for the stored key, and that key is the trusted one (when given). */
         VALID,
         /** Signed and valid, but by another key than the trusted one given. */

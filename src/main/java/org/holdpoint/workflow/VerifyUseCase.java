@@ -33,6 +33,8 @@ public final class VerifyUseCase {
      */
     public VerifyResult verify(Path workbook, Path trustedKey, Progress progress) {
         progress.step("reading the record", 0);
+        // the key is read first: a key that cannot be read is a mistake in the command, not a finding
+        java.security.PublicKey trusted = trustedKey == null ? null : RecordSigning.readPublic(trustedKey);
         SignoffWorkbookReader reader;
         try {
             reader = SignoffWorkbookReader.open(workbook);
@@ -49,10 +51,22 @@ public final class VerifyUseCase {
                     reader.storedSha256(), sha));
         }
         RecordSeal seal = reader.seal();
-        VerifyResult.SealState sealState = sealState(record, seal, trustedKey);
+        String named = recordedSigningKey(reader.studyJson());
+        VerifyResult.SealState sealState = sealState(record, seal, trusted);
         if (sealState == VerifyResult.SealState.OTHER_KEY) {
             diffs.add(new WorkbookDifference("(record)", "-", "key that signed the record", seal.keyFingerprint(),
-                    RecordSigning.fingerprint(RecordSigning.readPublic(trustedKey)) + " (the key given)"));
+                    RecordSigning.fingerprint(trusted) + " (the key given)"));
+        }
+        if (seal == null && (trusted != null || named != null)) {
+            sealState = VerifyResult.SealState.MISSING;
+            diffs.add(new WorkbookDifference("(record)", "-", "Ed25519 signature of the record", "none: not signed "
+                    + (trusted != null ? "with this key" : "at all"), "a valid signature by key "
+                    + (trusted != null ? RecordSigning.fingerprint(trusted) : named)
+                    + (named != null ? " (the record names the key that signed it: the signature was removed)"
+                            : "")));
+        } else if (seal != null && named != null && !named.equals(seal.keyFingerprint())) {
+            diffs.add(new WorkbookDifference("(record)", "-", "key that signed the record", seal.keyFingerprint(),
+                    named + " (the key the record names: the signature was replaced)"));
         }
         if (sealState == VerifyResult.SealState.INVALID) {
             diffs.add(new WorkbookDifference("(record)", "-", "Ed25519 signature of the record", "does not match",
@@ -103,15 +117,25 @@ public final class VerifyUseCase {
         return seal == null ? null : seal.keyFingerprint();
     }
 
-    private static VerifyResult.SealState sealState(byte[] record, RecordSeal seal, Path trustedKey) {
+    /** The fingerprint of the key the record says it is signed with, or null (unsigned, or older records). */
+    private static String recordedSigningKey(String json) {
+        JsonNode k;
+        try {
+            k = StudyFiles.tree(json).get("signingKey");
+        } catch (StudyFileException e) {
+            return null;
+        }
+        return k == null || !k.isTextual() ? null : k.asText();
+    }
+
+    private static VerifyResult.SealState sealState(byte[] record, RecordSeal seal, java.security.PublicKey trusted) {
         if (seal == null) {
             return VerifyResult.SealState.UNSIGNED;
         }
         if (!RecordSigning.verify(record, seal)) {
             return VerifyResult.SealState.INVALID;
         }
-        if (trustedKey != null && !RecordSigning.fingerprint(RecordSigning.readPublic(trustedKey))
-                .equals(seal.keyFingerprint())) {
+        if (trusted != null && !RecordSigning.fingerprint(trusted).equals(seal.keyFingerprint())) {
             return VerifyResult.SealState.OTHER_KEY;
         }
         return VerifyResult.SealState.VALID;

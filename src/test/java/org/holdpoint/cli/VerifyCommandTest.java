@@ -86,4 +86,37 @@ class VerifyCommandTest {
         assertThat(run("analyze", data.toString(), "--signed-by", "A. Lindqvist")).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(err.toString()).contains("need --report");
     }
+
+    /**
+     * --key checks a signature that must be there: a workbook without one fails (exit 1), a key file
+     * that is not a key is a mistake in the command (exit 2), and a signed workbook with its key passes.
+     */
+    @Test
+    void aKeyCheckNeedsASignatureByThatKey() throws Exception {
+        Path key = dir.resolve("qa.key");
+        Path pub = dir.resolve("qa.pub");
+        assertThat(run("keygen", "--out", dir.resolve("qa").toString())).as(err.toString()).isZero();
+        Path signed = dir.resolve("signed.xlsx");
+        Path study = dir.resolve("signed.json");
+        assertThat(run("analyze", data.toString(), "-q", "--margin", "0.002", "--report", signed.toString(),
+                "--sign-key", key.toString(), "--sign-public-key", pub.toString(), "--save-study", study.toString()))
+                .as(err.toString()).isZero();
+        String printed = out.toString();
+        assertThat(run("verify", signed.toString(), "--key", pub.toString())).as(out.toString()).isEqualTo(ExitCodes.OK);
+        // the study file and the workbook are one record (the same SHA-256 twice in the analyze output)
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("record SHA-256 ([0-9a-f]{64})").matcher(printed);
+        assertThat(m.find()).isTrue();
+        String first = m.group(1);
+        assertThat(m.find()).isTrue();
+        assertThat(m.group(1)).isEqualTo(first);
+        Path unsigned = dir.resolve("unsigned.xlsx");
+        assertThat(run("analyze", data.toString(), "-q", "--margin", "0.002", "--report", unsigned.toString()))
+                .isZero();
+        assertThat(run("verify", unsigned.toString(), "--key", pub.toString())).isEqualTo(ExitCodes.ALTERED);
+        assertThat(out.toString()).contains("not signed with this key").contains("EDITED");
+        assertThat(run("verify", unsigned.toString(), "--key", "/dev/zero")).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(err.toString()).contains("/dev/zero is not a key file");
+        assertThat(run("verify", unsigned.toString(), "--key", data.toString())).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(err.toString()).contains("is not an Ed25519 public key");
+    }
 }

@@ -251,6 +251,34 @@ class SignoffWorkbookTest {
                 "CR-2026-0118")));
         VerifyResult forged = new VerifyUseCase().verify(edited, null, Progress.NONE);
         assertThat(forged.seal()).isEqualTo(VerifyResult.SealState.INVALID);
+        // a removed signature is an edit: the signed record names the key that signed it
+        Path stripped = f;
+        for (String ref : new String[] {"B8", "B9", "B10", "B11"}) {
+            stripped = edit(stripped, "Record", ref, c -> c.setCellValue(""));
+        }
+        VerifyResult removed = new VerifyUseCase().verify(stripped, null, Progress.NONE);
+        assertThat(removed.seal()).isEqualTo(VerifyResult.SealState.MISSING);
+        assertThat(removed.status()).isEqualTo(VerifyResult.Status.EDITED);
+        assertThat(removed.differences()).extracting(VerifyResult.Difference::expected)
+                .anyMatch(e -> e.contains(fingerprint) && e.contains("the signature was removed"));
+        // a workbook without any signature does not pass a check against a key
+        Path unsigned = dir.resolve("unsigned.xlsx");
+        new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults(), unsigned);
+        assertThat(new VerifyUseCase().verify(unsigned, null, Progress.NONE).status())
+                .isEqualTo(VerifyResult.Status.INTACT);
+        VerifyResult notWithThisKey = new VerifyUseCase().verify(unsigned, pub, Progress.NONE);
+        assertThat(notWithThisKey.seal()).isEqualTo(VerifyResult.SealState.MISSING);
+        assertThat(notWithThisKey.status()).isEqualTo(VerifyResult.Status.EDITED);
+        assertThat(notWithThisKey.differences()).extracting(VerifyResult.Difference::shown)
+                .contains("none: not signed with this key");
+        // a key file that is no key is a mistake in the command (exit 2), even for an unsigned workbook
+        Path notAKey = java.nio.file.Files.writeString(dir.resolve("notes.pub"), "QA key: see the safe\n");
+        assertThatThrownBy(() -> new VerifyUseCase().verify(unsigned, notAKey, Progress.NONE))
+                .isInstanceOf(StudyFileException.class).hasMessageContaining("is not an Ed25519 public key");
+        assertThatThrownBy(() -> new VerifyUseCase().verify(unsigned, Path.of("/dev/zero"), Progress.NONE))
+                .isInstanceOf(StudyFileException.class).hasMessageContaining("is not a key file");
+        assertThatThrownBy(() -> new VerifyUseCase().verify(unsigned, dir, Progress.NONE))
+                .isInstanceOf(StudyFileException.class).hasMessageContaining("it is a folder");
     }
 
     /** The fixture with a capability requirement of 1.33 on the bore (common practice, no source). */
