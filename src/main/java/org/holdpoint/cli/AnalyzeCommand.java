@@ -100,8 +100,8 @@ final class AnalyzeCommand implements Callable<Integer> {
         @Option(names = "--template", paramLabel = "FILE", description = "Fill this template instead of the default "
                 + "(its defined names are described in templates/README.md).")
         Path template;
-        @Option(names = "--overwrite", description = "Replace an existing workbook (otherwise it is kept and the "
-                + "command stops).")
+        @Option(names = "--overwrite", description = "Replace existing output files (--report, --json, "
+                + "--save-study); otherwise they are kept and the command stops.")
         boolean overwrite;
         @Option(names = "--signed-by", paramLabel = "NAME", description = "Printed name for the sign-off block "
                 + "(a record of who signed, not an electronic signature).")
@@ -182,6 +182,7 @@ final class AnalyzeCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         ImportOptions request = importOptions();
         checkReportTarget();
+        checkOutputs();
         AnalysisSettings settings = settings();
         AnalysisOutcome outcome = new AnalyzeUseCase().run(request, input.settings, settings,
                 new ConsoleProgress(spec.commandLine().getErr(), false));
@@ -299,14 +300,11 @@ final class AnalyzeCommand implements Callable<Integer> {
     private void checkReportTarget() {
         ReportOptionsGroup r = report;
         if (r.file == null) {
-            if (r.template != null || r.signedBy != null || r.signKey != null || r.overwrite) {
+            if (r.template != null || r.signedBy != null || r.signKey != null) {
                 throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--template, --signed-by, --sign-key and --overwrite need --report OUT.xlsx");
+                        "--template, --signed-by and --sign-key need --report OUT.xlsx");
             }
             return;
-        }
-        if (Files.exists(r.file) && !r.overwrite) {
-            throw new UserInputException("%s exists; give --overwrite to replace it", r.file);
         }
         if ((r.signKey == null) != (r.signPublicKey == null)) {
             throw new CommandLine.ParameterException(spec.commandLine(),
@@ -314,6 +312,20 @@ final class AnalyzeCommand implements Callable<Integer> {
         }
         signOff();
         changeDescription();
+    }
+
+    /** Outputs never replace inputs or each other, and existing ones need --overwrite (README, "Outputs"). */
+    private void checkOutputs() {
+        Path main = file != null ? file : input.before;
+        Path beside = input.settings == null && main != null && Files.isRegularFile(main)
+                ? org.holdpoint.workflow.AnalyzeUseCase.settingsBeside(main) : null;
+        new OutputGuard().input("the data file", file).input("the before file", input.before)
+                .input("the after file", input.after).input("the settings file", input.settings)
+                .input("the settings file", beside).input("the template", report.template)
+                .input("the signing key", report.signKey).input("the public key", report.signPublicKey)
+                .output("--report", report.file).output("--json", output.json)
+                .output("--save-study", output.saveStudy).folder("--charts", output.charts)
+                .check(report.overwrite);
     }
 
     ImportOptions importOptions() {

@@ -99,6 +99,10 @@ public final class PlanCommand implements Callable<Integer> {
             + "the true difference, target marked) to a PNG file.")
     Path chart;
 
+    @Option(names = "--overwrite", description = "Replace existing output files (--json, --chart); otherwise they "
+            + "are kept and the command stops.")
+    boolean overwrite;
+
     @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
     boolean help;
 
@@ -110,6 +114,10 @@ public final class PlanCommand implements Callable<Integer> {
      */
     @Override
     public Integer call() {
+        Path beside = settings == null && from != null && java.nio.file.Files.isRegularFile(from)
+                ? org.holdpoint.workflow.AnalyzeUseCase.settingsBeside(from) : null;
+        new OutputGuard().input("the data file", from).input("the settings file", settings)
+                .input("the settings file", beside).output("--json", json).output("--chart", chart).check(overwrite);
         Map<String, Object> document;
         PrintWriter out = spec.commandLine().getOut();
         try {

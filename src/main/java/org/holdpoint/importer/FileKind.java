@@ -31,6 +31,11 @@ enum FileKind {
         if (!Files.exists(path)) {
             throw new ImportException("file %s was not found; check the path and the spelling", name);
         }
+        if (!Files.isRegularFile(path)) {
+            // a device (/dev/zero), a named pipe or a socket would be read for ever
+            throw new ImportException("%s is not a regular file (a device, pipe or socket); save the data to a file "
+                    + "and give its path", name);
+        }
         byte[] head;
         try (InputStream in = Files.newInputStream(path)) {
             head = in.readNBytes(8);

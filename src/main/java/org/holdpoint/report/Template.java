@@ -44,6 +44,15 @@ public final class Template {
      */
     public static Template read(Path file) {
         try {
+            if (!Files.isRegularFile(file)) {
+                throw new ReportException("%s: cannot read the template (%s); give the path of the .xlsx "
+                        + "template", file, Files.isDirectory(file) ? "it is a folder" : Files.exists(file)
+                                ? "it is not a regular file but a device or pipe" : "it does not exist");
+            }
+            if (Files.size(file) > 64L << 20) {
+                throw new ReportException("%s: a template of %d MB is not a template; give the path of the .xlsx "
+                        + "template", file, Files.size(file) >> 20);
+            }
             return of(Files.readAllBytes(file), file.toString());
         } catch (IOException e) {
             throw new ReportException(e, "%s: cannot read the template (%s); check the path", file, e.getMessage());

@@ -38,6 +38,17 @@ public final class AnalyzeUseCase {
     }
 
     /**
+     * The settings file that is read for a data file when none is named (NAME.settings.csv or .json
+     * beside it), so that callers can protect it like any other input.
+     *
+     * @param dataFile the data file
+     * @return the settings file, or null when there is none
+     */
+    public static Path settingsBeside(Path dataFile) {
+        return SettingsReader.findBeside(dataFile).orElse(null);
+    }
+
+    /**
      * Reads the data and the criteria without analysing (for planning from data).
      *
      * @param options      what to import

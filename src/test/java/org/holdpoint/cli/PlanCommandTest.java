@@ -27,6 +27,9 @@ class PlanCommandTest {
 
     private int run(String... args) {
         CommandLine cl = new CommandLine(new PlanCommand());
+        cl.setExecutionExceptionHandler(new Failures());
+        out.getBuffer().setLength(0);
+        err.getBuffer().setLength(0);
         cl.setOut(new PrintWriter(out, true));
         cl.setErr(new PrintWriter(err, true));
         return cl.execute(args);
@@ -71,8 +74,15 @@ class PlanCommandTest {
     void ratioAddsTheAfterGroupSize() throws IOException {
         Path file = dir.resolve("ratio.json");
         Files.writeString(file, "old content");
-        int code = run("--margin-lower", "-0.2", "--margin-upper", "0.25", "--difference", "0.05", "--sd", "0.2",
-                "--power", "0.9", "--ratio", "1.5", "--json", file.toString());
+        String[] args = {"--margin-lower", "-0.2", "--margin-upper", "0.25", "--difference", "0.05", "--sd", "0.2",
+            "--power", "0.9", "--ratio", "1.5", "--json", file.toString()};
+        // an existing output is kept unless --overwrite is given
+        assertThat(run(args)).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(err.toString()).contains("ratio.json exists; give --overwrite to replace it");
+        assertThat(Files.readString(file)).isEqualTo("old content");
+        String[] again = java.util.Arrays.copyOf(args, args.length + 1);
+        again[args.length] = "--overwrite";
+        int code = run(again);
         assertThat(code).as(err.toString()).isZero();
         JsonNode j = json(file);
         int n = j.get("nPerGroup").asInt();
