@@ -57,6 +57,24 @@ public final class HoldpointCommand implements Runnable {
         cl.addSubcommand("gui", new GuiCommand(launcher));
         cl.setExecutionExceptionHandler(new Failures());
         cl.setParameterExceptionHandler(new Failures());
+        // every number option is a finite number: 1e400 is refused in the user's words, never "Infinity"
+        cl.registerConverter(Double.class, HoldpointCommand::finite);
+        cl.registerConverter(Double.TYPE, HoldpointCommand::finite);
         return cl;
+    }
+
+    static Double finite(String text) {
+        double v;
+        try {
+            v = Double.parseDouble(text.strip());
+        } catch (NumberFormatException e) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is not a number");
+        }
+        if (!Double.isFinite(v)) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is not a finite number"
+                    + (Double.isInfinite(v) && !text.toLowerCase(java.util.Locale.ROOT).contains("inf")
+                            ? " (too large for a measurement)" : ""));
+        }
+        return v;
     }
 }

@@ -74,6 +74,10 @@ final class CsvReader {
                         int row = (int) line;
                         for (int c = 0, n = rec.size(); c < n; c++) {
                             String v = rec.get(c);
+                            if (v.indexOf('\0') >= 0) {
+                                throw new ImportException("file %s, line %d holds a NUL byte (binary data in a text "
+                                        + "file). Export the data again as .xlsx or .csv", name, row);
+                            }
                             if (!v.isEmpty()) {
                                 data.addText(row, c, v);
                             }

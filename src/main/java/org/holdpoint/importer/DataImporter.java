@@ -355,6 +355,19 @@ public final class DataImporter {
                 continue;
             }
             int from = col.firstAtOrAfter(h.dataStart());
+            int split = h.name(c) == null && c >= h.width() && data.sheet() == null ? decimalCommaSplit(data, col, c,
+                    from) : -1;
+            if (split >= 0) {
+                // a text line with more fields than the header, digits beside a number: a decimal comma in a
+                // comma-separated file ("10,002" read as 10 and 002), so the value of that line cannot be trusted
+                int row = col.row(split);
+                from = split;
+                throw new ImportException("file %s, line %d has more fields than the header (%s \"%s\" in column %s "
+                        + "has no header). If a number is written with a decimal comma in this comma-separated file, "
+                        + "quote it (\"10,002\") or save the file with semicolons; otherwise give the column a "
+                        + "header", data.file(), row, "the field", data.display(col, from),
+                        Origin.columnName(c + 1));
+            }
             if (h.name(c) == null) {
                 for (int i = from; i < col.size(); i++) {
                     log.skip(null, new Origin(data.file(), data.sheet(), col.row(i), c + 1), SkipReason.OUTSIDE_COLUMNS,
@@ -369,6 +382,21 @@ public final class DataImporter {
                     ? String.join(", ", unused.subList(0, 12)) + " and " + (unused.size() - 12) + " more"
                     : String.join(", ", unused)));
         }
+    }
+
+    /** The first cell of an extra column that holds only digits beside a number, or −1. */
+    private static int decimalCommaSplit(SheetData data, SheetColumn col, int c, int from) {
+        SheetColumn left = data.column(c - 1);
+        for (int i = from; i < col.size(); i++) {
+            String t = data.display(col, i);
+            if (t != null && t.matches("[0-9]+") && left != null) {
+                int j = left.indexOfRow(col.row(i));
+                if (j >= 0 && left.kind(j) == CellKind.NUMBER) {
+                    return i;
+                }
+            }
+        }
+        return -1;
     }
 
     private static boolean used(Plan p, int c) {
@@ -573,6 +601,13 @@ public final class DataImporter {
         boolean cellsSkipped = noB && !a.skippedBefore.isEmpty() || noA && !a.skippedAfter.isEmpty();
         if (cellsSkipped && a.unknownLabels.isEmpty()) {
             sb.append(". Correct those cells (measurements must be numbers) or export the values again");
+        } else if (sources.size() == 2 && !a.unknownLabels.isEmpty() && a.unknownLabels.stream().map(ColumnNames::key)
+                .anyMatch(k -> k.equals(noB ? sources.get(1).plan().afterKey() : sources.get(0).plan().beforeKey()))) {
+            // a two-file study whose before file is labelled "after" (or the other way round)
+            sb.append(String.format(Locale.ROOT, ". The %s file's group column says %s: the two files seem to be "
+                    + "given the other way round (--before is the file measured before the change), or its rows are "
+                    + "labelled wrongly", noB ? "before" : "after", a.unknownLabels.stream().map(x -> "\"" + x + "\"")
+                            .collect(Collectors.joining(", "))));
         } else if (!a.unknownLabels.isEmpty()) {
             sb.append(String.format(Locale.ROOT, ". The group column holds the label(s) %s, which are neither \"%s\" nor "
                     + "\"%s\": name the labels with the before-label and after-label options", a.unknownLabels

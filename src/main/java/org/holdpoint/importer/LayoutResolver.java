@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.holdpoint.study.Layout;
+import org.holdpoint.study.Origin;
 
 /**
  * Chooses the layout of a sheet and the role of each column, from the options of the request and,
@@ -289,10 +290,24 @@ final class LayoutResolver {
         for (int c = 0; c < header.width(); c++) {
             ColumnNames.Name n = header.name(c);
             if (n != null && !reserved.contains(c) && keys.contains(n.key())) {
+                refuseTwin(c, "");
                 return c;
             }
         }
         return -1;
+    }
+
+    /** Two columns with the same name for one role: which one holds the data cannot be guessed. */
+    private void refuseTwin(int c, String option) {
+        String key = header.name(c).key();
+        for (int d = c + 1; d < header.width(); d++) {
+            ColumnNames.Name m = header.name(d);
+            if (m != null && m.key().equals(key)) {
+                throw new ImportException("%s: columns %s and %s are both named \"%s\" (header row %d); rename one, or "
+                        + "name the column to use by its letter%s", data.where(), Origin.columnName(c + 1),
+                        Origin.columnName(d + 1), header.name(c).display(), header.row(), option);
+            }
+        }
     }
 
     /** The column the user named (by header text or column letters), −1 when not given. */
@@ -307,6 +322,10 @@ final class LayoutResolver {
         if (c < 0) {
             throw new ImportException("%s: no %s column \"%s\" in the header in row %d; the columns are %s. Check the "
                     + "spelling", data.where(), what, given, header.row(), header.describe());
+        }
+        if (!given.strip().matches("[A-Za-z]{1,3}") || header.name(c) != null
+                && header.name(c).key().equals(ColumnNames.parse(given).key())) {
+            refuseTwin(c, " (e.g. the " + what + " column as " + Origin.columnName(c + 1) + ")");
         }
         return c;
     }

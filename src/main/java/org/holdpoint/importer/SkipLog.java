@@ -31,8 +31,23 @@ final class SkipLog {
             perCharacteristic.merge(characteristic, 1L, Long::sum);
         }
         if (first.size() < ImportReport.MAX_LISTED) {
-            first.add(new SkippedCell(origin, reason, text == null ? "" : text));
+            first.add(new SkippedCell(origin, reason, shorten(text)));
         }
+    }
+
+    /** Longest cell text echoed in the report; a longer one is cut and its length said. */
+    static final int MAX_TEXT = 80;
+
+    /** A cell's text as the report shows it: whole when short, else its start and its length. */
+    static String shorten(String text) {
+        if (text == null) {
+            return "";
+        }
+        if (text.length() <= MAX_TEXT) {
+            return text;
+        }
+        int end = Character.isHighSurrogate(text.charAt(MAX_TEXT - 1)) ? MAX_TEXT - 1 : MAX_TEXT;
+        return text.substring(0, end) + String.format(java.util.Locale.ROOT, "… (%,d characters)", text.length());
     }
 
     /** Adds a remark (layout chosen, header row found, …). */

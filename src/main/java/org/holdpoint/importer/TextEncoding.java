@@ -8,7 +8,7 @@ import java.nio.charset.StandardCharsets;
 
 /**
  * The encoding of a text file as people's tools write it: UTF-8 with or without a byte-order mark,
- * UTF-16 with a byte-order mark, or Windows-1252 (the code page of most office exports in Western
+ * UTF-16 with a byte-order mark (or without one, recognised by its NUL bytes), or Windows-1252 (the code page of most office exports in Western
  * Europe and the Americas) when the bytes are not valid UTF-8. Data files and settings files are
  * read by this one routine, so a file that imports as data also reads as settings
  * (docs/import.md, "Text files").
@@ -48,6 +48,10 @@ final class TextEncoding {
         if (head.length >= 2 && (head[0] & 0xff) == 0xFE && (head[1] & 0xff) == 0xFF) {
             return new Detected(StandardCharsets.UTF_16BE, 2);
         }
+        Charset utf16 = utf16WithoutMark(head);
+        if (utf16 != null) {
+            return new Detected(utf16, 0);
+        }
         for (byte b : head) {
             if (b == 0) {
                 throw new ImportException("file %s is not a text file (it holds binary data) and not a workbook "
@@ -76,6 +80,33 @@ final class TextEncoding {
      * @param charset the encoding it was read with
      */
     record Decoded(String text, Charset charset) {
+    }
+
+    /**
+     * UTF-16 written without a byte-order mark: text of Latin letters and digits has a NUL in every
+     * other byte (odd bytes for little-endian, even for big-endian) and almost none in the others.
+     *
+     * @param head the first bytes
+     * @return the UTF-16 variant, or null when the bytes do not look like it
+     */
+    private static Charset utf16WithoutMark(byte[] head) {
+        int pairs = head.length / 2;
+        if (pairs < 2) {
+            return null;
+        }
+        int evenNul = 0;
+        int oddNul = 0;
+        for (int i = 0; i + 1 < head.length; i += 2) {
+            evenNul += head[i] == 0 ? 1 : 0;
+            oddNul += head[i + 1] == 0 ? 1 : 0;
+        }
+        if (oddNul >= 0.9 * pairs && evenNul <= 0.02 * pairs) {
+            return StandardCharsets.UTF_16LE;
+        }
+        if (evenNul >= 0.9 * pairs && oddNul <= 0.02 * pairs) {
+            return StandardCharsets.UTF_16BE;
+        }
+        return null;
     }
 
     static boolean validUtf8(byte[] b) {

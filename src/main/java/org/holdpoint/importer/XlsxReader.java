@@ -63,9 +63,9 @@ final class XlsxReader {
                 throw notWorkbook(name, e);
             }
             if (zipBomb(e)) {
-                throw new ImportException(e, "file %s looks like a zip bomb: a part of it expands far more than a real "
-                        + "workbook does (POI's inflate-ratio guard stopped reading). Do not open it; ask the sender "
-                        + "for a fresh export", name);
+                throw new ImportException(e, "file %s is refused: a part of it expands far more than the parts of a "
+                        + "real workbook do (highly repetitive content such as a zip bomb or deeply nested XML; the "
+                        + "inflate-ratio guard stopped reading). Ask the sender for a fresh export", name);
             }
             throw damaged(name, e);
         } finally {

@@ -124,7 +124,7 @@ class BadFileCorpusTest {
             }
             return p;
         }, "protected with a password"));
-        cases.add(c("zip bomb", d -> bytes(d, "bomb.xlsx", BadFiles.zipBomb(validXlsx(d))), "zip bomb"));
+        cases.add(c("zip bomb", d -> bytes(d, "bomb.xlsx", BadFiles.zipBomb(validXlsx(d))), "expands far more than the parts of a real workbook"));
         cases.add(c("16,384 columns of noise", d -> {
             SplittableRandom rnd = new SplittableRandom(16384);
             try (XSSFWorkbook wb = new XSSFWorkbook()) {
@@ -170,6 +170,20 @@ class BadFileCorpusTest {
         }, p -> ImportRequest.ofTwo(p.resolveSibling("pb.csv"), p).withPaired(true), "no unit id occurs in both"));
         cases.add(new Case("paired without a unit id column", d -> text(d, "nounit.csv",
                 "before,after\n1,2\n3,\n"), p -> ImportRequest.of(p).withPaired(true), "never matched by row"));
+        cases.add(c("unquoted decimal comma in a comma-separated file", d -> text(d, "split.csv",
+                "phase,value\nbefore,10.001\nbefore,10.003\nbefore,10,002\nafter,10.004\nafter,10.000\n"),
+                "line 4 has more fields than the header"));
+        cases.add(c("NUL byte after the first 64 KiB", d -> {
+            StringBuilder sb = new StringBuilder("phase,value\n");
+            while (sb.length() < 70_000) {
+                sb.append("before,10.001\nafter,10.002\n");
+            }
+            sb.append("after,10.0\u00000\n");
+            return text(d, "nul-late.csv", sb.toString());
+        }, "holds a NUL byte"));
+        cases.add(c("two value columns", d -> text(d, "twin.csv",
+                "phase,value,value\nbefore,1,9\nbefore,2,8\nafter,3,7\nafter,4,6\n"),
+                "columns B and C are both named \"value\""));
         cases.add(c("mixed decimal separators (csv)", d -> text(d, "mixed.csv",
                 "phase;value\nbefore;10,5\nbefore;10,6\nafter;10.7\nafter;10,8\n"), "mixed decimal separators"));
         cases.add(c("mixed decimal separators (xlsx, text cells)", d -> Workbooks.xlsx(d.resolve("mixed.xlsx"),
