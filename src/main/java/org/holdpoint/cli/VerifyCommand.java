@@ -33,9 +33,13 @@ final class VerifyCommand implements Callable<Integer> {
             + "(X.509 PEM); without it, verify says which key signed.")
     Path key;
 
+    @Option(names = "--template", paramLabel = "TEMPLATE.xlsx", description = "The template the workbook was "
+            + "filled from, when it is not the default one: its own labels, sheets and names are then compared too.")
+    Path template;
+
     @Override
     public Integer call() {
-        VerifyResult r = new VerifyUseCase().verify(file, key, new ConsoleProgress(spec.commandLine().getErr(),
+        VerifyResult r = new VerifyUseCase().verify(file, key, template, new ConsoleProgress(spec.commandLine().getErr(),
                 false));
         PrintWriter out = spec.commandLine().getOut();
         out.printf(Locale.ROOT, "Sign-off workbook %s%n", file);

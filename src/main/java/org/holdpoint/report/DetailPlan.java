@@ -12,6 +12,9 @@ import org.holdpoint.study.CharacteristicSettings;
  * test, the equivalence test, the spread checks, notes and the charts.
  */
 final class DetailPlan {
+    /** The end of a chart caption's label: its text is the chart's name, which verify does not compare. */
+    static final String CAPTION = ": chart caption";
+
     /** Columns of a section: label, value, value, gap, label, value. */
     static final int[] WIDTHS = {34, 15, 15, 2, 32, 20};
     static final float ROW = 12.75f;
@@ -83,7 +86,7 @@ final class DetailPlan {
             for (int j = i; j < Math.min(i + 2, count); j++) {
                 int col = c0 + (j % 2 == 0 ? 0 : 3);
                 String caption = j < charts.size() ? charts.get(j).name() : "";
-                s.captions.add(new ShownCell(row, col, caption, Style.LABEL, 0, n + ": chart caption"));
+                s.captions.add(new ShownCell(row, col, caption, Style.LABEL, 0, n + CAPTION));
                 if (j < charts.size()) {
                     s.images.add(new SheetContent.PlacedImage(charts.get(j), row + 1, col, CHART_WIDTH_POINTS));
                 }

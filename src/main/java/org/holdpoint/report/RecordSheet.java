@@ -17,7 +17,8 @@ final class RecordSheet {
     /** The format marker of row 1. */
     static final String FORMAT = "holdpoint-signoff-record 1";
     static final String[] LABELS = {"format", "sha256", "characters", "chunks", "generated at", "software",
-        "charts per characteristic", "signature algorithm", "public key", "signature", "key fingerprint"};
+        "charts per characteristic", "signature algorithm", "public key", "signature", "key fingerprint",
+        "template"};
     /** Offset of the first chunk row below the anchor. */
     static final int FIRST_CHUNK = 14;
 
@@ -29,16 +30,17 @@ final class RecordSheet {
      *
      * @param in          the report input
      * @param chartCounts charts per characteristic, in result order
+     * @param templateFingerprint the content fingerprint of the template that was filled
      * @return the values
      */
-    static String[] values(ReportInput in, Map<String, Integer> chartCounts) {
+    static String[] values(ReportInput in, Map<String, Integer> chartCounts, String templateFingerprint) {
         RecordSeal seal = in.seal();
         StringBuilder counts = new StringBuilder();
         chartCounts.values().forEach(v -> counts.append(counts.length() == 0 ? "" : ",").append(v));
         return new String[] {FORMAT, in.sha256(), Integer.toString(in.studyJson().length()),
             Integer.toString(chunks(in.studyJson()).size()), in.generatedAt(), in.softwareVersion(),
             counts.toString(), seal == null ? "" : seal.algorithm(), seal == null ? "" : seal.publicKey(),
-            seal == null ? "" : seal.signature(), seal == null ? "" : seal.keyFingerprint()};
+            seal == null ? "" : seal.signature(), seal == null ? "" : seal.keyFingerprint(), templateFingerprint};
     }
 
     /**

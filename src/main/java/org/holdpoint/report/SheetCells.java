@@ -36,6 +36,31 @@ final class SheetCells extends DefaultHandler {
          * @param formula the formula text when the cell holds a formula, else null
          */
         void cell(int row, int col, Kind kind, String text, String formula);
+
+        /**
+         * The style index of the cell that is given next (its {@code s} attribute; 0 when absent).
+         *
+         * @param style the index into the workbook's cell formats
+         */
+        default void style(int style) {
+        }
+
+        /**
+         * A row that a reader does not see: hidden, or drawn less than 2 points high.
+         *
+         * @param row 0-based row
+         */
+        default void hiddenRow(int row) {
+        }
+
+        /**
+         * Columns that a reader does not see: hidden, or less than one character wide.
+         *
+         * @param first 0-based first column
+         * @param last  0-based last column
+         */
+        default void hiddenColumns(int first, int last) {
+        }
     }
 
     private final SharedStrings strings;
@@ -48,6 +73,7 @@ final class SheetCells extends DefaultHandler {
     private String type;
     private String value;
     private String formula;
+    private int styleIndex;
     private final StringBuilder inline = new StringBuilder();
     private int lastRow = -1;
     private int nextCol;
@@ -82,10 +108,22 @@ final class SheetCells extends DefaultHandler {
                 String r = atts.getValue("r");
                 lastRow = r == null ? lastRow + 1 : Integer.parseInt(r) - 1;
                 nextCol = 0;
+                String ht = atts.getValue("ht");
+                if (truth(atts.getValue("hidden")) || ht != null && parse(ht) < 2) {
+                    sink.hiddenRow(lastRow);
+                }
+            }
+            case "col" -> {
+                String w = atts.getValue("width");
+                if (truth(atts.getValue("hidden")) || w != null && parse(w) < 1) {
+                    sink.hiddenColumns((int) parse(atts.getValue("min")) - 1, (int) parse(atts.getValue("max")) - 1);
+                }
             }
             case "c" -> {
                 ref = atts.getValue("r");
                 type = atts.getValue("t");
+                String st = atts.getValue("s");
+                styleIndex = st == null ? 0 : (int) parse(st);
                 value = null;
                 formula = null;
                 inline.setLength(0);
@@ -100,6 +138,18 @@ final class SheetCells extends DefaultHandler {
             }
             default -> {
             }
+        }
+    }
+
+    private static boolean truth(String v) {
+        return "1".equals(v) || "true".equalsIgnoreCase(v);
+    }
+
+    private static double parse(String v) {
+        try {
+            return v == null ? Double.NaN : Double.parseDouble(v.trim());
+        } catch (NumberFormatException e) {
+            return Double.NaN;
         }
     }
 
@@ -178,6 +228,7 @@ final class SheetCells extends DefaultHandler {
                 text = value;
             }
         }
+        sink.style(styleIndex);
         sink.cell(row, col, kind, text, formula);
     }
 }

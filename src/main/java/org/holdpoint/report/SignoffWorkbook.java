@@ -156,7 +156,7 @@ public final class SignoffWorkbook {
         XSSFSheet sh = wb.getSheet(a.sheet());
         put(sh, new ShownCell(a.row(), a.column(), "Holdpoint sign-off record: do not edit", Style.HEADING, 0, null),
                 styles);
-        String[] values = RecordSheet.values(input, counts);
+        String[] values = RecordSheet.values(input, counts, template.fingerprint());
         for (int i = 0; i < values.length; i++) {
             put(sh, new ShownCell(a.row() + 1 + i, a.column(), RecordSheet.LABELS[i], Style.LABEL, 0, null), styles);
             put(sh, new ShownCell(a.row() + 1 + i, a.column() + 1, values[i], Style.MONO, 0, null), styles);

@@ -188,17 +188,37 @@ public final class SignoffWorkbookReader {
         }
     }
 
+    /** @return the content fingerprint of the template the workbook was written with ("" when not stored) */
+    public String templateFingerprint() {
+        return record.length > 11 ? record[11] : "";
+    }
+
     /**
-     * Compares every value the workbook shows with the values a workbook written from {@code expected} would
-     * show: the same plan of cells, streamed sheet by sheet. Numbers must agree to 12 significant digits,
-     * text exactly; a formula anywhere in a planned cell is a difference; entries typed into the empty
-     * sign-off fields are listed apart (they are not part of the record).
+     * Compares without knowing the template (its own labels are then not compared).
      *
      * @param expected the report input re-computed from the record
      * @return the differences and the hand entries
-     * @throws ReportException when the file cannot be read
      */
     public Comparison compare(ReportInput expected) {
+        return compare(expected, null);
+    }
+
+    /**
+     * Compares what the workbook shows with what a workbook written from {@code expected} into
+     * {@code template} would show: every written value (numbers to 12 significant digits, text exactly)
+     * and its number format, font and colours; every other non-empty cell of every sheet against the
+     * template's own text (any other text is an edit); repeated cell elements; the sheets, their order
+     * and visibility; hidden rows and columns; the defined names; and parts a Holdpoint workbook never
+     * has (macros, external links, comments, embedded objects). Entries typed into the empty sign-off
+     * fields are listed apart (they are not part of the record). See docs/signoff-workbook.md.
+     *
+     * @param expected the report input re-computed from the record
+     * @param template the template the workbook was written with, or null when it is not known (its own
+     *                 cells, sheets and names are then not compared)
+     * @return the differences and the hand entries
+     * @throws ReportException when the file cannot be read
+     */
+    public Comparison compare(ReportInput expected, Template template) {
         List<WorkbookDifference> diffs = new ArrayList<>();
         List<String> hand = new ArrayList<>();
         Map<TemplateName, Anchor> anchors = new EnumMap<>(TemplateName.class);
@@ -209,7 +229,13 @@ public final class SignoffWorkbookReader {
                         "present"));
                 continue;
             }
-            anchors.put(t, Template.parse(ref, file.toString(), t.definedName()));
+            Anchor a = Template.parse(ref, file.toString(), t.definedName());
+            if (template != null && !same(a, template.anchor(t))) {
+                diffs.add(new WorkbookDifference("(workbook)", "-", "defined name " + t.definedName(), describe(a),
+                        describe(template.anchor(t))));
+                a = template.anchor(t);
+            }
+            anchors.put(t, a);
         }
         if (anchors.size() < TemplateName.values().length) {
             return new Comparison(diffs, hand);
@@ -221,22 +247,35 @@ public final class SignoffWorkbookReader {
         }
         WorkbookPlan plan = WorkbookPlan.of(expected, anchors, counts);
         Anchor raw = anchors.get(TemplateName.RAW_DATA);
+        Anchor rec = anchors.get(TemplateName.RECORD);
         Map<String, Iterator<ShownCell>> bySheet = new LinkedHashMap<>();
         for (SheetContent c : plan.contents()) {
-            Iterator<ShownCell> it = c.sorted().iterator();
+            List<ShownCell> cells = new ArrayList<>(c.cells);
+            cells.addAll(c.captions);
+            cells.sort(java.util.Comparator.comparingInt(ShownCell::row).thenComparingInt(ShownCell::column));
+            Iterator<ShownCell> it = cells.iterator();
             if (c.sheet.equals(raw.sheet())) {
                 it = concat(it, new Flat(new RawDataRows(expected, raw)));
             }
             bySheet.put(c.sheet, it);
         }
+        bySheet.put(rec.sheet(), recordCells(rec).iterator());
+        if (template != null) {
+            for (String sheet : template.sheetNames()) {
+                bySheet.putIfAbsent(sheet, java.util.Collections.emptyIterator());
+            }
+        }
         RawDataRows labeller = new RawDataRows(expected, raw);
         try (OPCPackage pkg = OPCPackage.open(file.toFile(), PackageAccess.READ)) {
             XSSFReader reader = new XSSFReader(pkg);
+            checkWorkbook(pkg, reader, template, rec.sheet(), diffs);
+            org.apache.poi.xssf.model.StylesTable styles = reader.getStylesTable();
             for (Map.Entry<String, Iterator<ShownCell>> e : bySheet.entrySet()) {
-                Merge m = new Merge(e.getKey(), e.getValue(), diffs, hand,
-                        e.getKey().equals(raw.sheet()) ? labeller : null);
-                if (!readSheet(reader, e.getKey(), m)) {
-                    diffs.add(new WorkbookDifference(e.getKey(), "-", "sheet", "(missing)", "present"));
+                String sheet = e.getKey();
+                Merge m = new Merge(sheet, e.getValue(), diffs, hand, sheet.equals(raw.sheet()) ? labeller : null,
+                        template == null ? null : template.cellTexts(sheet), styles, !sheet.equals(rec.sheet()));
+                if (!readSheet(reader, sheet, m)) {
+                    diffs.add(new WorkbookDifference(sheet, "-", "sheet", "(missing)", "present"));
                     continue;
                 }
                 m.finish();
@@ -247,6 +286,87 @@ public final class SignoffWorkbookReader {
             throw new ReportException(e, "%s cannot be read as an .xlsx workbook (%s)", file, e.getMessage());
         }
         return new Comparison(diffs, hand);
+    }
+
+    private static boolean same(Anchor a, Anchor b) {
+        return a.sheet().equals(b.sheet()) && a.row() == b.row() && a.column() == b.column();
+    }
+
+    private static String describe(Anchor a) {
+        return "'" + a.sheet() + "'!" + new CellReference(a.row(), a.column()).formatAsString();
+    }
+
+    /** The record sheet as the writer lays it out, with the values read from it (checked elsewhere). */
+    private List<ShownCell> recordCells(Anchor a) {
+        List<ShownCell> out = new ArrayList<>();
+        out.add(new ShownCell(a.row(), a.column(), "Holdpoint sign-off record: do not edit", Style.HEADING, 0,
+                "record heading"));
+        List<String> chunks = RecordSheet.chunks(studyJson);
+        for (int i = 0; i < RecordSheet.LABELS.length; i++) {
+            String v = i < record.length ? record[i] : "";
+            if (i == 0) {
+                v = RecordSheet.FORMAT;
+            } else if (i == 2) {
+                v = Integer.toString(studyJson.length());
+            } else if (i == 3) {
+                v = Integer.toString(chunks.size());
+            }
+            out.add(new ShownCell(a.row() + 1 + i, a.column(), RecordSheet.LABELS[i], Style.LABEL, 0, "record label"));
+            out.add(new ShownCell(a.row() + 1 + i, a.column() + 1, v, Style.MONO, 0, "record " + RecordSheet.LABELS[i]));
+        }
+        for (int i = 0; i < chunks.size(); i++) {
+            int r = a.row() + RecordSheet.FIRST_CHUNK + i;
+            out.add(new ShownCell(r, a.column(), (double) (i + 1), Style.INTEGER, 0, "record chunk number"));
+            out.add(new ShownCell(r, a.column() + 1, chunks.get(i), Style.MONO, 0, "record chunk " + (i + 1)));
+        }
+        return out;
+    }
+
+    /** Parts of an .xlsx that a Holdpoint workbook never has: code, links out, comments, embedded objects. */
+    private static final java.util.regex.Pattern FOREIGN_PART = java.util.regex.Pattern.compile(
+            "(?i).*(vbaproject|externallink|connections|comments|threadedcomment|persons/|activex|ctrlprops"
+                    + "|embeddings/|oleobject|pivot|querytable|/tables/|slicer|timeline|customxml/|macrosheets"
+                    + "|dialogsheets|webextension).*");
+
+    /** The sheets (names, order, visibility), defined names beyond the template's, and foreign parts. */
+    private void checkWorkbook(OPCPackage pkg, XSSFReader reader, Template template, String recordSheet,
+            List<WorkbookDifference> diffs) throws Exception {
+        for (org.apache.poi.openxml4j.opc.PackagePart part : pkg.getParts()) {
+            String n = part.getPartName().getName();
+            if (FOREIGN_PART.matcher(n).matches()) {
+                diffs.add(new WorkbookDifference("(workbook)", "-", "part " + n, "present",
+                        "(none: a Holdpoint workbook has no macros, links, comments or embedded objects)"));
+            }
+        }
+        List<String> sheets = new ArrayList<>();
+        try (InputStream in = reader.getWorkbookData()) {
+            CTWorkbook wb = WorkbookDocument.Factory.parse(in).getWorkbook();
+            for (org.openxmlformats.schemas.spreadsheetml.x2006.main.CTSheet sh : wb.getSheets().getSheetArray()) {
+                sheets.add(sh.getName());
+                boolean hidden = sh.isSetState() && sh.getState()
+                        != org.openxmlformats.schemas.spreadsheetml.x2006.main.STSheetState.VISIBLE;
+                if (hidden != sh.getName().equals(recordSheet)) {
+                    diffs.add(new WorkbookDifference(sh.getName(), "-", "sheet visibility", hidden ? "hidden"
+                            : "visible", hidden ? "visible" : "hidden (the record sheet)"));
+                }
+            }
+            if (template != null && wb.getDefinedNames() != null) {
+                java.util.Set<String> known = new java.util.HashSet<>();
+                for (TemplateName t : TemplateName.values()) {
+                    known.add(t.definedName());
+                }
+                for (CTDefinedName dn : wb.getDefinedNames().getDefinedNameArray()) {
+                    if (!dn.isSetLocalSheetId() && !known.contains(dn.getName()) && !dn.getName().startsWith("_xlnm")) {
+                        diffs.add(new WorkbookDifference("(workbook)", "-", "defined name " + dn.getName(),
+                                dn.getStringValue(), "(none: not in the template)"));
+                    }
+                }
+            }
+        }
+        if (template != null && !sheets.equals(template.sheetNames())) {
+            diffs.add(new WorkbookDifference("(workbook)", "-", "sheets and their order", String.join(", ", sheets),
+                    String.join(", ", template.sheetNames())));
+        }
     }
 
     private static Iterator<ShownCell> concat(Iterator<ShownCell> a, Iterator<ShownCell> b) {
@@ -291,44 +411,136 @@ public final class SignoffWorkbookReader {
         }
     }
 
-    /** Merges the expected cells (row-major) with the file's cells (row-major). */
+    /**
+     * Merges the expected cells (row-major) with the file's cells (row-major): each written cell is
+     * compared with its expected value and style; every other non-empty cell must be the template's own
+     * text at that place.
+     */
     private static final class Merge implements SheetCells.Sink {
         private final String sheet;
         private final Iterator<ShownCell> expected;
         private final List<WorkbookDifference> diffs;
         private final List<String> hand;
         private final RawDataRows labeller;
+        private final Map<Long, String> templateTexts;
+        private final java.util.Set<Long> templateSeen = new java.util.HashSet<>();
+        private final java.util.Set<Long> written = new java.util.HashSet<>();
+        private final org.apache.poi.xssf.model.StylesTable styles;
+        private final Map<String, String> styleProblems = new HashMap<>();
+        private final boolean visible;
+        private final java.util.BitSet hiddenRows = new java.util.BitSet();
+        private final java.util.BitSet hiddenCols = new java.util.BitSet();
         private ShownCell next;
+        private int style;
+        private int lastRow = -1;
+        private int lastCol = -1;
 
         Merge(String sheet, Iterator<ShownCell> expected, List<WorkbookDifference> diffs, List<String> hand,
-                RawDataRows labeller) {
+                RawDataRows labeller, Map<Long, String> templateTexts, org.apache.poi.xssf.model.StylesTable styles,
+                boolean visible) {
             this.sheet = sheet;
             this.expected = expected;
             this.diffs = diffs;
             this.hand = hand;
             this.labeller = labeller;
+            this.templateTexts = templateTexts;
+            this.styles = styles;
+            this.visible = visible;
             this.next = expected.hasNext() ? expected.next() : null;
         }
 
         @Override
+        public void style(int s) {
+            style = s;
+        }
+
+        @Override
+        public void hiddenRow(int row) {
+            hiddenRows.set(row);
+        }
+
+        @Override
+        public void hiddenColumns(int first, int last) {
+            if (first >= 0 && last >= first && last < 16_384) {
+                hiddenCols.set(first, last + 1);
+            }
+        }
+
+        @Override
         public void cell(int row, int col, SheetCells.Kind kind, String text, String formula) {
+            if (row < lastRow || row == lastRow && col <= lastCol) {
+                diffs.add(new WorkbookDifference(sheet, ref(row, col), "a repeated or out-of-order cell element",
+                        shown(kind, text, formula), "(each cell once, in order, as the writer writes them)"));
+                return;
+            }
+            lastRow = row;
+            lastCol = col;
             while (next != null && before(next, row, col)) {
-                check(next, null, null, null);
+                check(next, null, null, null, -1);
                 advance();
             }
             if (next != null && next.row() == row && next.column() == col) {
-                check(next, kind, text, formula);
+                check(next, kind, text, formula, style);
                 advance();
             } else if (formula != null) {
                 diffs.add(new WorkbookDifference(sheet, ref(row, col), "a cell outside the written values",
                         "formula =" + formula, "(no formula; the workbook is written without formulas)"));
+            } else if (kind != null && text != null && !text.isEmpty()) {
+                unwritten(row, col, kind, text);
+            }
+        }
+
+        /** A non-empty cell the writer did not write: the template's own text, or an edit. */
+        private void unwritten(int row, int col, SheetCells.Kind kind, String text) {
+            if (templateTexts == null) {
+                return;
+            }
+            long k = key(row, col);
+            String own = templateTexts.get(k);
+            if (own == null) {
+                diffs.add(new WorkbookDifference(sheet, ref(row, col), "a cell the workbook was written without",
+                        shown(kind, text, null), "(empty)"));
+            } else {
+                templateSeen.add(k);
+                boolean same = kind == SheetCells.Kind.TEXT ? own.equals(text) : sameNumber(own, text);
+                if (!same) {
+                    diffs.add(new WorkbookDifference(sheet, ref(row, col), "the template's text",
+                            shown(kind, text, null), "\"" + own + "\""));
+                }
+            }
+        }
+
+        private static boolean sameNumber(String own, String text) {
+            try {
+                return Double.parseDouble(own) == Double.parseDouble(text);
+            } catch (NumberFormatException e) {
+                return false;
             }
         }
 
         void finish() {
             while (next != null) {
-                check(next, null, null, null);
+                check(next, null, null, null, -1);
                 advance();
+            }
+            if (templateTexts != null) {
+                for (Map.Entry<Long, String> t : templateTexts.entrySet()) {
+                    if (!templateSeen.contains(t.getKey()) && !written.contains(t.getKey())) {
+                        int row = (int) (t.getKey() >> 20);
+                        int col = (int) (t.getKey() & 0xFFFFF);
+                        diffs.add(new WorkbookDifference(sheet, ref(row, col), "the template's text", "(empty)",
+                                "\"" + t.getValue() + "\""));
+                    }
+                }
+            }
+            if (visible) {
+                for (int r = hiddenRows.nextSetBit(0); r >= 0; r = hiddenRows.nextSetBit(r + 1)) {
+                    diffs.add(new WorkbookDifference(sheet, "row " + (r + 1), "row visibility", "hidden", "shown"));
+                }
+                for (int c = hiddenCols.nextSetBit(0); c >= 0; c = hiddenCols.nextSetBit(c + 1)) {
+                    diffs.add(new WorkbookDifference(sheet, "column " + CellReference.convertNumToColString(c),
+                            "column visibility", "hidden", "shown"));
+                }
             }
         }
 
@@ -340,13 +552,18 @@ public final class SignoffWorkbookReader {
             return c.row() < row || (c.row() == row && c.column() < col);
         }
 
-        private void check(ShownCell e, SheetCells.Kind kind, String text, String formula) {
+        private void check(ShownCell e, SheetCells.Kind kind, String text, String formula, int styleIndex) {
+            written.add(key(e.row(), e.column()));
             String shown = shown(kind, text, formula);
             Object v = e.value();
             boolean empty = kind == null || (kind == SheetCells.Kind.TEXT && text.isEmpty());
             boolean ok;
+            boolean caption = e.label() != null && e.label().endsWith(DetailPlan.CAPTION);
             if (formula != null) {
                 ok = false;
+            } else if (caption) {
+                // the name of the chart beside it: charts are renderings, not part of the record
+                ok = empty || kind == SheetCells.Kind.TEXT;
             } else if (v == null || (v instanceof String s && s.isEmpty())) {
                 ok = empty;
                 if (!ok && e.style() == Style.FILLABLE) {
@@ -358,11 +575,85 @@ public final class SignoffWorkbookReader {
             } else {
                 ok = kind == SheetCells.Kind.NUMBER && close((Double) v, text);
             }
+            String what = e.label() != null ? e.label() : labeller != null ? labeller.label(e.row(), e.column())
+                    : "value";
             if (!ok) {
-                String what = e.label() != null ? e.label() : labeller != null ? labeller.label(e.row(), e.column())
-                        : "value";
                 diffs.add(new WorkbookDifference(sheet, ref(e.row(), e.column()), what, shown, expectedText(v)));
+            } else if (styleIndex >= 0 && !empty) {
+                String problem = styleProblem(styleIndex, e);
+                if (problem != null) {
+                    diffs.add(new WorkbookDifference(sheet, ref(e.row(), e.column()), what + ": how it is shown",
+                            problem, "format " + Styles.formatCode(e.style(), e.decimals()) + ", readable text"));
+                }
             }
+        }
+
+        /**
+         * What is wrong with the way a cell shows its value: a number format other than the writer's
+         * (which can show other digits, or other text, or nothing), text drawn in the colour of its
+         * background, or a font too small to read. Null when nothing is.
+         */
+        private String styleProblem(int index, ShownCell e) {
+            String key = index + "/" + e.style() + "/" + e.decimals();
+            String found = styleProblems.computeIfAbsent(key, k -> {
+                String p = styleProblemOf(index, e);
+                return p == null ? "" : p;
+            });
+            return found.isEmpty() ? null : found;
+        }
+
+        private String styleProblemOf(int index, ShownCell e) {
+            {
+                if (styles == null || index >= styles.getNumCellStyles()) {
+                    return index == 0 ? sameFormat("General", e) : "a cell format that does not exist";
+                }
+                org.apache.poi.xssf.usermodel.XSSFCellStyle st = styles.getStyleAt(index);
+                String f = sameFormat(st.getDataFormatString(), e);
+                if (f != null) {
+                    return f;
+                }
+                org.apache.poi.xssf.usermodel.XSSFFont font = st.getFont();
+                if (font != null && font.getFontHeightInPoints() < 6) {
+                    return "font of " + font.getFontHeightInPoints() + " points";
+                }
+                int[] ink = rgb(font == null ? null : font.getXSSFColor(), new int[] {0, 0, 0});
+                int[] paper = st.getFillPattern() == org.apache.poi.ss.usermodel.FillPatternType.SOLID_FOREGROUND
+                        ? rgb(st.getFillForegroundColorColor(), new int[] {255, 255, 255}) : new int[] {255, 255, 255};
+                int distance = Math.abs(ink[0] - paper[0]) + Math.abs(ink[1] - paper[1]) + Math.abs(ink[2] - paper[2]);
+                if (distance < 120) {
+                    return String.format(Locale.ROOT, "text colour #%02X%02X%02X on background #%02X%02X%02X", ink[0],
+                            ink[1], ink[2], paper[0], paper[1], paper[2]);
+                }
+                return null;
+            }
+        }
+
+        private static String sameFormat(String shownFormat, ShownCell e) {
+            String want = Styles.formatCode(e.style(), e.decimals());
+            String got = shownFormat == null ? "General" : shownFormat;
+            if (got.equalsIgnoreCase(want) || normalise(got).equals(normalise(want))) {
+                return null;
+            }
+            return "number format " + got;
+        }
+
+        /** Format codes as spreadsheet programs re-save them: quotes and backslash escapes may differ. */
+        private static String normalise(String f) {
+            return f.replace("\\", "").replace("\"", "").toLowerCase(Locale.ROOT);
+        }
+
+        private static int[] rgb(org.apache.poi.ss.usermodel.Color c, int[] dflt) {
+            if (c instanceof org.apache.poi.xssf.usermodel.XSSFColor x) {
+                byte[] b = x.getRGBWithTint();
+                if (b == null) {
+                    b = x.getRGB();
+                }
+                if (b != null && b.length >= 3) {
+                    int o = b.length == 4 ? 1 : 0;
+                    return new int[] {b[o] & 0xff, b[o + 1] & 0xff, b[o + 2] & 0xff};
+                }
+            }
+            return dflt;
         }
 
         private static boolean close(double expected, String text) {

@@ -87,17 +87,9 @@ final class Styles {
                 border(s);
                 s.setWrapText(true);
             }
-            case NUMBER -> {
+            case NUMBER, INTEGER, P_VALUE -> {
                 border(s);
-                s.setDataFormat(wb.createDataFormat().getFormat(decimals == 0 ? "0" : "0." + "0".repeat(decimals)));
-            }
-            case INTEGER -> {
-                border(s);
-                s.setDataFormat(wb.createDataFormat().getFormat("0"));
-            }
-            case P_VALUE -> {
-                border(s);
-                s.setDataFormat(wb.createDataFormat().getFormat("[<0.0001]\"< 0.0001\";0.0000"));
+                s.setDataFormat(wb.createDataFormat().getFormat(formatCode(style, decimals)));
             }
             case VERDICT -> {
                 s.setFont(verdict);
@@ -126,6 +118,23 @@ final class Styles {
             default -> throw new IllegalStateException("unknown style " + style);
         }
         return s;
+    }
+
+    /**
+     * The number format of a style: what verify expects to find on every written cell, so that a format
+     * that shows other digits (or hides the value) is found.
+     *
+     * @param style    the style
+     * @param decimals decimals of a number style
+     * @return the format code ("General" for every style that is not a number style)
+     */
+    static String formatCode(Style style, int decimals) {
+        return switch (style) {
+            case NUMBER -> decimals == 0 ? "0" : "0." + "0".repeat(decimals);
+            case INTEGER -> "0";
+            case P_VALUE -> "[<0.0001]\"< 0.0001\";0.0000";
+            default -> "General";
+        };
     }
 
     private void status(CellStyle s, IndexedColors colour) {

@@ -23,11 +23,59 @@ public final class Template {
     private final byte[] bytes;
     private final String name;
     private final Map<TemplateName, Anchor> anchors;
+    private final List<String> sheetNames;
+    private final Map<String, Map<Long, String>> cellTexts;
+    private final String fingerprint;
 
-    private Template(byte[] bytes, String name, Map<TemplateName, Anchor> anchors) {
+    private Template(byte[] bytes, String name, Map<TemplateName, Anchor> anchors, List<String> sheetNames,
+            Map<String, Map<Long, String>> cellTexts) {
         this.bytes = bytes;
         this.name = name;
         this.anchors = anchors;
+        this.sheetNames = List.copyOf(sheetNames);
+        this.cellTexts = cellTexts;
+        this.fingerprint = fingerprint(anchors, sheetNames, cellTexts);
+    }
+
+    /**
+     * The SHA-256 of what a reader of the template sees: its sheets in order, where its names point and
+     * every non-empty cell's text. Stored in the record sheet, so that verify knows which template's
+     * own labels a workbook must show (a file's bytes differ from one save to the next; its content not).
+     */
+    private static String fingerprint(Map<TemplateName, Anchor> anchors, List<String> sheets,
+            Map<String, Map<Long, String>> cells) {
+        StringBuilder sb = new StringBuilder("holdpoint template 1\n");
+        sheets.forEach(n -> sb.append("sheet\0").append(n).append('\n'));
+        anchors.forEach((t, a) -> sb.append("name\0").append(t.definedName()).append('\0').append(a.sheet())
+                .append('\0').append(a.row()).append('\0').append(a.column()).append('\n'));
+        for (String sheet : sheets) {
+            new java.util.TreeMap<>(cells.getOrDefault(sheet, Map.of())).forEach((k, v) -> sb.append("cell\0")
+                    .append(sheet).append('\0').append(k).append('\0').append(v).append('\n'));
+        }
+        try {
+            return java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                    .digest(sb.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
+        }
+    }
+
+    /** @return the template's content fingerprint (see {@link #fingerprint}) */
+    public String fingerprint() {
+        return fingerprint;
+    }
+
+    /** @return the sheet names in order */
+    List<String> sheetNames() {
+        return sheetNames;
+    }
+
+    /**
+     * @param sheet a sheet name
+     * @return the template's own non-empty cell texts of that sheet, keyed by {@link SignoffWorkbookReader#key}
+     */
+    Map<Long, String> cellTexts(String sheet) {
+        return cellTexts.getOrDefault(sheet, Map.of());
     }
 
     /** @return the default template, built by {@link TemplateGenerator} (identical to templates/holdpoint-default.xlsx) */
@@ -69,7 +117,26 @@ public final class Template {
      */
     public static Template of(byte[] bytes, String name) {
         try (XSSFWorkbook wb = new XSSFWorkbook(new ByteArrayInputStream(bytes))) {
-            return new Template(bytes.clone(), name, validate(wb, name));
+            Map<TemplateName, Anchor> anchors = validate(wb, name);
+            List<String> sheets = new ArrayList<>();
+            Map<String, Map<Long, String>> cells = new HashMap<>();
+            org.apache.poi.ss.usermodel.DataFormatter fmt = new org.apache.poi.ss.usermodel.DataFormatter(
+                    java.util.Locale.ROOT);
+            for (Sheet sh : wb) {
+                sheets.add(sh.getSheetName());
+                Map<Long, String> m = new HashMap<>();
+                for (org.apache.poi.ss.usermodel.Row row : sh) {
+                    for (org.apache.poi.ss.usermodel.Cell c : row) {
+                        String t = c.getCellType() == org.apache.poi.ss.usermodel.CellType.STRING
+                                ? c.getStringCellValue() : fmt.formatCellValue(c);
+                        if (!t.isEmpty()) {
+                            m.put(SignoffWorkbookReader.key(c.getRowIndex(), c.getColumnIndex()), t);
+                        }
+                    }
+                }
+                cells.put(sh.getSheetName(), m);
+            }
+            return new Template(bytes.clone(), name, anchors, sheets, cells);
         } catch (IOException | RuntimeException e) {
             if (e instanceof ReportException r) {
                 throw r;

@@ -9,6 +9,7 @@ import org.holdpoint.report.RecordSeal;
 import org.holdpoint.report.ReportException;
 import org.holdpoint.report.ReportInput;
 import org.holdpoint.report.SignoffWorkbookReader;
+import org.holdpoint.report.Template;
 import org.holdpoint.report.WorkbookDifference;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicResult;
@@ -32,6 +33,20 @@ public final class VerifyUseCase {
      * @throws SignoffException when the file cannot be read or is not a sign-off workbook
      */
     public VerifyResult verify(Path workbook, Path trustedKey, Progress progress) {
+        return verify(workbook, trustedKey, null, progress);
+    }
+
+    /**
+     * Verifies a workbook written with a template of one's own.
+     *
+     * @param workbook   the .xlsx
+     * @param trustedKey a public key the record should be signed with, or null
+     * @param template   the template it was filled from when not the default one, or null
+     * @param progress   progress and cancel port
+     * @return the findings
+     * @throws SignoffException when the file cannot be read or is not a sign-off workbook
+     */
+    public VerifyResult verify(Path workbook, Path trustedKey, Path template, Progress progress) {
         progress.step("reading the record", 0);
         // the key is read first: a key that cannot be read is a mistake in the command, not a finding
         java.security.PublicKey trusted = trustedKey == null ? null : RecordSigning.readPublic(trustedKey);
@@ -89,9 +104,10 @@ public final class VerifyUseCase {
         progress.step("comparing the shown values", 0.6);
         ReportInput expected = new ReportInput(study, result, reader.studyJson(), sha, null, version(reader), reader
                 .generatedAt(), seal);
+        Template filled = templateOf(reader, template, diffs, notes);
         SignoffWorkbookReader.Comparison cmp;
         try {
-            cmp = reader.compare(expected);
+            cmp = reader.compare(expected, filled);
         } catch (ReportException e) {
             throw new SignoffException(e, "%s", e.getMessage());
         }
@@ -100,6 +116,41 @@ public final class VerifyUseCase {
         return new VerifyResult(diffs.isEmpty() ? VerifyResult.Status.INTACT : VerifyResult.Status.EDITED,
                 study.change().id(), sha, hashOk, sealState, fingerprint(seal), convert(diffs), cmp.handEntries(),
                 notes);
+    }
+
+    /**
+     * The template whose own cells, sheets and names the workbook must show: the default one, or the one
+     * given, recognised by the content fingerprint in the record sheet.
+     */
+    private static Template templateOf(SignoffWorkbookReader reader, Path given, List<WorkbookDifference> diffs,
+            List<String> notes) {
+        String stored = reader.templateFingerprint();
+        Template dflt = Template.defaultTemplate();
+        if (stored.isBlank()) {
+            diffs.add(new WorkbookDifference("(record)", "-", "template fingerprint", "(missing)",
+                    "the fingerprint of the template the workbook was filled from"));
+            return null;
+        }
+        if (stored.equals(dflt.fingerprint())) {
+            return dflt;
+        }
+        if (given != null) {
+            Template t;
+            try {
+                t = Template.read(given);
+            } catch (ReportException e) {
+                throw new SignoffException(e, "%s", e.getMessage());
+            }
+            if (t.fingerprint().equals(stored)) {
+                return t;
+            }
+            diffs.add(new WorkbookDifference("(record)", "-", "template fingerprint", stored,
+                    t.fingerprint() + " (the template given)"));
+            return null;
+        }
+        notes.add("the workbook was filled from a template of its own (fingerprint " + stored + "): its labels, "
+                + "sheets and names were not compared; give that template with --template to compare them");
+        return null;
     }
 
     private static List<VerifyResult.Difference> convert(List<WorkbookDifference> diffs) {

@@ -81,6 +81,28 @@ class LibreOfficeConversionTest {
         return n;
     }
 
+    /**
+     * Re-saving an untouched workbook in a spreadsheet program changes its bytes (styles renumbered,
+     * names re-quoted, view settings added, structure lock dropped) but not what a reader sees: verify
+     * stays INTACT (docs/signoff-workbook.md, "What re-saving may change").
+     */
+    @Test
+    void aWorkbookReSavedByLibreOfficeStaysIntact() throws Exception {
+        String soffice = onPath("soffice");
+        assumeTrue(soffice != null, "LibreOffice (soffice) is not installed");
+        ChangeStudy study = ReportFixtures.study();
+        Path xlsx = dir.resolve("written.xlsx");
+        new ReportUseCase(SignoffWorkbookTest.CLOCK).write(study, ReportFixtures.analyze(study),
+                ReportOptions.withDefaults().withCharts(ReportFixtures.charts()), xlsx);
+        Path out = Files.createDirectories(dir.resolve("resaved"));
+        run(soffice, "--convert-to", "xlsx:Calc MS Excel 2007 XML", "--outdir", out.toString(), xlsx.toString());
+        Path resaved = out.resolve("written.xlsx");
+        assertThat(Files.mismatch(xlsx, resaved)).isNotEqualTo(-1L);
+        VerifyResult r = new VerifyUseCase().verify(resaved, null, org.holdpoint.study.Progress.NONE);
+        assertThat(r.differences()).isEmpty();
+        assertThat(r.status()).isEqualTo(VerifyResult.Status.INTACT);
+    }
+
     private String run(String... command) throws IOException, InterruptedException {
         List<String> cmd = new ArrayList<>(List.of(command));
         if (command[0].endsWith("soffice")) {
