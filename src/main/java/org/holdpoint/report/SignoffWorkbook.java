@@ -49,6 +49,7 @@ public final class SignoffWorkbook {
      * @throws IOException when writing fails
      */
     public void write(ReportInput input, OutputStream out) throws IOException {
+        PoiTempFiles.install();
         XSSFWorkbook wb = new XSSFWorkbook(template.open());
         SXSSFWorkbook sx = null;
         try {

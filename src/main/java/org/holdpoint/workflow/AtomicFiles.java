@@ -66,6 +66,24 @@ public final class AtomicFiles {
 
     private static final java.security.SecureRandom RANDOM = new java.security.SecureRandom();
 
+    /** Temporary files being written now: removed by a shutdown hook when the program is stopped. */
+    private static final java.util.Set<Path> PENDING = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
+    static {
+        // Ctrl+C or a plain kill (SIGTERM) runs shutdown hooks: no hidden .part file is left behind. A
+        // kill -9 cannot be caught (README, "Outputs" says what it may leave).
+        Runtime.getRuntime().addShutdownHook(new Thread(() -> {
+            for (Path p : PENDING) {
+                try {
+                    Files.deleteIfExists(p);
+                } catch (IOException e) {
+                    System.err.println("holdpoint: could not remove the unfinished file " + p + " (" + e.getMessage()
+                            + "); delete it by hand");
+                }
+            }
+        }, "holdpoint-cleanup"));
+    }
+
     private static void write(Path target, boolean overwrite, boolean ownerOnly, Writer writer) throws IOException {
         Path abs = target.toAbsolutePath();
         Path dir = abs.getParent();
@@ -78,6 +96,7 @@ public final class AtomicFiles {
         // a plain new file, not createTempFile: its owner-only permissions would survive the move
         Path tmp = (dir == null ? Path.of("") : dir).resolve("." + abs.getFileName() + "."
                 + Long.toHexString(RANDOM.nextLong() & Long.MAX_VALUE) + ".part");
+        PENDING.add(tmp);
         try {
             java.util.Set<java.nio.file.OpenOption> options = java.util.Set.of(
                     java.nio.file.StandardOpenOption.CREATE_NEW, java.nio.file.StandardOpenOption.WRITE);
@@ -98,6 +117,7 @@ public final class AtomicFiles {
             }
         } finally {
             Files.deleteIfExists(tmp);
+            PENDING.remove(tmp);
         }
     }
 }
