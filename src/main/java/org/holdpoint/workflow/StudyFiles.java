@@ -416,6 +416,9 @@ public final class StudyFiles {
         o.put("file", g.file());
         o.put("sheet", g.sheet());
         int n = g.size();
+        // whether the values were read as exact decimals: a value such as 0.0005999999999999999 (more digits
+        // than a long holds) is read as its double, whose shortest decimal 0.0006 would read back as exact
+        o.put("exactDecimals", g.sample().hasExactDecimals());
         ArrayNode values = o.putArray("values");
         ArrayNode rows = o.putArray("rows");
         ArrayNode cols = o.putArray("columns");
@@ -454,7 +457,15 @@ public final class StudyFiles {
             rows[i] = o.path("rows").path(i).asInt(i + 1);
             cols[i] = o.path("columns").path(i).asInt(1);
         }
-        return new GroupData(Sample.ofDecimals(decimals), text(o, "file"), text(o, "sheet"), rows, cols,
+        Sample sample = Sample.ofDecimals(decimals);
+        if (o.has("exactDecimals") && !o.get("exactDecimals").asBoolean() && sample.hasExactDecimals()) {
+            double[] d = new double[n];
+            for (int i = 0; i < n; i++) {
+                d[i] = decimals[i].doubleValue();
+            }
+            sample = Sample.of(d);
+        }
+        return new GroupData(sample, text(o, "file"), text(o, "sheet"), rows, cols,
                 readStrings(o, "units", n), readStrings(o, "lots", n), readStrings(o, "subgroups", n),
                 readStrings(o, "sequence", n));
     }

@@ -204,9 +204,17 @@ public final class VerifyUseCase {
         }
         JsonNode reread = StudyFiles.tree(new String(StudyFiles.canonical(fresh), StandardCharsets.UTF_8));
         if (!reread.equals(stored)) {
-            notes.add("the results stored in the record differ from those this version computes from the same data "
-                    + "(a change of the software, not of the workbook); the shown values were compared with this "
-                    + "version's results");
+            String written = StudyFiles.tree(json).path("tool").path("version").asText("");
+            if (written.equals(Version.get())) {
+                notes.add("the results stored in the record differ from those this same version (" + written
+                        + ") computes from the same data: this is a fault of the program, not an edit of the "
+                        + "workbook; please report it. The shown values were compared with the re-computation");
+            } else {
+                notes.add("the record was written by version " + (written.isEmpty() ? "(unknown)" : written)
+                        + " and its stored results differ from those version " + Version.get() + " computes "
+                        + "from the same data (a change of the software, not of the workbook); the shown values "
+                        + "were compared with this version's results");
+            }
         }
     }
 }

@@ -81,6 +81,9 @@ class FreshWorkbooksVerifyTest {
                 + "before,10.01,5.0\nbefore,1.002e1,5.01\nbefore,+10.03,5.02E+00\nbefore,10.0000000000000001,5.03\n"
                 + "after,10.02,5.01\nafter,.1002E2,5.00\nafter,10.04,-0\nafter,NaN,Inf\nafter,-Infinity,n/a\n"
                 + "before,1e-320,5.02\nafter,10.03,5.01\n"));
+        // a value with more digits than its double keeps: its shortest decimal (0.0006) must not read back as exact
+        files.add(TestData.write(dir, "long-digits.csv", "phase,Gap\nbefore,0.0005999999999999999\nbefore,0.0007\n"
+                + "before,0.00065\nbefore,0.00071\nafter,0.00062\nafter,0.00068\nafter,0.0007\nafter,0.00066\n"));
         files.add(TestData.write(dir, "controls.csv", "phase,Length\nbefore,10.01\nbefore,\u0007bell\n"
                 + "before,10.02\nbefore,10.03\nafter,\u001b[31mred\nafter,10.02\nafter,10.04\nafter,10.03\n"
                 + "after," + "y".repeat(40_000) + "\n"));
