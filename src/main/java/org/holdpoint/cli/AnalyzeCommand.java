@@ -164,6 +164,15 @@ final class AnalyzeCommand implements Callable<Integer> {
         List<String> exclude = new ArrayList<>();
     }
 
+    @Option(names = "--analyst", paramLabel = "NAME", description = "Who ran the analysis, as the record keeps it "
+            + "(default: the user name of the account).")
+    String analyst;
+
+    private String analyst() {
+        String a = analyst != null && !analyst.isBlank() ? analyst : System.getProperty("user.name", "");
+        return a.isBlank() ? null : a.strip();
+    }
+
     static final class OutputOptions {
         @Option(names = "--json", paramLabel = "FILE", description = "Also write the machine-readable result.")
         Path json;
@@ -195,20 +204,22 @@ final class AnalyzeCommand implements Callable<Integer> {
         // one record for every output of this run: the signature is stamped once, so the study file, the
         // workbook's embedded record and the archived version are the same document with the same SHA-256
         Signature sig = signOff();
+        String runAt = java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString();
+        String signingKey = report.signPublicKey == null ? null
+                : org.holdpoint.workflow.RecordSigning.fingerprint(
+                        org.holdpoint.workflow.RecordSigning.readPublic(report.signPublicKey));
         ChangeStudy study = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(),
                 sig == null ? List.of() : List.of(new Signature(sig.stage(), sig.name(), sig.role(), sig.meaning(),
-                        java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString())));
+                        runAt)), new org.holdpoint.study.Provenance(analyst(), runAt, signingKey));
         if (output.saveStudy != null) {
             try {
-                // the record names the key that signs the workbook, so both carry the same document
-                String signingKey = report.signPublicKey == null ? null
-                        : org.holdpoint.workflow.RecordSigning.fingerprint(
-                                org.holdpoint.workflow.RecordSigning.readPublic(report.signPublicKey));
-                org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), output.saveStudy, signingKey);
+                // the record names who analysed it, when, and the key that signs the workbook, so the study file
+                // and the workbook carry the same document
+                org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), output.saveStudy);
                 spec.commandLine().getOut().printf(java.util.Locale.ROOT, "Saved the study file %s%n  record SHA-256 "
                         + "%s%n", output.saveStudy, org.holdpoint.workflow.StudyFiles.sha256(
                                 org.holdpoint.workflow.StudyFiles.canonical(org.holdpoint.workflow.StudyFiles.toJson(
-                                        study, outcome.result(), signingKey))));
+                                        study, outcome.result()))));
                 spec.commandLine().getOut().flush();
             } catch (IOException e) {
                 throw new UserInputException("cannot write the study file %s (%s); check the folder is writable",

@@ -59,8 +59,20 @@ public final class ArchiveUseCase {
         }
         Instant now = Instant.now();
         List<AuditEvent.Draft> history = new ArrayList<>();
-        history.add(new AuditEvent.Draft(AuditEvent.Kind.ANALYSED, actor, now, "analysed " + names.size()
-                + " characteristic(s) with holdpoint " + Version.get() + ": " + result.summary(), "archiving"));
+        // the analysis is attributed to who ran it and when, as the record says; older records lack it
+        var prov = study.provenance();
+        Instant analysedAt = now;
+        if (prov.analysedAt() != null) {
+            try {
+                analysedAt = Instant.parse(prov.analysedAt());
+            } catch (java.time.format.DateTimeParseException e) {
+                throw new ArchiveException(ArchiveException.Reason.REJECTED, studyFile + ": the analysis time \""
+                        + prov.analysedAt() + "\" is not an ISO-8601 instant such as 2026-12-03T14:05:00Z");
+            }
+        }
+        history.add(new AuditEvent.Draft(AuditEvent.Kind.ANALYSED, prov.analyst() != null ? prov.analyst() : actor,
+                analysedAt, "analysed " + names.size() + " characteristic(s) with holdpoint " + Version.get() + ": "
+                        + result.summary(), prov.analyst() != null ? "recorded in the study" : "archiving"));
         for (Exclusion e : study.settings().exclusions()) {
             history.add(new AuditEvent.Draft(AuditEvent.Kind.EXCLUSION_ADDED, actor, now, "excluded the value at "
                     + e.reference() + (e.characteristic() == null ? "" : " of " + e.characteristic()), e.reason()));

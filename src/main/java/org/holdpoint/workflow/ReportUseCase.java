@@ -73,10 +73,10 @@ public final class ReportUseCase {
             throw new SignoffException(null, "%s exists; give --overwrite to replace it", target);
         }
         String now = Instant.now(clock).truncatedTo(ChronoUnit.SECONDS).toString();
-        ChangeStudy recorded = withSignOff(study, options.signOff(), now);
-        String signingKey = options.publicKey() == null ? null
-                : RecordSigning.fingerprint(RecordSigning.readPublic(options.publicKey()));
-        byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(recorded, result, signingKey));
+        ChangeStudy signedOff = withSignOff(study, options.signOff(), now);
+        ChangeStudy recorded = options.publicKey() == null ? signedOff : signedOff.withProvenance(signedOff
+                .provenance().withSigningKey(RecordSigning.fingerprint(RecordSigning.readPublic(options.publicKey()))));
+        byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(recorded, result));
         String json = new String(canonical, StandardCharsets.UTF_8);
         String sha = StudyFiles.sha256(canonical);
         RecordSeal seal = options.privateKey() == null ? null
@@ -103,6 +103,6 @@ public final class ReportUseCase {
                 ? new Signature(entry.stage(), entry.name(), entry.role(), entry.meaning(), now) : entry;
         List<Signature> all = new ArrayList<>(study.signatures());
         all.add(stamped);
-        return new ChangeStudy(study.change(), study.data(), study.settings(), all);
+        return new ChangeStudy(study.change(), study.data(), study.settings(), all, study.provenance());
     }
 }

@@ -31,6 +31,7 @@ import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.Exclusion;
 import org.holdpoint.study.GroupData;
+import org.holdpoint.study.Provenance;
 import org.holdpoint.study.ImportReport;
 import org.holdpoint.study.InputInfo;
 import org.holdpoint.study.Layout;
@@ -70,20 +71,7 @@ public final class StudyFiles {
      * @return the tree
      */
     public static ObjectNode toJson(ChangeStudy study, StudyResult result) {
-        return toJson(study, result, null);
-    }
-
-    /**
-     * The study and its results as a JSON tree, naming the key that will sign it.
-     *
-     * @param study      the study
-     * @param result     its results
-     * @param signingKey the SHA-256 fingerprint of the public key whose Ed25519 signature will seal this
-     *                   record, or null when it is not signed; part of the signed content, so that a removed
-     *                   or replaced signature is found by {@code verify} (docs/signoff-workbook.md)
-     * @return the tree
-     */
-    public static ObjectNode toJson(ChangeStudy study, StudyResult result, String signingKey) {
+        String signingKey = study.provenance().signingKey();
         ObjectNode root = F.objectNode();
         root.put("schemaVersion", SCHEMA_VERSION);
         ObjectNode tool = root.putObject("tool");
@@ -91,6 +79,12 @@ public final class StudyFiles {
         tool.put("version", Version.get());
         if (signingKey != null) {
             root.put("signingKey", signingKey);
+        }
+        Provenance p = study.provenance();
+        if (p.analyst() != null || p.analysedAt() != null) {
+            ObjectNode a = root.putObject("analysis");
+            a.put("analyst", p.analyst());
+            a.put("at", p.analysedAt());
         }
         root.set("change", change(study.change()));
         root.set("settings", settings(study.settings()));
@@ -164,21 +158,7 @@ public final class StudyFiles {
      * @throws IOException when it cannot be written
      */
     public static void write(ChangeStudy study, StudyResult result, Path target) throws IOException {
-        write(study, result, target, null);
-    }
-
-    /**
-     * Writes a study file that names the key its workbook record is signed with.
-     *
-     * @param study      the study
-     * @param result     its results
-     * @param target     the file
-     * @param signingKey the signing key's fingerprint, or null
-     * @throws IOException when it cannot be written
-     */
-    public static void write(ChangeStudy study, StudyResult result, Path target, String signingKey)
-            throws IOException {
-        ObjectNode tree = toJson(study, result, signingKey);
+        ObjectNode tree = toJson(study, result);
         AtomicFiles.writeText(target, PRETTY.writeValueAsString(tree) + System.lineSeparator());
     }
 
@@ -252,7 +232,9 @@ public final class StudyFiles {
                 sigs.add(new Signature(Signature.Stage.valueOf(s.get("stage").asText()), text(s, "name"),
                         text(s, "role"), text(s, "meaning"), text(s, "timestamp")));
             }
-            return new ChangeStudy(change, new Dataset(chars, inputs, readImport(root.path("import"))), settings, sigs);
+            return new ChangeStudy(change, new Dataset(chars, inputs, readImport(root.path("import"))), settings, sigs,
+                    new Provenance(text(root.path("analysis"), "analyst"), text(root.path("analysis"), "at"),
+                            text(root, "signingKey")));
         } catch (RuntimeException e) {
             if (e instanceof StudyFileException) {
                 throw e;

@@ -45,7 +45,7 @@ class ArchiveCommandTest {
         AnalyzeCommandTest.Run saved = AnalyzeCommandTest.run("analyze", demo.resolve("boring-bar-insert.csv")
                 .toString(), "--save-study", study.toString(), "--report", workbook.toString(), "--change-id",
                 "CR-78", "--title", "Second-source insert", "--part", "PH-2210", "--signed-by", "T. Oyelaran",
-                "--role", "process engineer", "--meaning", "prepared the study");
+                "--role", "process engineer", "--meaning", "prepared the study", "--analyst", "T. Oyelaran");
         assertThat(saved.code()).as(saved.err()).isZero();
         String fromStudy = sha(saved.out(), "Saved the study file " + study + System.lineSeparator()
                 + "  record SHA-256");
@@ -60,6 +60,12 @@ class ArchiveCommandTest {
         assertThat(fromWorkbook).isEqualTo(fromStudy);
         assertThat(sha(verified.out(), "SHA-256")).isEqualTo(fromStudy);
         assertThat(archived).isEqualTo(fromStudy);
+        // the record says who analysed it and when: one time for the run, the same as the signature's
+        com.fasterxml.jackson.databind.JsonNode tree = new com.fasterxml.jackson.databind.ObjectMapper().readTree(
+                study.toFile());
+        assertThat(tree.path("analysis").path("analyst").asText()).isEqualTo("T. Oyelaran");
+        assertThat(tree.path("analysis").path("at").asText()).isEqualTo(tree.path("signatures").get(0)
+                .path("timestamp").asText()).matches("\\d{4}-\\d{2}-\\d{2}T\\d{2}:\\d{2}:\\d{2}Z");
     }
 
     @Test
