@@ -58,6 +58,9 @@ final class ConnectionPool implements AutoCloseable {
         }
     }
 
+    /** H2's error code for a database file locked by another process. */
+    private static final int H2_ALREADY_OPEN = 90020;
+
     /**
      * Borrows a connection.
      *
@@ -79,6 +82,13 @@ final class ConnectionPool implements AutoCloseable {
             open.incrementAndGet();
             return new Lease(c);
         } catch (SQLException e) {
+            if (e.getErrorCode() == H2_ALREADY_OPEN || "90020".equals(e.getSQLState())) {
+                // H2's own text advises its server mode: speak of the archive instead
+                throw new ArchiveException(ArchiveException.Reason.DATABASE, "the archive at " + redact(url)
+                        + " is open in another Holdpoint program or window; the embedded archive serves one "
+                        + "program at a time. Close the other one and try again, or keep a shared archive on "
+                        + "PostgreSQL (docs/archive.md)", e);
+            }
             throw new ArchiveException(ArchiveException.Reason.DATABASE, "cannot open the archive at "
                     + redact(url) + ": " + e.getMessage() + " (SQLSTATE " + e.getSQLState() + ")", e);
         }
