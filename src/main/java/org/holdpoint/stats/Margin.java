@@ -63,10 +63,16 @@ public record Margin(Double lower, Double upper) {
             throw new StatsException("a margin in percent of tolerance needs LSL < USL, got LSL = %s, USL = %s", lsl,
                     usl);
         }
-        double width = usl - lsl;
-        Double lo = Double.isNaN(percentLower) ? null : -checkPercent(percentLower) * width / 100;
-        Double hi = Double.isNaN(percentUpper) ? null : checkPercent(percentUpper) * width / 100;
+        // in decimal arithmetic on the numbers as entered (their shortest decimals), so that 20 % of the
+        // tolerance 9.90 to 10.10 is 0.04 and not 0.04000000000000057
+        java.math.BigDecimal width = java.math.BigDecimal.valueOf(usl).subtract(java.math.BigDecimal.valueOf(lsl));
+        Double lo = Double.isNaN(percentLower) ? null : -percentOf(checkPercent(percentLower), width);
+        Double hi = Double.isNaN(percentUpper) ? null : percentOf(checkPercent(percentUpper), width);
         return new Margin(lo, hi);
+    }
+
+    private static double percentOf(double percent, java.math.BigDecimal width) {
+        return java.math.BigDecimal.valueOf(percent).multiply(width).movePointLeft(2).doubleValue();
     }
 
     private static double checkPercent(double p) {
