@@ -208,18 +208,20 @@ final class AnalyzeCommand implements Callable<Integer> {
         String signingKey = report.signPublicKey == null ? null
                 : org.holdpoint.workflow.RecordSigning.fingerprint(
                         org.holdpoint.workflow.RecordSigning.readPublic(report.signPublicKey));
-        ChangeStudy study = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(),
-                sig == null ? List.of() : List.of(new Signature(sig.stage(), sig.name(), sig.role(), sig.meaning(),
-                        runAt)), new org.holdpoint.study.Provenance(analyst(), runAt, signingKey));
+        ChangeStudy unsigned = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(), List.of(),
+                new org.holdpoint.study.Provenance(analyst(), runAt, signingKey));
+        // the record is the study without its sign-off entries; an entry names the record it signs
+        String recordSha = org.holdpoint.workflow.StudyFiles.recordSha256(org.holdpoint.workflow.StudyFiles.toJson(
+                unsigned, outcome.result()));
+        ChangeStudy study = new ChangeStudy(unsigned.change(), unsigned.data(), unsigned.settings(),
+                sig == null ? List.of() : List.of(sig.stamped(runAt, recordSha)), unsigned.provenance());
         if (output.saveStudy != null) {
             try {
                 // the record names who analysed it, when, and the key that signs the workbook, so the study file
                 // and the workbook carry the same document
                 org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), output.saveStudy);
                 spec.commandLine().getOut().printf(java.util.Locale.ROOT, "Saved the study file %s%n  record SHA-256 "
-                        + "%s%n", output.saveStudy, org.holdpoint.workflow.StudyFiles.sha256(
-                                org.holdpoint.workflow.StudyFiles.canonical(org.holdpoint.workflow.StudyFiles.toJson(
-                                        study, outcome.result()))));
+                        + "%s%n", output.saveStudy, recordSha);
                 spec.commandLine().getOut().flush();
             } catch (IOException e) {
                 throw new UserInputException("cannot write the study file %s (%s); check the folder is writable",
@@ -311,9 +313,16 @@ final class AnalyzeCommand implements Callable<Integer> {
     private void checkReportTarget() {
         ReportOptionsGroup r = report;
         if (r.file == null) {
-            if (r.template != null || r.signedBy != null || r.signKey != null) {
+            if (r.template != null || r.signKey != null) {
                 throw new CommandLine.ParameterException(spec.commandLine(),
-                        "--template, --signed-by and --sign-key need --report OUT.xlsx");
+                        "--template and --sign-key need --report OUT.xlsx");
+            }
+            if (r.signedBy != null && output.saveStudy == null) {
+                throw new CommandLine.ParameterException(spec.commandLine(),
+                        "--signed-by needs --report OUT.xlsx or --save-study OUT.json (the record it signs)");
+            }
+            if (r.signedBy != null) {
+                signOff();
             }
             return;
         }

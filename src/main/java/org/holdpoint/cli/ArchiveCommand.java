@@ -260,6 +260,19 @@ final class ArchiveCommand implements Runnable {
         String signer;
         @Option(names = "--role", required = true, paramLabel = "ROLE", description = "Role, e.g. quality manager.")
         String role;
+        @Option(names = "--stage", paramLabel = "STAGE", defaultValue = "approved", description = "prepared, "
+                + "reviewed or approved (default: ${DEFAULT-VALUE}); shown in the exported workbook's sign-off block.")
+        String stage = "approved";
+
+        private org.holdpoint.study.Signature.Stage parseStage() {
+            for (org.holdpoint.study.Signature.Stage st : org.holdpoint.study.Signature.Stage.values()) {
+                if (st.words().equalsIgnoreCase(stage.strip())) {
+                    return st;
+                }
+            }
+            throw new UserInputException("--stage must be prepared, reviewed or approved, got '%s'", stage);
+        }
+
         @Option(names = "--meaning", required = true, paramLabel = "TEXT", description = "What the signature means, "
                 + "e.g. 'approved for production'.")
         String meaning;
@@ -267,7 +280,8 @@ final class ArchiveCommand implements Runnable {
         @Override
         public Integer call() {
             try (ChangeRecordArchive a = open()) {
-                ArchivedSignature s = new ArchiveUseCase(a).sign(id, signer, role, meaning);
+                ArchivedSignature s = new ArchiveUseCase(a).sign(id, signer, role, ArchiveUseCase.stageMeaning(
+                        parseStage(), meaning));
                 out().printf(Locale.ROOT, "Signed record %d: %s (%s), %s%n", id, s.signer(), s.role(), s.signedAt());
                 out().flush();
                 return ExitCodes.OK;

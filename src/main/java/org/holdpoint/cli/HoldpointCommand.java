@@ -16,7 +16,7 @@ import picocli.CommandLine.Command;
             "",
             "Difference = after - before. A statistical result supports, never replaces, the site's "
                     + "change-control procedures and engineering judgement."},
-        subcommands = {AnalyzeCommand.class, PlanCommand.class, DemoCommand.class, VerifyCommand.class,
+        subcommands = {AnalyzeCommand.class, PlanCommand.class, DemoCommand.class, VerifyCommand.class, SignCommand.class,
             ArchiveCommand.class, KeygenCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit codes: 0 analysed, 1 altered (verify), 2 bad input, 3 internal error.",
             "Run 'holdpoint demo' for a finished example on bundled sample data."})

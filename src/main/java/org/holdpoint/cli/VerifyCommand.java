@@ -47,6 +47,12 @@ final class VerifyCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "  record      SHA-256 %s (%s)%n", r.sha256(), r.hashMatches()
                 ? "matches the stored hash" : "DOES NOT match the stored hash");
         out.printf(Locale.ROOT, "  signature   %s%n", seal(r));
+        if (r.signOff().isEmpty()) {
+            out.println("  sign-off    none yet");
+        }
+        for (int i = 0; i < r.signOff().size(); i++) {
+            out.printf(Locale.ROOT, "  %s %s%n", i == 0 ? "sign-off   " : "           ", r.signOff().get(i));
+        }
         if (r.status() == VerifyResult.Status.INTACT) {
             out.println("INTACT: every shown value matches the re-computation from the embedded raw data.");
         } else {

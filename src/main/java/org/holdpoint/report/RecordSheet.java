@@ -18,7 +18,7 @@ final class RecordSheet {
     static final String FORMAT = "holdpoint-signoff-record 1";
     static final String[] LABELS = {"format", "sha256", "characters", "chunks", "generated at", "software",
         "charts per characteristic", "signature algorithm", "public key", "signature", "key fingerprint",
-        "template"};
+        "template", "signatures"};
     /** Offset of the first chunk row below the anchor. */
     static final int FIRST_CHUNK = 14;
 
@@ -40,7 +40,8 @@ final class RecordSheet {
         return new String[] {FORMAT, in.sha256(), Integer.toString(in.studyJson().length()),
             Integer.toString(chunks(in.studyJson()).size()), in.generatedAt(), in.softwareVersion(),
             counts.toString(), seal == null ? "" : seal.algorithm(), seal == null ? "" : seal.publicKey(),
-            seal == null ? "" : seal.signature(), seal == null ? "" : seal.keyFingerprint(), templateFingerprint};
+            seal == null ? "" : seal.signature(), seal == null ? "" : seal.keyFingerprint(), templateFingerprint,
+            in.signaturesJson()};
     }
 
     /**

@@ -17,10 +17,13 @@ import org.holdpoint.study.StudyResult;
  * @param charts          chart PNGs per characteristic name (a characteristic may have none)
  * @param softwareVersion the version of the software that computed the results
  * @param generatedAt     ISO-8601 date and time the workbook is written
+ * @param signaturesJson the sign-off entries as JSON (kept apart from the hashed record), or "" for a
+ *                       record that holds them itself (workbooks written before they were kept apart)
  * @param seal            an optional signature of the record, or null
  */
 public record ReportInput(ChangeStudy study, StudyResult result, String studyJson, String sha256,
-        Map<String, List<NamedImage>> charts, String softwareVersion, String generatedAt, RecordSeal seal) {
+        Map<String, List<NamedImage>> charts, String softwareVersion, String generatedAt, RecordSeal seal,
+        String signaturesJson) {
 
     /** Validates and copies. */
     public ReportInput {
@@ -40,6 +43,11 @@ public record ReportInput(ChangeStudy study, StudyResult result, String studyJso
         charts = java.util.Collections.unmodifiableMap(copy);
         softwareVersion = softwareVersion == null ? "unknown" : softwareVersion;
         generatedAt = generatedAt == null ? "" : generatedAt;
+        signaturesJson = signaturesJson == null ? "" : signaturesJson;
+        if (signaturesJson.length() > SheetContent.MAX_TEXT) {
+            throw new ReportException("the sign-off list is longer than a cell holds (%d characters); a record "
+                    + "carries at most a few dozen signatures", signaturesJson.length());
+        }
     }
 
     /**

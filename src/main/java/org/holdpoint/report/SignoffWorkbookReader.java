@@ -188,6 +188,11 @@ public final class SignoffWorkbookReader {
         }
     }
 
+    /** @return the sign-off entries as JSON, kept apart from the hashed record ("" in older workbooks) */
+    public String signaturesJson() {
+        return record.length > 12 ? record[12] : "";
+    }
+
     /** @return the content fingerprint of the template the workbook was written with ("" when not stored) */
     public String templateFingerprint() {
         return record.length > 11 ? record[11] : "";

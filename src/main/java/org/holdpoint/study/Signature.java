@@ -9,8 +9,10 @@ package org.holdpoint.study;
  * @param role      role or title
  * @param meaning   what the signature means, e.g. "approved for production"
  * @param timestamp ISO-8601 date and time
+ * @param record    the SHA-256 of the study record this signature signs (null for entries written before
+ *                  signatures named their record); links the signature to exactly one record
  */
-public record Signature(Stage stage, String name, String role, String meaning, String timestamp) {
+public record Signature(Stage stage, String name, String role, String meaning, String timestamp, String record) {
 
     /** The stage of the sign-off. */
     public enum Stage {
@@ -31,6 +33,29 @@ public record Signature(Stage stage, String name, String role, String meaning, S
         public String words() {
             return words;
         }
+    }
+
+    /**
+     * A signature not yet linked to a record (the record hash is added when it is stamped).
+     *
+     * @param stage     the stage
+     * @param name      printed name
+     * @param role      role
+     * @param meaning   meaning
+     * @param timestamp time
+     */
+    public Signature(Stage stage, String name, String role, String meaning, String timestamp) {
+        this(stage, name, role, meaning, timestamp, null);
+    }
+
+    /**
+     * @param time       when it was signed
+     * @param recordHash the SHA-256 of the record it signs
+     * @return a copy stamped with both
+     */
+    public Signature stamped(String time, String recordHash) {
+        return new Signature(stage, name, role, meaning, timestamp == null || timestamp.isBlank() ? time : timestamp,
+                recordHash);
     }
 
     /** Validates. */

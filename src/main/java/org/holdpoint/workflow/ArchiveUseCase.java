@@ -46,7 +46,9 @@ public final class ArchiveUseCase {
     public StudyVersion add(Path studyFile, String actor, String reason) throws ArchiveException {
         ChangeStudy study = StudyFiles.read(studyFile);
         StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
-        String json = new String(StudyFiles.canonical(StudyFiles.toJson(study, result)), StandardCharsets.UTF_8);
+        // the archive keeps the record (the study without its sign-off entries: the hash every output shows);
+        // the entries become the archive's signatures of that record, the one list archive sign adds to
+        String json = new String(StudyFiles.record(StudyFiles.toJson(study, result)), StandardCharsets.UTF_8);
         var change = study.change();
         if (change.partNumber().isBlank() || change.title().isBlank()) {
             throw new ArchiveException(ArchiveException.Reason.REJECTED, studyFile + ": the study has no "
@@ -87,9 +89,57 @@ public final class ArchiveUseCase {
                         + " is already archived (version " + current.get().version() + "); a correction needs "
                         + "--reason saying why it supersedes that version");
             }
-            return archive.supersede(current.get().id(), version, actor, reason);
+            return withSignatures(archive.supersede(current.get().id(), version, actor, reason), study);
         }
-        return archive.add(version, actor, reason == null || reason.isBlank() ? "archived" : reason);
+        return withSignatures(archive.add(version, actor, reason == null || reason.isBlank() ? "archived" : reason),
+                study);
+    }
+
+    /** Adds the study's sign-off entries to the stored version as its signatures, stage first in the meaning. */
+    private StudyVersion withSignatures(StudyVersion v, ChangeStudy study) throws ArchiveException {
+        for (org.holdpoint.study.Signature g : study.signatures()) {
+            Instant when;
+            try {
+                when = g.timestamp() == null ? Instant.now() : Instant.parse(g.timestamp());
+            } catch (java.time.format.DateTimeParseException e) {
+                throw new ArchiveException(ArchiveException.Reason.REJECTED, "the sign-off entry of " + g.name()
+                        + " has the time \"" + g.timestamp() + "\", not an ISO-8601 instant such as "
+                        + "2026-12-03T14:05:00Z");
+            }
+            archive.sign(v.id(), g.name(), g.role() == null || g.role().isBlank() ? "(no role given)" : g.role(),
+                    stageMeaning(g.stage(), g.meaning()), when);
+        }
+        return study.signatures().isEmpty() ? v : archive.show(v.id()).map(ArchivedStudy::version).orElse(v);
+    }
+
+    /**
+     * The archive keeps a signature's stage as the start of its meaning ("reviewed: method and data checked").
+     *
+     * @param stage   the stage
+     * @param meaning the meaning, or null
+     * @return the archived meaning
+     */
+    public static String stageMeaning(org.holdpoint.study.Signature.Stage stage, String meaning) {
+        return stage.words() + ": " + (meaning == null || meaning.isBlank() ? stage.words() : meaning.strip());
+    }
+
+    /**
+     * The sign-off entry of an archived signature: its stage read from the start of its meaning (an entry
+     * without one, from before stages were kept, counts as approved: the archive's sign was for approval).
+     *
+     * @param s the archived signature
+     * @return the entry
+     */
+    static org.holdpoint.study.Signature entry(org.holdpoint.study.ArchivedSignature s, String recordSha) {
+        for (org.holdpoint.study.Signature.Stage st : org.holdpoint.study.Signature.Stage.values()) {
+            String prefix = st.words() + ": ";
+            if (s.meaning().startsWith(prefix)) {
+                return new org.holdpoint.study.Signature(st, s.signer(), s.role(), s.meaning().substring(prefix
+                        .length()), s.signedAt().toString(), recordSha);
+            }
+        }
+        return new org.holdpoint.study.Signature(org.holdpoint.study.Signature.Stage.APPROVED, s.signer(), s.role(),
+                s.meaning(), s.signedAt().toString(), recordSha);
     }
 
     /**
@@ -127,7 +177,7 @@ public final class ArchiveUseCase {
 
     /**
      * Writes the sign-off workbook of an archived record, re-computed from its stored raw data (the
-     * sign-off block holds the signatures of the study file; the archive's signatures stay in the archive).
+     * sign-off block shows the archive's signatures of the record).
      *
      * @param id        the record's id
      * @param target    the workbook
@@ -139,7 +189,16 @@ public final class ArchiveUseCase {
     public ReportUseCase.Written export(long id, Path target, boolean overwrite) throws ArchiveException,
             java.io.IOException {
         Shown shown = show(id);
-        ChangeStudy study = shown.changeStudy();
+        ChangeStudy stored = shown.changeStudy();
+        // the workbook shows the archive's signatures of this record (and those a record from before the
+        // archive kept them apart carried inside)
+        List<org.holdpoint.study.Signature> sigs = new ArrayList<>(stored.signatures());
+        String recordSha = StudyFiles.sha256(shown.study().json().getBytes(StandardCharsets.UTF_8));
+        for (org.holdpoint.study.ArchivedSignature a : shown.study().version().signatures()) {
+            sigs.add(entry(a, recordSha));
+        }
+        ChangeStudy study = new ChangeStudy(stored.change(), stored.data(), stored.settings(), sigs,
+                stored.provenance());
         StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
         ReportOptions options = ReportOptions.withDefaults().withCharts(new StudyChartSource())
                 .withExisting(overwrite ? ReportOptions.ExistingFile.REPLACE : ReportOptions.ExistingFile.REFUSE);

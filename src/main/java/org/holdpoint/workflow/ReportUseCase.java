@@ -73,20 +73,23 @@ public final class ReportUseCase {
             throw new SignoffException(null, "%s exists; give --overwrite to replace it", target);
         }
         String now = Instant.now(clock).truncatedTo(ChronoUnit.SECONDS).toString();
-        ChangeStudy signedOff = withSignOff(study, options.signOff(), now);
-        ChangeStudy recorded = options.publicKey() == null ? signedOff : signedOff.withProvenance(signedOff
-                .provenance().withSigningKey(RecordSigning.fingerprint(RecordSigning.readPublic(options.publicKey()))));
-        byte[] canonical = StudyFiles.canonical(StudyFiles.toJson(recorded, result));
-        String json = new String(canonical, StandardCharsets.UTF_8);
-        String sha = StudyFiles.sha256(canonical);
-        RecordSeal seal = options.privateKey() == null ? null
-                : RecordSigning.sign(canonical, options.privateKey(), options.publicKey());
+        ChangeStudy keyed = options.publicKey() == null ? study : study.withProvenance(study.provenance()
+                .withSigningKey(RecordSigning.fingerprint(RecordSigning.readPublic(options.publicKey()))));
+        // the record is the study without its signatures: its hash is what every signature signs
+        byte[] record = options.keptRecord() != null ? options.keptRecord().getBytes(StandardCharsets.UTF_8)
+                : StudyFiles.record(StudyFiles.toJson(keyed, result));
+        String sha = StudyFiles.sha256(record);
+        ChangeStudy recorded = withSignOff(keyed, options.signOff(), now, sha);
+        String json = new String(record, StandardCharsets.UTF_8);
+        String signatures = StudyFiles.signaturesJson(recorded.signatures());
+        RecordSeal seal = options.keptSeal() != null ? options.keptSeal() : options.privateKey() == null ? null
+                : RecordSigning.sign(record, options.privateKey(), options.publicKey());
         SignoffWorkbook writer = new SignoffWorkbook(template);
         try {
             // the charts are rendered inside the atomic write: a renderer that fails leaves no file behind
             AtomicFiles.write(target, options.existing() == ReportOptions.ExistingFile.REPLACE,
                     out -> writer.write(new ReportInput(recorded, result, json, sha, options.charts().charts(recorded,
-                            result), Version.get(), now, seal), out));
+                            result), Version.get(), now, seal, signatures), out));
         } catch (ReportException e) {
             throw new SignoffException(e, "%s", e.getMessage());
         } catch (FileAlreadyExistsException e) {
@@ -95,14 +98,15 @@ public final class ReportUseCase {
         return new Written(target, sha, seal == null ? null : seal.keyFingerprint(), recorded);
     }
 
-    private static ChangeStudy withSignOff(ChangeStudy study, Signature entry, String now) {
-        if (entry == null) {
-            return study;
+    private static ChangeStudy withSignOff(ChangeStudy study, Signature entry, String now, String recordSha) {
+        List<Signature> all = new ArrayList<>();
+        for (Signature s : study.signatures()) {
+            // an entry made with this record (analyze --signed-by) is linked to it now
+            all.add(s.record() == null ? s.stamped(now, recordSha) : s);
         }
-        Signature stamped = entry.timestamp() == null || entry.timestamp().isBlank()
-                ? new Signature(entry.stage(), entry.name(), entry.role(), entry.meaning(), now) : entry;
-        List<Signature> all = new ArrayList<>(study.signatures());
-        all.add(stamped);
+        if (entry != null) {
+            all.add(entry.stamped(now, recordSha));
+        }
         return new ChangeStudy(study.change(), study.data(), study.settings(), all, study.provenance());
     }
 }

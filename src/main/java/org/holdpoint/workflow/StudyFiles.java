@@ -102,15 +102,7 @@ public final class StudyFiles {
         for (CharacteristicData c : study.data().characteristics()) {
             chars.add(characteristic(c));
         }
-        ArrayNode sigs = root.putArray("signatures");
-        for (Signature s : study.signatures()) {
-            ObjectNode o = sigs.addObject();
-            o.put("stage", s.stage().name());
-            o.put("name", s.name());
-            o.put("role", s.role());
-            o.put("meaning", s.meaning());
-            o.put("timestamp", s.timestamp());
-        }
+        root.set("signatures", signatures(study.signatures()));
         if (result != null) {
             ObjectNode results = root.putObject("results");
             ArrayNode list = results.putArray("characteristics");
@@ -133,6 +125,86 @@ public final class StudyFiles {
         } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
             throw new IllegalStateException("JSON serialisation failed", e);
         }
+    }
+
+    private static ArrayNode signatures(List<Signature> list) {
+        ArrayNode sigs = F.arrayNode();
+        for (Signature s : list) {
+            ObjectNode o = sigs.addObject();
+            o.put("stage", s.stage().name());
+            o.put("name", s.name());
+            o.put("role", s.role());
+            o.put("meaning", s.meaning());
+            o.put("timestamp", s.timestamp());
+            if (s.record() != null) {
+                o.put("record", s.record());
+            }
+        }
+        return sigs;
+    }
+
+    /**
+     * The sign-off entries as canonical JSON, as the workbook keeps them beside its record.
+     *
+     * @param list the signatures
+     * @return the JSON array text
+     */
+    public static String signaturesJson(List<Signature> list) {
+        return new String(canonical(signatures(list)), StandardCharsets.UTF_8);
+    }
+
+    /**
+     * Reads sign-off entries written by {@link #signaturesJson}.
+     *
+     * @param text the JSON array text
+     * @param name where it comes from, for messages
+     * @return the signatures
+     * @throws StudyFileException when the text is not such a list
+     */
+    public static List<Signature> parseSignatures(String text, String name) {
+        JsonNode a = tree(text);
+        if (!a.isArray()) {
+            throw new StudyFileException("%s: the sign-off list is not a JSON array", name);
+        }
+        return readSignatures(a, name);
+    }
+
+    private static List<Signature> readSignatures(JsonNode a, String name) {
+        List<Signature> sigs = new ArrayList<>();
+        for (JsonNode s : a) {
+            try {
+                sigs.add(new Signature(Signature.Stage.valueOf(s.path("stage").asText()), text(s, "name"),
+                        text(s, "role"), text(s, "meaning"), text(s, "timestamp"), text(s, "record")));
+            } catch (IllegalArgumentException e) {
+                throw new StudyFileException("%s: a sign-off entry is not valid (%s)", name, e.getMessage());
+            }
+        }
+        return sigs;
+    }
+
+    /**
+     * The record: the canonical text of a study tree without its signatures. Its SHA-256 identifies the
+     * study everywhere (study file, workbook, archive) and is what a signature signs, so that adding a
+     * sign-off stage later leaves the record, its hash and its Ed25519 seal unchanged (docs/study-file.md).
+     *
+     * @param tree the study tree (with or without signatures)
+     * @return the canonical bytes of the record
+     */
+    public static byte[] record(JsonNode tree) {
+        if (tree instanceof ObjectNode o && o.has("signatures")) {
+            ObjectNode copy = o.deepCopy();
+            copy.remove("signatures");
+            return canonical(copy);
+        }
+        return canonical(tree);
+    }
+
+    /**
+     * @param tree a study tree
+     * @return the SHA-256 of its record ({@link #record})
+     */
+    public static String recordSha256(JsonNode tree) {
+        return sha256(record(tree));
     }
 
     /**
@@ -227,11 +299,7 @@ public final class StudyFiles {
             for (JsonNode c : root.path("characteristics")) {
                 chars.add(readCharacteristic(c));
             }
-            List<Signature> sigs = new ArrayList<>();
-            for (JsonNode s : root.path("signatures")) {
-                sigs.add(new Signature(Signature.Stage.valueOf(s.get("stage").asText()), text(s, "name"),
-                        text(s, "role"), text(s, "meaning"), text(s, "timestamp")));
-            }
+            List<Signature> sigs = readSignatures(root.path("signatures"), name);
             return new ChangeStudy(change, new Dataset(chars, inputs, readImport(root.path("import"))), settings, sigs,
                     new Provenance(text(root.path("analysis"), "analyst"), text(root.path("analysis"), "at"),
                             text(root, "signingKey")));

@@ -16,13 +16,33 @@ import java.util.List;
  * @param notes          other remarks (e.g. the current version computes slightly different results)
  */
 public record VerifyResult(Status status, String changeId, String sha256, boolean hashMatches, SealState seal,
-        String keyFingerprint, List<Difference> differences, List<String> handEntries, List<String> notes) {
+        String keyFingerprint, List<Difference> differences, List<String> handEntries, List<String> notes,
+        List<String> signOff) {
 
     /** Copies the lists. */
     public VerifyResult {
         differences = List.copyOf(differences);
         handEntries = List.copyOf(handEntries);
         notes = List.copyOf(notes);
+        signOff = signOff == null ? List.of() : List.copyOf(signOff);
+    }
+
+    /**
+     * A result without sign-off entries.
+     *
+     * @param status         intact or edited
+     * @param changeId       the change id
+     * @param sha256         the record hash
+     * @param hashMatches    whether it matches the stored one
+     * @param seal           the seal state
+     * @param keyFingerprint the sealing key
+     * @param differences    the differences
+     * @param handEntries    hand entries
+     * @param notes          notes
+     */
+    public VerifyResult(Status status, String changeId, String sha256, boolean hashMatches, SealState seal,
+            String keyFingerprint, List<Difference> differences, List<String> handEntries, List<String> notes) {
+        this(status, changeId, sha256, hashMatches, seal, keyFingerprint, differences, handEntries, notes, List.of());
     }
 
     /**

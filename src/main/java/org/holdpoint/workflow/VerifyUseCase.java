@@ -91,6 +91,19 @@ public final class VerifyUseCase {
         StudyResult result;
         try {
             study = StudyFiles.parse(reader.studyJson(), workbook + " (embedded record)");
+            if (!reader.signaturesJson().isBlank()) {
+                // the sign-off entries are kept beside the record; each names the record it signs
+                List<org.holdpoint.study.Signature> sigs = StudyFiles.parseSignatures(reader.signaturesJson(),
+                        workbook + " (sign-off entries)");
+                for (org.holdpoint.study.Signature g : sigs) {
+                    if (g.record() == null || !g.record().equals(sha)) {
+                        diffs.add(new WorkbookDifference("(record)", "-", "sign-off entry " + g.stage().words() + " by "
+                                + g.name(), "signs record " + (g.record() == null ? "(none named)" : g.record()),
+                                "signs this record " + sha));
+                    }
+                }
+                study = new ChangeStudy(study.change(), study.data(), study.settings(), sigs, study.provenance());
+            }
             progress.checkCancelled();
             progress.step("re-computing", 0.3);
             result = new StudyAnalyzer().analyze(study.data(), study.settings(), progress);
@@ -103,7 +116,7 @@ public final class VerifyUseCase {
         compareStoredResults(reader.studyJson(), result, notes);
         progress.step("comparing the shown values", 0.6);
         ReportInput expected = new ReportInput(study, result, reader.studyJson(), sha, null, version(reader), reader
-                .generatedAt(), seal);
+                .generatedAt(), seal, reader.signaturesJson());
         Template filled = templateOf(reader, template, diffs, notes);
         SignoffWorkbookReader.Comparison cmp;
         try {
@@ -113,9 +126,15 @@ public final class VerifyUseCase {
         }
         diffs.addAll(cmp.differences());
         progress.step("done", 1);
+        List<String> signed = new ArrayList<>();
+        for (org.holdpoint.study.Signature g : study.signatures()) {
+            signed.add(String.format(java.util.Locale.ROOT, "%-9s %s%s, %s%s", g.stage().words(), g.name(),
+                    g.role() == null ? "" : " (" + g.role() + ")", g.timestamp() == null ? "no time" : g.timestamp(),
+                    g.meaning() == null ? "" : ": \"" + g.meaning() + "\""));
+        }
         return new VerifyResult(diffs.isEmpty() ? VerifyResult.Status.INTACT : VerifyResult.Status.EDITED,
                 study.change().id(), sha, hashOk, sealState, fingerprint(seal), convert(diffs), cmp.handEntries(),
-                notes);
+                notes, signed);
     }
 
     /**

@@ -84,6 +84,8 @@ class VerifyCommandTest {
     @Test
     void signOptionsNeedAReport() {
         assertThat(run("analyze", data.toString(), "--signed-by", "A. Lindqvist")).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(err.toString()).contains("--signed-by needs --report OUT.xlsx or --save-study OUT.json");
+        assertThat(run("analyze", data.toString(), "--sign-key", "k.key")).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(err.toString()).contains("need --report");
     }
 
