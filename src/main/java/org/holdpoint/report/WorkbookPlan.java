@@ -24,7 +24,9 @@ final class WorkbookPlan {
         "Mean after", "Difference (after \u2212 before)", "%s CI of the difference", "Margin (L, U)",
         "%s CI (equivalence)", "Equivalence conclusion", "Variance ratio (after / before)", "F-test p",
         "Brown\u2013Forsythe p", "Sd growth", "Capability: after-group Ppk lower bound vs required", "Verdict"};
-    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 8, 8, 10, 27, 20, 15};
+    static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 9, 8, 10, 27, 20, 15};
+    /** The widest a Summary column grows to fit its content (longer text wraps or is cut). */
+    static final int MAX_SUMMARY_WIDTH = 44;
 
     final ReportInput input;
     final Map<TemplateName, Anchor> anchors;
@@ -124,6 +126,29 @@ final class WorkbookPlan {
         for (CharacteristicResult c : input.result().characteristics()) {
             summaryRow(s, row++, c0, k++, c);
         }
+        // columns as wide as their content (a long name, a wide interval), so that nothing is cut or shown
+        // as ### when printed
+        int[] need = SUMMARY_WIDTHS.clone();
+        for (ShownCell cell : s.cells) {
+            int i = cell.column() - c0;
+            if (cell.row() > r0 && i >= 0 && i < need.length && cell.value() != null) {
+                int len = cell.value() instanceof String t ? t.length() : String.format(Locale.ROOT, "%." + cell
+                        .decimals() + "f", (Double) cell.value()).length();
+                need[i] = Math.max(need[i], Math.min(MAX_SUMMARY_WIDTH, len + 2));
+            }
+        }
+        for (int i = 0; i < need.length; i++) {
+            s.width(c0 + i, need[i]);
+        }
+        // a name longer than its column wraps: its row gets the height of its lines (9-point text)
+        int r = r0 + 1;
+        for (CharacteristicResult c : input.result().characteristics()) {
+            int lines = (int) Math.ceil(c.name().length() / (double) Math.max(1, need[1] - 2));
+            if (lines > 1) {
+                s.height(r, 11.5f * lines + 2f);
+            }
+            r++;
+        }
         String legend = "Marks: " + Texts.status(Verdict.Status.PASSED) + " \u00b7 " + Texts.status(
                 Verdict.Status.FAILED) + " \u00b7 " + Texts.status(Verdict.Status.INCONCLUSIVE) + " \u00b7 "
                 + Texts.status(Verdict.Status.NOT_ASSESSED) + ". Difference = after \u2212 before. Difference "
@@ -140,7 +165,7 @@ final class WorkbookPlan {
         int d = statDecimals(data(c.name()));
         String n = c.name();
         s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
-        s.text(row, c0 + 1, n, Style.CELL, n + ": name");
+        s.text(row, c0 + 1, n, Style.CELL_WRAP, n + ": name");
         s.text(row, c0 + 2, c.unit() == null ? "" : c.unit(), Style.CELL, n + ": unit");
         s.text(row, c0 + 3, (c.before() == null ? 0 : c.before().n()) + " / " + (c.after() == null ? 0 : c.after().n()),
                 Style.CELL, n + ": n before / after");

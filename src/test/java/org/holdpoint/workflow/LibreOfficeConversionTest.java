@@ -103,6 +103,67 @@ class LibreOfficeConversionTest {
         assertThat(r.status()).isEqualTo(VerifyResult.Status.INTACT);
     }
 
+    /**
+     * A 60-characteristic sign-off printed to PDF: no number is shown as ### and no name or interval is cut
+     * (columns as wide as their content, long names wrapped). Invented study: a bearing housing's features
+     * measured before and after a fixture change, four sizes of values (2 to 4 decimals).
+     */
+    @Test
+    void sixtyCharacteristicsPrintWithoutHashesOrCutText() throws Exception {
+        String soffice = onPath("soffice");
+        String pdftotext = onPath("pdftotext");
+        assumeTrue(soffice != null && pdftotext != null, "LibreOffice and pdftotext are not installed");
+        java.util.Random rnd = new java.util.Random(60);
+        StringBuilder data = new StringBuilder("phase");
+        StringBuilder criteria = new StringBuilder("characteristic,lsl,usl,margin_percent,sd_growth_limit,capability_min\n");
+        double[] base = {8.0, 25.4, 120.0, 0.05};
+        double[] tol = {0.012, 0.02, 0.1, 0.02};
+        int[] dec = {3, 4, 2, 4};
+        List<String> names = new ArrayList<>();
+        for (int k = 0; k < 60; k++) {
+            String name = "Feature " + (k + 1) + (k % 10 == 0 ? " of the main bearing seat as measured on the "
+                    + "coordinate measuring machine in cell 4" : k % 2 == 0 ? " diameter" : " position");
+            names.add(name);
+            data.append(',').append(name);
+            criteria.append(name).append(',').append(String.format(java.util.Locale.ROOT, "%.4f,%.4f", base[k % 4]
+                    - 2 * tol[k % 4], base[k % 4] + 2 * tol[k % 4])).append(",10,1.5,1.33\n");
+        }
+        data.append('\n');
+        for (String phase : new String[] {"before", "after"}) {
+            for (int i = 0; i < 12; i++) {
+                data.append(phase);
+                for (int k = 0; k < 60; k++) {
+                    data.append(',').append(String.format(java.util.Locale.ROOT, "%." + dec[k % 4] + "f", base[k % 4]
+                            + 0.004 * (1 + k % 5) * rnd.nextGaussian()));
+                }
+                data.append('\n');
+            }
+        }
+        Path csv = Files.writeString(dir.resolve("housing60.csv"), data.toString(), StandardCharsets.UTF_8);
+        Files.writeString(dir.resolve("housing60.settings.csv"), criteria.toString(), StandardCharsets.UTF_8);
+        AnalysisOutcome outcome = new AnalyzeUseCase().importOnly(ImportOptions.file(csv), null,
+                org.holdpoint.study.AnalysisSettings.defaultSettings());
+        ChangeStudy study = new ChangeStudy(null, outcome.data(), outcome.settings(), List.of());
+        Path xlsx = dir.resolve("housing60.xlsx");
+        new ReportUseCase(SignoffWorkbookTest.CLOCK).write(study, new StudyAnalyzer().analyze(study.data(),
+                study.settings(), org.holdpoint.study.Progress.NONE), ReportOptions.withDefaults(), xlsx);
+        run(soffice, "--convert-to", "pdf", "--outdir", dir.toString(), xlsx.toString());
+        run(pdftotext, "-layout", dir.resolve("housing60.pdf").toString(), dir.resolve("housing60.txt").toString());
+        String text = Files.readString(dir.resolve("housing60.txt"));
+        assertThat(text).doesNotContain("###");
+        String flat = text.replaceAll("\\s+", " ");
+        for (String name : names) {
+            assertThat(flat).as("the whole name is printed").contains(name.substring(Math.max(0, name.length() - 20)));
+        }
+        // every interval on the Summary pages is printed whole: as many ( as ) on each line
+        for (String line : text.split("\n")) {
+            if (line.contains("(\u2212") || line.matches(".*\\(\\d.*")) {
+                assertThat(line.chars().filter(ch -> ch == '(').count()).as(line)
+                        .isEqualTo(line.chars().filter(ch -> ch == ')').count());
+            }
+        }
+    }
+
     private String run(String... command) throws IOException, InterruptedException {
         List<String> cmd = new ArrayList<>(List.of(command));
         if (command[0].endsWith("soffice")) {
