@@ -37,7 +37,19 @@ public final class Holdpoint {
             launcher.open();
             return;
         }
-        int code = HoldpointCommand.create(launcher).execute(args);
+        int code;
+        try {
+            code = HoldpointCommand.create(launcher).execute(args);
+        } catch (OutOfMemoryError e) {
+            // one line, exit 3: never a stack trace, never the "edited" code of verify
+            System.err.println("holdpoint: out of memory (the Java heap of " + (Runtime.getRuntime().maxMemory() >> 20)
+                    + " MB is too small for this input); run it again with more, e.g. HOLDPOINT_JAVA_OPTS=-Xmx2g");
+            code = 3;
+        } catch (StackOverflowError e) {
+            System.err.println("holdpoint: internal error (the input is nested too deeply to be processed); please "
+                    + "report it with the command you ran");
+            code = 3;
+        }
         if (!opened[0] || code != 0) {
             System.exit(code);
         }

@@ -64,4 +64,28 @@ class StoppedWhileWritingTest {
             assertThat(s.filter(Files::isRegularFile).toList()).as("no temporary file of the writer is left").isEmpty();
         }
     }
+
+    /** Out of memory is one line and exit 3 (an internal limit, never verify's "edited" code 1). */
+    @Test
+    void outOfMemoryIsOneLineAndExitThree() throws Exception {
+        Path csv = dir.resolve("large.csv");
+        Random rnd = new Random(3);
+        try (BufferedWriter w = Files.newBufferedWriter(csv, StandardCharsets.UTF_8)) {
+            w.write("phase,Bore\n");
+            for (int i = 0; i < 400_000; i++) {
+                w.write(i % 2 == 0 ? "before," : "after,");
+                w.write(String.format(Locale.ROOT, "%.5f%n", 30 + 0.01 * rnd.nextGaussian()));
+            }
+        }
+        String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+        Process p = new ProcessBuilder(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-Xmx12m", "-cp", classpath, "org.holdpoint.Holdpoint", "analyze", csv.toString(), "--margin",
+                "0.01", "-q")).redirectError(dir.resolve("err.txt").toFile()).redirectOutput(dir.resolve("out.txt")
+                .toFile()).start();
+        assertThat(p.waitFor(120, TimeUnit.SECONDS)).isTrue();
+        String err = Files.readString(dir.resolve("err.txt"));
+        assertThat(p.exitValue()).as(err).isEqualTo(3);
+        assertThat(err.strip().lines()).as(err).hasSize(1);
+        assertThat(err).contains("out of memory", "HOLDPOINT_JAVA_OPTS").doesNotContain("\tat ");
+    }
 }
