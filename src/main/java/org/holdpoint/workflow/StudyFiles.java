@@ -57,7 +57,13 @@ public final class StudyFiles {
             .enable(com.fasterxml.jackson.core.JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN);
     private static final ObjectMapper PRETTY = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
             .enable(com.fasterxml.jackson.core.JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN);
-    private static final ObjectMapper READER = new ObjectMapper()
+    /**
+     * Reads study files of any size analyze accepts: no limit on the length of a text or of the document
+     * (a record of a million values is tens of millions of characters), the nesting kept at the default.
+     */
+    private static final ObjectMapper READER = new ObjectMapper(com.fasterxml.jackson.core.JsonFactory.builder()
+            .streamReadConstraints(com.fasterxml.jackson.core.StreamReadConstraints.builder()
+                    .maxStringLength(Integer.MAX_VALUE).maxDocumentLength(-1L).build()).build())
             .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS);
 
     private StudyFiles() {
@@ -287,6 +293,7 @@ public final class StudyFiles {
             throw new StudyFileException("%s: schema version %d is not supported by this version (reads 1 to %d)",
                     name, version, SCHEMA_VERSION);
         }
+        StudyFileCheck.check(root, name);
         try {
             ChangeDescription change = readChange(root.path("change"));
             AnalysisSettings settings = readSettings(root.path("settings"), version, name);
