@@ -31,7 +31,9 @@ class ArchitectureTest {
     private static final String WORKFLOW = ROOT + ".workflow..";
     private static final String CLI = ROOT + ".cli..";
     private static final String UI = ROOT + ".ui..";
-    private static final String[] PROJECT = {STATS, STUDY, IMPORTER, CHART, REPORT, ARCHIVE, WORKFLOW, CLI, UI};
+    private static final String FILES = ROOT + ".files..";
+    private static final String[] PROJECT = {STATS, STUDY, FILES, IMPORTER, CHART, REPORT, ARCHIVE, WORKFLOW, CLI,
+        UI};
 
     private static final String[] IO_AND_UI = {"java.io..", "java.nio.file..", "java.awt..", "javax.swing..",
         "java.sql..", "javax.sql..", "org.apache.poi..", "org.jfree.."};
@@ -73,7 +75,23 @@ class ArchitectureTest {
                     c.getPackageName().equals("java.io")
                             && (c.getSimpleName().startsWith("File") || c.getSimpleName().equals("RandomAccessFile"))));
 
-    // ---- adapters: importer, chart, report, archive depend on study/stats only, never on each other ----
+    // ---- files: the one atomic-write and hash helper, a leaf every adapter may use ----
+
+    @ArchTest
+    static final ArchRule filesUsesOnlyTheJdk = classes().that().resideInAPackage(FILES)
+            .should().onlyDependOnClassesThat().resideInAnyPackage("java..", FILES);
+
+    @ArchTest
+    static final ArchRule oneAtomicWriter = noClasses().that().resideOutsideOfPackage(FILES)
+            .should().accessField(java.nio.file.StandardCopyOption.class, "ATOMIC_MOVE")
+            .because("every output is written by files.AtomicFiles (temporary file, one move, cleanup on failure)");
+
+    @ArchTest
+    static final ArchRule oneHashHelper = noClasses().that().resideOutsideOfPackage(FILES)
+            .should().callMethod(java.security.MessageDigest.class, "getInstance", String.class)
+            .because("every SHA-256 is computed by files.Sha256");
+
+    // ---- adapters: importer, chart, report, archive depend on study/stats (and files) only, never on each other ----
 
     @ArchTest
     static final ArchRule importerDependsOnlyOnStudyAndStats = adapterRule(IMPORTER);
@@ -89,7 +107,7 @@ class ArchitectureTest {
 
     private static ArchRule adapterRule(String adapter) {
         return noClasses().that().resideInAPackage(adapter)
-                .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY, adapter))
+                .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY, FILES, adapter))
                 .orShould().dependOnClassesThat().resideInAPackage(ROOT)
                 .allowEmptyShould(true);
     }

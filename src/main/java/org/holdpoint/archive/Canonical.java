@@ -1,11 +1,8 @@
 package org.holdpoint.archive;
 
 import java.nio.charset.StandardCharsets;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
 import java.time.format.DateTimeFormatter;
-import java.util.HexFormat;
 import java.util.List;
 
 /**
@@ -97,11 +94,6 @@ final class Canonical {
      * @return 64 lower-case hex digits
      */
     static String sha256Hex(String s) {
-        try {
-            MessageDigest md = MessageDigest.getInstance("SHA-256");
-            return HexFormat.of().formatHex(md.digest(s.getBytes(StandardCharsets.UTF_8)));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("every Java runtime provides SHA-256", e);
-        }
+        return org.holdpoint.files.Sha256.ofText(s);
     }
 }

@@ -7,11 +7,7 @@ import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.Iterator;
 import javax.imageio.IIOImage;
 import javax.imageio.ImageIO;
@@ -112,34 +108,12 @@ public final class ChartExport {
      * @throws ChartException if the file cannot be written; no partial file is left behind
      */
     public static Path writeAtomically(byte[] bytes, Path target) {
-        Path dir = target.toAbsolutePath().getParent();
-        Path tmp = null;
         try {
-            Files.createDirectories(dir);
-            // a plain new file (not createTempFile, whose owner-only permissions would survive the move)
-            tmp = dir.resolve("." + target.getFileName() + "." + Long.toHexString(System.nanoTime()) + ".tmp");
-            Files.write(tmp, bytes, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            org.holdpoint.files.AtomicFiles.writeBytes(target, bytes);
             return target;
         } catch (IOException e) {
-            deleteQuietly(tmp);
             throw new ChartException(e, "could not write the chart file %s: %s; check that the folder exists and "
                     + "is writable", target, e.getMessage());
-        }
-    }
-
-    private static void deleteQuietly(Path tmp) {
-        if (tmp == null) {
-            return;
-        }
-        try {
-            Files.deleteIfExists(tmp);
-        } catch (IOException ignored) {
-            // the original failure is what the user must see
         }
     }
 

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
@@ -74,10 +73,7 @@ final class DemoCommand implements Callable<Integer> {
             if (in == null) {
                 throw new UserInputException("the bundled sample file %s is missing from this build", name);
             }
-            // a plain new file (createTempFile's owner-only permissions would survive the move)
-            Path tmp = out.resolve("." + name + "." + Long.toHexString(System.nanoTime()) + ".part");
-            Files.copy(in, tmp);
-            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            org.holdpoint.files.AtomicFiles.writeBytes(target, in.readAllBytes());
         }
         return target;
     }

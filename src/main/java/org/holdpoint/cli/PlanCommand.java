@@ -146,7 +146,7 @@ public final class PlanCommand implements Callable<Integer> {
         out.flush();
         if (json != null) {
             try {
-                org.holdpoint.workflow.AtomicFiles.writeText(json, new com.fasterxml.jackson.databind.ObjectMapper()
+                org.holdpoint.files.AtomicFiles.writeText(json, new com.fasterxml.jackson.databind.ObjectMapper()
                         .enable(com.fasterxml.jackson.databind.SerializationFeature.INDENT_OUTPUT)
                         .writeValueAsString(document) + System.lineSeparator());
             } catch (IOException e) {

@@ -52,12 +52,7 @@ public final class Template {
             new java.util.TreeMap<>(cells.getOrDefault(sheet, Map.of())).forEach((k, v) -> sb.append("cell\0")
                     .append(sheet).append('\0').append(k).append('\0').append(v).append('\n'));
         }
-        try {
-            return java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
-                    .digest(sb.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8)));
-        } catch (java.security.NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
-        }
+        return org.holdpoint.files.Sha256.ofText(sb.toString());
     }
 
     /** @return the template's content fingerprint (see {@link #fingerprint}) */

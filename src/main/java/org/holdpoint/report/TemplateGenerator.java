@@ -4,9 +4,7 @@ import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Date;
 import java.util.Optional;
 import java.util.zip.ZipEntry;
@@ -49,16 +47,7 @@ public final class TemplateGenerator {
      */
     public static void main(String[] args) throws IOException {
         Path target = Path.of(args.length > 0 ? args[0] : "templates/holdpoint-default.xlsx");
-        Path dir = target.toAbsolutePath().getParent();
-        Files.createDirectories(dir);
-        // a plain new file (createTempFile's owner-only permissions would survive the move)
-        Path tmp = dir.resolve(".template." + Long.toHexString(System.nanoTime()) + ".part");
-        try {
-            Files.write(tmp, build());
-            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        org.holdpoint.files.AtomicFiles.writeBytes(target, build());
         System.out.println("wrote " + target);
     }
 

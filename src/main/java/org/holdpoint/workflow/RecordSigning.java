@@ -1,5 +1,6 @@
 package org.holdpoint.workflow;
 
+import org.holdpoint.files.AtomicFiles;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;

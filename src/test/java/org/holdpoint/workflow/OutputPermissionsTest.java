@@ -1,5 +1,6 @@
 package org.holdpoint.workflow;
 
+import org.holdpoint.files.AtomicFiles;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 

@@ -1,4 +1,4 @@
-package org.holdpoint.workflow;
+package org.holdpoint.files;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -39,6 +39,17 @@ public final class AtomicFiles {
      */
     public static void writeText(Path target, String text) throws IOException {
         write(target, true, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
+    }
+
+    /**
+     * Writes bytes atomically, replacing an existing file.
+     *
+     * @param target the file
+     * @param bytes  the content
+     * @throws IOException when it cannot be written (nothing is left behind)
+     */
+    public static void writeBytes(Path target, byte[] bytes) throws IOException {
+        write(target, true, out -> out.write(bytes));
     }
 
     /**
