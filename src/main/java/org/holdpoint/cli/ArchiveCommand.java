@@ -108,14 +108,15 @@ final class ArchiveCommand implements Runnable {
                 throw new UserInputException("%s: file not found; check the path", study);
             }
             try (ChangeRecordArchive a = open()) {
-                StudyVersion v = new ArchiveUseCase(a).add(study, actor != null ? actor
+                ArchiveUseCase useCase = new ArchiveUseCase(a);
+                StudyVersion v = useCase.add(study, actor != null ? actor
                         : System.getProperty("user.name", "unknown"), reason);
                 if (json) {
                     printJson(versionJson(v));
                 } else {
-                    out().printf(Locale.ROOT, "Archived %s version %d as id %d%s (SHA-256 %s)%n", v.changeId(),
-                            v.version(), v.id(), v.supersedes() == null ? "" : ", superseding id " + v.supersedes(),
-                            v.jsonSha256());
+                    out().printf(Locale.ROOT, "Archived %s version %d as id %d%s (record SHA-256 %s)%n",
+                            v.changeId(), v.version(), v.id(), v.supersedes() == null ? ""
+                                    : ", superseding id " + v.supersedes(), useCase.lastRecordSha256());
                     out().flush();
                 }
                 return ExitCodes.OK;

@@ -46,9 +46,11 @@ public final class ArchiveUseCase {
     public StudyVersion add(Path studyFile, String actor, String reason) throws ArchiveException {
         ChangeStudy study = StudyFiles.read(studyFile);
         StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
-        // the archive keeps the record (the study without its sign-off entries: the hash every output shows);
-        // the entries become the archive's signatures of that record, the one list archive sign adds to
-        String json = new String(StudyFiles.record(StudyFiles.toJson(study, result)), StandardCharsets.UTF_8);
+        // the archive keeps the whole study, its sign-off entries included (an author may not add archive
+        // signatures: on a shared archive only approvers sign); every output shows the record's hash
+        var tree = StudyFiles.toJson(study, result);
+        String json = new String(StudyFiles.canonical(tree), StandardCharsets.UTF_8);
+        lastRecordSha256 = StudyFiles.recordSha256(tree);
         var change = study.change();
         if (change.partNumber().isBlank() || change.title().isBlank()) {
             throw new ArchiveException(ArchiveException.Reason.REJECTED, studyFile + ": the study has no "
@@ -89,27 +91,16 @@ public final class ArchiveUseCase {
                         + " is already archived (version " + current.get().version() + "); a correction needs "
                         + "--reason saying why it supersedes that version");
             }
-            return withSignatures(archive.supersede(current.get().id(), version, actor, reason), study);
+            return archive.supersede(current.get().id(), version, actor, reason);
         }
-        return withSignatures(archive.add(version, actor, reason == null || reason.isBlank() ? "archived" : reason),
-                study);
+        return archive.add(version, actor, reason == null || reason.isBlank() ? "archived" : reason);
     }
 
-    /** Adds the study's sign-off entries to the stored version as its signatures, stage first in the meaning. */
-    private StudyVersion withSignatures(StudyVersion v, ChangeStudy study) throws ArchiveException {
-        for (org.holdpoint.study.Signature g : study.signatures()) {
-            Instant when;
-            try {
-                when = g.timestamp() == null ? Instant.now() : Instant.parse(g.timestamp());
-            } catch (java.time.format.DateTimeParseException e) {
-                throw new ArchiveException(ArchiveException.Reason.REJECTED, "the sign-off entry of " + g.name()
-                        + " has the time \"" + g.timestamp() + "\", not an ISO-8601 instant such as "
-                        + "2026-12-03T14:05:00Z");
-            }
-            archive.sign(v.id(), g.name(), g.role() == null || g.role().isBlank() ? "(no role given)" : g.role(),
-                    stageMeaning(g.stage(), g.meaning()), when);
-        }
-        return study.signatures().isEmpty() ? v : archive.show(v.id()).map(ArchivedStudy::version).orElse(v);
+    private String lastRecordSha256;
+
+    /** @return the record SHA-256 of the study last added (the hash the workbook and the study file show) */
+    public String lastRecordSha256() {
+        return lastRecordSha256;
     }
 
     /**
@@ -190,16 +181,16 @@ public final class ArchiveUseCase {
             java.io.IOException {
         Shown shown = show(id);
         ChangeStudy stored = shown.changeStudy();
-        // the workbook shows the archive's signatures of this record (and those a record from before the
-        // archive kept them apart carried inside)
+        // the workbook shows the study's sign-off entries and the archive's signatures of this record
         List<org.holdpoint.study.Signature> sigs = new ArrayList<>(stored.signatures());
-        String recordSha = StudyFiles.sha256(shown.study().json().getBytes(StandardCharsets.UTF_8));
+        StudyResult storedResult = new StudyAnalyzer().analyze(stored.data(), stored.settings(), Progress.NONE);
+        String recordSha = StudyFiles.recordSha256(StudyFiles.toJson(stored, storedResult));
         for (org.holdpoint.study.ArchivedSignature a : shown.study().version().signatures()) {
             sigs.add(entry(a, recordSha));
         }
         ChangeStudy study = new ChangeStudy(stored.change(), stored.data(), stored.settings(), sigs,
                 stored.provenance());
-        StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        StudyResult result = storedResult;
         ReportOptions options = ReportOptions.withDefaults().withCharts(new StudyChartSource())
                 .withExisting(overwrite ? ReportOptions.ExistingFile.REPLACE : ReportOptions.ExistingFile.REFUSE);
         return new ReportUseCase().write(study, result, options, target);

@@ -56,7 +56,7 @@ class ArchiveCommandTest {
         AnalyzeCommandTest.Run add = AnalyzeCommandTest.run("archive", "add", study.toString(), "--archive", url,
                 "--actor", "T. Oyelaran");
         assertThat(add.code()).as(add.err()).isZero();
-        String archived = sha(add.out(), "(SHA-256");
+        String archived = sha(add.out(), "(record SHA-256");
         assertThat(fromWorkbook).isEqualTo(fromStudy);
         assertThat(sha(verified.out(), "SHA-256")).isEqualTo(fromStudy);
         assertThat(archived).isEqualTo(fromStudy);
