@@ -128,14 +128,64 @@ public final class JdbcArchive implements ChangeRecordArchive {
 
     private static JdbcArchive openPool(String url, Dialect dialect, Properties properties, Clock clock)
             throws ArchiveException {
+        return openPool(url, dialect, properties, clock, false);
+    }
+
+    private static JdbcArchive openPool(String url, Dialect dialect, Properties properties, Clock clock,
+            boolean maintenance) throws ArchiveException {
         ConnectionPool pool = new ConnectionPool(url, properties);
         try (ConnectionPool.Lease lease = pool.lease()) {
+            if (dialect == Dialect.POSTGRESQL && !maintenance) {
+                refuseOwner(lease.connection(), url);
+            }
             Migrator.migrate(lease.connection(), dialect);
         } catch (ArchiveException | RuntimeException e) {
             pool.close();
             throw e;
         }
         return new JdbcArchive(url, dialect, pool, clock);
+    }
+
+    /**
+     * Daily work never runs as a role that could switch the archive's protection off: a superuser, or the
+     * owner of the tables (a member of holdpoint_owner), may ALTER TABLE … DISABLE TRIGGER. The owner's
+     * login is for setting up and migrating only ({@link #migrate}).
+     */
+    private static void refuseOwner(java.sql.Connection c, String url) throws ArchiveException {
+        boolean privileged;
+        String who;
+        try (java.sql.Statement st = c.createStatement();
+                java.sql.ResultSet rs = st.executeQuery("SELECT session_user, (SELECT rolsuper FROM pg_roles WHERE "
+                        + "rolname = session_user) OR EXISTS (SELECT 1 FROM pg_roles WHERE rolname = "
+                        + "'holdpoint_owner' AND (pg_has_role(session_user, oid, 'MEMBER') OR pg_has_role("
+                        + "current_user, oid, 'MEMBER')))")) {
+            rs.next();
+            who = rs.getString(1);
+            privileged = rs.getBoolean(2);
+        } catch (java.sql.SQLException e) {
+            throw new ArchiveException(ArchiveException.Reason.DATABASE, "cannot read the role of the connection to "
+                    + ConnectionPool.redact(url) + ": " + e.getMessage(), e);
+        }
+        if (privileged) {
+            throw new ArchiveException(ArchiveException.Reason.PERMISSION_DENIED, "connected to the archive as "
+                    + who + ", a superuser or owner of the archive tables: such a role can switch the archive's "
+                    + "protection off, so it is used only to set up and migrate the archive (the owner's step in "
+                    + "docs/archive.md). Connect with your own login in holdpoint_author, holdpoint_approver or "
+                    + "holdpoint_auditor (docs/archive.md)");
+        }
+    }
+
+    /**
+     * Opens an archive for the owner's maintenance (checks and measurements by the owner or an administrator),
+     * without the refusal of owner and superuser roles that protects daily work. No command of the program
+     * uses it.
+     *
+     * @param url the JDBC URL with credentials
+     * @return the archive
+     * @throws ArchiveException as {@link #open(String)}
+     */
+    public static JdbcArchive openForMaintenance(String url) throws ArchiveException {
+        return openPool(url, Dialect.of(url), new Properties(), Clock.systemUTC(), true);
     }
 
     /**

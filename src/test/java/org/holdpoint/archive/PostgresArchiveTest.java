@@ -122,6 +122,32 @@ class PostgresArchiveTest {
         assertThat(sqlState(owner, "DELETE FROM audit_event")).isEqualTo("42501");
     }
 
+    /**
+     * No role the program works as can switch the append-only trigger off: only a table's owner or a
+     * superuser may ALTER TABLE … DISABLE TRIGGER (PostgreSQL manual, ALTER TABLE), and the program refuses
+     * to do daily work connected as either.
+     */
+    @Test
+    void noApplicationRoleCanDisableTheTriggerAndTheOwnerIsNotUsedForDailyWork() throws Exception {
+        assertThat(JdbcArchive.migrate(url, owner, null)).containsExactly(1);
+        for (String who : List.of(author, approver, auditor)) {
+            for (String table : List.of("study", "signature", "audit_event", "study_characteristic")) {
+                assertThat(sqlState(who, "ALTER TABLE " + table + " DISABLE TRIGGER ALL")).as(who + " " + table)
+                        .isEqualTo("42501");
+            }
+            assertThat(sqlState(who, "SET session_replication_role = replica")).as(who).isEqualTo("42501");
+        }
+        assertThatThrownBy(() -> JdbcArchive.open(url, owner, null)).isInstanceOf(ArchiveException.class)
+                .hasMessageContaining("owner of the archive tables")
+                .extracting(e -> ((ArchiveException) e).reason()).isEqualTo(ArchiveException.Reason.PERMISSION_DENIED);
+        String superuser = admin.replaceFirst(".*[?&]user=([^&]+).*", "$1");
+        assertThatThrownBy(() -> JdbcArchive.open(url, superuser, null)).isInstanceOf(ArchiveException.class)
+                .hasMessageContaining("a superuser or owner");
+        try (JdbcArchive asAuthor = JdbcArchive.open(url, author, null)) {
+            assertThat(asAuthor.list(ArchiveQuery.withDefaults())).isEmpty();
+        }
+    }
+
     @Test
     void aTamperingSuperuserIsCaughtByVerify() throws Exception {
         JdbcArchive.migrate(url, owner, null);
