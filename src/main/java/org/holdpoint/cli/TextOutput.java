@@ -36,6 +36,23 @@ final class TextOutput {
         };
     }
 
+    private final java.util.Map<String, Integer> decimals = new java.util.HashMap<>();
+
+    /** A value in the unit of a characteristic, with its decimals (6 significant digits when unknown). */
+    private String u(String characteristic, Double v) {
+        if (v == null) {
+            return "-";
+        }
+        Integer d = decimals.get(characteristic);
+        return d == null ? Format.num(v) : Format.fixed(v, d);
+    }
+
+    /** A raw value (min, max) with the characteristic's resolution. */
+    private String raw(String characteristic, double v) {
+        Integer d = decimals.get(characteristic);
+        return d == null ? Format.num(v) : Format.fixed(v, d - 2);
+    }
+
     void print(Dataset data, AnalysisSettings settings, StudyResult result) {
         out.printf(Locale.ROOT, "Holdpoint %s - change study analysis%n", Version.get());
         for (InputInfo in : data.inputs()) {
@@ -49,6 +66,9 @@ final class TextOutput {
                 Format.percent(1 - settings.alpha()), Format.percent(1 - 2 * settings.alpha()),
                 Format.num(settings.alpha()));
         out.println();
+        // values in a characteristic's unit are shown with its resolution plus two decimals
+        decimals.clear();
+        data.characteristics().forEach(c -> decimals.put(c.name(), Math.min(10, c.resolutionDecimals() + 2)));
         printTable(result.characteristics());
         for (CharacteristicResult r : result.characteristics()) {
             out.println();
@@ -100,51 +120,51 @@ final class TextOutput {
     }
 
     private void printTable(List<CharacteristicResult> results) {
-        String fmt = "%-3s %-24s %-5s %-9s %12s %12s %11s %-22s %-18s %s%n";
+        String fmt = "%-3s %-24s %-5s %-9s %12s %12s %11s %-24s %-22s %s%n";
         out.printf(Locale.ROOT, fmt, "", "Characteristic", "Unit", "n bef/aft", "Mean before", "Mean after",
                 "Difference", "Equivalence interval", "Margin", "Conclusion");
         for (CharacteristicResult r : results) {
             EquivalenceResult eq = r.decidingTost();
             TTestResult t = r.decidingTest();
-            String interval = eq == null ? "-" : "(" + Format.num(eq.ciLower(), 4) + ", "
-                    + Format.num(eq.ciUpper(), 4) + ")";
-            String margin = eq == null ? "none set" : marginText(eq);
+            String interval = eq == null ? "-" : "(" + u(r.name(), eq.ciLower()) + ", "
+                    + u(r.name(), eq.ciUpper()) + ")";
+            String margin = eq == null ? "none set" : marginText(r.name(), eq);
             boolean unassessable = r.verdict().status() == Verdict.Status.NOT_ASSESSABLE;
             String conclusion = unassessable ? "not assessable (see below)" : eq == null ? "not assessed"
                     : eq.conclusion().words();
             if (unassessable && r.margin() != null) {
-                margin = r.margin().lower() != null && r.margin().upper() != null ? "(" + Format.num(r.margin().lower(), 4)
-                        + ", " + Format.num(r.margin().upper(), 4) + ")" : "one-sided";
+                margin = r.margin().lower() != null && r.margin().upper() != null ? "(" + u(r.name(), r.margin()
+                        .lower()) + ", " + u(r.name(), r.margin().upper()) + ")" : "one-sided";
             }
             out.printf(Locale.ROOT, fmt, mark(r.verdict().status()), clip(r.name(), 24),
                     clip(r.unit() == null ? "" : r.unit(), 6), (r.before() == null ? 0 : r.before().n()) + "/"
                             + (r.after() == null ? 0 : r.after().n()),
-                    r.before() == null ? "-" : Format.num(r.before().mean()),
-                    r.after() == null ? "-" : Format.num(r.after().mean()), t == null ? "-" : Format.num(t.estimate(), 4),
+                    r.before() == null ? "-" : u(r.name(), r.before().mean()),
+                    r.after() == null ? "-" : u(r.name(), r.after().mean()), t == null ? "-" : u(r.name(), t.estimate()),
                     interval, margin, conclusion + (r.verdict().status() == Verdict.Status.FAILED && eq != null
                             && eq.conclusion().claimHolds() ? " (limit not met)" : ""));
         }
         out.println("Marks: [=] passed  [x] failed  [?] inconclusive  [-] not assessed  [/] not assessable");
     }
 
-    private static String marginText(EquivalenceResult eq) {
+    private String marginText(String name, EquivalenceResult eq) {
         if (eq.lowerMargin() != null && eq.upperMargin() != null) {
-            return "(" + Format.num(eq.lowerMargin(), 4) + ", " + Format.num(eq.upperMargin(), 4) + ")";
+            return "(" + u(name, eq.lowerMargin()) + ", " + u(name, eq.upperMargin()) + ")";
         }
-        return eq.lowerMargin() != null ? "> " + Format.num(eq.lowerMargin()) : "< " + Format.num(eq.upperMargin());
+        return eq.lowerMargin() != null ? "> " + u(name, eq.lowerMargin()) : "< " + u(name, eq.upperMargin());
     }
 
     private void printDetail(CharacteristicResult r, AnalysisSettings settings) {
         String unit = r.unit() == null ? "" : " (" + r.unit() + ")";
         out.println("== " + r.name() + unit + " " + "=".repeat(Math.max(3, 60 - r.name().length() - unit.length())));
-        printGroup("before", r.before());
-        printGroup("after ", r.after());
+        printGroup(r.name(), "before", r.before());
+        printGroup(r.name(), "after ", r.after());
         TTestResult t = r.decidingTest();
         if (t != null) {
             out.printf(Locale.ROOT, "  %s: t = %s, df = %s, p = %s%s; difference %s, %s CI (%s, %s)%n",
                 t.method().description(), Format.num(t.t()), Format.num(t.df()), Format.p(t.p()),
-                r.holmP() == null ? "" : " (Holm-adjusted " + Format.p(r.holmP()) + ")", Format.num(t.estimate()),
-                Format.percent(t.confidenceLevel()), Format.num(t.ciLower()), Format.num(t.ciUpper()));
+                r.holmP() == null ? "" : " (Holm-adjusted " + Format.p(r.holmP()) + ")", u(r.name(), t.estimate()),
+                Format.percent(t.confidenceLevel()), u(r.name(), t.ciLower()), u(r.name(), t.ciUpper()));
         }
         if (!r.paired() && r.method() != org.holdpoint.stats.LocationMethod.POOLED && r.pooled() != null) {
             out.printf(Locale.ROOT, "  (for reference, pooled two-sample t: t = %s, df = %s, p = %s; not used for "
@@ -156,7 +176,7 @@ final class TextOutput {
             out.printf(Locale.ROOT, "  Equivalence, two one-sided tests (%s): %s; p lower = %s, p upper = %s; "
                     + "%s interval (%s, %s) -> %s%n", eq.method().description(), Format.margin(eq),
                     eq.pLower() == null ? "-" : Format.p(eq.pLower()), eq.pUpper() == null ? "-" : Format.p(eq.pUpper()),
-                    Format.percent(eq.level()), Format.num(eq.ciLower()), Format.num(eq.ciUpper()),
+                    Format.percent(eq.level()), u(r.name(), eq.ciLower()), u(r.name(), eq.ciUpper()),
                     eq.conclusion().words());
         }
         if (r.variance() != null) {
@@ -244,14 +264,13 @@ final class TextOutput {
         return v == null ? "-" : Format.num(v, 4);
     }
 
-    private void printGroup(String label, Descriptives d) {
+    private void printGroup(String name, String label, Descriptives d) {
         if (d == null) {
             out.printf(Locale.ROOT, "  %s n = 0 (no usable value)%n", label);
             return;
         }
         out.printf(Locale.ROOT, "  %s n = %d, mean = %s, sd = %s, median = %s, min = %s, max = %s%n", label, d.n(),
-                Format.num(d.mean()), Format.num(d.sd()), Format.num(d.median()), Format.num(d.min()),
-                Format.num(d.max()));
+                u(name, d.mean()), u(name, d.sd()), u(name, d.median()), raw(name, d.min()), raw(name, d.max()));
     }
 
     private static String clip(String s, int w) {

@@ -279,19 +279,7 @@ final class WorkbookPlan {
      * @return 0..8
      */
     static int dataDecimals(CharacteristicData c) {
-        if (c == null) {
-            return 4;
-        }
-        int scale = 0;
-        for (var g : List.of(c.before(), c.after())) {
-            int m = Math.min(g.size(), 500);
-            for (int i = 0; i < m; i++) {
-                BigDecimal b = g.sample().hasExactDecimals() ? g.sample().decimal(i)
-                        : g.sample().decimal(i).stripTrailingZeros();
-                scale = Math.max(scale, b.scale());
-            }
-        }
-        return Math.max(0, Math.min(8, scale));
+        return c == null ? 4 : c.resolutionDecimals();
     }
 
     /**

@@ -17,6 +17,27 @@ import java.util.List;
 public record CharacteristicData(String name, String unit, GroupData before, GroupData after, boolean paired,
         List<String> unmatchedUnits) {
 
+    /**
+     * The measurement resolution in decimals: the most decimals among the raw values as read (values
+     * known only as doubles count by their shortest decimal), at most 8. Values in the characteristic's
+     * unit are shown with this many decimals plus two (means, differences, intervals, margins), so the same
+     * data always get the same format.
+     *
+     * @return 0..8
+     */
+    public int resolutionDecimals() {
+        int scale = 0;
+        for (GroupData g : new GroupData[] {before, after}) {
+            int m = Math.min(g.size(), 500);
+            for (int i = 0; i < m; i++) {
+                java.math.BigDecimal b = g.sample().hasExactDecimals() ? g.sample().decimal(i)
+                        : g.sample().decimal(i).stripTrailingZeros();
+                scale = Math.max(scale, b.scale());
+            }
+        }
+        return Math.max(0, Math.min(8, scale));
+    }
+
     /** Validates the record. */
     public CharacteristicData {
         if (name == null || name.isBlank()) {

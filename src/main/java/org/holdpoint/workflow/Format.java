@@ -41,6 +41,21 @@ public final class Format {
     }
 
     /**
+     * A value in the characteristic's unit with fixed decimals (its resolution plus two).
+     *
+     * @param v        the value
+     * @param decimals decimals
+     * @return e.g. "0.00280"; "undefined" for NaN
+     */
+    public static String fixed(double v, int decimals) {
+        if (Double.isNaN(v)) {
+            return "undefined";
+        }
+        String t = String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return t.matches("-0\\.?0*") ? t.substring(1) : t;
+    }
+
+    /**
      * A p-value: 4 significant digits, scientific below 1e-4, never 0.
      *
      * @param p the p-value
