@@ -41,4 +41,27 @@ class StudyFileVersionsTest {
                 .isEqualTo(storedStatus);
         assertThat(again.changeVerified()).isEqualTo(stored.path("results").path("changeVerified").asBoolean());
     }
+
+    /**
+     * Schema 2, written by holdpoint 0.1.0 for the demo study (holdpoint demo, study file and workbook of one
+     * run): the study file is read and re-computed to its stored verdicts, and the workbook still verifies.
+     */
+    @Test
+    void schemaVersionTwoIsReadAndItsWorkbookStillVerifies() throws Exception {
+        Path file = resource("study-v2-demo.json");
+        JsonNode stored = StudyFiles.tree(Files.readString(file));
+        assertThat(stored.path("schemaVersion").asInt()).isEqualTo(2);
+        ChangeStudy study = StudyFiles.read(file);
+        assertThat(study.data().characteristics()).hasSize(7);
+        StudyResult again = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        List<String> storedStatus = new java.util.ArrayList<>();
+        stored.path("results").path("characteristics").forEach(c -> storedStatus.add(
+                c.path("verdict").path("status").asText()));
+        assertThat(again.characteristics().stream().map(r -> r.verdict().status().words()).toList())
+                .isEqualTo(storedStatus);
+        VerifyResult v = new VerifyUseCase().verify(resource("signoff-v2-demo.xlsx"), null, Progress.NONE);
+        assertThat(v.differences()).isEmpty();
+        assertThat(v.status()).isEqualTo(VerifyResult.Status.INTACT);
+        assertThat(v.changeId()).isEqualTo(study.change().id());
+    }
 }
