@@ -297,12 +297,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         if (r.signedBy.isBlank()) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--signed-by needs a printed name");
         }
-        Signature.Stage stage = null;
-        for (Signature.Stage s : Signature.Stage.values()) {
-            if (s.words().equalsIgnoreCase(r.stage.trim())) {
-                stage = s;
-            }
-        }
+        Signature.Stage stage = Signature.Stage.parse(r.stage);
         if (stage == null) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--stage must be prepared, reviewed or "
                     + "approved, got '" + r.stage + "'");

@@ -266,12 +266,11 @@ final class ArchiveCommand implements Runnable {
         String stage = "approved";
 
         private org.holdpoint.study.Signature.Stage parseStage() {
-            for (org.holdpoint.study.Signature.Stage st : org.holdpoint.study.Signature.Stage.values()) {
-                if (st.words().equalsIgnoreCase(stage.strip())) {
-                    return st;
-                }
+            org.holdpoint.study.Signature.Stage st = org.holdpoint.study.Signature.Stage.parse(stage);
+            if (st == null) {
+                throw new UserInputException("--stage must be prepared, reviewed or approved, got '%s'", stage);
             }
-            throw new UserInputException("--stage must be prepared, reviewed or approved, got '%s'", stage);
+            return st;
         }
 
         @Option(names = "--meaning", required = true, paramLabel = "TEXT", description = "What the signature means, "

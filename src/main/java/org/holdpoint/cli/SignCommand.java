@@ -52,12 +52,7 @@ final class SignCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        Signature.Stage st = null;
-        for (Signature.Stage s : Signature.Stage.values()) {
-            if (s.words().equalsIgnoreCase(stage.strip())) {
-                st = s;
-            }
-        }
+        Signature.Stage st = Signature.Stage.parse(stage);
         if (st == null) {
             throw new CommandLine.ParameterException(spec.commandLine(), "--stage must be prepared, reviewed or "
                     + "approved, got '" + stage + "'");

@@ -276,6 +276,25 @@ final class SheetData {
         }
     }
 
+    /** A workbook read without a given decimal separator: numbers stored as text take theirs per column. */
+    static final char PER_COLUMN = 0;
+
+    /**
+     * The cells of one workbook sheet.
+     *
+     * @param file    the file name
+     * @param sheet   the sheet name
+     * @param decimal the decimal separator given, or {@link #PER_COLUMN}
+     * @return the empty sheet data
+     */
+    static SheetData forWorkbook(String file, String sheet, char decimal) {
+        SheetData data = new SheetData(file, sheet, decimal == PER_COLUMN ? '.' : decimal);
+        if (decimal == PER_COLUMN) {
+            data.decimalPerColumn();
+        }
+        return data;
+    }
+
     /**
      * Numbers stored as text in a workbook take their decimal separator per column: a column whose
      * text numbers all use the other separator than this sheet's (a decimal comma where '.' is in

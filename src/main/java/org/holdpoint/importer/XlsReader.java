@@ -48,7 +48,7 @@ final class XlsReader {
                         + "workbook (perhaps a text or other document). Export the data as .xlsx, .xls or .csv", name);
             }
             try (HSSFWorkbook wb = new HSSFWorkbook(root, false)) {
-                return readWorkbook(wb, name, sheet, decimal == null ? PER_COLUMN : decimal, messages);
+                return readWorkbook(wb, name, sheet, decimal == null ? SheetData.PER_COLUMN : decimal, messages);
             }
         } catch (EncryptedDocumentException e) {
             throw passwordProtected(name, e);
@@ -106,7 +106,7 @@ final class XlsReader {
     }
 
     private static SheetData readSheet(Sheet sheet, String name, char decimal) {
-        SheetData data = sheetData(name, sheet.getSheetName(), decimal);
+        SheetData data = SheetData.forWorkbook(name, sheet.getSheetName(), decimal);
         for (Row row : sheet) {
             int r = row.getRowNum() + 1;
             for (Cell cell : row) {
@@ -147,16 +147,5 @@ final class XlsReader {
         } catch (IllegalArgumentException e) {
             return "#ERROR(" + code + ")";
         }
-    }
-
-    /** No decimal separator given: numbers stored as text take theirs per column ('.' unless a column says ','). */
-    private static final char PER_COLUMN = 0;
-
-    private static SheetData sheetData(String name, String sheetName, char decimal) {
-        SheetData data = new SheetData(name, sheetName, decimal == PER_COLUMN ? '.' : decimal);
-        if (decimal == PER_COLUMN) {
-            data.decimalPerColumn();
-        }
-        return data;
     }
 }

@@ -55,7 +55,7 @@ final class XlsxReader {
             throw damaged(name, e);
         }
         try {
-            return readPackage(pkg, name, sheet, decimal == null ? PER_COLUMN : decimal, messages);
+            return readPackage(pkg, name, sheet, decimal == null ? SheetData.PER_COLUMN : decimal, messages);
         } catch (IOException | OpenXML4JException | SAXException | ParserConfigurationException | POIXMLException
                 | OpenXML4JRuntimeException | IllegalStateException | IllegalArgumentException
                 | UnsupportedOperationException e) {
@@ -174,11 +174,11 @@ final class XlsxReader {
     private static SheetData readSheet(InputStream in, org.apache.poi.openxml4j.opc.PackagePart part, String name,
             String sheetName, char decimal, Context ctx) throws IOException, SAXException,
             ParserConfigurationException {
-        SheetData data = sheetData(name, sheetName, decimal);
+        SheetData data = SheetData.forWorkbook(name, sheetName, decimal);
         try {
             new SheetXmlScanner(in, new SheetCells(data, ctx.strings(), ctx.styles(), ctx.date1904())).run();
         } catch (SheetXmlScanner.Unsupported e) {
-            data = sheetData(name, sheetName, decimal);
+            data = SheetData.forWorkbook(name, sheetName, decimal);
             try (InputStream again = part.getInputStream()) {
                 XMLReader xr = XMLHelper.newXMLReader();
                 xr.setContentHandler(new SaxSheetHandler(new SheetCells(data, ctx.strings(), ctx.styles(),
@@ -187,17 +187,6 @@ final class XlsxReader {
             }
         }
         data.finish();
-        return data;
-    }
-
-    /** No decimal separator given: numbers stored as text take theirs per column ('.' unless a column says ','). */
-    private static final char PER_COLUMN = 0;
-
-    private static SheetData sheetData(String name, String sheetName, char decimal) {
-        SheetData data = new SheetData(name, sheetName, decimal == PER_COLUMN ? '.' : decimal);
-        if (decimal == PER_COLUMN) {
-            data.decimalPerColumn();
-        }
         return data;
     }
 }

@@ -33,6 +33,19 @@ public record Signature(Stage stage, String name, String role, String meaning, S
         public String words() {
             return words;
         }
+
+        /**
+         * @param text a stage in words, any case ("reviewed")
+         * @return the stage, or null when the text names none
+         */
+        public static Stage parse(String text) {
+            for (Stage s : values()) {
+                if (text != null && s.words().equalsIgnoreCase(text.strip())) {
+                    return s;
+                }
+            }
+            return null;
+        }
     }
 
     /**

@@ -76,12 +76,16 @@ class HostileStudyFilesTest {
                 }, "group: \"during\" is not one of"));
     }
 
+    private Path edited(Consumer<ObjectNode> edit) throws java.io.IOException {
+        ObjectNode root = valid.deepCopy();
+        edit.accept(root);
+        return Files.writeString(dir.resolve("edited.json"), root.toString(), StandardCharsets.UTF_8);
+    }
+
     @ParameterizedTest(name = "{0}")
     @MethodSource("edits")
     void isRefusedWithItsPath(String name, Consumer<ObjectNode> edit, String message) throws Exception {
-        ObjectNode root = valid.deepCopy();
-        edit.accept(root);
-        Path f = Files.writeString(dir.resolve("edited.json"), root.toString(), StandardCharsets.UTF_8);
+        Path f = edited(edit);
         assertThatThrownBy(() -> StudyFiles.read(f)).as(name).isInstanceOf(StudyFileException.class)
                 .hasMessageContaining(message).hasMessageContaining("edited.json");
     }
@@ -89,9 +93,7 @@ class HostileStudyFilesTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("edits")
     void isRefusedByTheCommandsWithExitTwo(String name, Consumer<ObjectNode> edit, String message) throws Exception {
-        ObjectNode root = valid.deepCopy();
-        edit.accept(root);
-        Path f = Files.writeString(dir.resolve("edited.json"), root.toString(), StandardCharsets.UTF_8);
+        Path f = edited(edit);
         org.holdpoint.Holdpoint.wire();
         var cl = org.holdpoint.cli.HoldpointCommand.create();
         java.io.StringWriter err = new java.io.StringWriter();

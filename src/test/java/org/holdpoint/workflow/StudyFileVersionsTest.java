@@ -22,6 +22,16 @@ class StudyFileVersionsTest {
         return Path.of(StudyFileVersionsTest.class.getResource(name).toURI());
     }
 
+    private static StudyResult reComputesToItsStoredVerdicts(ChangeStudy study, JsonNode stored) {
+        StudyResult again = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        List<String> storedStatus = new java.util.ArrayList<>();
+        stored.path("results").path("characteristics").forEach(c -> storedStatus.add(
+                c.path("verdict").path("status").asText()));
+        assertThat(again.characteristics().stream().map(r -> r.verdict().status().words()).toList())
+                .isEqualTo(storedStatus);
+        return again;
+    }
+
     @Test
     void schemaVersionOneIsReadAndReComputesToItsStoredVerdicts() throws Exception {
         Path file = resource("study-v1-demo.json");
@@ -33,12 +43,7 @@ class StudyFileVersionsTest {
         // the first value of the demo data file sample-data/boring-bar-insert.csv (row 2, column D)
         assertThat(study.data().characteristics().get(0).before().sample().value(0)).isEqualTo(25.0132);
         assertThat(study.data().characteristics().get(0).before().origin(0).cell()).isEqualTo("D2");
-        StudyResult again = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
-        List<String> storedStatus = new java.util.ArrayList<>();
-        stored.path("results").path("characteristics").forEach(c -> storedStatus.add(
-                c.path("verdict").path("status").asText()));
-        assertThat(again.characteristics().stream().map(r -> r.verdict().status().words()).toList())
-                .isEqualTo(storedStatus);
+        StudyResult again = reComputesToItsStoredVerdicts(study, stored);
         assertThat(again.changeVerified()).isEqualTo(stored.path("results").path("changeVerified").asBoolean());
     }
 
@@ -53,12 +58,7 @@ class StudyFileVersionsTest {
         assertThat(stored.path("schemaVersion").asInt()).isEqualTo(2);
         ChangeStudy study = StudyFiles.read(file);
         assertThat(study.data().characteristics()).hasSize(7);
-        StudyResult again = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
-        List<String> storedStatus = new java.util.ArrayList<>();
-        stored.path("results").path("characteristics").forEach(c -> storedStatus.add(
-                c.path("verdict").path("status").asText()));
-        assertThat(again.characteristics().stream().map(r -> r.verdict().status().words()).toList())
-                .isEqualTo(storedStatus);
+        StudyResult again = reComputesToItsStoredVerdicts(study, stored);
         VerifyResult v = new VerifyUseCase().verify(resource("signoff-v2-demo.xlsx"), null, Progress.NONE);
         assertThat(v.differences()).isEmpty();
         assertThat(v.status()).isEqualTo(VerifyResult.Status.INTACT);
