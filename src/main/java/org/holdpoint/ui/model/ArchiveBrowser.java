@@ -306,7 +306,7 @@ public final class ArchiveBrowser {
             return new Opened(shown.study().version(), s, shown.events(), r);
         }, o -> {
             opened = o;
-            openedResults.show(o.result());
+            openedResults.show(o.result(), o.study().data());
             bound.fireChanged(Property.OPENED);
             session.status("Opened archived version " + o.version().id() + " read-only.");
         });

@@ -63,6 +63,21 @@ public final class ResultsTable {
      * @param r the results, or null to clear
      */
     public void show(StudyResult r) {
+        show(r, null);
+    }
+
+    /**
+     * Shows new results with the values in each characteristic's unit at its measurement resolution plus
+     * two decimals (the same format as the text output and the workbook).
+     *
+     * @param r    the results, or null to clear
+     * @param data the data they were computed from, or null (then six significant digits)
+     */
+    public void show(StudyResult r, org.holdpoint.study.Dataset data) {
+        decimals.clear();
+        if (data != null) {
+            data.characteristics().forEach(c -> decimals.put(c.name(), Math.min(10, c.resolutionDecimals() + 2)));
+        }
         result = r;
         bound.fireChanged(Property.RESULT);
         if (r == null || r.characteristics().stream().noneMatch(c -> c.name().equals(selected))) {
@@ -145,6 +160,30 @@ public final class ResultsTable {
      * @param col the column
      * @return the value
      */
+    private final java.util.Map<String, Integer> decimals = new java.util.HashMap<>();
+
+    /** A value in a characteristic's unit, at its resolution plus two decimals when known. */
+    private String unit(String name, double v) {
+        Integer d = decimals.get(name);
+        return d == null ? Format.num(v) : Format.fixed(v, d);
+    }
+
+    /**
+     * A number cell as shown: in the characteristic's unit with its decimals, a ratio to four significant
+     * digits; the value itself (for sorting) is {@link #value}.
+     *
+     * @param row the row
+     * @param col a number column
+     * @return the text, or null when the cell holds no number
+     */
+    public String text(int row, ResultColumn col) {
+        Object v = value(row, col);
+        if (!(v instanceof Double d)) {
+            return null;
+        }
+        return col == ResultColumn.SD_RATIO ? Format.num(d, 4) : unit(row(row).name(), d);
+    }
+
     public Object value(int row, ResultColumn col) {
         CharacteristicResult r = row(row);
         EquivalenceResult eq = r.decidingTost();
@@ -154,8 +193,9 @@ public final class ResultsTable {
             case CONCLUSION -> VerdictLook.finding(r);
             case UNIT -> r.unit() == null ? "" : r.unit();
             case DIFFERENCE -> r.decidingTest() == null ? null : r.decidingTest().estimate();
-            case INTERVAL -> eq == null ? "" : "(" + Format.num(eq.ciLower()) + ", " + Format.num(eq.ciUpper()) + ")";
-            case MARGIN -> margin(r.margin());
+            case INTERVAL -> eq == null ? "" : "(" + unit(r.name(), eq.ciLower()) + ", " + unit(r.name(), eq.ciUpper())
+                    + ")";
+            case MARGIN -> margin(r.name(), r.margin());
             case SD_RATIO -> r.variance() == null ? null : Math.sqrt(r.variance().ratio());
         };
     }
@@ -209,10 +249,11 @@ public final class ResultsTable {
         bound.addListener(property, listener);
     }
 
-    private static String margin(Margin m) {
+    private String margin(String name, Margin m) {
         if (m == null) {
             return "";
         }
+        // as entered (shortest form): the column stays narrow and shows the numbers the user typed
         return "(" + (m.lower() == null ? "−∞" : Format.num(m.lower())) + ", "
                 + (m.upper() == null ? "+∞" : Format.num(m.upper())) + ")";
     }

@@ -277,7 +277,7 @@ public final class StudySession {
         }
         Dataset d = chosenData();
         start("Analysing", p -> service.analyze(d, settings, p), r -> {
-            results.show(r);
+            results.show(r, d);
             setDirty(true);
             status("Analysed: " + results.counts() + ".");
             step(Step.RESULTS);
@@ -442,7 +442,7 @@ public final class StudySession {
             holm = s.settings().holm();
             exclusions = s.settings().exclusions();
             signOff.load(s.signatures());
-            results.show((StudyResult) o[1]);
+            results.show((StudyResult) o[1], s.data());
             Path old = studyFile;
             studyFile = file;
             bound.fire(Property.STUDY_FILE, old, file);
@@ -589,7 +589,7 @@ public final class StudySession {
         criteriaFile = l.imported().criteriaFile();
         exclusions = List.of();
         showData(l.imported().data(), l.preview(), l.imported().criteria());
-        results.show(l.result());
+        results.show(l.result(), l.imported().data());
         if (l.analysisProblem() != null) {
             problem(l.analysisProblem());
             step(Step.CRITERIA);

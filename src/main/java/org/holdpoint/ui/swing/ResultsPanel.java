@@ -68,7 +68,8 @@ final class ResultsPanel extends JPanel {
         table.setRowHeight(Math.max(table.getRowHeight(), 28));
         table.setFillsViewportHeight(true);
         table.setDefaultRenderer(VerdictLook.class, new VerdictRenderer());
-        table.setDefaultRenderer(Double.class, new NumberRenderer());
+        table.setDefaultRenderer(Double.class, new NumberRenderer((r, c) -> results == null ? null
+                : results.text(r, ResultColumn.values()[c])));
         table.setDefaultRenderer(String.class, new DefaultTableCellRenderer() {
             private static final long serialVersionUID = 1L;
 
@@ -304,9 +305,19 @@ final class ResultsPanel extends JPanel {
     /** Numbers right-aligned, "undefined" for a missing value, a dash where nothing was computed. */
     static final class NumberRenderer extends DefaultTableCellRenderer {
         private static final long serialVersionUID = 1L;
+        private final transient java.util.function.BiFunction<Integer, Integer, String> texts;
         private boolean notComputed;
+        private String shown;
 
         NumberRenderer() {
+            this(null);
+        }
+
+        /**
+         * @param texts the shown text of a cell by model row and column (null: six significant digits)
+         */
+        NumberRenderer(java.util.function.BiFunction<Integer, Integer, String> texts) {
+            this.texts = texts;
             setHorizontalAlignment(RIGHT);
         }
 
@@ -315,6 +326,8 @@ final class ResultsPanel extends JPanel {
                 boolean focus, int row, int column) {
             Object look = t.getModel().getValueAt(t.convertRowIndexToModel(row), ResultColumn.VERDICT.ordinal());
             notComputed = look == org.holdpoint.ui.model.VerdictLook.NOT_ASSESSABLE;
+            shown = texts == null || value == null ? null : texts.apply(t.convertRowIndexToModel(row),
+                    t.convertColumnIndexToModel(column));
             java.awt.Component c = super.getTableCellRendererComponent(t, value, selected, focus, row, column);
             setToolTipText(notComputed ? "not computed: the characteristic is not assessable (see its reason)" : null);
             return c;
@@ -322,7 +335,7 @@ final class ResultsPanel extends JPanel {
 
         @Override
         protected void setValue(Object v) {
-            setText(v == null ? notComputed ? "\u2014" : "undefined" : Format.num((Double) v));
+            setText(v == null ? notComputed ? "\u2014" : "undefined" : shown != null ? shown : Format.num((Double) v));
         }
     }
 

@@ -51,6 +51,26 @@ class StudySessionTest {
         assertThat(s.criteriaFile().getFileName().toString()).isEqualTo("boring-bar-insert.settings.csv");
     }
 
+    /**
+     * Values in a characteristic's unit are shown at its measurement resolution plus two decimals: the demo's
+     * bore diameter is measured to 0.0001 mm (4 decimals), so its difference shows 6 (arithmetic on the demo
+     * file, no outside source needed).
+     */
+    @Test
+    void resultsShowValuesAtTheResolutionOfTheirData() {
+        ResultsTable r = s.results();
+        int row = -1;
+        for (int i = 0; i < r.rowCount(); i++) {
+            if (r.value(i, ResultColumn.CHARACTERISTIC).equals("Bore diameter")) {
+                row = i;
+            }
+        }
+        assertThat(row).isNotNegative();
+        assertThat(r.text(row, ResultColumn.DIFFERENCE)).matches("-?\\d+\\.\\d{6}");
+        assertThat((String) r.value(row, ResultColumn.INTERVAL)).matches("\\(-?\\d+\\.\\d{6}, -?\\d+\\.\\d{6}\\)");
+        assertThat(r.text(row, ResultColumn.SD_RATIO)).matches("\\d\\.\\d{1,3}");
+    }
+
     @Test
     void typingMarksTheStudyUnsaved() {
         s.change().set(ChangeForm.Field.TITLE, "edited");
