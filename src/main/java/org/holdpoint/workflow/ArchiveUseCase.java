@@ -46,11 +46,18 @@ public final class ArchiveUseCase {
     public StudyVersion add(Path studyFile, String actor, String reason) throws ArchiveException {
         ChangeStudy study = StudyFiles.read(studyFile);
         StudyResult result = new StudyAnalyzer().analyze(study.data(), study.settings(), Progress.NONE);
+        com.fasterxml.jackson.databind.JsonNode fileTree;
+        try {
+            fileTree = StudyFiles.tree(java.nio.file.Files.readString(studyFile));
+        } catch (java.io.IOException e) {
+            throw new StudyFileException("%s cannot be read (%s)", studyFile, e.getMessage());
+        }
         // the archive keeps the whole study, its sign-off entries included (an author may not add archive
         // signatures: on a shared archive only approvers sign); every output shows the record's hash
-        var tree = StudyFiles.toJson(study, result);
-        String json = new String(StudyFiles.canonical(tree), StandardCharsets.UTF_8);
-        lastRecordSha256 = StudyFiles.recordSha256(tree);
+        // the document as the study file holds it (its results and the version that wrote it), so the archived
+        // record has the hash the study file and its workbook show, whatever version archives it
+        String json = new String(StudyFiles.canonical(fileTree), StandardCharsets.UTF_8);
+        lastRecordSha256 = StudyFiles.recordSha256(fileTree);
         var change = study.change();
         if (change.partNumber().isBlank() || change.title().isBlank()) {
             throw new ArchiveException(ArchiveException.Reason.REJECTED, studyFile + ": the study has no "
@@ -184,7 +191,7 @@ public final class ArchiveUseCase {
         // the workbook shows the study's sign-off entries and the archive's signatures of this record
         List<org.holdpoint.study.Signature> sigs = new ArrayList<>(stored.signatures());
         StudyResult storedResult = new StudyAnalyzer().analyze(stored.data(), stored.settings(), Progress.NONE);
-        String recordSha = StudyFiles.recordSha256(StudyFiles.toJson(stored, storedResult));
+        String recordSha = StudyFiles.recordSha256(StudyFiles.tree(shown.study().json()));
         for (org.holdpoint.study.ArchivedSignature a : shown.study().version().signatures()) {
             sigs.add(entry(a, recordSha));
         }

@@ -62,7 +62,9 @@ public final class StudyFiles {
     private static final ObjectMapper READER = new ObjectMapper(com.fasterxml.jackson.core.JsonFactory.builder()
             .streamReadConstraints(com.fasterxml.jackson.core.StreamReadConstraints.builder()
                     .maxStringLength(Integer.MAX_VALUE).maxDocumentLength(-1L).build()).build())
-            .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS);
+            .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS)
+            // decimals keep the digits written (25.0100 stays 25.0100), so a re-written text is the same text
+            .configure(com.fasterxml.jackson.databind.cfg.JsonNodeFeature.STRIP_TRAILING_BIGDECIMAL_ZEROES, false);
 
     private StudyFiles() {
     }
@@ -118,17 +120,38 @@ public final class StudyFiles {
     }
 
     /**
-     * The canonical text: compact, keys in the order written, UTF-8.
+     * The canonical text: compact, keys in the order written, UTF-8, every number written as the plain
+     * text of its decimal (a double as the decimal of its shortest form: 1.0E-4 as 0.00010). A canonical
+     * text read back with decimals for floats and written again is the same text, so a study file's record
+     * can be re-derived from the file itself, whatever version of the program reads it.
      *
      * @param tree the study tree
      * @return the canonical bytes
      */
     public static byte[] canonical(JsonNode tree) {
         try {
-            return CANONICAL.writeValueAsBytes(tree);
+            return CANONICAL.writeValueAsBytes(decimals(tree));
         } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
             throw new IllegalStateException("JSON serialisation failed", e);
         }
+    }
+
+    /** A copy of the tree with every binary floating-point number as the decimal of its shortest form. */
+    private static JsonNode decimals(JsonNode n) {
+        if (n.isDouble() || n.isFloat()) {
+            return Double.isFinite(n.doubleValue()) ? F.numberNode(BigDecimal.valueOf(n.doubleValue())) : n;
+        }
+        if (n.isObject()) {
+            ObjectNode o = F.objectNode();
+            n.fields().forEachRemaining(e -> o.set(e.getKey(), decimals(e.getValue())));
+            return o;
+        }
+        if (n.isArray()) {
+            ArrayNode a = F.arrayNode(n.size());
+            n.forEach(x -> a.add(decimals(x)));
+            return a;
+        }
+        return n;
     }
 
     private static ArrayNode signatures(List<Signature> list) {

@@ -68,6 +68,34 @@ class ArchiveCommandTest {
                 .path("timestamp").asText()).matches("\\d{4}-\\d{2}-\\d{2}T\\d{2}:\\d{2}:\\d{2}Z");
     }
 
+    /**
+     * A study file written by another version of the program is archived as it is: the stored results and
+     * the version that wrote them stay, and the archive shows the record hash of that file, not of a
+     * re-computation by the version that archives it.
+     */
+    @Test
+    void aStudyFileFromAnotherVersionKeepsItsRecordHash(@TempDir Path dir) throws Exception {
+        String url = "jdbc:h2:file:" + dir.resolve("archive").toAbsolutePath() + "/db";
+        Path demo = dir.resolve("demo");
+        assertThat(AnalyzeCommandTest.run("demo", "--out", demo.toString()).code()).isZero();
+        Path study = dir.resolve("study.json");
+        AnalyzeCommandTest.Run saved = AnalyzeCommandTest.run("analyze", demo.resolve("boring-bar-insert.csv")
+                .toString(), "-q", "--save-study", study.toString(), "--change-id", "CR-79", "--title", "Insert",
+                "--part", "PH-2210");
+        assertThat(saved.code()).as(saved.err()).isZero();
+        String written = sha(saved.out(), "record SHA-256");
+        // as an earlier version would have written it: another version number and other stored words
+        String older = Files.readString(study).replace("\"version\" : \"" + org.holdpoint.workflow.Version.get()
+                + "\"", "\"version\" : \"0.0.9\"").replace("CHANGE NOT VERIFIED", "CHANGE NOT VERIFIED (0.0.9)");
+        assertThat(older).contains("0.0.9");
+        Files.writeString(study, older);
+        String olderRecord = org.holdpoint.workflow.StudyFiles.recordSha256(org.holdpoint.workflow.StudyFiles.tree(
+                older));
+        AnalyzeCommandTest.Run add = AnalyzeCommandTest.run("archive", "add", study.toString(), "--archive", url);
+        assertThat(add.code()).as(add.err()).isZero();
+        assertThat(sha(add.out(), "(record SHA-256")).isEqualTo(olderRecord).isNotEqualTo(written);
+    }
+
     @Test
     void aStudyIsArchivedFoundSignedCorrectedAndVerified(@TempDir Path dir) throws Exception {
         String url = "jdbc:h2:file:" + dir.resolve("archive").toAbsolutePath() + "/db";
