@@ -35,12 +35,28 @@ public final class ResultDetail {
      * @return the sections, in reading order
      */
     public static List<Section> of(CharacteristicResult r) {
+        return of(r, null);
+    }
+
+    /**
+     * The sections, with values in the characteristic's unit at a fixed number of decimals.
+     *
+     * @param r        the result
+     * @param decimals the decimals of values in its unit (its resolution plus two), or null for six
+     *                 significant digits
+     * @return the sections, in reading order
+     */
+    public static List<Section> of(CharacteristicResult r, Integer decimals) {
+        java.util.function.DoubleFunction<String> u = decimals == null ? Format::num
+                : v -> Format.fixed(v, decimals);
+        java.util.function.DoubleFunction<String> raw = decimals == null ? Format::num
+                : v -> Format.fixed(v, Math.max(0, decimals - 2));
         List<Section> s = new ArrayList<>();
         List<Line> verdict = new ArrayList<>();
         verdict.add(new Line("Conclusion", VerdictLook.conclusion(r)));
         r.verdict().reasons().forEach(x -> verdict.add(new Line("Because", x)));
         s.add(new Section("Verdict", verdict));
-        s.add(groups(r.before(), r.after(), r.unit()));
+        s.add(groups(r.before(), r.after(), r.unit(), u, raw));
         if (r.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
             s.add(new Section("Not assessable", List.of(new Line("", "No test was computed: the data of this "
                     + "characteristic cannot show a change (the reason is above). The other characteristics were "
@@ -50,10 +66,10 @@ public final class ResultDetail {
             }
             return s;
         }
-        s.add(difference(r.decidingTest()));
+        s.add(difference(r.decidingTest(), u));
         EquivalenceResult eq = r.decidingTost();
         if (eq != null) {
-            s.add(equivalence(eq));
+            s.add(equivalence(eq, u));
         }
         s.add(spread(r));
         if (!r.notes().isEmpty()) {
@@ -62,7 +78,8 @@ public final class ResultDetail {
         return s;
     }
 
-    private static Section groups(Descriptives b, Descriptives a, String unit) {
+    private static Section groups(Descriptives b, Descriptives a, String unit,
+            java.util.function.DoubleFunction<String> f, java.util.function.DoubleFunction<String> raw) {
         String u = unit == null || unit.isEmpty() ? "" : " (" + unit + ")";
         if (b == null || a == null) {
             return new Section("Before and after" + u, List.of(new Line("n", (b == null ? 0 : b.n()) + "  →  "
@@ -70,28 +87,28 @@ public final class ResultDetail {
         }
         return new Section("Before and after" + u, List.of(
                 new Line("n", b.n() + "  →  " + a.n()),
-                new Line("Mean", Format.num(b.mean()) + "  →  " + Format.num(a.mean())),
-                new Line("Standard deviation", Format.num(b.sd()) + "  →  " + Format.num(a.sd())),
-                new Line("Median (type 7)", Format.num(b.median()) + "  →  " + Format.num(a.median())),
-                new Line("Min … max", Format.num(b.min()) + " … " + Format.num(b.max()) + "  →  "
-                        + Format.num(a.min()) + " … " + Format.num(a.max()))));
+                new Line("Mean", f.apply(b.mean()) + "  →  " + f.apply(a.mean())),
+                new Line("Standard deviation", f.apply(b.sd()) + "  →  " + f.apply(a.sd())),
+                new Line("Median (type 7)", f.apply(b.median()) + "  →  " + f.apply(a.median())),
+                new Line("Min … max", raw.apply(b.min()) + " … " + raw.apply(b.max()) + "  →  "
+                        + raw.apply(a.min()) + " … " + raw.apply(a.max()))));
     }
 
-    private static Section difference(TTestResult t) {
+    private static Section difference(TTestResult t, java.util.function.DoubleFunction<String> f) {
         return new Section("Difference after − before (" + t.method().description() + ")", List.of(
-                new Line("Estimate", Format.num(t.estimate())),
-                new Line(Format.percent(t.confidenceLevel()) + " interval", "(" + Format.num(t.ciLower()) + ", "
-                        + Format.num(t.ciUpper()) + ")"),
+                new Line("Estimate", f.apply(t.estimate())),
+                new Line(Format.percent(t.confidenceLevel()) + " interval", "(" + f.apply(t.ciLower()) + ", "
+                        + f.apply(t.ciUpper()) + ")"),
                 new Line("t, df, two-sided p", Format.num(t.t()) + ", " + Format.num(t.df()) + ", " + Format.p(t.p())),
                 new Line("", "A non-significant difference is not evidence of sameness; the equivalence test "
                         + "decides.")));
     }
 
-    private static Section equivalence(EquivalenceResult eq) {
+    private static Section equivalence(EquivalenceResult eq, java.util.function.DoubleFunction<String> f) {
         List<Line> l = new ArrayList<>();
         l.add(new Line("Margin", Format.margin(eq)));
-        l.add(new Line(Format.percent(eq.level()) + " interval", "(" + Format.num(eq.ciLower()) + ", "
-                + Format.num(eq.ciUpper()) + ")"));
+        l.add(new Line(Format.percent(eq.level()) + " interval", "(" + f.apply(eq.ciLower()) + ", "
+                + f.apply(eq.ciUpper()) + ")"));
         if (eq.pLower() != null) {
             l.add(new Line("p (lower test)", Format.p(eq.pLower())));
         }

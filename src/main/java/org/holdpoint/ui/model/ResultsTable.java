@@ -162,6 +162,14 @@ public final class ResultsTable {
      */
     private final java.util.Map<String, Integer> decimals = new java.util.HashMap<>();
 
+    /**
+     * @param name a characteristic
+     * @return the decimals of values in its unit (its resolution plus two), or null when its data are unknown
+     */
+    public Integer decimals(String name) {
+        return decimals.get(name);
+    }
+
     /** A value in a characteristic's unit, at its resolution plus two decimals when known. */
     private String unit(String name, double v) {
         Integer d = decimals.get(name);

@@ -217,7 +217,7 @@ final class ResultsPanel extends JPanel {
             chartNote.setText(" ");
             return;
         }
-        detail.show(r.name(), ResultDetail.of(r));
+        detail.show(r.name(), ResultDetail.of(r, results.decimals(r.name())));
         drawChart(session.characteristic(r.name()), r);
     }
 
