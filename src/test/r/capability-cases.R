@@ -1,5 +1,5 @@
 # Generates src/test/resources/org/holdpoint/stats/capability/capability-cases.txt (documentation; not run by the suite).
-# R has no capability function in base; the formulas of ALGORITHMS.md §8 are evaluated here with base R
+# R has no capability function in base; the formulas of docs/methods.md §8 are evaluated here with base R
 # (mean, sd, qchisq, qnorm, pnorm, gamma, integrate) as an independent implementation.
 f <- function(v) paste(sprintf("%.17g", v), collapse = ",")
 g <- function(v) sprintf("%.17g", v)

@@ -1,6 +1,6 @@
 # Generates src/test/resources/org/holdpoint/stats/independence/independence-cases.txt (documentation; not run).
 # r1 from stats::acf(x, lag.max = 1, plot = FALSE)$acf[2] (same definition as NIST StRD r(1)); the runs test about
-# the median evaluated with base R (median, rle, choose, pnorm) from the formulas of ALGORITHMS.md §9.
+# the median evaluated with base R (median, rle, choose, pnorm) from the formulas of docs/methods.md §9.
 f <- function(v) paste(sprintf("%.17g", v), collapse = ",")
 g <- function(v) sprintf("%.17g", v)
 runs_exact <- function(n1, n2) {

@@ -14,8 +14,8 @@ import java.util.Arrays;
 import java.util.Set;
 
 /**
- * The package dependency rules of HELPER-RULES.md ("Architecture") and STYLE.md ("Proposed package
- * layout", "Dependency directions"), one rule per direction, checked on the main classes. Rules on
+ * The package dependency rules (DEVELOPERS.md, "Packages": stats pure, study the model, adapters apart,
+ * workflow the use cases, thin shells), one rule per direction, checked on the main classes. Rules on
  * packages that do not exist yet allow an empty "should" so they bite as soon as the package
  * appears.
  */

@@ -21,7 +21,7 @@ import java.util.SplittableRandom;
 abstract class PairwiseSelection {
     /**
      * Rounds stop and a quickselect finishes once at most LIVE_FACTOR·(m + n) values are live; the sampled rounds
-     * are cheap, so this is lower than the 8(m + n) of ALGORITHMS.md §5 (measured faster at 10⁵ × 10⁵).
+     * are cheap, so this is lower than the 8(m + n) of docs/methods.md §5 (measured faster at 10⁵ × 10⁵).
      */
     private static final long LIVE_FACTOR = 1;
     /** Size of the pivot sample per round. */

@@ -26,8 +26,8 @@ import org.holdpoint.study.SkippedCell;
 import org.holdpoint.study.StudyResult;
 
 /**
- * The machine-readable result of {@code holdpoint analyze --json}: the contract of DESIGN.md
- * ("Machine-readable output"). A block that does not apply is absent; an undefined value is null,
+ * The machine-readable result of {@code holdpoint analyze --json}: the contract described in the README
+ * ("Outputs"). A block that does not apply is absent; an undefined value is null,
  * never 0 or NaN; numbers carry full double precision (shortest round-trip text).
  */
 public final class ResultJson {

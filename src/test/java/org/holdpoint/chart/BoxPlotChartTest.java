@@ -45,7 +45,7 @@ class BoxPlotChartTest {
             assertThat(boxes.getMinRegularValue(0, g).doubleValue()).isEqualTo(s.lowerWhisker());
             assertThat(boxes.getMaxRegularValue(0, g).doubleValue()).isEqualTo(s.upperWhisker());
             assertThat(boxes.getMeanValue(0, g).doubleValue()).isEqualTo(s.mean());
-            // ALGORITHMS §12: min/max outlier at the data extremes, so no value is drawn as a far-out marker
+            // docs/methods.md §12: min/max outlier at the data extremes, so no value is drawn as a far-out marker
             assertThat(boxes.getMinOutlier(0, g).doubleValue()).isEqualTo(s.min());
             assertThat(boxes.getMaxOutlier(0, g).doubleValue()).isEqualTo(s.max());
             assertThat(doubles(boxes.getOutliers(0, g))).containsExactly(boxedList(s.outlierValues()));

@@ -8,8 +8,8 @@ import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Inputs the numerics core must refuse with a {@link StatsException} whose message names the
- * problem and the offending value (foundation issue, "Bad input"; STYLE.md: tests assert on message
- * fragments).
+ * problem and the offending value (the tests assert on message fragments, so wording can improve
+ * without breaking them).
  */
 class BadInputTest {
     private static final Sample TWO = Sample.of(1.0, 2.0);

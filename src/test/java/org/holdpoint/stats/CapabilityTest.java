@@ -48,24 +48,24 @@ class CapabilityTest {
             close(r.cp(), c.num("cp"));
             close(r.cpk(), c.num("cpk"));
             close(r.cpLower(), c.num("cpLower"));
-            // Cpk bound 1/(9N) + Cpk²/(2d): an adaptation of Bissell's formula (ALGORITHMS.md §8), not published
+            // Cpk bound 1/(9N) + Cpk²/(2d): an adaptation of Bissell's formula (docs/methods.md §8), not published
             close(r.cpkLower(), c.num("cpkLower"));
         }
     }
 
     @Test
     void bissellQualityDigestNumber() {
-        // Quality Digest, May 2000, "Last Word" (SOURCES.md D2, S): Cpk = 1.15 from n = 45 -> 95 % interval
+        // Quality Digest, May 2000, "Last Word" (docs/sources.md §D2, S): Cpk = 1.15 from n = 45 -> 95 % interval
         // 0.89 to 1.41; its lower end is the one-sided bound at α = 0.025
         assertThat(Capability.bissellLowerBound(1.15, 45, 44, 0.025)).isCloseTo(0.89, within(0.005));
-        // recomputed (SOURCES.md D2, C): 0.8907 two-sided, 0.9324 one-sided 95 %
+        // recomputed (docs/sources.md §D2, C): 0.8907 two-sided, 0.9324 one-sided 95 %
         assertThat(Capability.bissellLowerBound(1.15, 45, 44, 0.025)).isCloseTo(0.8907, within(5e-5));
         assertThat(Capability.bissellLowerBound(1.15, 45, 44, 0.05)).isCloseTo(0.9324, within(5e-5));
     }
 
     @Test
     void d2AgainstThePublishedTableAndRIntegration() {
-        // Montgomery, Introduction to Statistical Quality Control, d2 table (values as listed in ALGORITHMS.md §8)
+        // Montgomery, Introduction to Statistical Quality Control, d2 table (values as listed in docs/methods.md §8)
         assertThat(Capability.d2(2)).isCloseTo(1.128, within(5e-4));
         assertThat(Capability.d2(3)).isCloseTo(1.693, within(5e-4));
         assertThat(Capability.d2(4)).isCloseTo(2.059, within(5e-4));
@@ -87,7 +87,7 @@ class CapabilityTest {
         // c4(2) = √(2/π), c4(3) = √π/2 (Γ(3/2) = √π/2)
         assertThat(Capability.c4(2)).isCloseTo(Math.sqrt(2 / Math.PI), within(1e-15));
         assertThat(Capability.c4(3)).isCloseTo(Math.sqrt(Math.PI) / 2, within(1e-15));
-        // large k: c4 ≈ 1 − 1/(4k) − 7/(32k²), error O(k⁻³) (ALGORITHMS.md §8)
+        // large k: c4 ≈ 1 − 1/(4k) − 7/(32k²), error O(k⁻³) (docs/methods.md §8)
         long k = 10_000;
         assertThat(Capability.c4(k)).isCloseTo(1 - 1.0 / (4 * k) - 7.0 / (32.0 * k * k), within(1e-11));
     }
@@ -103,7 +103,7 @@ class CapabilityTest {
         assertThat(upperOnly.ppLower()).isNull();
         assertThat(upperOnly.ppkLower()).isNotNull();
         assertThat(upperOnly.cp()).isNull();
-        // ppm above = 10⁶Φ(−3Ppu) (ALGORITHMS.md §8 identity)
+        // ppm above = 10⁶Φ(−3Ppu) (docs/methods.md §8 identity)
         assertThat(upperOnly.ppmAbove()).isCloseTo(1e6 * Normal.cdf(-3 * upperOnly.ppu()), within(1e-9));
         CapabilityResult lowerOnly = Capability.withDefaults().withLimits(9.0, null).compute(s);
         assertThat(lowerOnly.ppk()).isEqualTo(lowerOnly.ppl());

@@ -43,7 +43,7 @@ class EquivalencePlanPropertyTest {
     }
 
     /**
-     * The z-first form (ALGORITHMS §11): power = ∫_{−dL}^{−dU} φ(z)·F_χ²ν(ν·[min(z + dL, −z − dU)/tc]²) dz,
+     * The z-first form (docs/methods.md §11): power = ∫_{−dL}^{−dU} φ(z)·F_χ²ν(ν·[min(z + dL, −z − dU)/tc]²) dz,
      * split at z = −(dL + dU)/2 and cut to |z| ≤ 12, integrated here by adaptive Simpson (1e-12 per half) with Commons Math's regularized gamma
      * and t quantile, independently of the chi-form code under test.
      */
@@ -193,7 +193,7 @@ class EquivalencePlanPropertyTest {
     }
 
     /**
-     * The trap of ALGORITHMS §11: at small n the power falls before it rises (here from n = 2 to about 9),
+     * The trap of docs/methods.md §11: at small n the power falls before it rises (here from n = 2 to about 9),
      * so only an upward scan is safe. The search must return the brute-force minimum over every n.
      */
     @Test

@@ -19,7 +19,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  * {@code pf(x, df1, df2)}, {@code qnorm(p)}, {@code qt(p, df)}, {@code qf(p, df1, df2)},
  * {@code qchisq(p, df)}) and against the same rows at 40 digits with mpmath 1.2.1 (file
  * {@code r/mpmath-distributions.csv}, written by {@code r/make-mpmath-values.py}). Tolerances
- * (ALGORITHMS.md §2 and §12): tails 1e-12 relative, normal quantile 1e-14, t/F/χ² quantiles 1e-13.
+ * (docs/methods.md §2 and §12): tails 1e-12 relative, normal quantile 1e-14, t/F/χ² quantiles 1e-13.
  *
  * <p>R's {@code qf} (through {@code qbeta}) misses 1e-13 on 15 rows with a small numerator df or a
  * far tail (e.g. {@code qf(1e-6, 1, 90)} is 5e-4 relative off: {@code pf} of it gives 9.9974e-7),

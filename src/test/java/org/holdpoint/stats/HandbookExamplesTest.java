@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Worked examples of the NIST/SEMATECH e-Handbook of Statistical Methods
  * (https://www.itl.nist.gov/div898/handbook/, public domain); the data files under {@code handbook/}
- * are the copies described in reference/SOURCES.md §B, each headed by its section and published
+ * are the copies described in docs/sources.md §B, each headed by its section and published
  * results. Published figures are asserted to one unit of their last printed digit: the pages
  * truncate some figures (F = 1.123037 for 1.1230375, 611.1559 for 611.155975, 1.9855 for 1.985595)
  * and round others, so half a unit would be too tight. The same quantities are then asserted to
@@ -84,7 +84,7 @@ class HandbookExamplesTest {
     }
 
     /**
-     * Welch on the same AUTO83B data. The handbook prints only the pooled test; SOURCES.md §B1 gives
+     * Welch on the same AUTO83B data. The handbook prints only the pooled test; docs/sources.md §B1 gives
      * Welch t = -12.946273, df = 136.874977 as computed there (C), and Boost.Math's example
      * students_t_two_samples.cpp prints -12.946 and 136.87 for the same summaries (S). R 4.2.2
      * t.test(us, jp) gives t = -12.946273274932006, df = 136.87497667258327, p = 1.570854784295466e-25.
@@ -101,7 +101,7 @@ class HandbookExamplesTest {
         assertRel("Welch t (R)", welch.t(), -12.946273274932006, 1e-10);
         assertRel("Welch df (R)", welch.df(), 136.87497667258327, 1e-10);
         assertRel("Welch p (R)", welch.p(), 1.570854784295466e-25, 1e-8);
-        // SOURCES.md §B1 (C): s1²/s2² = 1.103051; R var(us)/var(jp) = 1.1030514971498098
+        // docs/sources.md §B1 (C): s1²/s2² = 1.103051; R var(us)/var(jp) = 1.1030514971498098
         VarianceRatioResult f = SpreadTests.fTest(Descriptives.of(sample(g.get("JP"))).summary(),
                 Descriptives.of(sample(g.get("US"))).summary(), 0.05);
         assertRel("variance ratio (R)", f.ratio(), 1.1030514971498098, 1e-10);
@@ -143,7 +143,7 @@ class HandbookExamplesTest {
 
     /**
      * e-Handbook §1.3.5.10, Levene's test with group medians (Brown–Forsythe) on GEAR, 10 batches of
-     * 10 diameters. Published W = 1.705910; SOURCES.md §B2: the handbook figure differs from double
+     * 10 diameters. Published W = 1.705910; docs/sources.md §B2: the handbook figure differs from double
      * precision in the 6th digit, so it is asserted to a relative 1e-5. R 4.2.2
      * car::leveneTest(diameter, factor(batch), center = median) gives F = 1.7059176930008908,
      * p = 0.099082975552205438 (scipy's own test asserts 1.7059176930008939, p 0.0990829755522).
@@ -167,7 +167,7 @@ class HandbookExamplesTest {
 
     /**
      * e-Handbook §7.3.1 (do two processes have the same mean?), assembly time, old process n = 11,
-     * new process n = 9. Caveat (SOURCES.md §B7): the page itself was not read; the data and figures
+     * new process n = 9. Caveat (docs/sources.md §B7): the page itself was not read; the data and figures
      * come from two third-party transcriptions and recomputation (treat as S). Mapping: before = old,
      * after = new, the natural one for a process change, so our after − before = new − old is the
      * NEGATIVE of the handbook's old − new: we assert t = −2.2694. The published df "≈ 15.5" is
@@ -195,6 +195,6 @@ class HandbookExamplesTest {
         assertRel("t (R)", w.t(), -2.2693731333619502, 1e-10);
         assertRel("df (R)", w.df(), 15.532514353547898, 1e-10);
         assertRel("p (R)", w.p(), 0.037879476138908998, 1e-8);
-        // the handbook 7.3.2 F-test numbers for these data are unresolved (SOURCES.md §B7): not asserted
+        // the handbook 7.3.2 F-test numbers for these data are unresolved (docs/sources.md §B7): not asserted
     }
 }

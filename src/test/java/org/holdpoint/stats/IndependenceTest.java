@@ -14,7 +14,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 /** Lag-1 autocorrelation against the NIST StRD certified r(1) and R 4.2.2; the runs test against base-R values. */
 class IndependenceTest {
 
-    /** NIST StRD univariate summary statistics, certified r(1) from the file headers (SOURCES.md A, P). */
+    /** NIST StRD univariate summary statistics, certified r(1) from the file headers (docs/sources.md §A, P). */
     @ParameterizedTest(name = "{0}")
     @CsvSource({
         "PiDigits, -0.00355099287237972, 14",

@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 /**
  * Published two-sample TOST examples through the summary-statistics door, from
  * {@code literature/tost-two-sample-examples.txt} (transcribed in the TOSTER package's validation
- * document, which quotes each paper; the papers were not read: confidence S, see SOURCES.md §C1).
+ * document, which quotes each paper; the papers were not read: confidence S, see docs/sources.md §C1).
  * Published figures are asserted to half a unit of their last printed digit unless a note says why
  * not. α = 0.05 for each one-sided test (90% interval).
  *
@@ -25,7 +25,7 @@ class LiteratureTostTest {
      * 1.5679/0.4285/64, experimental 1.6764/0.4748/70, bounds ±0.3136, pooled. Mapping: after =
      * experimental, before = control; then the published t1 = 5.383 is our tL and t2 = −2.616 our tU
      * (the file's recomputation with diff = control − experimental has the signs swapped).
-     * Published t1 = 5.383 lies 1.2 units of its last digit from the recomputed 5.3842 (SOURCES.md §C1
+     * Published t1 = 5.383 lies 1.2 units of its last digit from the recomputed 5.3842 (docs/sources.md §C1
      * gives the same 5.3842), most likely rounding in the paper's inputs, so it is asserted to 0.002.
      */
     @Test
@@ -35,7 +35,7 @@ class LiteratureTostTest {
         EquivalenceResult r = POOLED.withMargin(Margin.symmetric(0.3136)).test(control, experimental);
         assertThat(r.df()).isEqualTo(132.0);
         assertThat(r.tLower()).isCloseTo(5.383, offset(0.002));
-        assertThat(r.tLower()).isCloseTo(5.3842, offset(5e-5)); // SOURCES.md §C1 recomputation (C)
+        assertThat(r.tLower()).isCloseTo(5.3842, offset(5e-5)); // docs/sources.md §C1 recomputation (C)
         assertThat(r.tUpper()).isCloseTo(-2.616, offset(5e-4));
         assertThat(r.conclusion()).isEqualTo(Conclusion.EQUIVALENT);
     }
@@ -44,9 +44,9 @@ class LiteratureTostTest {
      * Meyners (2012), Food Qual. Pref. 26:231–245, p. 237 (data of Bi 2005): 7.1/var 2.0/100 vs
      * 6.9/var 2.2/100, bounds ±0.5. Mapping: after = group 1 (7.1), before = group 2 (6.9), so d =
      * 0.2 as published. Published: t = 0.976 (the ordinary t of the difference), 90% CI [−0.139;
-     * 0.539], p1 = 0.0717 and p2 = 0.0003. Those p-values are normal approximations (SOURCES.md §C1):
+     * 0.539], p1 = 0.0717 and p2 = 0.0003. Those p-values are normal approximations (docs/sources.md §C1):
      * p1 belongs to the upper margin (Φ(tU)) and p2 to the lower one (Φ(−tL)); they are checked with
-     * {@link Normal#cdf}, and the t-based pU = 0.0724 (198 df, SOURCES.md §C1, C) is what the project
+     * {@link Normal#cdf}, and the t-based pU = 0.0724 (198 df, docs/sources.md §C1, C) is what the project
      * reports. Pooled and Welch coincide for equal n except for df (198 vs 197.6); pooled is used.
      */
     @Test

@@ -68,7 +68,7 @@ class NormalityTest {
         ShapiroWilkResult w11 = ShapiroWilk.test(Sample.of(148, 154, 158, 160, 161, 162, 166, 170, 182, 195, 236));
         assertThat(w11.w()).isCloseTo(0.7888, within(5e-5));
         assertThat(w11.p()).isCloseTo(0.0067, within(5e-5));
-        // scipy test suite case "extracted from original paper": W = 0.83467, p = 0.000914 (S); SOURCES.md D3
+        // scipy test suite case "extracted from original paper": W = 0.83467, p = 0.000914 (S); docs/sources.md §D3
         // recomputes p = 0.000913 (AS R94 in double), so the p check allows the last printed digit
         ShapiroWilkResult w25 = ShapiroWilk.test(Sample.of(0.139, 0.157, 0.175, 0.256, 0.344, 0.413, 0.503, 0.577,
                 0.614, 0.655, 0.954, 1.392, 1.557, 1.648, 1.690, 1.994, 2.174, 2.206, 3.245, 3.510, 3.571, 4.354, 4.980,

@@ -32,7 +32,7 @@ class OutliersTest {
     @Test
     void grubbsTwoSidedAndMinimum() {
         GrubbsResult two = Grubbs.withDefaults().test(URANIUM);
-        // SOURCES.md B4 (C) and R 4.2.2 qt(1-0.05/(2*n), n-2) in the same formula: 2.1266450871954636
+        // docs/sources.md §B4 (C) and R 4.2.2 qt(1-0.05/(2*n), n-2) in the same formula: 2.1266450871954636
         assertThat(two.critical()).isCloseTo(2.1266450871954636, within(1e-12));
         assertThat(two.p()).isCloseTo(3.0026386820713584e-07, within(1e-8 * 3e-7));
         assertThat(two.outlier()).isTrue();
@@ -57,7 +57,7 @@ class OutliersTest {
 
     @Test
     void rosnerHandbookExample() {
-        // e-Handbook §1.3.5.17.3 (SOURCES.md B5): R_i and λ_i printed truncated to 3 decimals, 3 outliers
+        // e-Handbook §1.3.5.17.3 (docs/sources.md §B5): R_i and λ_i printed truncated to 3 decimals, 3 outliers
         double[] r = {3.118, 2.942, 3.179, 2.810, 2.815, 2.848, 2.279, 2.310, 2.101, 2.067};
         double[] lambda = {3.158, 3.151, 3.143, 3.136, 3.128, 3.120, 3.111, 3.103, 3.094, 3.085};
         EsdResult res = GeneralizedEsd.withDefaults().withMaxOutliers(10).test(ROSNER);
@@ -67,7 +67,7 @@ class OutliersTest {
             assertThat(res.steps().get(i).lambda()).isCloseTo(lambda[i], within(1.5e-3));
         }
         assertThat(res.count()).isEqualTo(3);
-        // removal order 6.01, 5.42, 5.34 (SOURCES.md B5, recomputed); the file is sorted, so positions 53, 52, 51
+        // removal order 6.01, 5.42, 5.34 (docs/sources.md §B5, recomputed); the file is sorted, so positions 53, 52, 51
         assertThat(res.outlierIndices()).containsExactly(53, 52, 51);
         assertThat(res.steps().subList(0, 3)).extracting(EsdResult.Step::value).containsExactly(6.01, 5.42, 5.34);
     }

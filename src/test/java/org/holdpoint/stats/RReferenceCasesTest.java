@@ -185,13 +185,13 @@ class RReferenceCasesTest {
         assertNear(name + " (1-2a) upper", res.ciUpper(), number(r, "ci_upper"), REL, res.se());
         assertThat(res.level()).isCloseTo(1 - 2 * alpha, org.assertj.core.data.Offset.offset(1e-15));
         assertThat(res.alpha()).isEqualTo(alpha);
-        // the conclusion R's own numbers imply by the tail rule (ALGORITHMS.md §3)
+        // the conclusion R's own numbers imply by the tail rule (docs/methods.md §3)
         assertThat(res.conclusion()).as(name + " conclusion").isEqualTo(tailRule(lower, upper,
                 number(r, "p_lower"), number(r, "p_upper"), number(r, "t_lower"), number(r, "t_upper"),
                 res.df(), alpha));
     }
 
-    /** The tail rule of ALGORITHMS.md §3 from given p and t values. */
+    /** The tail rule of docs/methods.md §3 from given p and t values. */
     static Conclusion tailRule(Double lower, Double upper, Double pL, Double pU, Double tL, Double tU, double df,
             double alpha) {
         boolean lowRej = lower == null || pL < alpha;
@@ -210,7 +210,7 @@ class RReferenceCasesTest {
         };
     }
 
-    /** The interval rule of ALGORITHMS.md §3: strict inequalities between the (1 − 2α) bounds and the margin. */
+    /** The interval rule of docs/methods.md §3: strict inequalities between the (1 − 2α) bounds and the margin. */
     static Conclusion intervalRule(Double lower, Double upper, double lo, double hi) {
         return switch (new Margin(lower, upper).claim()) {
             case EQUIVALENCE -> lower < lo && hi < upper ? Conclusion.EQUIVALENT
@@ -272,7 +272,7 @@ class RReferenceCasesTest {
     void fTestMatchesR(String name, Map<String, String> r) {
         Case c = caseOf(r.get("case"));
         if (Double.isInfinite(number(r, "ratio"))) {
-            // a flat before group: R prints ratio Inf; the project refuses (ALGORITHMS.md §4)
+            // a flat before group: R prints ratio Inf; the project refuses (docs/methods.md §4)
             org.assertj.core.api.Assertions.assertThatThrownBy(() -> SpreadTests.fTest(
                     Descriptives.of(c.beforeSample()).summary(), Descriptives.of(c.afterSample()).summary(), 0.05))
                     .isInstanceOf(StatsException.class).hasMessageContaining("before group has zero spread");
@@ -295,7 +295,7 @@ class RReferenceCasesTest {
 
     /**
      * R: car::leveneTest(value ~ group, center = median) — see r/r-levene.csv. With 2 + 2 values the
-     * within-group sum of squares of |x − median| is zero, so F is undefined (ALGORITHMS.md §4); R
+     * within-group sum of squares of |x − median| is zero, so F is undefined (docs/methods.md §4); R
      * prints rounding noise there (F ≈ 3.5e29), the project reports "not defined" (null).
      */
     @ParameterizedTest(name = "{0}")

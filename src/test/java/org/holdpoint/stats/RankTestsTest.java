@@ -78,7 +78,7 @@ class RankTestsTest {
     @Test
     void unreachableExactLevelIsReportedAndBlocksTheClaim() {
         // 4 after and 3 before values: P(U ≤ 0) = 1/C(7,3) = 1/35 ≥ 0.025, so q is raised from 0 to 1 and the
-        // interval [min D, max D] has level 1 − 2/35 (ALGORITHMS.md §5)
+        // interval [min D, max D] has level 1 − 2/35 (docs/methods.md §5)
         RankSumResult r = RankSumTest.withDefaults().withMargin(Margin.symmetric(10))
                 .test(Sample.of(2.6, 1.4, 3.3), Sample.of(1.1, 2.3, 0.7, 1.9));
         assertThat(r.ci().levelReached()).isFalse();

@@ -74,7 +74,7 @@ class StrdUnivariateTest {
     /**
      * Doubles-only door ({@link Sample#of}): the decimals are rounded to binary64 before any
      * arithmetic, so on NumAcc3/4 (10⁶ and 10⁷ plus one decimal) the input itself limits the sd to
-     * LRE ≈ 9.5 and 8.3 (ALGORITHMS.md §1, table "two-pass on doubles", rounded there). Exact
+     * LRE ≈ 9.5 and 8.3 (docs/methods.md §1, table "two-pass on doubles", rounded there). Exact
      * rational arithmetic on the same binary64 inputs (Python 3.11 {@code fractions.Fraction}, run
      * once here, not by the suite) gives sd LRE 9.4569 (NumAcc3), 8.2527 (NumAcc4), 13.12 (Mavro),
      * 13.84 (Michelso): that is the ceiling, and the floors below sit 0.01 under it. Elsewhere the

@@ -8,7 +8,7 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 /**
- * The two routes to the TOST conclusion (ALGORITHMS.md §3) agree: the tail rule the code decides by,
+ * The two routes to the TOST conclusion (docs/methods.md §3) agree: the tail rule the code decides by,
  * and the interval rule applied to the reported (1 − 2α) interval. Seeded draws (SplittableRandom,
  * fixed seed) over the summary door, two-sided and one-sided margins, α in (0.01, 0.25), and margins
  * placed near the interval bounds on purpose. The R-based cases in {@link RReferenceCasesTest} check

@@ -9,7 +9,7 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 /**
- * "Two doors, one answer" (STYLE.md §3): the raw-sample and summary-statistic entry points of
+ * "Two doors, one answer": the raw-sample and summary-statistic entry points of
  * {@link TTest} and {@link EquivalenceTest} give the same result within 1e-13 relative (p within
  * 1e-12, see {@link #nearP}), on seeded random samples (SplittableRandom, fixed seed).
  *

@@ -8,7 +8,7 @@ import com.tngtech.archunit.core.importer.ImportOption;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
-/** The window's dependency rules (STYLE.md §10 and the package table): a thin shell over workflow. */
+/** The window's dependency rules: a thin shell over workflow (see ArchitectureTest for the package rules). */
 class UiArchitectureTest {
     private static JavaClasses classes;
 

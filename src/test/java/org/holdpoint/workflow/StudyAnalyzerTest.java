@@ -26,7 +26,7 @@ import org.junit.jupiter.api.Test;
 /**
  * The analysis use case end to end on the NIST/SEMATECH e-Handbook §7.3.1 device assembly-time data
  * (old process = before, n = 11; new process = after, n = 9). Published (as quoted, see the shared
- * SOURCES.md B7): Welch t = 2.2694 for old − new, Welch–Satterthwaite df ≈ 15.5; recomputed there:
+ * docs/sources.md §B7): Welch t = 2.2694 for old − new, Welch–Satterthwaite df ≈ 15.5; recomputed there:
  * t = 2.269373, df = 15.532514, t(0.95, 15.53) = 1.749112. Our difference is after − before, so t is
  * −2.2694 and the difference −3.868687 (32.222222 − 36.090909).
  */
