@@ -82,7 +82,18 @@ public final class SignoffWorkbookReader {
                 throw new ReportException("%s is not a Holdpoint sign-off workbook: the record sheet '%s' does not "
                         + "start with the record format marker", file, a.sheet());
             }
-            int chunks = parseInt(values[3]);
+            int chunks;
+            try {
+                chunks = Integer.parseInt(values[3].trim());
+            } catch (NumberFormatException e) {
+                chunks = -1;
+            }
+            if (chunks < 1 || chunks > 1_000_000) {
+                throw new ReportException("%s: the record sheet '%s' holds a damaged chunk count \"%s\" (cell %s); the "
+                        + "record cannot be read, so the workbook cannot be verified. Use the workbook as it was "
+                        + "written", file, a.sheet(), values[3], new CellReference(a.row() + 4, a.column() + 1)
+                                .formatAsString());
+            }
             StringBuilder json = new StringBuilder();
             for (int i = 0; i < chunks; i++) {
                 json.append(cells.getOrDefault(key(a.row() + RecordSheet.FIRST_CHUNK + i, a.column() + 1), ""));

@@ -63,7 +63,8 @@ public final class ArchiveAccess {
      *
      * @param env      the environment (for XDG_CONFIG_HOME)
      * @param userHome the user's home folder
-     * @return the URL, or null
+     * @return the URL, or null when there is no settings file or it names no archive
+     * @throws StudyFileException when the settings file exists but cannot be read
      */
     static String configuredUrl(Map<String, String> env, Path userHome) {
         String xdg = env.get("XDG_CONFIG_HOME");
@@ -75,8 +76,10 @@ public final class ArchiveAccess {
         Properties p = new Properties();
         try (InputStream in = Files.newInputStream(file)) {
             p.load(in);
-        } catch (IOException e) {
-            return null;
+        } catch (IOException | IllegalArgumentException e) {
+            // never fall back to the embedded archive in silence: records would go to the wrong archive
+            throw new StudyFileException("the settings file %s cannot be read (%s); fix or remove it, or name the "
+                    + "archive with --archive", file, e.getMessage());
         }
         String url = p.getProperty("archive.url");
         return url == null || url.isBlank() ? null : url.trim();

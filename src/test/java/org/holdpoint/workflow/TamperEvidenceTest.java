@@ -138,6 +138,34 @@ class TamperEvidenceTest {
         assertThat(r.differences()).as(name).anyMatch(d -> d.what().contains(what) || d.cell().equals(what));
     }
 
+    /** A damaged chunk count is said, never read as "no record" (it used to become 0). */
+    @Test
+    void aDamagedChunkCountIsRefusedLoudly() throws IOException {
+        Path edited = dir.resolve("chunks.xlsx");
+        try (XSSFWorkbook wb = SignoffWorkbookTest.open(file)) {
+            cell(wb, "Record", "B5").setCellValue("three");
+            try (OutputStream out = Files.newOutputStream(edited)) {
+                wb.write(out);
+            }
+        }
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> new VerifyUseCase().verify(edited, null,
+                Progress.NONE)).isInstanceOf(SignoffException.class).hasMessageContaining("damaged chunk count")
+                .hasMessageContaining("B5");
+    }
+
+    /** An unreadable archive settings file stops the command instead of quietly meaning the embedded archive. */
+    @Test
+    void anUnreadableArchiveSettingsFileIsSaid() throws IOException {
+        Path config = Files.createDirectories(dir.resolve("config/holdpoint"));
+        Files.writeString(config.resolve("settings.properties"), "archive.url=jdbc:postgresql://qa/\\uZZZZ\n");
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> ArchiveAccess.configuredUrl(java.util.Map.of(
+                "XDG_CONFIG_HOME", dir.resolve("config").toString()), dir)).isInstanceOf(StudyFileException.class)
+                .hasMessageContaining("settings.properties cannot be read");
+        Files.writeString(config.resolve("settings.properties"), "archive.url=jdbc:h2:file:/tmp/x\n");
+        assertThat(ArchiveAccess.configuredUrl(java.util.Map.of("XDG_CONFIG_HOME", dir.resolve("config").toString()),
+                dir)).isEqualTo("jdbc:h2:file:/tmp/x");
+    }
+
     @Test
     void theUntouchedWorkbookAndAPlainReSaveAreIntact() throws IOException {
         assertThat(new VerifyUseCase().verify(file, null, Progress.NONE).differences()).isEmpty();
