@@ -73,15 +73,9 @@ public final class Distributions {
             return t > 0 ? 1 : 0;
         }
         double t2 = t * t;
-        double x;
-        double y;
-        if (t2 > df) {
-            x = df / (df + t2);
-            y = t2 / (df + t2);
-        } else {
-            y = t2 / (df + t2);
-            x = df / (df + t2);
-        }
+        // x = df/(df + t²) and its complement y = t²/(df + t²), both computed directly (no 1 − x)
+        double x = df / (df + t2);
+        double y = t2 / (df + t2);
         double lowerTail = 0.5 * regularizedBeta(x, y, 0.5 * df, 0.5);
         return t < 0 ? lowerTail : 1 - lowerTail;
     }

@@ -5,8 +5,9 @@ import org.apache.commons.math3.special.Erf;
 /**
  * The standard normal distribution: cdf and quantile accurate in the far tails.
  *
- * <p>The cdf is taken as {@code ½·erfc(−z/√2)}, so each tail is computed from its own side
- * (Abramowitz &amp; Stegun 1964, 7.1.2 and 26.2.29); the quantile is Wichura's AS 241
+ * <p>The cdf uses Cody's rational Chebyshev approximations (see {@link #cdf}; beyond |z| = 40, where the
+ * tail is below 1e-300, ½·erfc(|z|/√2)), each tail computed from its own side, never as 1 − the other
+ * (docs/methods.md §2); the quantile is Wichura's AS 241
  * (PPND16, Appl. Statist. 37:477–484, 1988), accurate to about 1e-16 relative.
  */
 public final class Normal {
