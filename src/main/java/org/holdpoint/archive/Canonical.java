@@ -77,6 +77,18 @@ final class Canonical {
         return this;
     }
 
+    /**
+     * Appends a list as {@link #list} does, but nothing at all when it is empty: a field added in a later
+     * schema leaves the digests of the rows written before it unchanged.
+     *
+     * @param name   the field name
+     * @param values the entries
+     * @return this builder
+     */
+    Canonical listIfAny(String name, List<String> values) {
+        return values.isEmpty() ? this : list(name, values);
+    }
+
     /** @return the canonical text */
     String text() {
         return text.toString();

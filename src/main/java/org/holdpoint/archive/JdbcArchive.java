@@ -305,6 +305,9 @@ public final class JdbcArchive implements ChangeRecordArchive {
             Map<Long, List<String>> names = new HashMap<>();
             Jdbc.stream(c, filter.characteristics(), rs -> names.computeIfAbsent(rs.getLong("study_id"),
                     k -> new ArrayList<>()).add(rs.getString("name")), filter.params());
+            Map<Long, List<String>> signers = new HashMap<>();
+            Jdbc.stream(c, filter.documentSigners(), rs -> signers.computeIfAbsent(rs.getLong("study_id"),
+                    k -> new ArrayList<>()).add(rs.getString("name")), filter.params());
             Map<Long, List<ArchivedSignature>> sigs = new HashMap<>();
             Jdbc.stream(c, filter.signatures(), rs -> {
                 ArchivedSignature s = StudyRow.mapSignature(rs);
@@ -313,6 +316,7 @@ public final class JdbcArchive implements ChangeRecordArchive {
             List<StudyVersion> out = new ArrayList<>(rows.size());
             for (StudyRow row : rows) {
                 out.add(row.withCharacteristics(names.getOrDefault(row.id(), List.of()))
+                        .withDocumentSigners(signers.getOrDefault(row.id(), List.of()))
                         .toVersion(supersededBy.get(row.id()), sigs.getOrDefault(row.id(), List.of())));
             }
             return out;
@@ -488,7 +492,8 @@ public final class JdbcArchive implements ChangeRecordArchive {
         long id = Jdbc.queryLong(c, Sql.NEXT_STUDY_ID);
         StudyRow row = new StudyRow(id, s.changeId(), version, supersedes, s.title(), s.changeKind(), s.partNumber(),
                 s.revision(), s.characteristics(), s.verdict(), s.author(),
-                s.created().truncatedTo(ChronoUnit.MICROS), now, Canonical.sha256Hex(s.json()));
+                s.created().truncatedTo(ChronoUnit.MICROS), now, Canonical.sha256Hex(s.json()),
+                s.documentSigners());
         Jdbc.update(c, Sql.INSERT_STUDY, row.id(), row.changeId(), row.version(), row.supersedes(), row.title(),
                 row.changeKind(), row.partNumber(), row.revision(), row.verdict(), row.author(), row.created(),
                 row.archivedAt(), row.jsonSha256(), s.json());
@@ -497,6 +502,13 @@ public final class JdbcArchive implements ChangeRecordArchive {
             names.add(new Object[] {id, i, row.characteristics().get(i)});
         }
         Jdbc.batch(c, Sql.INSERT_CHARACTERISTIC, names);
+        List<Object[]> signers = new ArrayList<>();
+        for (int i = 0; i < row.documentSigners().size(); i++) {
+            signers.add(new Object[] {id, i, row.documentSigners().get(i)});
+        }
+        if (!signers.isEmpty()) {
+            Jdbc.batch(c, Sql.INSERT_DOCUMENT_SIGNER, signers);
+        }
         return row;
     }
 
@@ -517,7 +529,7 @@ public final class JdbcArchive implements ChangeRecordArchive {
         }
         return new StudyRow(v.id(), v.changeId(), v.version(), v.supersedes(), v.title(), v.changeKind(),
                 v.partNumber(), v.revision(), v.characteristics(), v.verdict(), v.author(), v.created(),
-                v.archivedAt(), v.jsonSha256());
+                v.archivedAt(), v.jsonSha256(), v.documentSigners());
     }
 
     private static Optional<StudyVersion> readVersion(Connection c, long id) throws ArchiveException {
@@ -530,8 +542,10 @@ public final class JdbcArchive implements ChangeRecordArchive {
             return Optional.empty();
         }
         List<String> names = Jdbc.query(c, Sql.SELECT_CHARACTERISTICS_OF, rs -> rs.getString("name"), id);
+        List<String> signers = Jdbc.query(c, Sql.SELECT_DOCUMENT_SIGNERS_OF, rs -> rs.getString("name"), id);
         List<ArchivedSignature> sigs = Jdbc.query(c, Sql.SELECT_SIGNATURES_OF, StudyRow::mapSignature, id);
-        return Optional.of(row.get().withCharacteristics(names).toVersion(newer[0], sigs));
+        return Optional.of(row.get().withCharacteristics(names).withDocumentSigners(signers)
+                .toVersion(newer[0], sigs));
     }
 
     private static String describe(StudyRow row) {

@@ -28,7 +28,11 @@ record ListFilter(String where, Object[] params) {
         // stored times are truncated to microseconds, so the bounds are too
         add(clauses, params, Sql.WHERE_CREATED_FROM, micros(q.createdFrom()));
         add(clauses, params, Sql.WHERE_CREATED_TO, micros(q.createdTo()));
-        add(clauses, params, Sql.WHERE_SIGNER, pattern(q.signer()));
+        String signer = pattern(q.signer());
+        add(clauses, params, Sql.WHERE_SIGNER, signer);
+        if (signer != null) {
+            params.add(signer); // WHERE_SIGNER asks twice: archive signatures and the document's own signers
+        }
         add(clauses, params, Sql.WHERE_CHANGE_ID, q.changeId());
         if (q.versions() == ArchiveQuery.Versions.CURRENT) {
             clauses.add(Sql.WHERE_CURRENT);
@@ -81,6 +85,11 @@ record ListFilter(String where, Object[] params) {
     /** @return the statement listing their characteristics */
     Stmt characteristics() {
         return new Stmt("list characteristics", Sql.LIST_CHARACTERISTICS_HEAD + where + Sql.LIST_CHARACTERISTICS_TAIL);
+    }
+
+    /** @return the statement listing the signers of their own documents */
+    Stmt documentSigners() {
+        return new Stmt("list study signers", Sql.LIST_DOCUMENT_SIGNERS_HEAD + where + Sql.LIST_DOCUMENT_SIGNERS_TAIL);
     }
 
     /** @return the statement listing their signatures */

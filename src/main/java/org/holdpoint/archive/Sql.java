@@ -57,6 +57,9 @@ final class Sql {
     static final Stmt INSERT_CHARACTERISTIC = new Stmt("insert study characteristic",
             "INSERT INTO study_characteristic (study_id, ordinal, name) VALUES (?, ?, ?)");
 
+    static final Stmt INSERT_DOCUMENT_SIGNER = new Stmt("insert study signer",
+            "INSERT INTO study_signer (study_id, ordinal, name) VALUES (?, ?, ?)");
+
     static final Stmt INSERT_SIGNATURE = new Stmt("insert signature", """
             INSERT INTO signature (id, study_id, signer, role, meaning, signed_at)
             VALUES (?, ?, ?, ?, ?, ?)""");
@@ -85,6 +88,9 @@ final class Sql {
     static final Stmt SELECT_CHARACTERISTICS_OF = new Stmt("read study characteristics",
             "SELECT study_id, name FROM study_characteristic WHERE study_id = ? ORDER BY ordinal");
 
+    static final Stmt SELECT_DOCUMENT_SIGNERS_OF = new Stmt("read study signers",
+            "SELECT study_id, name FROM study_signer WHERE study_id = ? ORDER BY ordinal");
+
     static final Stmt SELECT_SIGNATURES_OF = new Stmt("read study signatures", """
             SELECT id, study_id, signer, role, meaning, signed_at FROM signature
             WHERE study_id = ? ORDER BY signed_at, id""");
@@ -103,6 +109,9 @@ final class Sql {
     static final String LIST_CHARACTERISTICS_HEAD = "SELECT c.study_id, c.name FROM study_characteristic c"
             + " JOIN study s ON s.id = c.study_id";
     static final String LIST_CHARACTERISTICS_TAIL = " ORDER BY c.study_id, c.ordinal";
+    static final String LIST_DOCUMENT_SIGNERS_HEAD = "SELECT d.study_id, d.name FROM study_signer d"
+            + " JOIN study s ON s.id = d.study_id";
+    static final String LIST_DOCUMENT_SIGNERS_TAIL = " ORDER BY d.study_id, d.ordinal";
     static final String LIST_SIGNATURES_HEAD = "SELECT g.id, g.study_id, g.signer, g.role, g.meaning, g.signed_at"
             + " FROM signature g JOIN study s ON s.id = g.study_id";
     static final String LIST_SIGNATURES_TAIL = " ORDER BY g.study_id, g.signed_at, g.id";
@@ -114,8 +123,10 @@ final class Sql {
     static final String WHERE_VERDICT = "LOWER(s.verdict) = LOWER(?)";
     static final String WHERE_CREATED_FROM = "s.created_at >= ?";
     static final String WHERE_CREATED_TO = "s.created_at < ?";
-    static final String WHERE_SIGNER = "EXISTS (SELECT 1 FROM signature g2"
-            + " WHERE g2.study_id = s.id AND g2.signer_key LIKE ? ESCAPE '!')";
+    /** Two placeholders, the same pattern: a signature in the archive or a signer of the document itself. */
+    static final String WHERE_SIGNER = "(EXISTS (SELECT 1 FROM signature g2"
+            + " WHERE g2.study_id = s.id AND g2.signer_key LIKE ? ESCAPE '!')"
+            + " OR EXISTS (SELECT 1 FROM study_signer d2 WHERE d2.study_id = s.id AND d2.name_key LIKE ? ESCAPE '!'))";
     static final String WHERE_CHANGE_ID = "s.change_id = ?";
     static final String WHERE_CURRENT = "NOT EXISTS (SELECT 1 FROM study n2 WHERE n2.supersedes_id = s.id)";
 
@@ -132,6 +143,9 @@ final class Sql {
     static final Stmt ALL_CHARACTERISTICS = new Stmt("read all characteristics",
             "SELECT study_id, name FROM study_characteristic ORDER BY study_id, ordinal");
 
+    static final Stmt ALL_DOCUMENT_SIGNERS = new Stmt("read all study signers",
+            "SELECT study_id, name FROM study_signer ORDER BY study_id, ordinal");
+
     static final Stmt ALL_SIGNATURES = new Stmt("read all signatures",
             "SELECT id, study_id, signer, role, meaning, signed_at FROM signature ORDER BY id");
 
@@ -146,8 +160,8 @@ final class Sql {
     static final Stmt H2_SHUTDOWN_COMPACT = new Stmt("compact H2 file", "SHUTDOWN COMPACT");
 
     /** Tables the archive owns, for diagnostics and tests. */
-    static final List<String> TABLES = List.of("study", "study_characteristic", "signature", "audit_event",
-            "schema_version");
+    static final List<String> TABLES = List.of("study", "study_characteristic", "study_signer", "signature",
+            "audit_event", "schema_version");
 
     private Sql() {
     }

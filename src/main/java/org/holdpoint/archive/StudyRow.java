@@ -13,11 +13,12 @@ import org.holdpoint.study.StudyVersion;
  */
 record StudyRow(long id, String changeId, int version, Long supersedes, String title, String changeKind,
         String partNumber, String revision, List<String> characteristics, String verdict, String author,
-        Instant created, Instant archivedAt, String jsonSha256) {
+        Instant created, Instant archivedAt, String jsonSha256, List<String> documentSigners) {
 
-    /** Copies the list. */
+    /** Copies the lists. */
     StudyRow {
         characteristics = List.copyOf(characteristics);
+        documentSigners = List.copyOf(documentSigners);
     }
 
     /** @return SHA-256 of the row's canonical form ({@link Canonical#STUDY}) */
@@ -37,7 +38,18 @@ record StudyRow(long id, String changeId, int version, Long supersedes, String t
                 .field("created", created)
                 .field("archivedAt", archivedAt)
                 .field("jsonSha256", jsonSha256)
+                // schema 2: only rows with signers carry the field, so rows written before keep their digest
+                .listIfAny("documentSigners", documentSigners)
                 .sha256();
+    }
+
+    /**
+     * @param list the document's signers
+     * @return a copy with them
+     */
+    StudyRow withDocumentSigners(List<String> list) {
+        return new StudyRow(id, changeId, version, supersedes, title, changeKind, partNumber, revision,
+                characteristics, verdict, author, created, archivedAt, jsonSha256, list);
     }
 
     /**
@@ -46,7 +58,7 @@ record StudyRow(long id, String changeId, int version, Long supersedes, String t
      */
     StudyRow withCharacteristics(List<String> list) {
         return new StudyRow(id, changeId, version, supersedes, title, changeKind, partNumber, revision, list,
-                verdict, author, created, archivedAt, jsonSha256);
+                verdict, author, created, archivedAt, jsonSha256, documentSigners);
     }
 
     /**
@@ -56,7 +68,8 @@ record StudyRow(long id, String changeId, int version, Long supersedes, String t
      */
     StudyVersion toVersion(Long supersededBy, List<ArchivedSignature> signatures) {
         return new StudyVersion(id, changeId, version, supersedes, supersededBy, title, changeKind, partNumber,
-                revision, characteristics, verdict, author, created, archivedAt, signatures, jsonSha256);
+                revision, characteristics, verdict, author, created, archivedAt, signatures, documentSigners,
+                jsonSha256);
     }
 
     /**
@@ -71,7 +84,7 @@ record StudyRow(long id, String changeId, int version, Long supersedes, String t
                 Jdbc.nullableLong(rs, "supersedes_id"), rs.getString("title"), rs.getString("change_kind"),
                 rs.getString("part_number"), rs.getString("revision"), List.of(), rs.getString("verdict"),
                 rs.getString("author"), Jdbc.instant(rs, "created_at"), Jdbc.instant(rs, "archived_at"),
-                rs.getString("json_sha256").trim());
+                rs.getString("json_sha256").trim(), List.of());
     }
 
     /**

@@ -109,6 +109,16 @@ final class Verifier {
                 studies.put(row.id(), row.withCharacteristics(e.getValue()));
             }
         }
+        // the document's signers are part of the row its CREATED event vouches for
+        Map<Long, List<String>> signers = new HashMap<>();
+        Jdbc.stream(c, Sql.ALL_DOCUMENT_SIGNERS, rs -> signers.computeIfAbsent(rs.getLong("study_id"),
+                k -> new ArrayList<>()).add(rs.getString("name")));
+        for (Map.Entry<Long, List<String>> e : signers.entrySet()) {
+            StudyRow row = studies.get(e.getKey());
+            if (row != null) {
+                studies.put(row.id(), row.withDocumentSigners(e.getValue()));
+            }
+        }
     }
 
     private void readSignatures(Connection c) throws ArchiveException {

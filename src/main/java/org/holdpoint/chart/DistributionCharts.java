@@ -87,13 +87,15 @@ public final class DistributionCharts {
             p.getRangeAxis().setRange(0, top);
             plot.add(p, 1);
         }
-        plot.setFixedLegendItems(histogramLegend(d, limits, theme));
+        int decimals = Math.min(10, data.resolutionDecimals() + 2);
+        plot.setFixedLegendItems(histogramLegend(d, limits, theme, decimals));
         JFreeChart chart = new JFreeChart(data.name(), theme.titleFont(), plot, false);
         chart.addSubtitle(theme.subtitle("distribution before and after, with the fitted normal curve"));
         chart.addSubtitle(theme.note(String.format(java.util.Locale.ROOT, "Common bins of width %s (%d bins, "
                 + "Freedman\u2013Diaconis rule, in whole measuring steps when the values lie on a grid); curve: "
                 + "normal density with the group's mean and sd, scaled to counts.",
-                Numbers.format(edges[1] - edges[0]), edges.length - 1)));
+                Numbers.fixed(edges[1] - edges[0], Math.max(decimals - 2, decimalsOf(edges[1] - edges[0]))),
+                edges.length - 1)));
         chart.addSubtitle(BoxPlotChart.legend(plot));
         theme.apply(chart);
         for (Object sub : plot.getSubplots()) {
@@ -145,11 +147,19 @@ public final class DistributionCharts {
         return p;
     }
 
-    private static LegendItemCollection histogramLegend(Descriptives[] d, SpecLimits limits, ChartTheme theme) {
+    /** The decimals a bin width needs at six significant digits (so 0.0024000000000000002 needs 4; at most 10). */
+    private static int decimalsOf(double width) {
+        java.math.BigDecimal b = new java.math.BigDecimal(width).round(new java.math.MathContext(6))
+                .stripTrailingZeros();
+        return Math.max(0, Math.min(10, b.scale()));
+    }
+
+    private static LegendItemCollection histogramLegend(Descriptives[] d, SpecLimits limits, ChartTheme theme,
+            int decimals) {
         LegendItemCollection items = new LegendItemCollection();
         for (int g = 0; g < 2; g++) {
             String text = String.format(java.util.Locale.ROOT, "%s: n = %d, mean %s, sd %s", g == 0 ? "before"
-                    : "after", d[g].n(), Numbers.format(d[g].mean()), d[g].n() > 1 ? Numbers.format(d[g].sd())
+                    : "after", d[g].n(), Numbers.fixed(d[g].mean(), decimals), d[g].n() > 1 ? Numbers.fixed(d[g].sd(), decimals)
                     : "undefined");
             items.add(new LegendItem(text, null, null, null,
                     new java.awt.Rectangle(-6, -4, 12, 8), theme.groupFill(g), new BasicStroke(0.8f),

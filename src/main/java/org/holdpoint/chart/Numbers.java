@@ -23,6 +23,22 @@ final class Numbers {
     }
 
     /**
+     * A value in a characteristic's unit with a fixed number of decimals (its resolution plus two for a
+     * statistic, its resolution for a bin width), so that a chart shows what the text and the workbook show.
+     *
+     * @param v        a finite value
+     * @param decimals 0..10
+     * @return e.g. "12.0483" or "−0.0035"
+     */
+    static String fixed(double v, int decimals) {
+        String s = new BigDecimal(v).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
+        if (s.matches("-0\\.?0*")) {
+            s = s.substring(1);
+        }
+        return s.startsWith("-") ? "\u2212" + s.substring(1) : s;
+    }
+
+    /**
      * @param name the characteristic's name
      * @param unit its unit, or null
      * @return "name [unit]", or "name (unit not given)"

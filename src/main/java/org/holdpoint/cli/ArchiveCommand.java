@@ -236,9 +236,14 @@ final class ArchiveCommand implements Runnable {
                 out.printf(Locale.ROOT, "  characteristics: %s%n", String.join(", ", v.characteristics()));
                 out.printf(Locale.ROOT, "  author %s, created %s, archived %s%n  study SHA-256 %s%n", v.author(),
                         v.created(), v.archivedAt(), v.jsonSha256());
-                for (ArchivedSignature sig : v.signatures()) {
-                    out.printf(Locale.ROOT, "  signed: %s (%s), %s, \"%s\"%n", sig.signer(), sig.role(), sig.signedAt(),
+                for (org.holdpoint.study.Signature sig : s.changeStudy().signatures()) {
+                    out.printf(Locale.ROOT, "  signed in the record: %s %s (%s), %s, \"%s\"%n",
+                            sig.stage() == null ? "" : sig.stage().words(), sig.name(), sig.role(), sig.timestamp(),
                             sig.meaning());
+                }
+                for (ArchivedSignature sig : v.signatures()) {
+                    out.printf(Locale.ROOT, "  signed in the archive: %s (%s), %s, \"%s\"%n", sig.signer(), sig.role(),
+                            sig.signedAt(), sig.meaning());
                 }
                 out.println("  Audit trail:");
                 for (AuditEvent e : s.events()) {
@@ -369,6 +374,8 @@ final class ArchiveCommand implements Runnable {
         o.put("created", v.created().toString());
         o.put("archivedAt", v.archivedAt().toString());
         o.put("sha256", v.jsonSha256());
+        ArrayNode d = o.putArray("documentSigners");
+        v.documentSigners().forEach(d::add);
         ArrayNode s = o.putArray("signatures");
         for (ArchivedSignature sig : v.signatures()) {
             ObjectNode x = s.addObject();

@@ -174,15 +174,16 @@ final class TextOutput {
         EquivalenceResult eq = r.decidingTost();
         if (eq != null) {
             out.printf(Locale.ROOT, "  Equivalence, two one-sided tests (%s): %s; p lower = %s, p upper = %s; "
-                    + "%s interval (%s, %s) -> %s%n", eq.method().description(), Format.margin(eq),
+                    + "%s interval (%s, %s) -> %s%n", eq.method().description(),
+                    Format.margin(eq, decimals.getOrDefault(r.name(), -1)),
                     eq.pLower() == null ? "-" : Format.p(eq.pLower()), eq.pUpper() == null ? "-" : Format.p(eq.pUpper()),
                     Format.percent(eq.level()), u(r.name(), eq.ciLower()), u(r.name(), eq.ciUpper()),
                     eq.conclusion().words());
         }
         if (r.variance() != null) {
-            out.printf(Locale.ROOT, "  Spread: variance ratio %s, %s CI (%s, %s), F-test p = %s", Format.num(
+            out.printf(Locale.ROOT, "  Spread: variance ratio %s, %s CI (%s, %s), F-test p = %s", Format.ratio(
                     r.variance().ratio()), Format.percent(r.variance().confidenceLevel()),
-                    Format.num(r.variance().ciLower()), Format.num(r.variance().ciUpper()), Format.p(r.variance().p()));
+                    Format.ratio(r.variance().ciLower()), Format.ratio(r.variance().ciUpper()), Format.p(r.variance().p()));
             if (r.levene() != null) {
                 out.printf(Locale.ROOT, "; Brown-Forsythe F = %s, p = %s", Format.num(r.levene().f()),
                         Format.p(r.levene().p()));
@@ -192,10 +193,10 @@ final class TextOutput {
         if (r.sdGrowth() != null) {
             out.printf(Locale.ROOT, "  sd-growth limit %s: %s upper bound of sd(after)/sd(before) = %s -> %s%n",
                     Format.num(r.sdGrowth().limit()), Format.percent(r.sdGrowth().level()),
-                    Format.num(r.sdGrowth().upperBound()), r.sdGrowth().met() ? "met" : "NOT met");
+                    Format.ratio(r.sdGrowth().upperBound()), r.sdGrowth().met() ? "met" : "NOT met");
         }
         if (r.checks() != null) {
-            printChecks(r.checks());
+            printChecks(r.name(), r.checks());
         }
         out.printf(Locale.ROOT, "  Verdict: %s %s%n", mark(r.verdict().status()), r.verdict().status().words());
         for (String reason : r.verdict().reasons()) {
@@ -206,22 +207,22 @@ final class TextOutput {
         }
     }
 
-    private void printChecks(org.holdpoint.study.AssumptionChecks c) {
+    private void printChecks(String name, org.holdpoint.study.AssumptionChecks c) {
         if (c.rankSum() != null) {
             var r = c.rankSum();
             out.printf(Locale.ROOT, "  Rank sum (Wilcoxon-Mann-Whitney, %s): U = %s, p = %s; Hodges-Lehmann shift %s, %s "
                     + "CI (%s, %s)%s%n", r.method().name().toLowerCase(Locale.ROOT), Format.num(r.u()),
-                    r.p() == null ? "undefined" : Format.p(r.p()), Format.num(r.shift()),
-                    Format.percent(r.ci().achievedLevel()), Format.num(r.ciLower()), Format.num(r.ciUpper()),
-                    rankEquivalence(r.equivalence()));
+                    r.p() == null ? "undefined" : Format.p(r.p()), u(name, r.shift()),
+                    Format.percent(r.ci().achievedLevel()), u(name, r.ciLower()), u(name, r.ciUpper()),
+                    rankEquivalence(name, r.equivalence()));
         }
         if (c.signedRank() != null) {
             var r = c.signedRank();
             out.printf(Locale.ROOT, "  Signed rank (Wilcoxon, %s): V = %s, p = %s; Hodges-Lehmann shift %s, %s CI "
                     + "(%s, %s)%s%n", r.method().name().toLowerCase(Locale.ROOT), Format.num(r.v()),
-                    r.p() == null ? "undefined" : Format.p(r.p()), Format.num(r.shift()),
-                    Format.percent(r.ci().achievedLevel()), Format.num(r.ciLower()), Format.num(r.ciUpper()),
-                    rankEquivalence(r.equivalence()));
+                    r.p() == null ? "undefined" : Format.p(r.p()), u(name, r.shift()),
+                    Format.percent(r.ci().achievedLevel()), u(name, r.ciLower()), u(name, r.ciUpper()),
+                    rankEquivalence(name, r.equivalence()));
         }
         out.printf(Locale.ROOT, "  Shape: before %s; after %s%n", shape(c.before().normality()),
                 shape(c.after().normality()));
@@ -238,13 +239,13 @@ final class TextOutput {
         out.println("  Recommended reading: " + c.recommendation());
     }
 
-    private static String rankEquivalence(org.holdpoint.stats.RankEquivalence e) {
+    private String rankEquivalence(String name, org.holdpoint.stats.RankEquivalence e) {
         if (e == null) {
             return "";
         }
         return String.format(Locale.ROOT, "; rank-based equivalence: %s interval (%s, %s) -> %s",
-                Format.percent(e.interval().achievedLevel()), Format.num(e.interval().lower()),
-                Format.num(e.interval().upper()), e.conclusion().words());
+                Format.percent(e.interval().achievedLevel()), u(name, e.interval().lower()),
+                u(name, e.interval().upper()), e.conclusion().words());
     }
 
     private static String shape(org.holdpoint.stats.NormalityResult n) {

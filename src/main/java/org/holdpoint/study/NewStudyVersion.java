@@ -19,10 +19,12 @@ import java.util.Objects;
  * @param created         when the study was made
  * @param json            the study file's canonical JSON text
  * @param history         events from the study file's history (ANALYSED, EXCLUSION_ADDED), oldest first
+ * @param documentSigners names of the people who signed the study in its own document before it was archived
+ *                        (its sign-off entries), oldest first; searchable like the archive's signatures
  */
 public record NewStudyVersion(String changeId, String title, String changeKind, String partNumber, String revision,
         List<String> characteristics, String verdict, String author, Instant created, String json,
-        List<AuditEvent.Draft> history) {
+        List<AuditEvent.Draft> history, List<String> documentSigners) {
 
     /** Validates the version: identifiers, title, part, author and JSON not blank; lists copied. */
     public NewStudyVersion {
@@ -34,6 +36,10 @@ public record NewStudyVersion(String changeId, String title, String changeKind, 
         Checks.notBlank(json, "json");
         characteristics = Checks.names(characteristics, "characteristics");
         history = List.copyOf(Objects.requireNonNull(history, "history"));
+        documentSigners = List.copyOf(Objects.requireNonNull(documentSigners, "documentSigners"));
+        for (String name : documentSigners) {
+            Checks.notBlank(name, "document signer");
+        }
     }
 
     /**
@@ -55,7 +61,7 @@ public record NewStudyVersion(String changeId, String title, String changeKind, 
             String revision, List<String> characteristics, String verdict, String author, Instant created,
             String json) {
         return new NewStudyVersion(changeId, title, changeKind, partNumber, revision, characteristics, verdict,
-                author, created, json, List.of());
+                author, created, json, List.of(), List.of());
     }
 
     /**
@@ -66,6 +72,17 @@ public record NewStudyVersion(String changeId, String title, String changeKind, 
      */
     public NewStudyVersion withHistory(List<AuditEvent.Draft> events) {
         return new NewStudyVersion(changeId, title, changeKind, partNumber, revision, characteristics, verdict,
-                author, created, json, events);
+                author, created, json, events, documentSigners);
+    }
+
+    /**
+     * A copy with the names of those who signed the study's own document.
+     *
+     * @param names the signers, oldest first
+     * @return the copy
+     */
+    public NewStudyVersion withDocumentSigners(List<String> names) {
+        return new NewStudyVersion(changeId, title, changeKind, partNumber, revision, characteristics, verdict,
+                author, created, json, history, names);
     }
 }

@@ -21,12 +21,14 @@ import java.util.Objects;
  * @param author          who prepared the study
  * @param created         when the study was made
  * @param archivedAt      when it was archived
- * @param signatures      its sign-offs, oldest first
+ * @param signatures      its sign-offs made in the archive, oldest first
+ * @param documentSigners who signed the study's own document before it was archived, oldest first
  * @param jsonSha256      lower-case hex SHA-256 of the UTF-8 bytes of the study JSON
  */
 public record StudyVersion(long id, String changeId, int version, Long supersedes, Long supersededBy, String title,
         String changeKind, String partNumber, String revision, List<String> characteristics, String verdict,
-        String author, Instant created, Instant archivedAt, List<ArchivedSignature> signatures, String jsonSha256) {
+        String author, Instant created, Instant archivedAt, List<ArchivedSignature> signatures, List<String> documentSigners,
+        String jsonSha256) {
 
     /** Validates the version and copies its lists. */
     public StudyVersion {
@@ -36,14 +38,20 @@ public record StudyVersion(long id, String changeId, int version, Long supersede
         }
         characteristics = List.copyOf(characteristics);
         signatures = List.copyOf(signatures);
+        documentSigners = List.copyOf(documentSigners);
         Objects.requireNonNull(created, "created");
         Objects.requireNonNull(archivedAt, "archivedAt");
         Checks.notBlank(jsonSha256, "jsonSha256");
     }
 
-    /** @return the signers' names, oldest signature first */
+    /**
+     * @return everyone who signed: first those who signed the document before it was archived, then the
+     *         archive's signatures, each oldest first
+     */
     public List<String> signers() {
-        return signatures.stream().map(ArchivedSignature::signer).toList();
+        List<String> all = new java.util.ArrayList<>(documentSigners);
+        signatures.forEach(s -> all.add(s.signer()));
+        return List.copyOf(all);
     }
 
     /** @return whether no newer version replaced this one */

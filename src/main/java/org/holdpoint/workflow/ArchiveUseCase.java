@@ -90,7 +90,8 @@ public final class ArchiveUseCase {
         }
         var version = org.holdpoint.study.NewStudyVersion.of(change.id(), change.title(), change.kind().words(),
                 change.partNumber(), change.revision(), names, result.changeVerified() ? "verified" : "not verified",
-                actor, now, json).withHistory(history);
+                actor, now, json).withHistory(history)
+                .withDocumentSigners(study.signatures().stream().map(org.holdpoint.study.Signature::name).toList());
         var current = archive.currentVersion(change.id());
         if (current.isPresent()) {
             if (reason == null || reason.isBlank()) {

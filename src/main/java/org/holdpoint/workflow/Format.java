@@ -56,6 +56,17 @@ public final class Format {
     }
 
     /**
+     * A ratio or index read against a limit (sd ratio, Ppk and their bounds): three decimals, the precision
+     * at which such limits are written (1.33, 1.300).
+     *
+     * @param v the value
+     * @return e.g. "0.978"; "undefined" for NaN
+     */
+    public static String ratio(double v) {
+        return Double.isNaN(v) ? "undefined" : fixed(v, 3);
+    }
+
+    /**
      * A p-value: 4 significant digits, scientific below 1e-4, never 0.
      *
      * @param p the p-value
@@ -95,12 +106,34 @@ public final class Format {
      * @return e.g. "(margin -0.01 to 0.01)"
      */
     public static String margin(EquivalenceResult eq) {
+        return margin(eq, -1);
+    }
+
+    /**
+     * The margin of an equivalence result in words, in the characteristic's decimals.
+     *
+     * @param eq       the result
+     * @param decimals decimals, or -1 for six significant digits
+     * @return e.g. "(margin -0.0100 to 0.0100)"
+     */
+    public static String margin(EquivalenceResult eq, int decimals) {
+        return margin(eq, v -> decimals < 0 ? num(v) : fixed(v, decimals));
+    }
+
+    /**
+     * The margin of an equivalence result in words, each bound written by the given function.
+     *
+     * @param eq  the result
+     * @param num writes a value in the characteristic's unit
+     * @return e.g. "(margin -0.0100 to 0.0100)"
+     */
+    public static String margin(EquivalenceResult eq, java.util.function.DoubleFunction<String> num) {
         if (eq.lowerMargin() != null && eq.upperMargin() != null) {
-            return "(margin " + num(eq.lowerMargin()) + " to " + num(eq.upperMargin()) + ")";
+            return "(margin " + num.apply(eq.lowerMargin()) + " to " + num.apply(eq.upperMargin()) + ")";
         }
         if (eq.lowerMargin() != null) {
-            return "(lower margin " + num(eq.lowerMargin()) + ")";
+            return "(lower margin " + num.apply(eq.lowerMargin()) + ")";
         }
-        return "(upper margin " + num(eq.upperMargin()) + ")";
+        return "(upper margin " + num.apply(eq.upperMargin()) + ")";
     }
 }

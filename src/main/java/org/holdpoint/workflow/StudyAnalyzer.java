@@ -184,7 +184,7 @@ public final class StudyAnalyzer {
         CharacteristicResult draft = new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, welch, pooled,
                 pairedTest, tost, tostPooled, variance, levene, growth, null, method, checks,
                 new org.holdpoint.study.Verdict(org.holdpoint.study.Verdict.Status.NOT_ASSESSED, List.of()), notes);
-        return Verdicts.judge(draft);
+        return Verdicts.judge(draft, Math.min(10, c.resolutionDecimals() + 2));
     }
 
     /**

@@ -19,7 +19,12 @@ final class Verdicts {
     private Verdicts() {
     }
 
-    static CharacteristicResult judge(CharacteristicResult r) {
+    /**
+     * @param r        the result without its verdict
+     * @param decimals decimals for values in the characteristic's unit (its resolution plus two)
+     * @return the result with its verdict and the reasons in words
+     */
+    static CharacteristicResult judge(CharacteristicResult r, int decimals) {
         if (r.verdict().status() == Status.NOT_ASSESSABLE) {
             return r;
         }
@@ -33,18 +38,18 @@ final class Verdicts {
         } else {
             Conclusion c = eq.conclusion();
             String interval = String.format(Locale.ROOT, "the %s interval of the difference (%s, %s) %s",
-                    Format.percent(eq.level()), Format.num(eq.ciLower()), Format.num(eq.ciUpper()),
+                    Format.percent(eq.level()), Format.fixed(eq.ciLower(), decimals), Format.fixed(eq.ciUpper(), decimals),
                     describeAgainstMargin(c));
             status = switch (c) {
                 case EQUIVALENT, NON_INFERIOR, NON_SUPERIOR -> Status.PASSED;
                 case NOT_EQUIVALENT, INFERIOR, SUPERIOR -> Status.FAILED;
                 case INCONCLUSIVE -> Status.INCONCLUSIVE;
             };
-            reasons.add(c.words() + ": " + interval + " " + Format.margin(eq));
+            reasons.add(c.words() + ": " + interval + " " + Format.margin(eq, decimals));
         }
         if (r.sdGrowth() != null && !r.sdGrowth().met()) {
             reasons.add(String.format(Locale.ROOT, "spread: the %s upper bound of sd(after)/sd(before) is %s, not "
-                    + "below the limit %s", Format.percent(r.sdGrowth().level()), Format.num(r.sdGrowth().upperBound()),
+                    + "below the limit %s", Format.percent(r.sdGrowth().level()), Format.ratio(r.sdGrowth().upperBound()),
                     Format.num(r.sdGrowth().limit())));
             if (status == Status.PASSED || status == Status.INCONCLUSIVE) {
                 status = Status.FAILED;
@@ -53,7 +58,7 @@ final class Verdicts {
         if (r.checks() != null && Boolean.FALSE.equals(r.checks().capabilityMet())) {
             var cap = r.checks().after().capability();
             reasons.add(String.format(Locale.ROOT, "capability: the %s lower bound of Ppk after the change is %s, not "
-                    + "above the requirement %s", Format.percent(1 - cap.alpha()), Format.num(cap.ppkLower()),
+                    + "above the requirement %s", Format.percent(1 - cap.alpha()), Format.ratio(cap.ppkLower()),
                     Format.num(r.settings().capabilityRequirement())));
             if (status == Status.PASSED || status == Status.INCONCLUSIVE) {
                 status = Status.FAILED;

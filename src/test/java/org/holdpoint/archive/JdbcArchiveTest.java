@@ -101,6 +101,24 @@ class JdbcArchiveTest {
     }
 
     @Test
+    void whoSignedTheDocumentBeforeArchivingIsFoundLikeAnArchiveSigner() throws ArchiveException {
+        StudyVersion a = archive.add(Fixtures.study("CR-1", "4711", "tooling", "change verified", JAN, "Bore")
+                .withDocumentSigners(List.of("R. Brandt", "K. Osei")), "p", null);
+        StudyVersion b = archive.add(Fixtures.study("CR-2", "4712", "tooling", "change verified", MAR, "Bore"),
+                "p", null);
+        archive.sign(b.id(), "Karl Osei-Brandt", "quality manager", "approved", MAR);
+
+        assertThat(ids(ArchiveQuery.withDefaults().withSigner("brandt"))).containsExactly(b.id(), a.id());
+        assertThat(ids(ArchiveQuery.withDefaults().withSigner("r. b*"))).containsExactly(a.id());
+        assertThat(ids(ArchiveQuery.withDefaults().withSigner("osei").withPartNumber("4711")))
+                .containsExactly(a.id());
+        StudyVersion shown = archive.show(a.id()).orElseThrow().version();
+        assertThat(shown.signers()).containsExactly("R. Brandt", "K. Osei");
+        assertThat(shown.signatures()).isEmpty();
+        assertThat(archive.verify().intact()).isTrue();
+    }
+
+    @Test
     void aFilterValueIsAParameterNotSql() throws ArchiveException {
         archive.add(Fixtures.study("CR-1", "4711", "tooling", "ok", JAN), "p", null);
         assertThat(ids(ArchiveQuery.withDefaults().withPartNumber("4711' OR '1'='1"))).isEmpty();

@@ -11,10 +11,10 @@ import org.junit.jupiter.api.Test;
 class MigrationTest {
 
     @Test
-    void aFreshDatabaseGetsVersion1AndReopeningAppliesNothing() throws ArchiveException, SQLException {
+    void aFreshDatabaseGetsTheNewestVersionAndReopeningAppliesNothing() throws ArchiveException, SQLException {
         String url = Fixtures.memUrl("migrate");
         try (JdbcArchive keepAlive = JdbcArchive.open(url)) {
-            assertThat(Fixtures.directLong(url, "SELECT MAX(version) FROM schema_version")).isEqualTo(1);
+            assertThat(Fixtures.directLong(url, "SELECT MAX(version) FROM schema_version")).isEqualTo(2);
             for (String table : Sql.TABLES) {
                 assertThat(Fixtures.directLong(url, "SELECT COUNT(*) FROM " + table)).isNotNegative();
             }
@@ -30,8 +30,26 @@ class MigrationTest {
     @Test
     void migrateReportsTheVersionsItApplied() throws ArchiveException, SQLException {
         String url = Fixtures.memUrl("migrate-report") + ";DB_CLOSE_DELAY=-1";
-        assertThat(JdbcArchive.migrate(url, null, null)).containsExactly(1);
+        assertThat(JdbcArchive.migrate(url, null, null)).containsExactly(1, 2);
         Fixtures.direct(url, "SHUTDOWN");
+    }
+
+    @Test
+    void anArchiveOfSchema1IsBroughtUpToDateAndItsRecordsStillVerify() throws ArchiveException, SQLException {
+        String url = Fixtures.memUrl("migrate-from-1");
+        try (JdbcArchive keepAlive = JdbcArchive.open(url)) {
+            long id = keepAlive.add(Fixtures.study("CR-1", "4711", "tooling", "change verified",
+                    java.time.Instant.parse("2026-01-05T08:00:00Z"), "Bore"), "p", null).id();
+            keepAlive.sign(id, "Quinn", "quality manager", "approved", java.time.Instant.parse("2026-01-06T08:00:00Z"));
+            // back to what schema 1 had: no study_signer table, version 1 recorded
+            Fixtures.direct(url, "DROP TABLE study_signer");
+            Fixtures.direct(url, "DELETE FROM schema_version WHERE version = 2");
+            try (JdbcArchive reopened = JdbcArchive.open(url)) {
+                assertThat(Fixtures.directLong(url, "SELECT MAX(version) FROM schema_version")).isEqualTo(2);
+                assertThat(reopened.verify().problems()).isEmpty();
+                assertThat(reopened.show(id).orElseThrow().version().signers()).containsExactly("Quinn");
+            }
+        }
     }
 
     @Test
@@ -49,9 +67,9 @@ class MigrationTest {
     void aNewerSchemaIsRefused() throws ArchiveException, SQLException {
         String url = Fixtures.memUrl("migrate-newer");
         try (JdbcArchive keepAlive = JdbcArchive.open(url)) {
-            Fixtures.direct(url, "INSERT INTO schema_version VALUES (2, 'future', '" + "0".repeat(64)
+            Fixtures.direct(url, "INSERT INTO schema_version VALUES (3, 'future', '" + "0".repeat(64)
                     + "', CURRENT_TIMESTAMP)");
-            assertThatThrownBy(() -> JdbcArchive.open(url)).hasMessageContaining("schema version 2, newer than");
+            assertThatThrownBy(() -> JdbcArchive.open(url)).hasMessageContaining("schema version 3, newer than");
         }
     }
 

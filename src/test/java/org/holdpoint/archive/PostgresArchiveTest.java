@@ -72,11 +72,12 @@ class PostgresArchiveTest {
 
     @Test
     void rolesDoWhatTheyMayAndNoMore() throws Exception {
-        assertThat(JdbcArchive.migrate(url, owner, null)).containsExactly(1);
+        assertThat(JdbcArchive.migrate(url, owner, null)).containsExactly(1, 2);
         long id;
         try (JdbcArchive asAuthor = JdbcArchive.open(url, author, null)) {
-            id = asAuthor.add(Fixtures.study("CR-1", "4711", "tooling", "change verified", T, "Bore"), "Petra",
-                    null).id();
+            // the author archives the study with the names signed in its own document
+            id = asAuthor.add(Fixtures.study("CR-1", "4711", "tooling", "change verified", T, "Bore")
+                    .withDocumentSigners(List.of("Petra Brandt")), "Petra", null).id();
             assertThatThrownBy(() -> asAuthor.sign(id, "Petra", "engineer", "approved", T))
                     .isInstanceOf(ArchiveException.class).hasMessageContaining("insert signature")
                     .extracting(e -> ((ArchiveException) e).reason())
@@ -91,6 +92,8 @@ class PostgresArchiveTest {
         try (JdbcArchive asAuditor = JdbcArchive.open(url, auditor, null)) {
             assertThat(asAuditor.list(ArchiveQuery.withDefaults().withSigner("Quinn"))).extracting(StudyVersion::id)
                     .containsExactly(id);
+            assertThat(asAuditor.list(ArchiveQuery.withDefaults().withSigner("brandt"))).extracting(StudyVersion::id)
+                    .containsExactly(id);
             assertThat(asAuditor.show(id)).isPresent();
             assertThat(asAuditor.verify().intact()).isTrue();
             assertThatThrownBy(() -> asAuditor.add(Fixtures.study("CR-3", "4711", "t", "ok", T), "Audrey", null))
@@ -99,10 +102,13 @@ class PostgresArchiveTest {
                     .isEqualTo(ArchiveException.Reason.PERMISSION_DENIED);
         }
         assertThat(sqlState(auditor, "INSERT INTO audit_event SELECT * FROM audit_event")).isEqualTo("42501");
+        assertThat(sqlState(approver, "INSERT INTO study_signer (study_id, ordinal, name) VALUES (" + id
+                + ", 5, 'x')")).isEqualTo("42501");
         for (String who : List.of(author, approver, auditor)) {
             assertThat(sqlState(who, "UPDATE study SET title = 'x'")).as(who).isEqualTo("42501");
             assertThat(sqlState(who, "DELETE FROM audit_event")).as(who).isEqualTo("42501");
             assertThat(sqlState(who, "TRUNCATE signature")).as(who).isEqualTo("42501");
+            assertThat(sqlState(who, "UPDATE study_signer SET name = 'x'")).as(who).isEqualTo("42501");
         }
         // row-level security: each role appends only its own kinds of event, under its own database name
         String event = "INSERT INTO audit_event (seq, study_id, kind, subject_id, actor, db_user, occurred_at, what,"
@@ -129,9 +135,10 @@ class PostgresArchiveTest {
      */
     @Test
     void noApplicationRoleCanDisableTheTriggerAndTheOwnerIsNotUsedForDailyWork() throws Exception {
-        assertThat(JdbcArchive.migrate(url, owner, null)).containsExactly(1);
+        assertThat(JdbcArchive.migrate(url, owner, null)).containsExactly(1, 2);
         for (String who : List.of(author, approver, auditor)) {
-            for (String table : List.of("study", "signature", "audit_event", "study_characteristic")) {
+            for (String table : List.of("study", "signature", "audit_event", "study_characteristic",
+                    "study_signer")) {
                 assertThat(sqlState(who, "ALTER TABLE " + table + " DISABLE TRIGGER ALL")).as(who + " " + table)
                         .isEqualTo("42501");
             }

@@ -33,7 +33,8 @@ class TamperDetectionTest {
     void fill() throws ArchiveException {
         url = Fixtures.memUrl("tamper");
         archive = JdbcArchive.open(url);
-        first = archive.add(Fixtures.study("CR-1", "4711", "tooling", "change verified", T, "Bore"), "p", null);
+        first = archive.add(Fixtures.study("CR-1", "4711", "tooling", "change verified", T, "Bore")
+                .withDocumentSigners(List.of("R. Brandt")), "p", null);
         second = archive.add(Fixtures.study("CR-2", "4711", "machine", "inconclusive", T, "Wall"), "p", null);
         correction = archive.supersede(second.id(), Fixtures.study("CR-2", "4711", "machine", "change verified", T,
                 "Wall"), "p", "more parts measured");
@@ -93,6 +94,21 @@ class TamperDetectionTest {
     void anEditedCharacteristicIsNamedAsItsStudy() throws SQLException, ArchiveException {
         Fixtures.direct(url, "UPDATE study_characteristic SET name = 'Bore2' WHERE study_id = " + first.id());
         assertThat(records(archive.verify())).containsExactly("study " + first.id() + " (CR-1 version 1)");
+    }
+
+    @Test
+    void anEditedDocumentSignerIsNamedAsItsStudy() throws SQLException, ArchiveException {
+        Fixtures.direct(url, "UPDATE study_signer SET name = 'Someone Else' WHERE study_id = " + first.id());
+        assertThat(records(archive.verify())).containsExactly("study " + first.id() + " (CR-1 version 1)");
+    }
+
+    @Test
+    void aDocumentSignerAddedOrRemovedBehindHoldpointsBackIsNamed() throws SQLException, ArchiveException {
+        Fixtures.direct(url, "INSERT INTO study_signer (study_id, ordinal, name) VALUES (" + correction.id()
+                + ", 0, 'Quinn')");
+        Fixtures.direct(url, "DELETE FROM study_signer WHERE study_id = " + first.id());
+        assertThat(records(archive.verify())).containsExactlyInAnyOrder("study " + first.id() + " (CR-1 version 1)",
+                "study " + correction.id() + " (CR-2 version 2)");
     }
 
     @Test

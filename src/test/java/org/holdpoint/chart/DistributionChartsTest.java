@@ -69,6 +69,28 @@ class DistributionChartsTest {
         ChartAssertions.assertRendered(img, theme.width(), theme.standardHeight(), theme.scale());
     }
 
+    /**
+     * The legend reads as the text output does: mean and sd at the characteristic's resolution plus two
+     * decimals, the bin width without floating-point noise (the project's display rule, docs/methods.md;
+     * arithmetic on the demo data, no outside value needed).
+     */
+    @Test
+    void legendAndNoteShowValuesAtTheResolutionOfTheData() {
+        for (ChartFixtures.Item it : demo) {
+            JFreeChart chart = DistributionCharts.histogram(it.data(), it.result().settings().spec(), theme);
+            int decimals = it.data().resolutionDecimals() + 2;
+            var items = ((CombinedDomainXYPlot) chart.getPlot()).getFixedLegendItems();
+            for (int g = 0; g < 2; g++) {
+                String label = items.get(g).getLabel();
+                assertThat(label).as(it.data().name()).matches("(before|after): n = \\d+, mean \u2212?\\d+\\.\\d{"
+                        + decimals + "}, sd \\d+\\.\\d{" + decimals + "}");
+            }
+            String note = ((org.jfree.chart.title.TextTitle) chart.getSubtitle(1)).getText();
+            assertThat(note).as(it.data().name()).containsPattern("bins of width \\d+(\\.\\d{1,6})? \\(")
+                    .doesNotContainPattern("\\d{7,}");
+        }
+    }
+
     @Test
     void gridValuesGetBinEdgesHalfAStepOffTheGrid() {
         double[] v = {1.0, 1.1, 1.1, 1.2, 1.3, 1.3, 1.3, 1.4, 1.5, 1.7, 2.0, 2.2};

@@ -50,6 +50,30 @@ class AnalyzeCommandTest {
         assertThat(first.has("paired")).isFalse();
     }
 
+    /**
+     * The reasons of a verdict are read by people: values in the characteristic's unit at its resolution plus
+     * two decimals (the demo's bore diameter is recorded to 0.0001 mm, so 6), ratios and indices at three
+     * (common practice, no source; the rule is the project's own, docs/methods.md). Arithmetic on the demo
+     * file, no outside value is needed.
+     */
+    @Test
+    void verdictReasonsUseTheDecimalsOfTheirCharacteristic(@TempDir Path dir) {
+        Run r = run("demo", "--out", dir.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        String bore = r.out().substring(r.out().indexOf("== Bore diameter"));
+        bore = bore.substring(0, bore.indexOf("\n== ", 5));
+        assertThat(bore).containsPattern("Verdict: \\[.\\] \\w+\\R    \\w+: the 90 % interval of the difference "
+                + "\\(-?\\d+\\.\\d{6}, -?\\d+\\.\\d{6}\\) [^()]+\\(margin -\\d\\.\\d{6} to \\d\\.\\d{6}\\)");
+        assertThat(bore).containsPattern("Hodges-Lehmann shift -?\\d\\.\\d{6}, ");
+        assertThat(bore).containsPattern("upper bound of sd\\(after\\)/sd\\(before\\) = \\d\\.\\d{3} ->");
+        // no floating-point noise and no 6-significant-digit residue anywhere in the reasons
+        for (String line : r.out().split("\\R")) {
+            if (line.startsWith("    ") && (line.contains("interval") || line.contains("bound"))) {
+                assertThat(line).doesNotContainPattern("\\d\\.\\d{11,}").doesNotContainPattern("\\de-\\d");
+            }
+        }
+    }
+
     @Test
     void withoutAMarginTheDifferenceTestsRunAndEquivalenceIsNotAssessed(@TempDir Path dir) throws Exception {
         Path csv = dir.resolve("plain.csv");

@@ -130,6 +130,15 @@ class SignOffStagesTest {
         Run list = AnalyzeCommandTest.run("archive", "list", "--archive", url, "--signer", "osei");
         assertThat(list.code()).as(list.err()).isZero();
         assertThat(list.out()).contains("CR-92");
+        // the signer of the study's own document is found the same way, by part of the name in any case
+        Run byDocument = AnalyzeCommandTest.run("archive", "list", "--archive", url, "--signer", "BRANDT");
+        assertThat(byDocument.code()).as(byDocument.err()).isZero();
+        assertThat(byDocument.out()).contains("CR-92", "R. Brandt, K. Osei");
+        Run show = AnalyzeCommandTest.run("archive", "show", id.group(1), "--archive", url);
+        assertThat(show.out()).contains("signed in the record: prepared R. Brandt (process engineer)",
+                "signed in the archive: K. Osei (quality engineer)");
+        Run none = AnalyzeCommandTest.run("archive", "list", "--archive", url, "--signer", "lindqvist");
+        assertThat(none.out()).doesNotContain("CR-92").contains("0 record(s)");
         Path exported = dir.resolve("exported.xlsx");
         Run export = AnalyzeCommandTest.run("archive", "export", id.group(1), "--archive", url, "--report",
                 exported.toString());

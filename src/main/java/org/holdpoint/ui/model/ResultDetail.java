@@ -106,7 +106,7 @@ public final class ResultDetail {
 
     private static Section equivalence(EquivalenceResult eq, java.util.function.DoubleFunction<String> f) {
         List<Line> l = new ArrayList<>();
-        l.add(new Line("Margin", Format.margin(eq)));
+        l.add(new Line("Margin", Format.margin(eq, f)));
         l.add(new Line(Format.percent(eq.level()) + " interval", "(" + f.apply(eq.ciLower()) + ", "
                 + f.apply(eq.ciUpper()) + ")"));
         if (eq.pLower() != null) {
@@ -122,7 +122,7 @@ public final class ResultDetail {
     private static Section spread(CharacteristicResult r) {
         List<Line> l = new ArrayList<>();
         if (r.variance() != null) {
-            l.add(new Line("Variance ratio after/before", Format.num(r.variance().ratio()) + "  (F-test p "
+            l.add(new Line("Variance ratio after/before", Format.ratio(r.variance().ratio()) + "  (F-test p "
                     + Format.p(r.variance().p()) + ")"));
         }
         if (r.levene() != null) {
@@ -130,7 +130,7 @@ public final class ResultDetail {
         }
         if (r.sdGrowth() != null) {
             l.add(new Line("sd growth", "upper " + Format.percent(r.sdGrowth().level()) + " bound "
-                    + Format.num(r.sdGrowth().upperBound()) + " against the limit " + Format.num(r.sdGrowth().limit())
+                    + Format.ratio(r.sdGrowth().upperBound()) + " against the limit " + Format.num(r.sdGrowth().limit())
                     + (r.sdGrowth().met() ? ": met" : ": NOT met")));
         }
         if (l.isEmpty()) {
