@@ -22,6 +22,10 @@ public final class StudyProblem extends RuntimeException {
         /** An output file cannot be written. */
         CANNOT_WRITE("The file could not be written",
                 "Choose another folder or name, or close the file if another program has it open, then try again."),
+        /** A signature signed an earlier version of the record than the one to be written. */
+        RECORD_CHANGED("Signatures of an earlier record",
+                "On the Sign-off step, remove the void signatures (they signed results that have since changed); "
+                        + "the people concerned sign the record again, then write it."),
         /** A saved study file cannot be read. */
         CANNOT_READ_STUDY("The study file could not be opened",
                 "Choose a study file saved by Holdpoint (*.holdpoint.json).");

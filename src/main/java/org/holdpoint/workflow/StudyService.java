@@ -142,6 +142,18 @@ public final class StudyService {
     }
 
     /**
+     * The SHA-256 of the study's record: the study without its signatures, with these results, in the
+     * canonical form every output embeds (what a signature signs).
+     *
+     * @param unsigned the study (its signatures are ignored)
+     * @param result   its results
+     * @return the lower-case hex SHA-256
+     */
+    public String recordSha256(ChangeStudy unsigned, StudyResult result) {
+        return StudyFiles.recordSha256(StudyFiles.toJson(unsigned, result));
+    }
+
+    /**
      * Saves the study file atomically.
      *
      * @param study  the study

@@ -114,6 +114,9 @@ public final class VerifyUseCase {
                     convert(diffs), List.of(), notes);
         }
         compareStoredResults(reader.studyJson(), result, notes);
+        // the reasons of a verdict are words: the workbook shows them as the record keeps them (hashed with it),
+        // so a later version that words or formats them otherwise does not report an edit
+        result = withRecordedReasons(reader.studyJson(), result);
         progress.step("comparing the shown values", 0.6);
         ReportInput expected = new ReportInput(study, result, reader.studyJson(), sha, null, version(reader), reader
                 .generatedAt(), seal, reader.signaturesJson());
@@ -172,6 +175,16 @@ public final class VerifyUseCase {
         return null;
     }
 
+    private static JsonNode withoutReasons(JsonNode characteristics) {
+        JsonNode copy = characteristics.deepCopy();
+        copy.forEach(n -> {
+            if (n.path("verdict") instanceof com.fasterxml.jackson.databind.node.ObjectNode v) {
+                v.remove("reasons");
+            }
+        });
+        return copy;
+    }
+
     private static List<VerifyResult.Difference> convert(List<WorkbookDifference> diffs) {
         return diffs.stream().map(d -> new VerifyResult.Difference(d.sheet(), d.cell(), d.what(), d.shown(),
                 d.expected())).toList();
@@ -212,6 +225,32 @@ public final class VerifyUseCase {
     }
 
     /** Notes when the current code computes other results than those stored when the workbook was written. */
+    /**
+     * The results with each verdict's reasons as the record words them, where the record has the same
+     * characteristic with the same verdict status (a different status keeps the fresh words, so that the
+     * difference shows).
+     */
+    static StudyResult withRecordedReasons(String json, StudyResult result) {
+        JsonNode stored = StudyFiles.tree(json).path("results").path("characteristics");
+        if (!stored.isArray()) {
+            return result;
+        }
+        java.util.Map<String, JsonNode> byName = new java.util.HashMap<>();
+        stored.forEach(n -> byName.put(n.path("name").asText(), n.path("verdict")));
+        List<CharacteristicResult> out = new ArrayList<>();
+        for (CharacteristicResult r : result.characteristics()) {
+            JsonNode v = byName.get(r.name());
+            if (v != null && v.path("reasons").isArray()
+                    && v.path("status").asText().equals(r.verdict().status().words())) {
+                List<String> reasons = new ArrayList<>();
+                v.path("reasons").forEach(x -> reasons.add(x.asText()));
+                r = r.with(r.holmP(), new org.holdpoint.study.Verdict(r.verdict().status(), reasons), r.notes());
+            }
+            out.add(r);
+        }
+        return new StudyResult(out, result.changeVerified(), result.summary(), result.failing());
+    }
+
     private static void compareStoredResults(String json, StudyResult result, List<String> notes) {
         JsonNode stored = StudyFiles.tree(json).path("results").path("characteristics");
         if (!stored.isArray()) {
@@ -222,6 +261,9 @@ public final class VerifyUseCase {
             fresh.add(ResultJson.characteristic(r));
         }
         JsonNode reread = StudyFiles.tree(new String(StudyFiles.canonical(fresh), StandardCharsets.UTF_8));
+        // the reasons are words, not results: a version that words them otherwise computes the same results
+        stored = withoutReasons(stored);
+        reread = withoutReasons(reread);
         if (!reread.equals(stored)) {
             String written = StudyFiles.tree(json).path("tool").path("version").asText("");
             if (written.equals(Version.get())) {

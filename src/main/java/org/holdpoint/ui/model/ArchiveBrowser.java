@@ -454,6 +454,11 @@ public final class ArchiveBrowser {
             session.problem(new UserMessage("Cannot archive yet", why, "Correct it, then save to the archive again."));
             return;
         }
+        UserMessage notCurrent = session.notCurrent("save the study to the archive");
+        if (notCurrent != null) {
+            session.problem(notCurrent);
+            return;
+        }
         ChangeStudy s = study;
         StudyResult r = session.results().result();
         String url = url();
@@ -462,6 +467,7 @@ public final class ArchiveBrowser {
         session.start("Saving to the archive", p -> {
             Path tmp = Files.createTempFile("holdpoint-archive-", ".study.json");
             try (ChangeRecordArchive ar = ArchiveAccess.open(url)) {
+                session.checkSignaturesOf(s, r);
                 StudyFiles.write(s, r, tmp);
                 var current = ar.currentVersion(s.change().id());
                 if (current.isPresent() && because.isEmpty()) {

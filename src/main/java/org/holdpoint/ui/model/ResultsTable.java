@@ -49,6 +49,7 @@ public final class ResultsTable {
 
     private final Bound<Property> bound = new Bound<>(this, Property.class);
     private StudyResult result;
+    private String staleBecause;
     private Filter filter = Filter.ALL;
     private String selected;
 
@@ -79,10 +80,29 @@ public final class ResultsTable {
             data.characteristics().forEach(c -> decimals.put(c.name(), Math.min(10, c.resolutionDecimals() + 2)));
         }
         result = r;
+        staleBecause = null;
         bound.fireChanged(Property.RESULT);
         if (r == null || r.characteristics().stream().noneMatch(c -> c.name().equals(selected))) {
             select(r == null || r.characteristics().isEmpty() ? null : r.characteristics().get(0).name());
         }
+    }
+
+    /**
+     * Marks the results out of date: what they were computed from changed. They stay on screen, marked, and
+     * may not be written, signed or archived until analysed again.
+     *
+     * @param because what changed, e.g. "the criteria changed after the analysis"
+     */
+    public void markStale(String because) {
+        if (result != null && staleBecause == null) {
+            staleBecause = because;
+            bound.fireChanged(Property.RESULT);
+        }
+    }
+
+    /** @return why the results are out of date, or null while they are current (or there are none) */
+    public String staleBecause() {
+        return staleBecause;
     }
 
     /** @return the number of rows (before filtering) */
@@ -217,13 +237,16 @@ public final class ResultsTable {
         if (result == null) {
             return "Not analysed yet: open the data on the Data step";
         }
+        if (staleBecause != null) {
+            return "Out of date: " + staleBecause + "; analyse again (F5)";
+        }
         return result.summary().replace("CHANGE NOT VERIFIED", "Change not verified")
                 .replace("CHANGE VERIFIED", "Change verified");
     }
 
     /** @return the overall look: passed when verified, else the most urgent characteristic's look */
     public VerdictLook overallLook() {
-        if (result == null) {
+        if (result == null || staleBecause != null) {
             return VerdictLook.NOT_ASSESSED;
         }
         if (result.changeVerified()) {

@@ -52,7 +52,7 @@ public final class StudySession {
 
     /** What the import job hands back to the event thread. */
     private record Loaded(DataSources sources, StudyService.Imported imported, PreviewGrid preview,
-            StudyResult result, UserMessage analysisProblem) {
+            StudyResult result, UserMessage analysisProblem, org.holdpoint.study.Provenance provenance) {
     }
 
     private final Bound<Property> bound = new Bound<>(this, Property.class);
@@ -74,6 +74,9 @@ public final class StudySession {
     private List<Exclusion> exclusions = List.of();
     private boolean dirty;
     private Path studyFile;
+    /** Who ran the analysis on screen and when; kept from a study file opened, renewed by each analysis. */
+    private org.holdpoint.study.Provenance provenance = org.holdpoint.study.Provenance.NONE;
+    private final Clock clock;
 
     /**
      * @param service the window's use cases
@@ -85,12 +88,20 @@ public final class StudySession {
         this.service = service;
         this.runner = runner;
         this.recent = recent;
+        this.clock = clock;
         this.signOff = new SignOffForm(clock);
         this.plan = new PlanForm(this);
         this.archive = new ArchiveBrowser(this, service);
         Runnable edited = () -> setDirty(true);
-        change.onEdit(edited);
-        criteria.onEdit(edited);
+        // the change description is part of the record: a signature made before an edit no longer applies
+        change.onEdit(() -> {
+            setDirty(true);
+            signOff.setCurrentRecord(null);
+        });
+        criteria.onEdit(() -> {
+            setDirty(true);
+            stale("the criteria changed after the analysis");
+        });
         signOff.onEdit(edited);
     }
 
@@ -200,6 +211,7 @@ public final class StudySession {
         if (equal != equalVariances) {
             equalVariances = equal;
             setDirty(true);
+            stale("the equal-variances setting changed after the analysis");
         }
     }
 
@@ -213,6 +225,7 @@ public final class StudySession {
         if (h != holm) {
             holm = h;
             setDirty(true);
+            stale("the Holm setting changed after the analysis");
         }
     }
 
@@ -245,10 +258,17 @@ public final class StudySession {
         }
         Map<String, CharacteristicSettings> typed = typedCriteria();
         Study wide = wide();
+        String shown = shownDataName();
         start("Importing " + sources.mainFile().getFileName(), p -> load(sources, typed, wide, p), l -> {
             apply(l);
             recent.add(sources.mainFile());
             setDirty(true);
+        }, failed -> {
+            // the window keeps the study it showed; say so, and which file that is
+            UserMessage m = failed;
+            problem(new UserMessage(m.title(), m.what(), m.whatToDo() + (shown == null
+                    ? " Nothing was imported."
+                    : " The data on screen are still those of " + shown + "; they were not changed.")));
         });
     }
 
@@ -276,12 +296,127 @@ public final class StudySession {
             return;
         }
         Dataset d = chosenData();
-        start("Analysing", p -> service.analyze(d, settings, p), r -> {
-            results.show(r, d);
+        ChangeDescription described = change.toDescription();
+        List<org.holdpoint.study.Signature> signed = signOff.signatures();
+        org.holdpoint.study.Provenance before = provenance;
+        start("Analysing", p -> {
+            StudyResult r = service.analyze(d, settings, p);
+            if (!signed.isEmpty()) {
+                // the signatures so far stay valid only when the record they signed is the record now: an analysis
+                // that changes nothing keeps the record (and who ran it, and when) as it was
+                String same = service.recordSha256(new ChangeStudy(described, d, settings, List.of(), before), r);
+                if (signed.stream().anyMatch(g -> same.equals(g.record()))) {
+                    return new Analysed(r, before, same);
+                }
+            }
+            org.holdpoint.study.Provenance prov = ranNow();
+            String record = signed.isEmpty() ? null : service.recordSha256(new ChangeStudy(described, d, settings,
+                    List.of(), prov), r);
+            return new Analysed(r, prov, record);
+        }, a -> {
+            provenance = a.provenance();
+            results.show(a.result(), d);
+            signOff.setCurrentRecord(a.record());
             setDirty(true);
-            status("Analysed: " + results.counts() + ".");
+            status("Analysed: " + results.counts() + "."
+                    + (signOff.voidCount() > 0 ? " " + signOff.voidCount() + " signature(s) signed an earlier record "
+                    + "and are void: see the Sign-off step." : ""));
             step(Step.RESULTS);
         });
+    }
+
+    /** What an analysis hands back: the results, who ran it and when, and the record's hash when needed. */
+    private record Analysed(StudyResult result, org.holdpoint.study.Provenance provenance, String record) {
+    }
+
+    /** Who runs the analysis (the account's user name) and now, to the second, as the record keeps them. */
+    private org.holdpoint.study.Provenance ranNow() {
+        String who = System.getProperty("user.name", "");
+        return new org.holdpoint.study.Provenance(who.isBlank() ? null : who.strip(),
+                java.time.Instant.now(clock).truncatedTo(java.time.temporal.ChronoUnit.SECONDS).toString(), null);
+    }
+
+    private void stale(String because) {
+        results.markStale(because);
+    }
+
+    /**
+     * Why the results on screen may not be written, signed or archived now, or null when they may.
+     *
+     * @param action what the user wants to do, e.g. "write the sign-off workbook"
+     * @return the message, or null
+     */
+    public UserMessage notCurrent(String action) {
+        if (results.result() == null) {
+            return new UserMessage("Not analysed yet", "There are no results to " + action + " yet.",
+                    "Analyse the study first (F5).");
+        }
+        if (results.staleBecause() != null) {
+            return new UserMessage("Results out of date", "The results on screen are out of date: "
+                    + results.staleBecause() + ". They cannot be used to " + action + ".",
+                    "Analyse again (F5), check the new results, then " + action + ".");
+        }
+        return null;
+    }
+
+    /**
+     * Signs the record as it stands now: the signature is bound to the record's SHA-256, so that it is
+     * void when the results, criteria, data or change description change afterwards.
+     *
+     * @param stage   the stage
+     * @param name    printed name
+     * @param role    role
+     * @param meaning what the signature means
+     */
+    public void sign(org.holdpoint.study.Signature.Stage stage, String name, String role, String meaning) {
+        String p = SignOffForm.problem(name, role, meaning);
+        if (p != null) {
+            problem(new UserMessage("Signature incomplete", p, "Fill in the field named, then add the signature."));
+            return;
+        }
+        UserMessage m = notCurrent("sign the record");
+        if (m != null) {
+            problem(m);
+            return;
+        }
+        ChangeStudy unsigned = unsignedStudy();
+        StudyResult r = results.result();
+        start("Signing", prog -> service.recordSha256(unsigned, r), hash -> {
+            signOff.setCurrentRecord(hash);
+            signOff.sign(stage, name, role, meaning, hash);
+            status("Signed by " + name.trim() + " (" + stage.words() + "); the signature is bound to record "
+                    + hash.substring(0, 12) + "….");
+        });
+    }
+
+    /** The study as it would be written now, without its signatures (the record). */
+    private ChangeStudy unsignedStudy() {
+        ChangeStudy s = study();
+        return new ChangeStudy(s.change(), s.data(), s.settings(), List.of(), s.provenance());
+    }
+
+    /**
+     * Runs on a worker: the record's hash now; refuses when a signature signed another record.
+     *
+     * @param study  the study with its signatures
+     * @param result its results
+     * @return the record's SHA-256
+     * @throws org.holdpoint.workflow.StudyProblem when a signature is void
+     */
+    String checkSignaturesOf(ChangeStudy study, StudyResult result) {
+        return checkSignatures(study, result);
+    }
+
+    private String checkSignatures(ChangeStudy study, StudyResult result) {
+        String hash = service.recordSha256(new ChangeStudy(study.change(), study.data(), study.settings(),
+                List.of(), study.provenance()), result);
+        long stale = study.signatures().stream().filter(x -> x.record() != null && !x.record().equals(hash)).count();
+        if (stale > 0) {
+            throw new org.holdpoint.workflow.StudyProblem(org.holdpoint.workflow.StudyProblem.Kind.RECORD_CHANGED,
+                    null, "%d signature(s) signed an earlier version of this record (its results, criteria, data or "
+                    + "change description have changed since), so they would not be true of what is written now", stale);
+        }
+        return hash;
     }
 
     /**
@@ -321,6 +456,7 @@ public final class StudySession {
         l.add(new Exclusion(characteristic, t.group(), t.cell(), reason.trim()));
         exclusions = List.copyOf(l);
         setDirty(true);
+        stale("a value was excluded after the analysis");
         analyse();
         return null;
     }
@@ -335,6 +471,7 @@ public final class StudySession {
         if (!exclusions.isEmpty()) {
             exclusions = List.of();
             setDirty(true);
+            stale("the exclusions were taken back after the analysis");
             analyse();
         }
     }
@@ -362,8 +499,13 @@ public final class StudySession {
             problem(new UserMessage("Nothing to save yet", e.getMessage(), "Open data and set the criteria first."));
             return;
         }
-        StudyResult r = results.result();
+        // a study file never holds results that do not belong to its criteria: out-of-date results are left
+        // out (the file keeps the criteria; opening it analyses again)
+        StudyResult r = results.staleBecause() == null ? results.result() : null;
         start("Saving " + target.getFileName(), p -> {
+            if (r != null) {
+                checkSignatures(study, r);
+            }
             service.save(study, r, target);
             return target;
         }, t -> {
@@ -393,15 +535,18 @@ public final class StudySession {
             problem(new UserMessage("Nothing to write yet", e.getMessage(), "Open data and analyse them first."));
             return;
         }
-        if (r == null) {
-            problem(new UserMessage("Not analysed yet", "The workbook shows the results, and there are none yet.",
-                    "Analyse the study first (F5)."));
+        UserMessage m = notCurrent("write the sign-off workbook");
+        if (m != null) {
+            problem(m);
             return;
         }
         start("Writing " + target.getFileName(), p -> {
+            String hash = checkSignatures(study, r);
             service.writeWorkbook(study, r, target, p);
-            return target;
-        }, t -> {
+            return java.util.Map.entry(target, hash);
+        }, written -> {
+            Path t = written.getKey();
+            signOff.setCurrentRecord(written.getValue());
             recent.setLastFolder(t.toAbsolutePath().getParent());
             lastWorkbook = t;
             status("Wrote the sign-off workbook " + t.getFileName() + ".");
@@ -425,12 +570,15 @@ public final class StudySession {
             ChangeStudy s = service.open(file);
             StudyResult r = null;
             UserMessage problem = null;
+            String record = null;
             try {
                 r = service.analyze(s.data(), s.settings(), p);
+                record = service.recordSha256(new ChangeStudy(s.change(), s.data(), s.settings(), List.of(),
+                        s.provenance()), r);
             } catch (org.holdpoint.workflow.StudyProblem e) {
                 problem = UserMessage.of(e);
             }
-            return new Object[] {s, r, problem, PreviewGrid.of(s.data(), PreviewGrid.LIMIT)};
+            return new Object[] {s, r, problem, PreviewGrid.of(s.data(), PreviewGrid.LIMIT), record};
         }, o -> {
             ChangeStudy s = (ChangeStudy) o[0];
             change.load(s.change());
@@ -442,7 +590,9 @@ public final class StudySession {
             holm = s.settings().holm();
             exclusions = s.settings().exclusions();
             signOff.load(s.signatures());
+            provenance = s.provenance();
             results.show((StudyResult) o[1], s.data());
+            signOff.setCurrentRecord((String) o[4]);
             Path old = studyFile;
             studyFile = file;
             bound.fire(Property.STUDY_FILE, old, file);
@@ -467,7 +617,7 @@ public final class StudySession {
             throw new IllegalStateException("there are no data yet");
         }
         return new ChangeStudy(change.toDescription(), chosenData(), settings(criteria.toSettings()),
-                signOff.signatures());
+                signOff.signatures(), provenance);
     }
 
     /** The data of the characteristics chosen on the Criteria step (all of them while nothing is chosen). */
@@ -581,7 +731,8 @@ public final class StudySession {
         } catch (org.holdpoint.workflow.StudyProblem e) {
             problem = UserMessage.of(e);
         }
-        return new Loaded(sources, imported, PreviewGrid.of(imported.data(), PreviewGrid.LIMIT), r, problem);
+        return new Loaded(sources, imported, PreviewGrid.of(imported.data(), PreviewGrid.LIMIT), r, problem,
+                ranNow());
     }
 
     private void apply(Loaded l) {
@@ -589,7 +740,10 @@ public final class StudySession {
         criteriaFile = l.imported().criteriaFile();
         exclusions = List.of();
         showData(l.imported().data(), l.preview(), l.imported().criteria());
+        provenance = l.provenance();
         results.show(l.result(), l.imported().data());
+        // new data make a new record: signatures of the study on screen before no longer apply
+        signOff.setCurrentRecord(null);
         if (l.analysisProblem() != null) {
             problem(l.analysisProblem());
             step(Step.CRITERIA);
@@ -608,7 +762,21 @@ public final class StudySession {
         bound.fireChanged(Property.DATA);
     }
 
+    /** @return the file name of the data shown (the before file, then the after file), or null */
+    public String shownDataName() {
+        if (data == null || data.inputs().isEmpty()) {
+            return null;
+        }
+        return String.join(" and ", data.inputs().stream().map(i -> java.nio.file.Path.of(i.file()).getFileName()
+                .toString()).distinct().toList());
+    }
+
     <T> void start(String title, TaskRunner.Job<T> job, java.util.function.Consumer<T> onDone) {
+        start(title, job, onDone, this::problem);
+    }
+
+    <T> void start(String title, TaskRunner.Job<T> job, java.util.function.Consumer<T> onDone,
+            java.util.function.Consumer<UserMessage> onFailed) {
         if (runner.busy()) {
             problem(new UserMessage("Please wait", "Another task is still running.",
                     "Wait for it to finish, or press Cancel."));
@@ -620,7 +788,7 @@ public final class StudySession {
             switch (o.status()) {
                 case COMPLETED -> onDone.accept(o.value());
                 case CANCELLED -> status(title + ": cancelled; nothing was changed.");
-                case FAILED -> problem(o.problem());
+                case FAILED -> onFailed.accept(o.problem());
             }
         });
     }

@@ -34,7 +34,9 @@ final class SignOffPanel extends JPanel {
     private final JButton save = new JButton("Save study file…");
     private final JButton workbook = new JButton("Write sign-off workbook…");
     private final JButton archive = new JButton("Save to archive…");
+    private final JButton removeVoid = new JButton("Remove void signatures");
     private final JLabel verdict = new JLabel(" ");
+    private final JLabel record = new JLabel(" ");
 
     /** What the step asks the window to do. */
     interface Actions {
@@ -86,7 +88,20 @@ final class SignOffPanel extends JPanel {
         archive.setName("saveToArchive");
         archive.setToolTipText("Archives the study as an immutable version (a correction supersedes the current one)");
         archive.addActionListener(e -> actions.saveToArchive());
-        session.signOff().addListener(SignOffForm.Property.SIGNATURES, e -> signatures.fireTableDataChanged());
+        removeVoid.setName("removeVoid");
+        removeVoid.setToolTipText("Removes the signatures that signed an earlier record; the people concerned sign "
+                + "again");
+        removeVoid.addActionListener(e -> {
+            int n = session.signOff().removeVoid();
+            session.problem(new org.holdpoint.ui.model.UserMessage("Void signatures removed", n
+                    + " signature(s) of an earlier record were removed.", "Ask the people concerned to sign the "
+                    + "current record."));
+        });
+        record.setName("sign.record");
+        session.signOff().addListener(SignOffForm.Property.SIGNATURES, e -> {
+            signatures.fireTableDataChanged();
+            refresh();
+        });
         session.results().addListener(org.holdpoint.ui.model.ResultsTable.Property.RESULT, e -> refresh());
         session.addListener(StudySession.Property.BUSY, e -> refresh());
     }
@@ -103,6 +118,8 @@ final class SignOffPanel extends JPanel {
         form.add(Bind.heading("Sign off the change"), c);
         c.gridy++;
         form.add(verdict, c);
+        c.gridy++;
+        form.add(record, c);
         c.gridy++;
         form.add(Bind.hint("A signature here records who signed, in which role and what it means. It is not an "
                 + "electronic signature under regulated electronic-record rules."), c);
@@ -126,6 +143,9 @@ final class SignOffPanel extends JPanel {
         mid.setBorder(BorderFactory.createEmptyBorder(8, 24, 8, 24));
         mid.add(Bind.heading("Signatures"), BorderLayout.NORTH);
         mid.add(new JScrollPane(list), BorderLayout.CENTER);
+        JPanel listActions = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
+        listActions.add(removeVoid);
+        mid.add(listActions, BorderLayout.SOUTH);
         add(mid, BorderLayout.CENTER);
         JPanel out = new JPanel(new FlowLayout(FlowLayout.LEFT, 12, 8));
         out.setBorder(BorderFactory.createEmptyBorder(0, 12, 16, 24));
@@ -159,8 +179,13 @@ final class SignOffPanel extends JPanel {
             signProblem.setText("⚠ " + p);
             return;
         }
+        var stale = session.notCurrent("sign the record");
+        if (stale != null) {
+            signProblem.setText("⚠ " + stale.what());
+            return;
+        }
         signProblem.setText(" ");
-        session.signOff().sign((Signature.Stage) stage.getSelectedItem(), name.getText(), role.getText(), text);
+        session.sign((Signature.Stage) stage.getSelectedItem(), name.getText(), role.getText(), text);
         name.setText("");
         role.setText("");
     }
@@ -170,17 +195,32 @@ final class SignOffPanel extends JPanel {
         verdict.setIcon(new VerdictIcon(session.results().overallLook(), 18));
         verdict.setText(session.results().overallWords());
         save.setEnabled(!session.busy() && session.data() != null);
-        archive.setEnabled(!session.busy() && session.data() != null);
         String why = actions.workbookUnavailable();
-        workbook.setEnabled(!session.busy() && analysed && why == null);
-        workbook.setToolTipText(why != null ? why : analysed ? "The sign-off workbook with the raw data embedded"
-                : "Analyse the study first");
+        String stale = session.results().staleBecause();
+        int voids = session.signOff().voidCount();
+        boolean current = analysed && stale == null;
+        workbook.setEnabled(!session.busy() && current && why == null && voids == 0);
+        workbook.setToolTipText(why != null ? why : !analysed ? "Analyse the study first"
+                : stale != null ? "The results are out of date (" + stale + "): analyse again first"
+                : voids > 0 ? "Remove the void signatures first" : "The sign-off workbook with the raw data embedded");
+        archive.setEnabled(!session.busy() && session.data() != null && current && voids == 0);
+        sign.setEnabled(!session.busy() && current);
+        sign.setToolTipText(current ? "Signs the record as analysed now" : "Analyse the study (again) first");
+        removeVoid.setVisible(voids > 0);
+        String rec = session.signOff().currentRecord();
+        record.setText(stale != null ? "The results are out of date: " + stale + ". Analyse again (F5) before signing."
+                : voids > 0 ? voids + " signature(s) signed an earlier record and are void; remove them before writing."
+                : rec == null ? " " : "Record SHA-256 " + rec);
+    }
+
+    private static String abbrev(String sha) {
+        return sha == null ? "" : sha.substring(0, Math.min(12, sha.length())) + "…";
     }
 
     /** The signatures so far. */
     private final class SignaturesModel extends AbstractTableModel {
         private static final long serialVersionUID = 1L;
-        private final String[] cols = {"Stage", "Printed name", "Role", "Meaning", "Signed at"};
+        private final String[] cols = {"Stage", "Printed name", "Role", "Meaning", "Signed at", "Applies to"};
 
         @Override
         public int getRowCount() {
@@ -205,7 +245,9 @@ final class SignOffPanel extends JPanel {
                 case 1 -> s.name();
                 case 2 -> s.role();
                 case 3 -> s.meaning();
-                default -> s.timestamp();
+                case 4 -> s.timestamp();
+                default -> session.signOff().isVoid(s) ? "VOID: an earlier record " + abbrev(s.record())
+                        : s.record() == null ? "the record when written" : "this record " + abbrev(s.record());
             };
         }
     }

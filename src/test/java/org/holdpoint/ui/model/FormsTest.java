@@ -74,12 +74,38 @@ class FormsTest {
         assertThat(SignOffForm.problem(" ", "QM", "approved")).startsWith("Enter the printed name");
         assertThat(SignOffForm.problem("A", "", "approved")).startsWith("Enter the role");
         assertThat(SignOffForm.problem("A", "QM", " ")).startsWith("Say what the signature means");
-        assertThatThrownBy(() -> s.sign(Signature.Stage.APPROVED, "A", "", "x")).isInstanceOf(
+        String record = "a".repeat(64);
+        assertThatThrownBy(() -> s.sign(Signature.Stage.APPROVED, "A", "", "x", record)).isInstanceOf(
                 IllegalArgumentException.class);
-        Signature g = s.sign(Signature.Stage.APPROVED, " B. Quality ", "quality manager", "approved for production");
+        assertThatThrownBy(() -> s.sign(Signature.Stage.APPROVED, "A", "QM", "x", null)).isInstanceOf(
+                IllegalArgumentException.class);
+        Signature g = s.sign(Signature.Stage.APPROVED, " B. Quality ", "quality manager", "approved for production",
+                record);
         assertThat(g.name()).isEqualTo("B. Quality");
         assertThat(g.timestamp()).isEqualTo("2026-12-01T10:15:30Z");
+        assertThat(g.record()).isEqualTo(record);
         assertThat(s.signatures()).containsExactly(g);
+        assertThat(s.isVoid(g)).isFalse();
+    }
+
+    /**
+     * A signature is linked to the record it signs (21 CFR 11.70: signatures linked to their records so they
+     * cannot be transferred to another record; summarised in our words): when the record changes, the
+     * signature no longer applies and says so; only such void signatures can be removed.
+     */
+    @Test
+    void aSignatureOfAnotherRecordIsVoidAndOnlyVoidOnesCanBeRemoved() {
+        SignOffForm s = new SignOffForm(Clock.systemUTC());
+        Signature first = s.sign(Signature.Stage.PREPARED, "A", "engineer", "prepared", "a".repeat(64));
+        s.setCurrentRecord("b".repeat(64));
+        assertThat(s.isVoid(first)).isTrue();
+        Signature second = s.sign(Signature.Stage.REVIEWED, "B", "quality engineer", "reviewed", "b".repeat(64));
+        assertThat(s.isVoid(second)).isFalse();
+        assertThat(s.voidCount()).isEqualTo(1);
+        assertThat(s.removeVoid()).isEqualTo(1);
+        assertThat(s.signatures()).containsExactly(second);
+        s.setCurrentRecord(null);
+        assertThat(s.isVoid(second)).as("an edited, not yet re-computed record").isTrue();
     }
 
     @Test

@@ -130,6 +130,73 @@ class StudySessionTest {
         assertThat(s.change().get(ChangeForm.Field.REASON)).isEqualTo("typed before the import");
         assertThat(s.criteria().get(0, CriteriaColumn.SD_GROWTH)).isEqualTo("1.6");
         assertThat(s.results().rowCount()).isEqualTo(7);
+        // the message says which data are still on screen
+        assertThat(m.whatToDo()).contains("still those of boring-bar-insert.csv");
+    }
+
+    /** Results computed under other criteria are marked out of date and cannot be written, signed or archived. */
+    @Test
+    void outOfDateResultsAreMarkedAndCannotBeWrittenOrSigned() {
+        s.criteria().set(0, CriteriaColumn.SD_GROWTH, "1.6");
+        assertThat(s.results().staleBecause()).isEqualTo("the criteria changed after the analysis");
+        assertThat(s.results().overallWords()).startsWith("Out of date: the criteria changed");
+        assertThat(s.results().overallLook()).isEqualTo(VerdictLook.NOT_ASSESSED);
+        Path workbook = dir.resolve("stale.xlsx");
+        s.writeWorkbook(workbook);
+        assertThat(problems).hasSize(1);
+        assertThat(((UserMessage) problems.get(0)).title()).isEqualTo("Results out of date");
+        assertThat(workbook).doesNotExist();
+        s.sign(org.holdpoint.study.Signature.Stage.PREPARED, "A. Tester", "process engineer", "prepared");
+        assertThat(problems).hasSize(2);
+        assertThat(s.signOff().signatures()).isEmpty();
+        s.archive().save("A. Tester", "");
+        assertThat(problems).hasSize(3);
+        assertThat(((UserMessage) problems.get(2)).title()).isEqualTo("Results out of date");
+
+        s.analyse();
+        assertThat(s.results().staleBecause()).isNull();
+        s.writeWorkbook(workbook);
+        assertThat(problems).hasSize(3);
+        assertThat(workbook).exists();
+    }
+
+    /**
+     * A signature is bound to the record it signed: an analysis that changes nothing keeps it; one under other
+     * criteria makes it void, and a void signature stops the workbook until it is removed (21 CFR 11.70, linking
+     * of signatures to their records, in our words).
+     */
+    @Test
+    void aSignatureOfAnEarlierRecordIsVoidAndStopsTheWorkbook() throws Exception {
+        s.analyse();
+        s.sign(org.holdpoint.study.Signature.Stage.PREPARED, "A. Tester", "process engineer", "prepared");
+        assertThat(s.signOff().signatures()).hasSize(1);
+        String signed = s.signOff().signatures().get(0).record();
+        assertThat(signed).hasSize(64).isEqualTo(s.signOff().currentRecord());
+        s.analyse();
+        assertThat(s.signOff().voidCount()).as("nothing changed").isZero();
+
+        s.criteria().set(0, CriteriaColumn.SD_GROWTH, "1.6");
+        s.analyse();
+        assertThat(s.signOff().voidCount()).isEqualTo(1);
+        assertThat(s.signOff().currentRecord()).isNotEqualTo(signed);
+        Path workbook = dir.resolve("signed.xlsx");
+        s.writeWorkbook(workbook);
+        assertThat(problems).hasSize(1);
+        assertThat(((UserMessage) problems.get(0)).title()).isEqualTo("Signatures of an earlier record");
+        assertThat(workbook).doesNotExist();
+
+        assertThat(s.signOff().removeVoid()).isEqualTo(1);
+        s.sign(org.holdpoint.study.Signature.Stage.PREPARED, "A. Tester", "process engineer", "prepared");
+        s.writeWorkbook(workbook);
+        assertThat(workbook).exists();
+        var verified = new org.holdpoint.workflow.VerifyUseCase().verify(workbook, null,
+                org.holdpoint.study.Progress.NONE);
+        assertThat(verified.differences()).isEmpty();
+        assertThat(verified.sha256()).isEqualTo(s.signOff().currentRecord());
+
+        // editing the change description changes the record too
+        s.change().set(ChangeForm.Field.TITLE, "another title");
+        assertThat(s.signOff().voidCount()).isEqualTo(1);
     }
 
     @Test
@@ -151,7 +218,8 @@ class StudySessionTest {
     @Test
     void aSavedStudyOpensAgainWithItsCriteriaAndSignatures() {
         s.criteria().set(1, CriteriaColumn.CAPABILITY, "1.67");
-        s.signOff().sign(org.holdpoint.study.Signature.Stage.REVIEWED, "C. Review", "quality engineer",
+        s.analyse();
+        s.sign(org.holdpoint.study.Signature.Stage.REVIEWED, "C. Review", "quality engineer",
                 "reviewed the analysis");
         Path file = dir.resolve("study.holdpoint.json");
         boolean[] then = {false};

@@ -78,8 +78,13 @@ class MainWindowGuiTest {
         Files.deleteIfExists(study);
         Files.deleteIfExists(workbook);
         WindowDriver.onEdt(() -> {
-            w.session().signOff().sign(org.holdpoint.study.Signature.Stage.PREPARED, "A. Tester", "process engineer",
+            w.session().sign(org.holdpoint.study.Signature.Stage.PREPARED, "A. Tester", "process engineer",
                     "prepared the study and its data");
+            return null;
+        });
+        WindowDriver.await("the signature", () -> !w.session().busy()
+                && !w.session().signOff().signatures().isEmpty(), 60_000);
+        WindowDriver.onEdt(() -> {
             w.session().save(study, null);
             return null;
         });

@@ -30,8 +30,13 @@ public final class ScreenshotTour {
         String suffix = theme == Themes.DARK ? "-dark" : "";
         for (Step s : Step.values()) {
             if (s == Step.SIGN_OFF) {
-                WindowDriver.onEdt(() -> win.session().signOff().sign(org.holdpoint.study.Signature.Stage.PREPARED,
-                        "J. Okafor", "process engineer, cell 4", "prepared the study and its data"));
+                WindowDriver.onEdt(() -> {
+                    win.session().sign(org.holdpoint.study.Signature.Stage.PREPARED, "J. Okafor",
+                            "process engineer, cell 4", "prepared the study and its data");
+                    return null;
+                });
+                WindowDriver.await("the signature", () -> !win.session().busy()
+                        && !win.session().signOff().signatures().isEmpty(), 60_000);
             }
             WindowDriver.onEdt(() -> {
                 win.show(s);
