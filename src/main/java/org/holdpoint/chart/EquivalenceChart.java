@@ -104,7 +104,9 @@ public final class EquivalenceChart {
                 right[row] = "not assessed (no margin)";
                 continue;
             }
-            right[row] = glyphs(t.conclusion(), font) + t.conclusion().words();
+            String other = otherFailures(r);
+            right[row] = glyphs(t.conclusion(), font) + t.conclusion().words()
+                    + (other.isEmpty() ? "" : "; FAILED on " + other);
             double x = scaled(t.estimate(), r.margin());
             double xl = scaled(t.ciLower(), r.margin());
             double xh = scaled(t.ciUpper(), r.margin());
@@ -243,6 +245,21 @@ public final class EquivalenceChart {
     private static String glyphs(Conclusion c, Font font) {
         String g = c == Conclusion.INCONCLUSIVE ? "\u25c7 " : c.claimHolds() ? "\u25cf " : "\u2715 ";
         return font.canDisplayUpTo(g) == -1 ? g : "";
+    }
+
+    /**
+     * The criteria other than the mean that failed, in words ("spread", "capability", "spread and
+     * capability"), or "" when none did: a row whose interval passes must not read as passed then.
+     */
+    static String otherFailures(CharacteristicResult r) {
+        List<String> failed = new ArrayList<>();
+        if (r.sdGrowth() != null && !r.sdGrowth().met()) {
+            failed.add("spread");
+        }
+        if (r.checks() != null && Boolean.FALSE.equals(r.checks().capabilityMet())) {
+            failed.add("capability");
+        }
+        return String.join(" and ", failed);
     }
 
     static String rowLabel(CharacteristicResult r) {

@@ -66,7 +66,8 @@ class EquivalenceChartTest {
                 assertThat(words[row]).isEqualTo("not assessed (no margin)");
                 continue;
             }
-            assertThat(words[row]).endsWith(t.conclusion().words());
+            String other = EquivalenceChart.otherFailures(r);
+            assertThat(words[row]).endsWith(t.conclusion().words() + (other.isEmpty() ? "" : "; FAILED on " + other));
             int[] at = find(data, row);
             assertThat((Object) data.getSeriesKey(at[0])).isEqualTo(t.conclusion().words());
             assertThat(data.getXValue(at[0], at[1])).isEqualTo(EquivalenceChart.scaled(t.estimate(), r.margin()));
@@ -79,11 +80,45 @@ class EquivalenceChartTest {
         Range x = plot.getDomainAxis().getRange();
         assertThat(x.contains(-1) && x.contains(1) && x.contains(0)).isTrue();
         // the fixture was built to show all three visual classes
-        assertThat(words).anyMatch(w -> w.endsWith("not equivalent")).anyMatch(w -> w.endsWith("inconclusive"))
-                .anyMatch(w -> w.endsWith("non-inferior"));
+        assertThat(words).anyMatch(w -> w.contains("not equivalent")).anyMatch(w -> w.contains("inconclusive"))
+                .anyMatch(w -> w.contains("non-inferior"));
         assertThat(names[0]).contains("\u00b10.006 mm");
         assertThat(names[2]).contains("\u22120.5/+1 N\u00b7m");
         assertThat(names[3]).contains("\u2265 \u22120.4 HRC");
+    }
+
+    /** A row whose interval passes but whose characteristic failed on spread or capability says so. */
+    @Test
+    void aRowThatPassedTheMeanButFailedOtherwiseSaysWhy() {
+        // invented: the mean stays, the spread grows fourfold against a limit of 1.3 (the analysis, not the
+        // chart, decides; the chart must say why it failed)
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(7);
+        double[] before = ChartFixtures.normal(rnd, 30, 20.0, 0.01, 3);
+        double[] after = ChartFixtures.normal(rnd, 30, 20.0, 0.04, 3);
+        var data = new org.holdpoint.study.CharacteristicData("Flange height", "mm",
+                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(before), "b.csv"),
+                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(after), "a.csv"), false, List.of());
+        var own = new org.holdpoint.study.CharacteristicSettings("mm", org.holdpoint.study.SpecLimits.NONE,
+                new org.holdpoint.study.MarginSpec(org.holdpoint.study.MarginSpec.Kind.ABSOLUTE, -0.5, 0.5), 1.3,
+                null, null);
+        var settings = new org.holdpoint.study.AnalysisSettings(0.05, false, false, null,
+                java.util.Map.of("Flange height", own), null, null);
+        List<CharacteristicResult> results = new org.holdpoint.workflow.StudyAnalyzer().analyze(
+                new org.holdpoint.study.Dataset(List.of(data), List.of(), new org.holdpoint.study.ImportReport(60, java.util.Map.of(), List.of(), List.of())),
+                settings, org.holdpoint.study.Progress.NONE).characteristics();
+        JFreeChart chart = EquivalenceChart.create(results, null, theme);
+        String[] words = ((SymbolAxis) chart.getXYPlot().getRangeAxis(1)).getSymbols();
+        boolean seen = false;
+        for (int row = 0; row < results.size(); row++) {
+            CharacteristicResult r = results.get(row);
+            if (r.verdict().status() == org.holdpoint.study.Verdict.Status.FAILED && r.decidingTost() != null
+                    && r.decidingTost().conclusion().claimHolds()) {
+                assertThat(words[row]).contains("; FAILED on ");
+                seen = true;
+            }
+        }
+        assertThat(seen).as("equivalent but failed on spread").isTrue();
+        assertThat(words[0]).endsWith("equivalent; FAILED on spread");
     }
 
     @Test

@@ -83,7 +83,9 @@ public enum VerdictLook {
     }
 
     /**
-     * What the tests found, in a few words, without the status: e.g. "equivalent; spread above limit".
+     * What decided, in a few words, every criterion that failed first: e.g. "capability: Ppk bound 0.978
+     * below 1; mean: inconclusive" or "spread: sd ratio bound 3.020 above 1.8; mean: equivalent". A
+     * characteristic that failed on spread or capability never reads as merely "equivalent".
      *
      * @param r the result
      * @return the words
@@ -92,9 +94,19 @@ public enum VerdictLook {
         if (r.verdict().status() == Verdict.Status.NOT_ASSESSABLE) {
             return String.join("; ", r.verdict().reasons());
         }
+        java.util.List<String> failed = new java.util.ArrayList<>();
+        if (r.sdGrowth() != null && !r.sdGrowth().met()) {
+            failed.add("spread: sd ratio bound " + org.holdpoint.workflow.Format.ratio(r.sdGrowth().upperBound())
+                    + " above " + org.holdpoint.workflow.Format.num(r.sdGrowth().limit()));
+        }
+        if (r.checks() != null && Boolean.FALSE.equals(r.checks().capabilityMet())) {
+            var cap = r.checks().after().capability();
+            failed.add("capability: Ppk bound " + (cap == null || cap.ppkLower() == null ? "undefined"
+                    : org.holdpoint.workflow.Format.ratio(cap.ppkLower())) + " below "
+                    + org.holdpoint.workflow.Format.num(r.settings().capabilityRequirement()));
+        }
         var eq = r.decidingTost();
-        String c = eq == null ? "no margin set" : eq.conclusion().words();
-        boolean spreadFailed = r.sdGrowth() != null && !r.sdGrowth().met();
-        return spreadFailed ? c + "; spread above limit" : c;
+        failed.add("mean: " + (eq == null ? "no margin set" : eq.conclusion().words()));
+        return String.join("; ", failed);
     }
 }

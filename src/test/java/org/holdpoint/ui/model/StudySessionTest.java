@@ -71,6 +71,27 @@ class StudySessionTest {
         assertThat(r.text(row, ResultColumn.SD_RATIO)).matches("\\d\\.\\d{1,3}");
     }
 
+    /** The Finding column names every criterion that failed, first, so a failed row never reads as passed. */
+    @Test
+    void theFindingNamesEveryFailedCriterion() {
+        ResultsTable r = s.results();
+        int checked = 0;
+        for (int i = 0; i < r.rowCount(); i++) {
+            var c = r.row(i);
+            String finding = (String) r.value(i, ResultColumn.CONCLUSION);
+            boolean spread = c.sdGrowth() != null && !c.sdGrowth().met();
+            boolean capability = c.checks() != null && Boolean.FALSE.equals(c.checks().capabilityMet());
+            assertThat(finding.contains("spread: sd ratio bound")).as(c.name()).isEqualTo(spread);
+            assertThat(finding.contains("capability: Ppk bound")).as(c.name()).isEqualTo(capability);
+            assertThat(finding).as(c.name()).contains("mean: ");
+            if (spread || capability) {
+                assertThat(finding).as(c.name()).doesNotStartWith("mean: ");
+                checked++;
+            }
+        }
+        assertThat(checked).as("the demo fails on spread and on capability").isGreaterThanOrEqualTo(2);
+    }
+
     @Test
     void typingMarksTheStudyUnsaved() {
         s.change().set(ChangeForm.Field.TITLE, "edited");
