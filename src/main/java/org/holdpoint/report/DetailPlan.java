@@ -78,6 +78,9 @@ final class DetailPlan {
         int row = r + 37;
         List<NamedImage> charts = plan.input.chartsOf(n);
         int count = plan.chartCount(n);
+        if (plan.layout() >= 2) {
+            return layout2(row, index, n, c, charts, count);
+        }
         for (int i = 0; i < count; i += 2) {
             // the first page holds the blocks and one row of two charts; each further page three rows
             if (i >= 2 && (i - 2) % 6 == 0) {
@@ -98,6 +101,67 @@ final class DetailPlan {
         }
         s.rowBreaks.add(row);
         return new ChecksPlan(plan, s, c0).section(row + 1, index, c);
+    }
+
+    /** Rows a full-width chart takes on the first page (its caption row included). */
+    static final int WIDE_CHART_ROWS = 24;
+    /** The width of the box plot on the first page, in points. */
+    static final double WIDE_CHART_WIDTH_POINTS = 400;
+
+    /**
+     * Layout 2: the first page holds the numbers and the box plot (the first chart); the second the shape
+     * and capability checks with the other charts two to a row below them. Captions say what a chart shows.
+     */
+    private int layout2(int row, int index, String n, CharacteristicResult c, List<NamedImage> charts, int count) {
+        if (count > 0) {
+            s.captions.add(new ShownCell(row, c0, caption(charts, 0, n), Style.LABEL, 0, n + CAPTION));
+            if (!charts.isEmpty()) {
+                s.images.add(new SheetContent.PlacedImage(charts.get(0), row + 1, c0, WIDE_CHART_WIDTH_POINTS));
+            }
+            for (int k = 0; k < WIDE_CHART_ROWS; k++) {
+                s.height(row + k, ROW);
+            }
+            row += WIDE_CHART_ROWS;
+        }
+        s.rowBreaks.add(row);
+        row = new ChecksPlan(plan, s, c0).section(row + 1, index, c);
+        for (int i = 1; i < count; i += 2) {
+            for (int j = i; j < Math.min(i + 2, count); j++) {
+                int col = c0 + ((j - 1) % 2 == 0 ? 0 : 3);
+                s.captions.add(new ShownCell(row, col, caption(charts, j, n), Style.LABEL, 0, n + CAPTION));
+                if (j < charts.size()) {
+                    s.images.add(new SheetContent.PlacedImage(charts.get(j), row + 1, col, CHART_WIDTH_POINTS));
+                }
+            }
+            for (int k = 0; k < CHART_ROWS; k++) {
+                s.height(row + k, ROW);
+            }
+            row += CHART_ROWS;
+        }
+        return row + 1;
+    }
+
+    /**
+     * A chart's caption in words, from the kind its file name ends with (the names are NNN-name-kind.png).
+     *
+     * @param charts the characteristic's charts
+     * @param j      the chart's position
+     * @param n      the characteristic's name
+     * @return e.g. "Box plot of Bore diameter: before and after, every value shown"
+     */
+    static String caption(List<NamedImage> charts, int j, String n) {
+        String file = j < charts.size() ? charts.get(j).name() : "";
+        String what;
+        if (file.endsWith("-box.png")) {
+            what = "Box plot of " + n + ": before and after, every value shown, with the specification limits";
+        } else if (file.endsWith("-histogram.png")) {
+            what = "Histograms on common bins, fitted normal curve";
+        } else if (file.endsWith("-normal-plot.png")) {
+            what = "Normal probability plot";
+        } else {
+            what = file.isEmpty() ? "" : "Chart of " + n + " (" + file + ")";
+        }
+        return what.isEmpty() ? "" : "Figure " + (j + 1) + ". " + what;
     }
 
     /** The notes heading at row r and the notes below it. */
@@ -246,7 +310,7 @@ final class DetailPlan {
                 n + ": sd ratio");
         pair(r + 8, c0, (g == null ? "" : Texts.percent(g.level()) + " ") + "upper bound of the sd ratio",
                 g == null ? null : g.upperBound(), Style.NUMBER, 4, n + ": sd ratio upper bound");
-        pairText(r + 9, c0, "Sd growth limit", WorkbookPlan.sdGrowth(c), n + ": sd growth result");
+        pairText(r + 9, c0, "Sd growth limit", WorkbookPlan.sdGrowth(c, plan.layout()), n + ": sd growth result");
         s.text(r + 9, c0 + 2, "", Style.CELL, n + ": sd growth result");
         s.merge(r + 9, r + 9, c0 + 1, c0 + 2);
     }

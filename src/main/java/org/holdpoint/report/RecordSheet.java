@@ -14,8 +14,36 @@ import java.util.Map;
 final class RecordSheet {
     /** Characters per chunk, below the 32,767 a cell holds. */
     static final int CHUNK = 32_000;
-    /** The format marker of row 1. */
-    static final String FORMAT = "holdpoint-signoff-record 1";
+    /**
+     * The format marker of row 1; its number is the layout of the shown sheets, so that a workbook is always
+     * compared with the layout it was written in (1: until 2026-12; 2: Summary of 13 columns, one page of
+     * numbers and box plot per characteristic, captions in words, the record's hash, part and revision on the
+     * sign-off page).
+     */
+    static final String FORMAT = "holdpoint-signoff-record 2";
+    /** The layout written now. */
+    static final int LAYOUT = 2;
+    private static final String MARKER = "holdpoint-signoff-record ";
+
+    /**
+     * @param marker the text of the format row
+     * @return the layout it names (1 or 2), or -1 when it is not a record marker this version knows
+     */
+    static int layoutOf(String marker) {
+        if (marker == null || !marker.startsWith(MARKER)) {
+            return -1;
+        }
+        String n = marker.substring(MARKER.length());
+        return n.equals("1") ? 1 : n.equals("2") ? 2 : -1;
+    }
+
+    /**
+     * @param layout a layout number
+     * @return its format marker
+     */
+    static String marker(int layout) {
+        return MARKER + layout;
+    }
     static final String[] LABELS = {"format", "sha256", "characters", "chunks", "generated at", "software",
         "charts per characteristic", "signature algorithm", "public key", "signature", "key fingerprint",
         "template", "signatures"};

@@ -55,7 +55,7 @@ public final class SignoffWorkbook {
         try {
             Styles styles = new Styles(wb);
             Map<String, Integer> counts = RecordSheet.chartCounts(input);
-            WorkbookPlan plan = WorkbookPlan.of(input, template.anchors(), counts);
+            WorkbookPlan plan = WorkbookPlan.of(input, template.anchors(), counts, RecordSheet.LAYOUT);
             for (SheetContent content : plan.contents()) {
                 fill(wb, wb.getSheet(content.sheet), content, styles);
             }
@@ -189,7 +189,11 @@ public final class SignoffWorkbook {
             ps.setFitHeight((short) 0);
             sh.getHeader().setLeft("Holdpoint sign-off workbook");
             sh.getHeader().setRight(org.apache.poi.hssf.usermodel.HeaderFooter.tab());
-            sh.getFooter().setLeft("Change " + id + (title.isEmpty() ? "" : " \u00b7 " + title));
+            String part = escape(input.study().change().partNumber());
+            String rev = escape(input.study().change().revision());
+            sh.getFooter().setLeft("Change " + id + (title.isEmpty() ? "" : " \u00b7 " + title)
+                    + (part.isEmpty() ? "" : " \u00b7 part " + part + (rev.isEmpty() ? "" : " rev " + rev))
+                    + " \u00b7 record " + input.sha256().substring(0, 12));
             sh.getFooter().setRight("Page " + org.apache.poi.hssf.usermodel.HeaderFooter.page() + " of " + org.apache.poi.hssf.usermodel.HeaderFooter.numPages());
             sh.protectSheet(TextBlocks.PROTECTION_PASSWORD);
         }

@@ -78,9 +78,10 @@ public final class SignoffWorkbookReader {
             for (int i = 0; i < values.length; i++) {
                 values[i] = cells.getOrDefault(key(a.row() + 1 + i, a.column() + 1), "");
             }
-            if (!RecordSheet.FORMAT.equals(values[0])) {
-                throw new ReportException("%s is not a Holdpoint sign-off workbook: the record sheet '%s' does not "
-                        + "start with the record format marker", file, a.sheet());
+            if (RecordSheet.layoutOf(values[0]) < 0) {
+                throw new ReportException("%s is not a Holdpoint sign-off workbook this version can read: the record "
+                        + "sheet '%s' does not start with a record format marker it knows (found \"%s\")", file,
+                        a.sheet(), values[0]);
             }
             int chunks;
             try {
@@ -261,7 +262,7 @@ public final class SignoffWorkbookReader {
         for (int i = 0; i < expected.result().characteristics().size(); i++) {
             counts.put(expected.result().characteristics().get(i).name(), i < stored.size() ? stored.get(i) : 0);
         }
-        WorkbookPlan plan = WorkbookPlan.of(expected, anchors, counts);
+        WorkbookPlan plan = WorkbookPlan.of(expected, anchors, counts, layout());
         Anchor raw = anchors.get(TemplateName.RAW_DATA);
         Anchor rec = anchors.get(TemplateName.RECORD);
         Map<String, Iterator<ShownCell>> bySheet = new LinkedHashMap<>();
@@ -312,6 +313,11 @@ public final class SignoffWorkbookReader {
         return "'" + a.sheet() + "'!" + new CellReference(a.row(), a.column()).formatAsString();
     }
 
+    /** @return the layout the workbook was written in (from its record marker) */
+    int layout() {
+        return RecordSheet.layoutOf(record.length > 0 ? record[0] : "");
+    }
+
     /** The record sheet as the writer lays it out, with the values read from it (checked elsewhere). */
     private List<ShownCell> recordCells(Anchor a) {
         List<ShownCell> out = new ArrayList<>();
@@ -321,7 +327,7 @@ public final class SignoffWorkbookReader {
         for (int i = 0; i < RecordSheet.LABELS.length; i++) {
             String v = i < record.length ? record[i] : "";
             if (i == 0) {
-                v = RecordSheet.FORMAT;
+                v = RecordSheet.marker(layout());
             } else if (i == 2) {
                 v = Integer.toString(studyJson.length());
             } else if (i == 3) {

@@ -22,6 +22,13 @@ final class TextBlocks {
             + "What the workbook does give is tamper evidence: the SHA-256 of the embedded study record, an optional "
             + "digital signature of that record with a key pair, and 'holdpoint verify', which re-computes every "
             + "result from the embedded raw data and lists every shown value that no longer matches.";
+    /** Layout 2: the same without the password (a printed password invites removing the protection). */
+    static final String HONESTY_2 = "Sheet protection in this workbook is a convenience against slips, not "
+            + "security: it is easily removed. The typed names of the sign-off block are not an electronic signature "
+            + "in the sense of regulated-industry electronic-record rules. What the workbook does give is tamper "
+            + "evidence: the SHA-256 of the embedded study record, an optional digital signature of that record with "
+            + "a key pair, and 'holdpoint verify', which re-computes every result from the embedded raw data and "
+            + "lists every shown value that no longer matches.";
     static final String SIGN_MEANING = "Prepared: the study was planned, measured and analysed as recorded. "
             + "Reviewed: the method, criteria and data were checked. Approved: the change is released on the basis "
             + "of this record. Write the meaning of your signature in its own words if it differs.";
@@ -109,7 +116,7 @@ final class TextBlocks {
         RecordSeal seal = plan.input.seal();
         put.accept("Digital signature", seal == null ? "none (the record was not signed with a key)"
                 : seal.algorithm() + " signature of the record; key fingerprint SHA-256 " + seal.keyFingerprint());
-        put.accept("What this proves", HONESTY);
+        put.accept("What this proves", honesty());
     }
 
     private static String marginText(AnalysisSettings set, CharacteristicResult c) {
@@ -235,6 +242,16 @@ final class TextBlocks {
         s.text(r++, c, "Change " + plan.input.study().change().id() + ": " + (result.changeVerified()
                 ? "CHANGE VERIFIED" : "CHANGE NOT VERIFIED") + " \u2013 " + WorkbookPlan.detail(result)
                 + " Read the Summary, the Details and the Cautions before signing.", Style.TEXT, "sign-off context");
+        if (plan.layout() >= 2) {
+            // what is signed, beside the signature rows: the part, its revision and the record's hash
+            var change = plan.input.study().change();
+            s.text(r++, c, "Part " + (change.partNumber().isBlank() ? "(not given)" : change.partNumber())
+                    + ", revision " + (change.revision() == null || change.revision().isBlank() ? "(not given)"
+                    : change.revision()) + ". The signatures below sign the study record with SHA-256 "
+                    + plan.input.sha256() + ".", Style.WRAP, "sign-off record");
+            s.merge(r - 1, r - 1, c, c + 5);
+            s.height(r - 1, 26f);
+        }
         r++;
         header(s, r, c, "sign-off header", "Stage", "Printed name", "Role", "Date and time", "Meaning of the "
                 + "signature", "Signature");
@@ -262,10 +279,14 @@ final class TextBlocks {
         s.merge(r, r, c, c + 5);
         s.height(r++, 40f);
         String note = "Entries typed into the empty fields after the workbook was written are not part of the "
-                + "embedded record; 'holdpoint verify' lists them as added by hand. " + HONESTY;
+                + "embedded record; 'holdpoint verify' lists them as added by hand. " + honesty();
         s.text(r, c, note, Style.NOTE, "sign-off statement");
         s.merge(r, r, c, c + 5);
         s.height(r, 66f);
+    }
+
+    private String honesty() {
+        return plan.layout() >= 2 ? HONESTY_2 : HONESTY;
     }
 
     static final String[] SIGN_FIELDS = {"printed name", "role", "date and time", "meaning"};

@@ -25,6 +25,16 @@ final class WorkbookPlan {
         "%s CI (equivalence)", "Equivalence conclusion", "Variance ratio (after / before)", "F-test p",
         "Brown\u2013Forsythe p", "Sd growth", "Capability: after-group Ppk lower bound vs required", "Verdict"};
     static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 9, 8, 10, 27, 20, 15};
+    /**
+     * Layout 2: the Summary a manager reads at 100 % on a landscape page: the deciding numbers only (the
+     * difference test's interval, the variance ratio and the spread tests' p-values are on the Details sheet),
+     * with the criteria that decided a failure in words.
+     */
+    static final String[] SUMMARY_HEADERS_2 = {"#", "Characteristic", "Unit", "n before / after", "Mean before",
+        "Mean after", "Difference (after \u2212 before)", "Margin (L, U)", "%s interval (equivalence)",
+        "Mean: equivalence", "Spread: sd ratio bound vs limit", "Capability: Ppk bound (after) vs required",
+        "Verdict", "Decided by"};
+    static final int[] SUMMARY_WIDTHS_2 = {3, 22, 5, 8, 10, 10, 10, 19, 19, 13, 18, 18, 11, 18};
     /** The widest a Summary column grows to fit its content (longer text wraps or is cut). */
     static final int MAX_SUMMARY_WIDTH = 44;
 
@@ -34,7 +44,11 @@ final class WorkbookPlan {
     final double alpha;
     private final Map<String, Integer> chartCounts;
 
-    private WorkbookPlan(ReportInput input, Map<TemplateName, Anchor> anchors, Map<String, Integer> chartCounts) {
+    private final int layout;
+
+    private WorkbookPlan(ReportInput input, Map<TemplateName, Anchor> anchors, Map<String, Integer> chartCounts,
+            int layout) {
+        this.layout = layout;
         this.input = input;
         this.anchors = anchors;
         this.chartCounts = chartCounts;
@@ -47,16 +61,26 @@ final class WorkbookPlan {
      * @param input   what to show
      * @param anchors where the template's names point
      * @param chartCounts the number of charts per characteristic as laid out (null: count the input's charts)
+     * @param layout      the layout to plan (the one written now, or the one a workbook being verified names)
      * @return the plan (the raw data rows are produced separately by {@link RawDataRows})
      */
-    static WorkbookPlan of(ReportInput input, Map<TemplateName, Anchor> anchors, Map<String, Integer> chartCounts) {
-        WorkbookPlan p = new WorkbookPlan(input, anchors, chartCounts);
+    static WorkbookPlan of(ReportInput input, Map<TemplateName, Anchor> anchors, Map<String, Integer> chartCounts,
+            int layout) {
+        if (layout != 1 && layout != 2) {
+            throw new ReportException("unknown workbook layout %d", layout);
+        }
+        WorkbookPlan p = new WorkbookPlan(input, anchors, chartCounts, layout);
         p.header();
         p.summary();
         new DetailPlan(p).build();
         new TextBlocks(p).build();
         p.rawHeader();
         return p;
+    }
+
+    /** @return the layout being planned (1 or 2, see {@link RecordSheet#FORMAT}) */
+    int layout() {
+        return layout;
     }
 
     int chartCount(String characteristic) {
@@ -113,22 +137,32 @@ final class WorkbookPlan {
         String eq = Texts.percent(1 - 2 * alpha);
         int r0 = a.row();
         int c0 = a.column();
-        for (int i = 0; i < SUMMARY_HEADERS.length; i++) {
-            String h = SUMMARY_HEADERS[i];
-            h = i == 7 ? String.format(Locale.ROOT, h, ci) : i == 9 ? String.format(Locale.ROOT, h, eq) : h;
+        String[] headers = layout == 1 ? SUMMARY_HEADERS : SUMMARY_HEADERS_2;
+        int[] widths = layout == 1 ? SUMMARY_WIDTHS : SUMMARY_WIDTHS_2;
+        for (int i = 0; i < headers.length; i++) {
+            String h = headers[i];
+            if (layout == 1) {
+                h = i == 7 ? String.format(Locale.ROOT, h, ci) : i == 9 ? String.format(Locale.ROOT, h, eq) : h;
+            } else {
+                h = i == 8 ? String.format(Locale.ROOT, h, eq) : h;
+            }
             s.text(r0, c0 + i, h, Style.HEADER, "summary table header");
-            s.width(c0 + i, SUMMARY_WIDTHS[i]);
+            s.width(c0 + i, widths[i]);
         }
         s.height(r0, 40f);
         s.printTitleRows = new int[] {r0, r0};
         int row = r0 + 1;
         int k = 1;
         for (CharacteristicResult c : input.result().characteristics()) {
-            summaryRow(s, row++, c0, k++, c);
+            if (layout == 1) {
+                summaryRow(s, row++, c0, k++, c);
+            } else {
+                summaryRow2(s, row++, c0, k++, c);
+            }
         }
         // columns as wide as their content (a long name, a wide interval), so that nothing is cut or shown
         // as ### when printed
-        int[] need = SUMMARY_WIDTHS.clone();
+        int[] need = widths.clone();
         for (ShownCell cell : s.cells) {
             int i = cell.column() - c0;
             if (cell.row() > r0 && i >= 0 && i < need.length && cell.value() != null) {
@@ -156,8 +190,21 @@ final class WorkbookPlan {
                 + Texts.num(alpha) + "). Capability: the after group's lower confidence bound of Ppk against the "
                 + "required value. An empty cell means the value does not apply or is undefined; the "
                 + "Details sheet says why.";
+        if (layout >= 2) {
+            legend = "Marks: " + Texts.status(Verdict.Status.PASSED) + " \u00b7 " + Texts.status(
+                    Verdict.Status.FAILED) + " \u00b7 " + Texts.status(Verdict.Status.INCONCLUSIVE) + " \u00b7 "
+                    + Texts.status(Verdict.Status.NOT_ASSESSED) + ". Difference = after \u2212 before. Equivalence "
+                    + "intervals " + eq + " (two one-sided tests at \u03b1 = " + Texts.num(alpha) + "). Spread: the "
+                    + "upper confidence bound of sd(after)/sd(before) against the limit. Capability: the after "
+                    + "group's lower confidence bound of Ppk against the required value. An empty cell means the "
+                    + "value does not apply or is undefined; the Details sheet gives every number and why.";
+        }
         s.text(row + 1, c0, legend, Style.NOTE, "summary legend");
-        s.merge(row + 1, row + 1, c0, c0 + SUMMARY_HEADERS.length - 1);
+        s.merge(row + 1, row + 1, c0, c0 + headers.length - 1);
+        if (layout >= 2) {
+            s.height(row + 1, 40f);
+            return;
+        }
         s.height(row + 1, 26f);
     }
 
@@ -194,6 +241,60 @@ final class WorkbookPlan {
                 n + ": verdict");
     }
 
+    private void summaryRow2(SheetContent s, int row, int c0, int index, CharacteristicResult c) {
+        int d = statDecimals(data(c.name()));
+        String n = c.name();
+        s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
+        s.text(row, c0 + 1, n, Style.CELL_WRAP, n + ": name");
+        s.text(row, c0 + 2, c.unit() == null ? "" : c.unit(), Style.CELL, n + ": unit");
+        s.text(row, c0 + 3, (c.before() == null ? 0 : c.before().n()) + " / " + (c.after() == null ? 0 : c.after().n()),
+                Style.CELL, n + ": n before / after");
+        s.number(row, c0 + 4, c.before() == null ? null : c.before().mean(), Style.NUMBER, d, n + ": mean before");
+        s.number(row, c0 + 5, c.after() == null ? null : c.after().mean(), Style.NUMBER, d, n + ": mean after");
+        var t = c.decidingTest();
+        s.number(row, c0 + 6, t == null ? null : t.estimate(), Style.NUMBER, d, n + ": difference");
+        s.text(row, c0 + 7, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
+                Style.CELL, n + ": margin");
+        EquivalenceResult eq = c.decidingTost();
+        s.text(row, c0 + 8, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL,
+                n + ": equivalence CI");
+        s.text(row, c0 + 9, c.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE
+                ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL,
+                n + ": equivalence conclusion");
+        s.text(row, c0 + 10, sdGrowth(c, 2), Style.CELL, n + ": sd growth");
+        s.text(row, c0 + 11, capability(c), Style.CELL, n + ": capability");
+        s.text(row, c0 + 12, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
+                n + ": verdict");
+        s.text(row, c0 + 13, decidedBy(c), Style.CELL_WRAP, n + ": decided by");
+    }
+
+    /**
+     * The criteria that decided a characteristic's verdict, in words: those that failed, or what was missing.
+     *
+     * @param c the result
+     * @return e.g. "spread; capability", "mean (inconclusive)", "all criteria met"
+     */
+    static String decidedBy(CharacteristicResult c) {
+        Verdict.Status st = c.verdict().status();
+        if (st == Verdict.Status.NOT_ASSESSABLE) {
+            return "data cannot show a change";
+        }
+        List<String> failed = new java.util.ArrayList<>();
+        EquivalenceResult eq = c.decidingTost();
+        if (eq == null) {
+            failed.add("no margin set");
+        } else if (!eq.conclusion().claimHolds()) {
+            failed.add("mean (" + eq.conclusion().words() + ")");
+        }
+        if (c.sdGrowth() != null && !c.sdGrowth().met()) {
+            failed.add("spread");
+        }
+        if (c.checks() != null && Boolean.FALSE.equals(c.checks().capabilityMet())) {
+            failed.add("capability");
+        }
+        return failed.isEmpty() ? "all criteria met" : String.join("; ", failed);
+    }
+
     /**
      * An interval as text with fixed decimals; an absent bound is "none", an undefined one "undefined".
      *
@@ -217,7 +318,20 @@ final class WorkbookPlan {
     }
 
     static String sdGrowth(CharacteristicResult c) {
+        return sdGrowth(c, 1);
+    }
+
+    /**
+     * @param c      the result
+     * @param layout 1: the bound to six significant digits (as written until layout 2); 2: three decimals
+     * @return the sd-growth cell
+     */
+    static String sdGrowth(CharacteristicResult c, int layout) {
         var g = c.sdGrowth();
+        if (layout >= 2 && g != null) {
+            return (g.met() ? "met: " : "not met: ") + fixed(g.upperBound(), 3) + (g.met() ? " < " : " \u2265 ")
+                    + Texts.num(g.limit());
+        }
         if (g == null) {
             return "no limit set";
         }

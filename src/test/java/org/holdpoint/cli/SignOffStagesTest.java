@@ -69,8 +69,12 @@ class SignOffStagesTest {
             DataFormatter f = new DataFormatter();
             String[][] rows = {{"prepared", "R. Brandt", "prepared the study"}, {"reviewed", "K. Osei",
                 "method and data checked"}, {"approved", "M. Lindqvist", "approved for production"}};
+            // 11.50 also asks the manifestation to sit with the record: the part, revision and record hash
+            // are written right above the signature rows
+            assertThat(f.formatCellValue(sh.getRow(2).getCell(0))).contains("Part PH-2210").contains(
+                    "signatures below sign the study record with SHA-256 ");
             for (int i = 0; i < 3; i++) {
-                var row = sh.getRow(4 + i);
+                var row = sh.getRow(5 + i);
                 assertThat(f.formatCellValue(row.getCell(0))).isEqualTo(rows[i][0]);
                 assertThat(f.formatCellValue(row.getCell(1))).isEqualTo(rows[i][1]);
                 assertThat(f.formatCellValue(row.getCell(3))).matches("\\d{4}-\\d{2}-\\d{2}T\\d{2}:\\d{2}:\\d{2}Z");

@@ -76,11 +76,11 @@ class SignoffWorkbookTest {
             Sheet summary = wb.getSheet("Summary");
             assertThat(number(summary, "E15")).isCloseTo(25.010558333333332, within(1e-12));
             assertThat(number(summary, "F15")).isCloseTo(25.010708333333334, within(1e-12));
-            assertThat(number(summary, "L15")).isCloseTo(0.70330984979384781, within(1e-12));
-            assertThat(number(summary, "M15")).isCloseTo(0.56926752368071454, within(1e-10));
-            assertThat(text(summary, "H15")).isEqualTo("(\u22120.000441, 0.000741)");
-            assertThat(text(summary, "J15")).isEqualTo("(\u22120.000339, 0.000639)");
+            assertThat(text(summary, "I15")).isEqualTo("(\u22120.000339, 0.000639)");
             Sheet details = wb.getSheet("Details");
+            // spread block (layout 2 shows the variance ratio and the F-test on the Details sheet only)
+            assertThat(number(details, "B25")).isCloseTo(0.70330984979384781, within(1e-12));
+            assertThat(number(details, "B26")).isCloseTo(0.56926752368071454, within(1e-10));
             // difference test block: p at B20, 95 % CI at B21/B22; equivalence 90 % CI at F19/F20
             assertThat(number(details, "B20")).isCloseTo(0.60336471226878152, within(1e-10));
             assertThat(number(details, "B21")).isCloseTo(-0.0004408966285449081, within(1e-14));
@@ -93,14 +93,14 @@ class SignoffWorkbookTest {
     static Stream<Arguments> edits() {
         return Stream.of(
                 Arguments.of("Raw data", "D2", (Consumer<Cell>) c -> c.setCellValue(25.0202), "raw data row 1, Value"),
-                Arguments.of("Summary", "M15", (Consumer<Cell>) c -> c.setCellValue(0.0312), "F-test p"),
+                Arguments.of("Details", "B26", (Consumer<Cell>) c -> c.setCellValue(0.0312), "F-test p"),
                 Arguments.of("Details", "F20", (Consumer<Cell>) c -> c.setCellValue(0.0006), "equivalence CI upper"),
-                Arguments.of("Summary", "I15", (Consumer<Cell>) c -> c.setCellValue("(\u22120.005000, 0.005000)"),
+                Arguments.of("Summary", "H15", (Consumer<Cell>) c -> c.setCellValue("(\u22120.005000, 0.005000)"),
                         "margin"),
                 Arguments.of("Details", "F10", (Consumer<Cell>) c -> c.setCellValue(-0.005), "margin L"),
-                Arguments.of("Sign-off", "D5", (Consumer<Cell>) c -> c.setCellValue("2026-11-25T16:00:00Z"),
+                Arguments.of("Sign-off", "D6", (Consumer<Cell>) c -> c.setCellValue("2026-11-25T16:00:00Z"),
                         "sign-off prepared: date and time"),
-                Arguments.of("Summary", "Q15", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
+                Arguments.of("Summary", "M15", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
                         "verdict"));
     }
 
@@ -137,10 +137,10 @@ class SignoffWorkbookTest {
 
     @Test
     void handEntriesInEmptySignOffFieldsAreListedApart() throws IOException {
-        Path signed = edit(file, "Sign-off", "B6", c -> c.setCellValue("R. Haddad"));
+        Path signed = edit(file, "Sign-off", "B7", c -> c.setCellValue("R. Haddad"));
         VerifyResult r = verify(signed);
         assertThat(r.status()).isEqualTo(VerifyResult.Status.INTACT);
-        assertThat(r.handEntries()).singleElement().asString().contains("Sign-off!B6").contains("R. Haddad");
+        assertThat(r.handEntries()).singleElement().asString().contains("Sign-off!B7").contains("R. Haddad");
     }
 
     @Test
@@ -151,14 +151,14 @@ class SignoffWorkbookTest {
         new ReportUseCase(CLOCK).write(study, result, ReportOptions.withDefaults().withSignOff(new Signature(
                 Signature.Stage.PREPARED, "@SUM(A1)", "+cmd", "-2+3", null)), f);
         try (XSSFWorkbook wb = open(f)) {
-            for (String[] at : new String[][] {{"Summary", "B15"}, {"Sign-off", "B5"}, {"Sign-off", "C5"},
-                {"Sign-off", "E5"}, {"Raw data", "A2"}}) {
+            for (String[] at : new String[][] {{"Summary", "B15"}, {"Sign-off", "B6"}, {"Sign-off", "C6"},
+                {"Sign-off", "E6"}, {"Raw data", "A2"}}) {
                 Cell c = cell(wb.getSheet(at[0]), at[1]);
                 assertThat(c.getCellType()).as(at[0] + "!" + at[1]).isEqualTo(CellType.STRING);
                 assertThat(c.getCellStyle().getQuotePrefixed()).as(at[0] + "!" + at[1]).isTrue();
             }
             assertThat(cell(wb.getSheet("Summary"), "B15").getStringCellValue()).isEqualTo("=1+1");
-            assertThat(cell(wb.getSheet("Sign-off"), "B5").getStringCellValue()).isEqualTo("@SUM(A1)");
+            assertThat(cell(wb.getSheet("Sign-off"), "B6").getStringCellValue()).isEqualTo("@SUM(A1)");
         }
         assertThat(verify(f).differences()).isEmpty();
     }
@@ -353,10 +353,10 @@ class SignoffWorkbookTest {
                     .isEqualTo("meets it");
             assertThat(text(d, "A" + (rowOf(d, 0, "Recommendation", top) + 2))).isEqualTo(k.recommendation());
             Sheet summary = wb.getSheet("Summary");
-            assertThat(text(summary, "P14")).startsWith("Capability");
-            assertThat(text(summary, "P15")).isEqualTo("met: 3.512 > 1.33");
+            assertThat(text(summary, "L14")).startsWith("Capability");
+            assertThat(text(summary, "L15")).isEqualTo("met: 3.512 > 1.33");
             // torque has no specification limits: an empty capability cell
-            assertThat(text(summary, "P17")).isEmpty();
+            assertThat(text(summary, "L17")).isEmpty();
         }
         assertThat(verify(f).differences()).isEmpty();
         int top;
@@ -380,7 +380,7 @@ class SignoffWorkbookTest {
             assertThat(x.cell()).isEqualTo(pCell);
             assertThat(x.what()).contains("rank p");
         });
-        VerifyResult r3 = verify(edit(f, "Summary", "P15", c -> c.setCellValue("met: 1.500 > 1.33")));
+        VerifyResult r3 = verify(edit(f, "Summary", "L15", c -> c.setCellValue("met: 1.500 > 1.33")));
         assertThat(r3.differences()).singleElement().satisfies(x -> assertThat(x.what()).contains("capability"));
     }
 

@@ -4,31 +4,32 @@ import org.holdpoint.study.CharacteristicResult;
 import org.holdpoint.study.Verdict;
 
 /**
- * How a verdict is shown: always in words and with its own shape, so that colour never carries the
- * meaning alone; also the sort order (most urgent first).
+ * How a verdict is shown: words first, then a mark of the project's own design whose outline and sign tell
+ * the verdicts apart without colour (an equals sign for "the same", an unequal sign for "changed", an
+ * ellipsis for "not enough data yet"); also the sort order (most urgent first).
  */
 public enum VerdictLook {
-    /** Passed: a disc with a tick. */
-    PASSED(Shape.DISC_TICK, "passed", 3),
-    /** Failed: a square with a cross. */
-    FAILED(Shape.SQUARE_CROSS, "failed", 0),
-    /** Inconclusive: a triangle with a question mark. */
-    INCONCLUSIVE(Shape.TRIANGLE_QUERY, "inconclusive", 1),
-    /** Not assessed (no margin): a hollow ring with a dash. */
-    NOT_ASSESSED(Shape.RING_DASH, "not assessed", 2),
+    /** Passed: a filled hexagon with an equals sign. */
+    PASSED(Shape.HEXAGON_EQUALS, "passed", 3),
+    /** Failed: a filled diamond with an unequal sign. */
+    FAILED(Shape.DIAMOND_UNEQUAL, "failed", 0),
+    /** Inconclusive: an unfilled hexagon with an ellipsis. */
+    INCONCLUSIVE(Shape.OPEN_HEXAGON_ELLIPSIS, "inconclusive", 1),
+    /** Not assessed (no margin): an unfilled bar with a dash. */
+    NOT_ASSESSED(Shape.BAR_DASH, "not assessed", 2),
     /** Not assessable (the data cannot show a change): an unfilled square with a slash. */
     NOT_ASSESSABLE(Shape.SQUARE_SLASH, "not assessable", 0);
 
-    /** The shapes drawn by the window; each differs in outline, not only in colour. */
+    /** The marks drawn by the window; each differs in outline and sign, not only in colour. */
     public enum Shape {
-        /** A filled circle with a tick. */
-        DISC_TICK,
-        /** A filled square with a cross. */
-        SQUARE_CROSS,
-        /** A filled triangle with a question mark. */
-        TRIANGLE_QUERY,
-        /** An unfilled circle with a dash. */
-        RING_DASH,
+        /** A filled hexagon with an equals sign. */
+        HEXAGON_EQUALS,
+        /** A filled diamond with an unequal sign. */
+        DIAMOND_UNEQUAL,
+        /** An unfilled hexagon with three dots. */
+        OPEN_HEXAGON_ELLIPSIS,
+        /** An unfilled wide rounded bar with a dash. */
+        BAR_DASH,
         /** An unfilled square with a diagonal slash. */
         SQUARE_SLASH
     }

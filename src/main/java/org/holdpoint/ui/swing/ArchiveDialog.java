@@ -95,8 +95,7 @@ final class ArchiveDialog extends JDialog {
             }
             c.setName("archive." + f.name());
             fields.put(f, c);
-            JLabel p = new JLabel(" ");
-            p.setForeground(ChartTheme.FAIL);
+            JLabel p = Bind.errorLabel();
             problems.put(f, p);
         }
         ((JTextField) fields.get(Field.URL)).putClientProperty("JTextField.placeholderText",
@@ -289,7 +288,7 @@ final class ArchiveDialog extends JDialog {
     private void refreshVerified() {
         var r = browser.verified();
         verification.setText(String.join("\n", browser.verifiedLines()));
-        verification.setForeground(r != null && !r.intact() ? ChartTheme.FAIL
+        verification.setForeground(r != null && !r.intact() ? Bind.errorColour()
                 : javax.swing.UIManager.getColor("Label.foreground"));
     }
 

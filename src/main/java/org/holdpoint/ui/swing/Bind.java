@@ -67,6 +67,27 @@ final class Bind {
     }
 
     /** Makes a label a section heading (larger, bold). */
+    /** @return the colour of error text, readable on the current theme (dark red on light, salmon on dark) */
+    static java.awt.Color errorColour() {
+        return com.formdev.flatlaf.FlatLaf.isLafDark() ? new java.awt.Color(0xFF, 0x9A, 0x8C)
+                : new java.awt.Color(0xB0, 0x24, 0x18);
+    }
+
+    /** @return a label for a problem, in the error colour of whichever theme is installed (also after a switch) */
+    static JLabel errorLabel() {
+        JLabel l = new JLabel(" ") {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public void updateUI() {
+                super.updateUI();
+                setForeground(errorColour());
+            }
+        };
+        l.setForeground(errorColour());
+        return l;
+    }
+
     static JLabel heading(String text) {
         JLabel l = new JLabel(text);
         l.putClientProperty("FlatLaf.styleClass", "h3");

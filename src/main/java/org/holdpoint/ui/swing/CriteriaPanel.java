@@ -217,7 +217,7 @@ final class CriteriaPanel extends JPanel {
     }
 
     private static Color errorText() {
-        return com.formdev.flatlaf.FlatLaf.isLafDark() ? new Color(0xFF, 0x9A, 0x8C) : new Color(0xB0, 0x24, 0x18);
+        return Bind.errorColour();
     }
 
     /** The criteria rows, plus a last "Check" column with the row's first problem in words. */

@@ -258,6 +258,7 @@ public final class MainWindow extends JFrame {
         VerdictIcon icon = new VerdictIcon(r.overallLook(), 28);
         banner.setIcon(icon);
         banner.setIconTextGap(12);
+        banner.setHorizontalTextPosition(javax.swing.SwingConstants.LEADING);
         banner.setText(r.overallWords());
         bannerCounts.setText(r.counts().isEmpty() ? " " : "      " + r.counts()
                 + ".  The change is verified only when every characteristic passes.");

@@ -76,9 +76,8 @@ final class PlanPanel extends JPanel {
             form.addListener(PlanForm.Property.VALUES, e -> refresh.run());
             t.addActionListener(e -> form.plan());
             fields.put(f, t);
-            JLabel p = new JLabel(" ");
+            JLabel p = Bind.errorLabel();
             p.setName("plan.problem." + f.name());
-            p.setForeground(ChartTheme.FAIL);
             problems.put(f, p);
             labels.put(f, Bind.label(f.label(), (char) 0, t));
         }

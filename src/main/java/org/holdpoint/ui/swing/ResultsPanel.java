@@ -295,8 +295,10 @@ final class ResultsPanel extends JPanel {
         public Component getTableCellRendererComponent(JTable t, Object v, boolean sel, boolean focus, int r, int c) {
             super.getTableCellRendererComponent(t, v, sel, focus, r, c);
             VerdictLook look = (VerdictLook) v;
+            // words first, the mark after them
             setIcon(new VerdictIcon(look, 16));
             setText(look.words());
+            setHorizontalTextPosition(LEADING);
             setIconTextGap(8);
             return this;
         }

@@ -57,6 +57,11 @@ enum Themes {
         FlatLaf.updateUI();
     }
 
+    /** @return whether the installed look is a dark one (FlatLaf says so of its dark themes) */
+    static boolean isDark() {
+        return FlatLaf.isLafDark();
+    }
+
     /**
      * @param store the preferences
      * @return the remembered look, light by default
