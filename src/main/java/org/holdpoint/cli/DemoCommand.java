@@ -9,7 +9,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.holdpoint.study.ChangeDescription;
-import org.holdpoint.study.ChangeKind;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.workflow.AnalysisOutcome;
@@ -29,9 +28,7 @@ import picocli.CommandLine.Option;
 final class DemoCommand implements Callable<Integer> {
     static final String STUDY = "boring-bar-insert";
     /** The invented change behind the demo data. */
-    static final ChangeDescription DEMO_CHANGE = new ChangeDescription("CR-DEMO-0412",
-            "Second-source boring-bar insert for the pump housing bore (demo)", ChangeKind.SUPPLIER, "PH-2210", "C",
-            "second source for the carbide inserts of cell 4 (invented demo study)", "demo", null, null);
+    static final ChangeDescription DEMO_CHANGE = org.holdpoint.workflow.StudyService.DEMO_CHANGE;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

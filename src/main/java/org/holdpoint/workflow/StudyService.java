@@ -24,6 +24,16 @@ import org.holdpoint.study.StudyResult;
  * can act on arrives as a {@link StudyProblem}; a cancel arrives as {@link Progress.CancelledException}.
  */
 public final class StudyService {
+    /**
+     * The invented change behind the bundled demo study, the same in the command line's demo and the window's:
+     * a second-source boring-bar insert on a pump housing bore.
+     */
+    public static final org.holdpoint.study.ChangeDescription DEMO_CHANGE = new org.holdpoint.study.ChangeDescription(
+            "CR-DEMO-0412", "Second-source boring-bar insert for the pump housing bore (demo)",
+            org.holdpoint.study.ChangeKind.SUPPLIER, "PH-2210", "C",
+            "second source for the carbide inserts of cell 4 (invented demo study)", "process engineering, cell 4",
+            "2026-11-16", "2026-11-27");
+
     /** The name of the bundled demo study (files {@code NAME.csv} and {@code NAME.settings.csv}). */
     public static final String DEMO_STUDY = "boring-bar-insert";
     private final StudyAnalyzer analyzer = new StudyAnalyzer();

@@ -23,7 +23,11 @@ public final class ChangeForm {
         /** Why the change is made. */
         REASON("Reason"),
         /** Who requested it. */
-        REQUESTER("Requested by");
+        REQUESTER("Requested by"),
+        /** When it was requested (yyyy-mm-dd). */
+        REQUEST_DATE("Requested on"),
+        /** When the study was made (yyyy-mm-dd). */
+        STUDY_DATE("Study date");
 
         private final String label;
 
@@ -81,11 +85,46 @@ public final class ChangeForm {
         return ChangeKind.parse(values.get(Field.KIND));
     }
 
-    /** @return the description as the study stores it */
+    /**
+     * Why a field's text cannot be stored, or null when it can: the two dates must be calendar dates written
+     * yyyy-mm-dd (ISO 8601), or empty.
+     *
+     * @param f the field
+     * @return the problem in plain words, or null
+     */
+    public String problem(Field f) {
+        if (f != Field.REQUEST_DATE && f != Field.STUDY_DATE) {
+            return null;
+        }
+        String t = get(f).trim();
+        if (t.isEmpty()) {
+            return null;
+        }
+        try {
+            java.time.LocalDate.parse(t);
+            return null;
+        } catch (java.time.format.DateTimeParseException e) {
+            return "Write the date as year-month-day, e.g. 2026-11-27 (got \"" + t + "\").";
+        }
+    }
+
+    /**
+     * @return the description as the study stores it
+     * @throws IllegalArgumentException when a date is not a date (with {@link #problem}'s words)
+     */
     public ChangeDescription toDescription() {
+        for (Field f : new Field[] {Field.REQUEST_DATE, Field.STUDY_DATE}) {
+            if (problem(f) != null) {
+                throw new IllegalArgumentException(f.label() + ": " + problem(f));
+            }
+        }
         return new ChangeDescription(get(Field.ID).trim(), get(Field.TITLE).trim(), kind(),
                 get(Field.PART_NUMBER).trim(), get(Field.REVISION).trim(), get(Field.REASON).trim(),
-                get(Field.REQUESTER).trim(), null, null);
+                get(Field.REQUESTER).trim(), blankToNull(get(Field.REQUEST_DATE)), blankToNull(get(Field.STUDY_DATE)));
+    }
+
+    private static String blankToNull(String s) {
+        return s == null || s.isBlank() ? null : s.trim();
     }
 
     /**
@@ -104,6 +143,8 @@ public final class ChangeForm {
             set(Field.REVISION, d.revision());
             set(Field.REASON, d.reason());
             set(Field.REQUESTER, d.requester());
+            set(Field.REQUEST_DATE, d.requestDate() == null ? "" : d.requestDate());
+            set(Field.STUDY_DATE, d.studyDate() == null ? "" : d.studyDate());
         } finally {
             onEdit = keep;
         }

@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Map;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.ChangeDescription;
-import org.holdpoint.study.ChangeKind;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicSettings;
@@ -239,9 +238,7 @@ public final class StudySession {
             return load(s, Map.of(), wide, p);
         }, l -> {
             apply(l);
-            change.load(new ChangeDescription("CR-DEMO-0412", "Second-source carbide insert for the boring bar",
-                    ChangeKind.SUPPLIER, "HB-2207", "C", "Second source for the finishing insert of bore Ø25 H7",
-                    "Process engineering, cell 4", null, null));
+            change.load(StudyService.DEMO_CHANGE);
             setDirty(false);
             status("Demo study opened: an invented example; change anything and analyse again.");
         });
@@ -496,7 +493,8 @@ public final class StudySession {
         try {
             study = study();
         } catch (RuntimeException e) {
-            problem(new UserMessage("Nothing to save yet", e.getMessage(), "Open data and set the criteria first."));
+            problem(new UserMessage("Cannot save yet", e.getMessage(), data == null
+                    ? "Open data and set the criteria first." : "Correct what is named, then save again."));
             return;
         }
         // a study file never holds results that do not belong to its criteria: out-of-date results are left
@@ -532,7 +530,8 @@ public final class StudySession {
         try {
             study = study();
         } catch (RuntimeException e) {
-            problem(new UserMessage("Nothing to write yet", e.getMessage(), "Open data and analyse them first."));
+            problem(new UserMessage("Cannot write yet", e.getMessage(), data == null
+                    ? "Open data and analyse them first." : "Correct what is named, then write again."));
             return;
         }
         UserMessage m = notCurrent("write the sign-off workbook");

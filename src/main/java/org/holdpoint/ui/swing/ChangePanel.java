@@ -21,7 +21,9 @@ import org.holdpoint.ui.model.ChangeForm.Field;
 final class ChangePanel extends JPanel {
     private static final long serialVersionUID = 1L;
     private static final Map<Field, Character> MNEMONICS = Map.of(Field.ID, 'I', Field.TITLE, 'T', Field.KIND, 'K',
-            Field.PART_NUMBER, 'P', Field.REVISION, 'V', Field.REASON, 'A', Field.REQUESTER, 'B');
+            Field.PART_NUMBER, 'P', Field.REVISION, 'V', Field.REASON, 'A', Field.REQUESTER, 'B', Field.REQUEST_DATE, 'Q',
+            Field.STUDY_DATE, 'U');
+    private final Map<Field, javax.swing.JLabel> problems = new EnumMap<>(Field.class);
     private final transient ChangeForm form;
     private final Map<Field, JComponent> fields = new EnumMap<>(Field.class);
     private JComboBox<String> kind;
@@ -51,8 +53,19 @@ final class ChangePanel extends JPanel {
             }
             t.setName("change." + f.name());
             Runnable refresh = Bind.text(t, () -> form.get(f), v -> form.set(f, v));
-            form.addListener(f, e -> refresh.run());
+            javax.swing.JLabel problem = Bind.errorLabel();
+            problem.setName("change.problem." + f.name());
+            problems.put(f, problem);
+            form.addListener(f, e -> {
+                refresh.run();
+                String p = form.problem(f);
+                problem.setText(p == null ? " " : "\u26a0 " + p);
+            });
             fields.put(f, t);
+        }
+        for (Field f : new Field[] {Field.REQUEST_DATE, Field.STUDY_DATE}) {
+            ((JTextField) fields.get(f)).putClientProperty("JTextField.placeholderText", "yyyy-mm-dd");
+            ((JTextField) fields.get(f)).setColumns(12);
         }
         ((JTextField) fields.get(Field.ID)).putClientProperty("JTextField.placeholderText", "e.g. CR-2026-0412");
         ((JTextField) fields.get(Field.TITLE)).putClientProperty("JTextField.placeholderText",
@@ -84,7 +97,16 @@ final class ChangePanel extends JPanel {
             c.gridx = 1;
             c.weightx = 1;
             c.fill = GridBagConstraints.HORIZONTAL;
-            grid.add(field instanceof JTextArea ? new JScrollPane(field) : field, c);
+            if (f == Field.REQUEST_DATE || f == Field.STUDY_DATE) {
+                JPanel row = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 0, 0));
+                row.add(field);
+                row.add(javax.swing.Box.createHorizontalStrut(12));
+                row.add(problems.get(f));
+                c.fill = GridBagConstraints.NONE;
+                grid.add(row, c);
+            } else {
+                grid.add(field instanceof JTextArea ? new JScrollPane(field) : field, c);
+            }
         }
         c.gridy++;
         c.weighty = 1;

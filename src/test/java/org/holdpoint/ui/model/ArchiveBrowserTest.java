@@ -69,9 +69,9 @@ class ArchiveBrowserTest {
 
         a.search();
         assertThat(a.rows()).hasSize(1);
-        assertThat(a.value(0, ArchiveBrowser.Column.PART)).isEqualTo("HB-2207 rev C");
+        assertThat(a.value(0, ArchiveBrowser.Column.PART)).isEqualTo("PH-2210 rev C");
         assertThat(a.value(0, ArchiveBrowser.Column.STATE)).isEqualTo("current");
-        assertThat(count(Field.PART, "hb-2207")).as("case-insensitive").isEqualTo(1);
+        assertThat(count(Field.PART, "ph-2210")).as("case-insensitive").isEqualTo(1);
         assertThat(count(Field.PART, "HB-9999")).isZero();
         assertThat(count(Field.CHARACTERISTIC, "Bore depth")).isEqualTo(1);
         assertThat(count(Field.CHARACTERISTIC, "Thread pitch")).isZero();

@@ -67,6 +67,22 @@ class FormsTest {
         assertThatThrownBy(() -> f.set(ChangeForm.Field.KIND, "paint")).hasMessageContaining("is not a kind of change");
     }
 
+    /** The dates of the change are calendar dates written yyyy-mm-dd (ISO 8601), or left empty. */
+    @Test
+    void datesOfTheChangeAreIsoDatesOrEmpty() {
+        ChangeForm f = new ChangeForm();
+        f.set(ChangeForm.Field.REQUEST_DATE, "2026-11-16");
+        f.set(ChangeForm.Field.STUDY_DATE, "");
+        assertThat(f.problem(ChangeForm.Field.REQUEST_DATE)).isNull();
+        assertThat(f.toDescription().requestDate()).isEqualTo("2026-11-16");
+        assertThat(f.toDescription().studyDate()).isNull();
+        f.set(ChangeForm.Field.STUDY_DATE, "27.11.2026");
+        assertThat(f.problem(ChangeForm.Field.STUDY_DATE)).contains("year-month-day");
+        assertThatThrownBy(f::toDescription).hasMessageStartingWith("Study date: Write the date");
+        f.set(ChangeForm.Field.STUDY_DATE, "2026-02-30");
+        assertThat(f.problem(ChangeForm.Field.STUDY_DATE)).as("no such day").isNotNull();
+    }
+
     @Test
     void signaturesNeedNameRoleAndMeaningAndAreStamped() {
         Clock clock = Clock.fixed(Instant.parse("2026-12-01T10:15:30Z"), ZoneOffset.UTC);

@@ -68,7 +68,7 @@ public final class PlanArchiveTour {
                 && win.session().archive().lastSaved().version() == 2, 60_000);
         WindowDriver.onEdt(() -> {
             win.showArchive();
-            win.session().archive().set(ArchiveBrowser.Field.PART, "HB-2207");
+            win.session().archive().set(ArchiveBrowser.Field.PART, "PH-2210");
             win.session().archive().search();
             return null;
         });
