@@ -168,10 +168,34 @@ final class DetailPlan {
     private void notes(int r, String n, CharacteristicResult c) {
         s.text(r, c0, "Notes", Style.HEADER, n + ": notes header");
         s.merge(r, r, c0, c0 + 5);
-        String notes = c.notes().isEmpty() ? "none" : String.join("\n", c.notes());
+        List<String> list = plan.layout() >= 2 ? collapse(c.notes()) : c.notes();
+        String notes = list.isEmpty() ? "none" : String.join("\n", list);
         s.text(r + 1, c0, notes, Style.WRAP, n + ": notes");
         s.merge(r + 1, r + 1, c0, c0 + 5);
         s.height(r + 1, lines(notes, 110) * 12f + 4);
+    }
+
+    /**
+     * Notes said once: a "before …" and an "after …" note with the same words become one "before and after …".
+     *
+     * @param notes the notes
+     * @return the notes without such repetition, in their order
+     */
+    static List<String> collapse(List<String> notes) {
+        List<String> out = new java.util.ArrayList<>(notes);
+        for (int i = 0; i < out.size(); i++) {
+            String a = out.get(i);
+            if (!a.startsWith("before ")) {
+                continue;
+            }
+            String rest = a.substring("before ".length());
+            int j = out.indexOf("after " + rest);
+            if (j > i) {
+                out.set(i, "before and after " + rest);
+                out.remove(j);
+            }
+        }
+        return out;
     }
 
     static int lines(String text, int perLine) {

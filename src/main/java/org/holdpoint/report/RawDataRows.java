@@ -29,8 +29,19 @@ final class RawDataRows implements Iterator<ShownCell[]> {
     private int row;
     private int decimals;
     private final Map<String, Integer> decimalsByName = new HashMap<>();
+    private final int layout;
+    private final org.holdpoint.study.AnalysisSettings settings;
 
-    RawDataRows(ReportInput input, Anchor anchor) {
+    /**
+     * @param input  what is written
+     * @param anchor where the raw data start
+     * @param layout 1: the unit column shows the unit read with the data and the file its full path; 2: the unit
+     *               in force (the criteria's, else the data's) and the file's name (its path is on the Import
+     *               report)
+     */
+    RawDataRows(ReportInput input, Anchor anchor, int layout) {
+        this.layout = layout;
+        this.settings = input.study().settings();
         this.data = input.study().data().characteristics();
         this.exclusions = input.study().settings().exclusions();
         this.r0 = anchor.row() + 1;
@@ -82,12 +93,28 @@ final class RawDataRows implements Iterator<ShownCell[]> {
             text(0, c.name()), text(1, group == 0 ? "before" : "after"),
             new ShownCell(row, c0 + 2, (double) (i + 1), Style.INTEGER, 0, null),
             new ShownCell(row, c0 + 3, g.sample().value(i), Style.NUMBER, decimals, null),
-            text(4, c.unit()), text(5, o.file()), text(6, o.sheet()), text(7, o.cell()), text(8, g.unit(i)),
+            text(4, unit(c)), text(5, file(o)), text(6, o.sheet()), text(7, o.cell()), text(8, g.unit(i)),
             text(9, g.lot(i)), text(10, g.subgroup(i)), text(11, g.sequence(i)), text(12, exclusion(c.name(), o, group == 0))};
         row++;
         i++;
         skipEmpty();
         return cells;
+    }
+
+    private String unit(CharacteristicData c) {
+        if (layout < 2) {
+            return c.unit();
+        }
+        String set = settings.resolve(c.name()).unit();
+        return set != null && !set.isBlank() ? set : c.unit();
+    }
+
+    private String file(Origin o) {
+        if (layout < 2 || o.file() == null) {
+            return o.file();
+        }
+        int slash = Math.max(o.file().lastIndexOf('/'), o.file().lastIndexOf('\\'));
+        return o.file().substring(slash + 1);
     }
 
     private ShownCell text(int col, String value) {

@@ -187,14 +187,16 @@ public final class SignoffWorkbook {
             PrintSetup ps = sh.getPrintSetup();
             ps.setFitWidth((short) 1);
             ps.setFitHeight((short) 0);
-            sh.getHeader().setLeft("Holdpoint sign-off workbook");
-            sh.getHeader().setRight(org.apache.poi.hssf.usermodel.HeaderFooter.tab());
             String part = escape(input.study().change().partNumber());
             String rev = escape(input.study().change().revision());
-            sh.getFooter().setLeft("Change " + id + (title.isEmpty() ? "" : " \u00b7 " + title)
-                    + (part.isEmpty() ? "" : " \u00b7 part " + part + (rev.isEmpty() ? "" : " rev " + rev))
-                    + " \u00b7 record " + input.sha256().substring(0, 12));
-            sh.getFooter().setRight("Page " + org.apache.poi.hssf.usermodel.HeaderFooter.page() + " of " + org.apache.poi.hssf.usermodel.HeaderFooter.numPages());
+            // short enough for a portrait page: who and what on the left, the record in the middle, the page
+            sh.getHeader().setLeft("Holdpoint sign-off workbook" + (title.isEmpty() ? "" : " \u00b7 " + title));
+            sh.getHeader().setRight(org.apache.poi.hssf.usermodel.HeaderFooter.tab());
+            sh.getFooter().setLeft("Change " + id + (part.isEmpty() ? "" : " \u00b7 part " + part
+                    + (rev.isEmpty() ? "" : " rev " + rev)));
+            sh.getFooter().setCenter("record " + input.sha256().substring(0, 16));
+            sh.getFooter().setRight("Page " + org.apache.poi.hssf.usermodel.HeaderFooter.page() + " of "
+                    + org.apache.poi.hssf.usermodel.HeaderFooter.numPages());
             sh.protectSheet(TextBlocks.PROTECTION_PASSWORD);
         }
         int summary = wb.getSheetIndex(template.anchor(TemplateName.SUMMARY_TABLE).sheet());
@@ -205,14 +207,14 @@ public final class SignoffWorkbook {
 
     /** Escapes the header/footer control character {@code &} in user text. */
     static String escape(String text) {
-        String t = text.length() > 80 ? text.substring(0, 79) + "\u2026" : text;
+        String t = text.length() > 60 ? text.substring(0, 59) + "\u2026" : text;
         return t.replace("&", "&&");
     }
 
     private void rawData(SXSSFWorkbook sx, ReportInput input, Styles styles) {
         Anchor a = template.anchor(TemplateName.RAW_DATA);
         Sheet sh = sx.getSheet(a.sheet());
-        RawDataRows rows = new RawDataRows(input, a);
+        RawDataRows rows = new RawDataRows(input, a, RecordSheet.LAYOUT);
         while (rows.hasNext()) {
             int r = rows.nextRow();
             ShownCell[] cells = rows.next();

@@ -272,7 +272,7 @@ public final class SignoffWorkbookReader {
             cells.sort(java.util.Comparator.comparingInt(ShownCell::row).thenComparingInt(ShownCell::column));
             Iterator<ShownCell> it = cells.iterator();
             if (c.sheet.equals(raw.sheet())) {
-                it = concat(it, new Flat(new RawDataRows(expected, raw)));
+                it = concat(it, new Flat(new RawDataRows(expected, raw, layout())));
             }
             bySheet.put(c.sheet, it);
         }
@@ -282,7 +282,7 @@ public final class SignoffWorkbookReader {
                 bySheet.putIfAbsent(sheet, java.util.Collections.emptyIterator());
             }
         }
-        RawDataRows labeller = new RawDataRows(expected, raw);
+        RawDataRows labeller = new RawDataRows(expected, raw, layout());
         try (OPCPackage pkg = OPCPackage.open(file.toFile(), PackageAccess.READ)) {
             XSSFReader reader = new XSSFReader(pkg);
             checkWorkbook(pkg, reader, template, rec.sheet(), diffs);

@@ -58,7 +58,8 @@ final class TextBlocks {
         java.util.function.BiConsumer<String, String> put = (label, text) -> {
             s.text(row[0], a.column(), label, Style.LABEL, "method: " + label + " label");
             s.text(row[0], a.column() + 1, text, Style.WRAP, "method: " + label);
-            s.height(row[0], DetailPlan.lines(text, 105) * 11.5f + 3);
+            s.height(row[0], DetailPlan.lines(text, plan.layout() >= 2 ? 88 : 105) * (plan.layout() >= 2 ? 12.5f
+                    : 11.5f) + 3);
             row[0]++;
         };
         s.text(row[0]++, a.column(), "Method and settings", Style.HEADING, "method heading");
@@ -137,23 +138,47 @@ final class TextBlocks {
     private void importReport() {
         Anchor a = plan.at(TemplateName.IMPORT_REPORT);
         SheetContent s = plan.sheet(TemplateName.IMPORT_REPORT);
-        int[] widths = {34, 10, 14, 18, 12, 60};
+        boolean two = plan.layout() >= 2;
+        int[] widths = two ? new int[] {40, 10, 14, 22, 6, 14} : new int[] {34, 10, 14, 18, 12, 60};
         for (int i = 0; i < widths.length; i++) {
             s.width(a.column() + i, widths[i]);
         }
         int c = a.column();
         int r = a.row();
         s.text(r++, c, "Import report", Style.HEADING, "import heading");
-        header(s, r++, c, "import inputs header", "File", "Role", "Sheet", "Layout", "", "SHA-256 of the file");
-        for (InputInfo in : plan.input.study().data().inputs()) {
-            String w = "input " + in.file();
-            s.text(r, c, in.file(), Style.CELL, w + ": file");
-            s.text(r, c + 1, nz(in.role()), Style.CELL, w + ": role");
-            s.text(r, c + 2, nz(in.sheet()), Style.CELL, w + ": sheet");
-            s.text(r, c + 3, in.layout() == null ? "" : in.layout().words(), Style.CELL, w + ": layout");
-            s.text(r, c + 4, "", Style.CELL, w);
-            s.text(r, c + 5, nz(in.sha256()), Style.MONO, w + ": SHA-256");
+        if (two) {
+            // no blank column; the file's SHA-256 on a row of its own, so the page is read at a normal size
+            header(s, r, c, "import inputs header", "File", "Role", "Sheet", "Layout", "", "");
+            s.merge(r, r, c + 3, c + 5);
             r++;
+            for (InputInfo in : plan.input.study().data().inputs()) {
+                String w = "input " + in.file();
+                s.text(r, c, in.file(), Style.CELL_WRAP, w + ": file");
+                s.text(r, c + 1, nz(in.role()), Style.CELL, w + ": role");
+                s.text(r, c + 2, nz(in.sheet()), Style.CELL, w + ": sheet");
+                s.text(r, c + 3, in.layout() == null ? "" : in.layout().words(), Style.CELL, w + ": layout");
+                s.text(r, c + 4, "", Style.CELL, w);
+                s.text(r, c + 5, "", Style.CELL, w);
+                s.merge(r, r, c + 3, c + 5);
+                s.height(r, DetailPlan.lines(in.file(), 38) * 12f + 3);
+                r++;
+                s.text(r, c, "SHA-256 of the file", Style.LABEL, w + ": SHA-256 label");
+                s.text(r, c + 1, nz(in.sha256()), Style.MONO, w + ": SHA-256");
+                s.merge(r, r, c + 1, c + 5);
+                r++;
+            }
+        } else {
+            header(s, r++, c, "import inputs header", "File", "Role", "Sheet", "Layout", "", "SHA-256 of the file");
+            for (InputInfo in : plan.input.study().data().inputs()) {
+                String w = "input " + in.file();
+                s.text(r, c, in.file(), Style.CELL, w + ": file");
+                s.text(r, c + 1, nz(in.role()), Style.CELL, w + ": role");
+                s.text(r, c + 2, nz(in.sheet()), Style.CELL, w + ": sheet");
+                s.text(r, c + 3, in.layout() == null ? "" : in.layout().words(), Style.CELL, w + ": layout");
+                s.text(r, c + 4, "", Style.CELL, w);
+                s.text(r, c + 5, nz(in.sha256()), Style.MONO, w + ": SHA-256");
+                r++;
+            }
         }
         ImportReport rep = plan.input.study().data().report();
         r++;
@@ -173,15 +198,27 @@ final class TextBlocks {
         if (!rep.firstSkipped().isEmpty()) {
             s.text(r++, c, "Skipped cells" + (rep.skippedTotal() > rep.firstSkipped().size() ? " (the first "
                     + rep.firstSkipped().size() + ")" : ""), Style.LABEL, "skipped cells label");
-            header(s, r++, c, "skipped cells header", "File", "Sheet", "Cell", "Reason", "", "Cell text");
+            header(s, r, c, "skipped cells header", "File", "Sheet", "Cell", "Reason", two ? "Cell text" : "",
+                    two ? "" : "Cell text");
+            if (two) {
+                s.merge(r, r, c + 4, c + 5);
+            }
+            r++;
             for (SkippedCell k : rep.firstSkipped()) {
                 String w = "skipped " + k.origin().describe();
-                s.text(r, c, k.origin().file(), Style.CELL, w + ": file");
+                s.text(r, c, k.origin().file(), two ? Style.CELL_WRAP : Style.CELL, w + ": file");
                 s.text(r, c + 1, nz(k.origin().sheet()), Style.CELL, w + ": sheet");
                 s.text(r, c + 2, k.origin().cell(), Style.CELL, w + ": cell");
                 s.text(r, c + 3, k.reason().words(), Style.CELL, w + ": reason");
-                s.text(r, c + 4, "", Style.CELL, w);
-                s.text(r, c + 5, nz(k.text()), Style.CELL, w + ": text");
+                if (two) {
+                    s.text(r, c + 4, nz(k.text()), Style.CELL, w + ": text");
+                    s.text(r, c + 5, "", Style.CELL, w);
+                    s.merge(r, r, c + 4, c + 5);
+                    s.height(r, DetailPlan.lines(k.origin().file(), 38) * 12f + 3);
+                } else {
+                    s.text(r, c + 4, "", Style.CELL, w);
+                    s.text(r, c + 5, nz(k.text()), Style.CELL, w + ": text");
+                }
                 r++;
             }
             r++;
@@ -191,7 +228,7 @@ final class TextBlocks {
             for (String m : rep.messages()) {
                 s.text(r, c, m, Style.WRAP, "import remark");
                 s.merge(r, r, c, c + 5);
-                s.height(r, DetailPlan.lines(m, 130) * 12f + 3);
+                s.height(r, DetailPlan.lines(m, two ? 95 : 130) * 12f + 3);
                 r++;
             }
         }
