@@ -39,6 +39,33 @@ final class Numbers {
     }
 
     /**
+     * Tick labels as people write numbers: plain decimals to six significant digits, never "1E-4" or "0E0".
+     *
+     * @return a format for an axis' number format override
+     */
+    static java.text.NumberFormat plainFormat() {
+        return new java.text.NumberFormat() {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public StringBuffer format(double v, StringBuffer to, java.text.FieldPosition pos) {
+                // a tick a rounding error away from zero is zero
+                return to.append(Math.abs(v) < 1e-12 ? "0" : Numbers.format(v).replace('\u2212', '-'));
+            }
+
+            @Override
+            public StringBuffer format(long v, StringBuffer to, java.text.FieldPosition pos) {
+                return to.append(v);
+            }
+
+            @Override
+            public Number parse(String source, java.text.ParsePosition pos) {
+                throw new UnsupportedOperationException("axis labels are not parsed");
+            }
+        };
+    }
+
+    /**
      * @param name the characteristic's name
      * @param unit its unit, or null
      * @return "name [unit]", or "name (unit not given)"

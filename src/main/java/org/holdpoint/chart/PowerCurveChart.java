@@ -49,6 +49,7 @@ public final class PowerCurveChart {
         NumberAxis x = new NumberAxis(unit == null || unit.isBlank() ? "true difference after \u2212 before"
                 : "true difference after \u2212 before [" + unit + "]");
         x.setAutoRangeIncludesZero(false);
+        x.setNumberFormatOverride(Numbers.plainFormat());
         x.setRange(ChartRanges.padded(new double[] {differences[0], differences[differences.length - 1]}, 0.02));
         NumberAxis y = new NumberAxis("power (probability of showing equivalence)");
         y.setRange(0, 1.04);

@@ -33,8 +33,8 @@ import org.holdpoint.workflow.StudyService;
 public final class ArchiveBrowser {
     /** The search filters and the archive's address. */
     public enum Field {
-        /** A JDBC URL; blank for the embedded default (or the settings file's). */
-        URL("Archive (JDBC URL)"),
+        /** The archive's database address; blank for the archive on this computer (or the settings file's). */
+        URL("Archive address"),
         /** The part number. */
         PART("Part number"),
         /** A characteristic the study contains. */
@@ -182,8 +182,8 @@ public final class ArchiveBrowser {
         String t = values.get(f).trim();
         return switch (f) {
             case URL -> t.isEmpty() || t.startsWith("jdbc:") ? null
-                    : "A JDBC URL starts with jdbc:, e.g. jdbc:postgresql://host/holdpoint; leave it empty for the "
-                            + "archive on this computer.";
+                    : "An archive address starts with jdbc:, e.g. jdbc:postgresql://host/holdpoint (ask the archive's "
+                            + "administrator); leave it empty for the archive on this computer.";
             case FROM, TO -> dateProblem(f, t);
             default -> null;
         };
@@ -356,10 +356,13 @@ public final class ArchiveBrowser {
             l.add("Signed in the study: " + s.stage().words() + " by " + s.name() + " (" + s.role() + "), "
                     + s.meaning() + ", " + s.timestamp());
         }
+        int k = 0;
         for (AuditEvent e : o.events()) {
-            l.add("#" + e.seq() + "  " + SHOWN.format(e.when()) + "  " + e.kind().name().toLowerCase(java.util.Locale.ROOT)
+            // numbered within this record; the archive-wide position is kept for the verification report
+            k++;
+            l.add(k + ".  " + SHOWN.format(e.when()) + "  " + e.kind().name().toLowerCase(java.util.Locale.ROOT)
                     .replace('_', ' ') + " by " + e.who() + ": " + e.what() + (e.why() == null || e.why().isBlank()
-                    ? "" : " (" + e.why() + ")"));
+                    ? "" : " (" + e.why() + ")") + "  [archive entry " + e.seq() + "]");
         }
         return l;
     }

@@ -21,9 +21,9 @@ public enum CriteriaColumn {
     /** Whether the margin is in units or in percent of the tolerance width. */
     MARGIN_IN("Margin in", List.of(CriteriaTable.IN_UNITS, CriteriaTable.IN_PERCENT)),
     /** The largest acceptable sd(after)/sd(before). */
-    SD_GROWTH("Max sd growth", null),
+    SD_GROWTH("Max sd ratio", null),
     /** The minimum capability index required. */
-    CAPABILITY("Min capability", null),
+    CAPABILITY("Min Ppk bound", null),
     /** Paired design: from the data, yes or no. */
     PAIRED("Paired", List.of(CriteriaTable.FROM_DATA, "yes", "no"));
 

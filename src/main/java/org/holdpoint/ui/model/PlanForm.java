@@ -477,7 +477,8 @@ public final class PlanForm {
         }
         l.add(new String[] {"Parts measured in all", Long.toString(r.totalUnits())});
         l.add(new String[] {"Achieved power (exact TOST)", pct(r.achievedPower())});
-        l.add(new String[] {"Power with one part fewer", r.powerAtPrevious() == null ? "not defined"
+        l.add(new String[] {r.design() == Design.PAIRED ? "Power with one pair fewer"
+                : "Power with one part fewer in each group", r.powerAtPrevious() == null ? "not defined"
                 : pct(r.powerAtPrevious())});
         l.add(new String[] {"t-test power for the expected difference", pct(r.tTestPower())});
         String u = unit() == null ? "" : " " + unit();
@@ -524,7 +525,8 @@ public final class PlanForm {
     }
 
     private static String pct(double p) {
-        return String.format(Locale.ROOT, "%.1f %%", 100 * p);
+        // two decimals: the power one part below the plan lies just under the target (79.96 %, not "80.0 %")
+        return String.format(Locale.ROOT, "%.2f %%", 100 * p);
     }
 
     /**

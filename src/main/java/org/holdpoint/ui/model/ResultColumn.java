@@ -13,7 +13,7 @@ public enum ResultColumn {
     /** The estimated difference after − before. */
     DIFFERENCE("Difference"),
     /** The (1 − 2α) equivalence interval, with its level. */
-    INTERVAL("Equivalence interval (1 − 2α)"),
+    INTERVAL("Equivalence interval"),
     /** The margin in units. */
     MARGIN("Margin"),
     /** sd(after)/sd(before). */

@@ -285,6 +285,9 @@ public final class ResultsTable {
             return "";
         }
         // as entered (shortest form): the column stays narrow and shows the numbers the user typed
+        if (m.lower() != null && m.upper() != null && m.lower() == -m.upper()) {
+            return "±" + Format.num(m.upper());
+        }
         return "(" + (m.lower() == null ? "−∞" : Format.num(m.lower())) + ", "
                 + (m.upper() == null ? "+∞" : Format.num(m.upper())) + ")";
     }

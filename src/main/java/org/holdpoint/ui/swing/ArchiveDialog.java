@@ -240,6 +240,9 @@ final class ArchiveDialog extends JDialog {
         root.add(split, BorderLayout.CENTER);
         setContentPane(root);
         getRootPane().setDefaultButton(search);
+        // Escape closes the archive view, as it closes any dialog
+        getRootPane().registerKeyboardAction(e -> setVisible(false), javax.swing.KeyStroke.getKeyStroke("ESCAPE"),
+                javax.swing.JComponent.WHEN_IN_FOCUSED_WINDOW);
         refreshOpened();
     }
 

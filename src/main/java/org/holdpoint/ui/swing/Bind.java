@@ -88,6 +88,36 @@ final class Bind {
         return l;
     }
 
+    /**
+     * Keeps a split pane's divider at a share of its width (or height) when the window is resized, the share
+     * the user last dragged it to: a window made smaller keeps its proportions instead of squeezing one side.
+     *
+     * @param split the split pane
+     * @param share the starting share, 0..1
+     */
+    static void keepProportion(javax.swing.JSplitPane split, double share) {
+        double[] ratio = {share};
+        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                split.setDividerLocation(ratio[0]);
+            }
+        });
+        // only a drag by the user sets a new share (the layout's own moves on a resize do not)
+        if (split.getUI() instanceof javax.swing.plaf.basic.BasicSplitPaneUI ui) {
+            ui.getDivider().addMouseListener(new java.awt.event.MouseAdapter() {
+                @Override
+                public void mouseReleased(java.awt.event.MouseEvent e) {
+                    int size = split.getOrientation() == javax.swing.JSplitPane.HORIZONTAL_SPLIT ? split.getWidth()
+                            : split.getHeight();
+                    if (size > 0) {
+                        ratio[0] = Math.max(0.1, Math.min(0.9, split.getDividerLocation() / (double) size));
+                    }
+                }
+            });
+        }
+    }
+
     static JLabel heading(String text) {
         JLabel l = new JLabel(text);
         l.putClientProperty("FlatLaf.styleClass", "h3");

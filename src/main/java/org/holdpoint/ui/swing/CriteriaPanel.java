@@ -30,7 +30,20 @@ final class CriteriaPanel extends JPanel {
     private final transient StudySession session;
     private final transient CriteriaTable table;
     private final Model model = new Model();
-    private final JTable grid = new JTable(model);
+    private final JTable grid = new JTable(model) {
+        private static final long serialVersionUID = 1L;
+
+        /** Typing into a selected cell replaces its text, as in a spreadsheet (a double-click edits it). */
+        @Override
+        public boolean editCellAt(int row, int column, java.util.EventObject e) {
+            boolean editing = super.editCellAt(row, column, e);
+            if (editing && e instanceof java.awt.event.KeyEvent
+                    && getEditorComponent() instanceof javax.swing.text.JTextComponent t) {
+                t.selectAll();
+            }
+            return editing;
+        }
+    };
     private final JTextField alpha = new JTextField(6);
     private final JLabel alphaProblem = new JLabel(" ");
     private final JComboBox<String> variance = new JComboBox<>(new String[] {WELCH, POOLED});
@@ -64,7 +77,7 @@ final class CriteriaPanel extends JPanel {
                         new JComboBox<>(c.choices().toArray(String[]::new))));
             }
         }
-        int[] widths = {200, 50, 75, 75, 75, 80, 110, 115, 115, 90, 90};
+        int[] widths = {190, 55, 55, 75, 75, 75, 120, 105, 95, 105, 80, 260};
         for (int i = 0; i < widths.length; i++) {
             grid.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -248,7 +261,7 @@ final class CriteriaPanel extends JPanel {
         public Object getValueAt(int r, int c) {
             if (c == CriteriaColumn.values().length) {
                 String p = table.rowProblem(r);
-                return p == null ? "ok" : "⚠ " + p.substring(0, p.indexOf(':'));
+                return p == null ? "ok" : "⚠ " + p;
             }
             return table.get(r, CriteriaColumn.values()[c]);
         }
@@ -274,6 +287,12 @@ final class CriteriaPanel extends JPanel {
                     || mc == CriteriaColumn.SD_GROWTH.ordinal() || mc == CriteriaColumn.CAPABILITY.ordinal()
                     ? RIGHT : LEFT);
             Color error = UIManager.getColor("Component.error.focusedBorderColor");
+            if (mc == CriteriaColumn.MARGIN.ordinal() && problem == null && !getText().isBlank()) {
+                // the margin says what it is in: percent of the tolerance or the characteristic's unit
+                boolean pct = CriteriaTable.IN_PERCENT.equals(table.get(r, CriteriaColumn.MARGIN_IN));
+                String unit = table.get(r, CriteriaColumn.UNIT);
+                setText(getText() + (pct ? " % of tol." : unit == null || unit.isBlank() ? "" : " " + unit));
+            }
             if (problem != null) {
                 setText("⚠ " + getText());
                 setBorder(BorderFactory.createLineBorder(error == null ? Color.RED : error, 2));

@@ -297,6 +297,12 @@ final class DataPanel extends JPanel {
         Path p = dialogs.chooseData(title);
         if (p != null) {
             set.accept(p);
+            // a chosen file is imported at once, as soon as every file the choice needs is there
+            boolean complete = form.source() == DataForm.Source.ONE_FILE ? form.file() != null
+                    : form.before() != null && form.after() != null;
+            if (complete && !session.busy()) {
+                session.importAndAnalyse();
+            }
         }
     }
 

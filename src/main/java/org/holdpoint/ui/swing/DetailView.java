@@ -19,6 +19,11 @@ import org.holdpoint.ui.model.ResultDetail;
 final class DetailView extends JPanel implements Scrollable {
     private static final long serialVersionUID = 1L;
 
+    /** Values longer than this go under their label, across the pane. */
+    private static final int SIDE_BY_SIDE = 32;
+    /** The label column's width in pixels (unscaled). */
+    private static final int LABEL_WIDTH = 140;
+
     DetailView() {
         super(new GridBagLayout());
         setBorder(BorderFactory.createEmptyBorder(10, 12, 10, 12));
@@ -56,11 +61,22 @@ final class DetailView extends JPanel implements Scrollable {
                     add(wrap(l.value(), false), c);
                     continue;
                 }
+                if (l.value().length() > SIDE_BY_SIDE) {
+                    // a sentence reads across the whole pane, under its label, instead of in a narrow column
+                    c.gridx = 0;
+                    c.gridwidth = 2;
+                    c.weightx = 1;
+                    add(new JLabel(l.label()), c);
+                    c.gridy++;
+                    c.insets = new Insets(0, 14, 3, 8);
+                    add(wrap(l.value(), false), c);
+                    continue;
+                }
                 c.gridwidth = 1;
                 c.gridx = 0;
                 c.weightx = 0;
                 JLabel k = new JLabel(l.label());
-                k.setPreferredSize(new java.awt.Dimension(150, k.getPreferredSize().height));
+                k.setPreferredSize(new java.awt.Dimension(LABEL_WIDTH, k.getPreferredSize().height));
                 add(k, c);
                 c.gridx = 1;
                 c.weightx = 1;

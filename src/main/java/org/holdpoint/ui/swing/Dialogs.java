@@ -43,16 +43,35 @@ final class Dialogs {
         if (fc.showSaveDialog(parent) != JFileChooser.APPROVE_OPTION) {
             return null;
         }
-        Path p = fc.getSelectedFile().toPath();
-        if (!p.getFileName().toString().endsWith(suffix)) {
-            p = p.resolveSibling(p.getFileName() + suffix);
-        }
+        Path p = withSuffix(fc.getSelectedFile().toPath(), suffix);
         if (p.toFile().exists() && JOptionPane.showConfirmDialog(parent, p.getFileName()
                 + " exists already. Replace it?", title, JOptionPane.YES_NO_OPTION,
                 JOptionPane.WARNING_MESSAGE) != JOptionPane.YES_OPTION) {
             return null;
         }
         return remember(p.toFile());
+    }
+
+    /**
+     * The name the user typed with the suffix added only when it lacks the suffix's extension: "x" and
+     * "x.holdpoint" become "x.holdpoint.json", "x.json" stays "x.json" (never "x.json.holdpoint.json").
+     *
+     * @param p      the chosen path
+     * @param suffix e.g. ".holdpoint.json" or ".xlsx"
+     * @return the path to write
+     */
+    static Path withSuffix(Path p, String suffix) {
+        String name = p.getFileName().toString();
+        String lower = name.toLowerCase(java.util.Locale.ROOT);
+        String ext = suffix.substring(suffix.lastIndexOf('.')).toLowerCase(java.util.Locale.ROOT);
+        if (lower.endsWith(suffix.toLowerCase(java.util.Locale.ROOT)) || lower.endsWith(ext)) {
+            return p;
+        }
+        String stem = suffix.substring(0, suffix.lastIndexOf('.'));
+        if (!stem.isEmpty() && lower.endsWith(stem.toLowerCase(java.util.Locale.ROOT))) {
+            return p.resolveSibling(name + ext);
+        }
+        return p.resolveSibling(name + suffix);
     }
 
     /** Tells a problem: heading, what happened, what to do. */

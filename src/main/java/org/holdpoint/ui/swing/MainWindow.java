@@ -207,7 +207,11 @@ public final class MainWindow extends JFrame {
         root.add(center, BorderLayout.CENTER);
         JPanel south = new JPanel(new BorderLayout());
         south.add(progress, BorderLayout.NORTH);
-        JTextArea cautions = new JTextArea("Cautions: " + String.join(" ", Cautions.TEXT));
+        // the first caution is always in view; the others open with one press (and are in full on the Sign-off
+        // step and under Help), so that a small screen keeps its room for the results
+        String first = "Cautions: " + Cautions.TEXT.get(0);
+        String all = "Cautions: " + String.join(" ", Cautions.TEXT);
+        JTextArea cautions = new JTextArea(first);
         cautions.setName("cautions");
         cautions.setEditable(false);
         cautions.setFocusable(false);
@@ -215,8 +219,24 @@ public final class MainWindow extends JFrame {
         cautions.setWrapStyleWord(true);
         cautions.setOpaque(false);
         cautions.putClientProperty("FlatLaf.styleClass", "small");
-        cautions.setBorder(BorderFactory.createEmptyBorder(6, 16, 4, 16));
-        south.add(cautions, BorderLayout.CENTER);
+        cautions.setBorder(BorderFactory.createEmptyBorder(6, 16, 4, 8));
+        javax.swing.JToggleButton more = new javax.swing.JToggleButton("All cautions");
+        more.setName("cautions.more");
+        more.putClientProperty("JButton.buttonType", "borderless");
+        more.setToolTipText("Show every caution (they apply to every result)");
+        more.addActionListener(e -> {
+            cautions.setText(more.isSelected() ? all : first);
+            more.setText(more.isSelected() ? "Fewer" : "All cautions");
+            south.revalidate();
+        });
+        JPanel cautionRow = new JPanel(new BorderLayout());
+        cautionRow.setOpaque(false);
+        cautionRow.add(cautions, BorderLayout.CENTER);
+        JPanel moreBox = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.RIGHT, 8, 2));
+        moreBox.setOpaque(false);
+        moreBox.add(more);
+        cautionRow.add(moreBox, BorderLayout.EAST);
+        south.add(cautionRow, BorderLayout.CENTER);
         status.setBorder(BorderFactory.createEmptyBorder(2, 16, 6, 16));
         south.add(status, BorderLayout.SOUTH);
         south.setBorder(new EdgeBorder(1, 0, 0, 0));
@@ -362,6 +382,10 @@ public final class MainWindow extends JFrame {
         bar.add(view);
         JMenu help = new JMenu("Help");
         help.setMnemonic('H');
+        help.add(item("Cautions", 'C', KeyStroke.getKeyStroke(KeyEvent.VK_F1, 0), () -> JOptionPane.showMessageDialog(
+                this, "<html><body style='width: 420px'><b>These cautions apply to every result.</b><br><br>"
+                        + String.join("<br><br>", Cautions.TEXT) + "</body></html>", "Cautions",
+                JOptionPane.INFORMATION_MESSAGE)));
         help.add(item("About Holdpoint", 'A', null, () -> JOptionPane.showMessageDialog(this,
                 "<html><b>Holdpoint " + Version.get() + "</b><br>Verifies a manufacturing process change from before "
                         + "and after samples.<br>Difference = after − before.<br><br>"
@@ -491,9 +515,12 @@ public final class MainWindow extends JFrame {
         if (!session.dirty()) {
             return true;
         }
-        int a = JOptionPane.showConfirmDialog(this, "The current study has changes that are not saved. Discard them?",
-                "Unsaved work", JOptionPane.YES_NO_OPTION, JOptionPane.WARNING_MESSAGE);
-        return a == JOptionPane.YES_OPTION;
+        // the safe answer is the default: Enter keeps the work
+        Object[] options = {"Keep my work", "Discard the changes"};
+        int a = JOptionPane.showOptionDialog(this, "The current study has changes that are not saved in a study "
+                + "file. Discard them?", "Unsaved work", JOptionPane.YES_NO_OPTION, JOptionPane.WARNING_MESSAGE, null,
+                options, options[0]);
+        return a == 1;
     }
 
     /** Closes the window, asking first when there is unsaved work (event thread). */

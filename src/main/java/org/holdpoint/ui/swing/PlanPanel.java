@@ -46,6 +46,8 @@ final class PlanPanel extends JPanel {
     private final JButton fromBaseline = new JButton("From the baseline data");
     private final JButton planAll = new JButton("Plan every characteristic");
     private final JButton plan = new JButton("Plan");
+    /** Fields the user typed into (or all, once a plan was asked for): only they show "Enter a value". */
+    private final java.util.Set<Field> touched = java.util.EnumSet.noneOf(Field.class);
     private final JPanel numbers = new JPanel(new GridBagLayout());
     private final JLabel resultTitle = Bind.heading("No plan yet");
     private final JTextArea allPlans = new JTextArea(4, 40);
@@ -72,9 +74,15 @@ final class PlanPanel extends JPanel {
         for (Field f : Field.values()) {
             JTextField t = new JTextField(10);
             t.setName("plan." + f.name());
-            Runnable refresh = Bind.text(t, () -> form.get(f), v -> form.set(f, v));
+            Runnable refresh = Bind.text(t, () -> form.get(f), v -> {
+                touched.add(f);
+                form.set(f, v);
+            });
             form.addListener(PlanForm.Property.VALUES, e -> refresh.run());
-            t.addActionListener(e -> form.plan());
+            t.addActionListener(e -> {
+                touched.addAll(java.util.List.of(Field.values()));
+                form.plan();
+            });
             fields.put(f, t);
             JLabel p = Bind.errorLabel();
             p.setName("plan.problem." + f.name());
@@ -111,7 +119,12 @@ final class PlanPanel extends JPanel {
         planAll.addActionListener(e -> form.planAll());
         plan.setName("plan.run");
         plan.setMnemonic('L');
-        plan.addActionListener(e -> form.plan());
+        plan.addActionListener(e -> {
+            // an empty field is a problem once the user asks for a plan, not before anything was typed
+            touched.addAll(java.util.List.of(Field.values()));
+            form.plan();
+            refreshValues();
+        });
         allPlans.setEditable(false);
         allPlans.setLineWrap(true);
         allPlans.setWrapStyleWord(true);
@@ -211,6 +224,9 @@ final class PlanPanel extends JPanel {
                 fields.get(f).setVisible(used);
                 labels.get(f).setVisible(used);
                 String p = form.problem(f);
+                if (p != null && !touched.contains(f) && form.get(f).isBlank()) {
+                    p = null;
+                }
                 problems.get(f).setText(p == null ? " " : "⚠ " + p);
                 problems.get(f).setVisible(used && p != null);
                 fields.get(f).setToolTipText(p);

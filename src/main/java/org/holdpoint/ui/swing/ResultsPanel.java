@@ -87,7 +87,8 @@ final class ResultsPanel extends JPanel {
                 return results.shows(e.getIdentifier());
             }
         });
-        int[] widths = {135, 185, 240, 45, 125, 230, 150, 80};
+        // fits 1280 pixels wide without cutting the usual names and numbers; a cut cell shows its text as a tip
+        int[] widths = {100, 185, 290, 45, 90, 190, 90, 70};
         for (int i = 0; i < widths.length; i++) {
             table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -144,8 +145,8 @@ final class ResultsPanel extends JPanel {
         chartBox.add(chartTabs, BorderLayout.CENTER);
         chartBox.add(chartNote, BorderLayout.SOUTH);
         JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, detailScroll, chartBox);
-        lower.setResizeWeight(0.45);
-        lower.setDividerLocation(0.45);
+        lower.setResizeWeight(0.4);
+        Bind.keepProportion(lower, 0.4);
         split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), lower);
         split.setResizeWeight(0.42);
         split.setBorder(BorderFactory.createEmptyBorder(0, 24, 12, 24));
@@ -166,18 +167,37 @@ final class ResultsPanel extends JPanel {
         if (r == null) {
             return;
         }
-        javax.swing.JTextField cell = new javax.swing.JTextField(8);
+        // pick the value from the list (each with its group, cell and value), or type its cell
+        java.util.List<String> picks = new java.util.ArrayList<>();
+        org.holdpoint.study.CharacteristicData data = session.characteristic(r.name());
+        if (data != null) {
+            for (int g = 0; g < 2 && picks.size() < MAX_PICKS; g++) {
+                org.holdpoint.study.GroupData group = g == 0 ? data.before() : data.after();
+                for (int i = 0; i < group.size() && picks.size() < MAX_PICKS; i++) {
+                    var o = group.origin(i);
+                    picks.add((g == 0 ? "before:" : "after:") + (o.sheet() == null || o.sheet().isBlank() ? ""
+                            : o.sheet() + "!") + o.cell() + "   (value " + Format.num(group.sample().value(i)) + ")");
+                }
+            }
+        }
+        javax.swing.JComboBox<String> cell = new javax.swing.JComboBox<>(picks.toArray(String[]::new));
+        cell.setEditable(true);
+        cell.setSelectedItem("");
+        cell.setMaximumRowCount(16);
         javax.swing.JTextField reason = new javax.swing.JTextField(30);
         JPanel p = new JPanel(new java.awt.GridLayout(0, 1, 0, 4));
         p.add(new JLabel("Leave one value of \"" + r.name() + "\" out of the analysis."));
-        p.add(Bind.label("Cell of the value (see the Data step), e.g. D12", 'C', cell));
+        p.add(Bind.label("The value: pick it from the list, or type its cell, e.g. after:D12", 'V', cell));
         p.add(cell);
         p.add(Bind.label("Reason (kept in the record)", 'R', reason));
         p.add(reason);
         while (javax.swing.JOptionPane.showConfirmDialog(this, p, "Exclude a value",
                 javax.swing.JOptionPane.OK_CANCEL_OPTION, javax.swing.JOptionPane.PLAIN_MESSAGE)
                 == javax.swing.JOptionPane.OK_OPTION) {
-            String why = session.exclude(r.name(), cell.getText(), reason.getText());
+            Object chosen = cell.getEditor().getItem();
+            String text = chosen == null ? "" : chosen.toString();
+            int cut = text.indexOf("   (value ");
+            String why = session.exclude(r.name(), cut > 0 ? text.substring(0, cut) : text.trim(), reason.getText());
             if (why == null) {
                 return;
             }
@@ -185,6 +205,9 @@ final class ResultsPanel extends JPanel {
                     javax.swing.JOptionPane.WARNING_MESSAGE);
         }
     }
+
+    /** The most values the exclusion list offers (a longer list is typed into instead). */
+    private static final int MAX_PICKS = 5000;
 
     /** Gives the table the height of its rows (at most half the step), so that a short study shows whole. */
     private void fitTable() {

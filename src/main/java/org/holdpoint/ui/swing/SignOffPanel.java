@@ -152,7 +152,20 @@ final class SignOffPanel extends JPanel {
         out.add(save);
         out.add(workbook);
         out.add(archive);
-        add(out, BorderLayout.SOUTH);
+        // whoever signs reads every caution here, in full
+        javax.swing.JTextArea cautions = new javax.swing.JTextArea("Before signing: "
+                + String.join(" ", org.holdpoint.study.Cautions.TEXT));
+        cautions.setName("sign.cautions");
+        cautions.setEditable(false);
+        cautions.setFocusable(false);
+        cautions.setLineWrap(true);
+        cautions.setWrapStyleWord(true);
+        cautions.setOpaque(false);
+        cautions.setBorder(BorderFactory.createEmptyBorder(0, 24, 0, 24));
+        JPanel south = new JPanel(new BorderLayout());
+        south.add(cautions, BorderLayout.NORTH);
+        south.add(out, BorderLayout.SOUTH);
+        add(south, BorderLayout.SOUTH);
     }
 
     private static void addRow(JPanel p, GridBagConstraints c, JLabel l, java.awt.Component f) {

@@ -81,7 +81,7 @@ class PlanFormTest {
         assertThat(r.powerAtPrevious()).isLessThan(0.8);
         assertThat(f.resultFor()).isEqualTo("typed values");
         assertThat(f.resultLines()).extracting(l -> l[0] + "=" + l[1]).contains("Parts before (n₁)=24",
-                "Parts after (n₂)=24", "Parts measured in all=48", "Achieved power (exact TOST)=81.5 %");
+                "Parts after (n₂)=24", "Parts measured in all=48", "Achieved power (exact TOST)=81.54 %");
         assertThat(f.curveDifferences()).hasSameSizeAs(f.curvePower()).startsWith(-0.2).endsWith(0.2);
         assertThat(s.lastStatus()).isEqualTo("Planned: 24 before + 24 after.");
         assertThat(f.stale()).isFalse();
