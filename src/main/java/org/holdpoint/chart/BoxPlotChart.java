@@ -81,6 +81,7 @@ public final class BoxPlotChart {
         DefaultBoxAndWhiskerCategoryDataset drawn = new DefaultBoxAndWhiskerCategoryDataset();
         DefaultMultiValueCategoryDataset values = new DefaultMultiValueCategoryDataset();
         DefaultCategoryDataset means = new DefaultCategoryDataset();
+        boolean thinned = false;
         for (int g = 0; g < 2; g++) {
             if (groups[g].size() == 0) {
                 throw new ChartException("characteristic '%s' has no %s values to draw", name,
@@ -90,7 +91,9 @@ public final class BoxPlotChart {
             labels[g] = (g == 0 ? "before" : "after") + " (n = " + groups[g].size() + ")";
             boxes.add(item(stats[g], true), BOX_SERIES, labels[g]);
             drawn.add(item(stats[g], false), BOX_SERIES, labels[g]);
-            values.add(boxed(groups[g].values()), VALUES_SERIES, labels[g]);
+            double[] shown = drawn(groups[g].values(), stats[g]);
+            thinned |= shown.length < groups[g].size();
+            values.add(boxed(shown), VALUES_SERIES, labels[g]);
             means.addValue(stats[g].mean(), MEAN_SERIES, labels[g]);
         }
         CategoryPlot plot = plot(unit == null ? name : Numbers.axisLabel(name, unit), boxes, drawn, values, means,
@@ -98,9 +101,15 @@ public final class BoxPlotChart {
         addLimits(plot, limits, theme);
         ((NumberAxis) plot.getRangeAxis()).setRange(ChartRanges.padded(rangeOf(stats, limits), 0.06));
         JFreeChart chart = new JFreeChart(name, theme.titleFont(), plot, false);
-        chart.addSubtitle(theme.subtitle("before and after the change: box, every value, mean"));
+        chart.addSubtitle(theme.subtitle(thinned ? "before and after the change: box, a sample of the values, mean"
+                : "before and after the change: box, every value, mean"));
         chart.addSubtitle(theme.note("Box: " + BoxStatistics.METHOD + ". Each value is drawn at its true value, "
-                + "spread sideways by a fixed (seeded) jitter; values beyond the whiskers are ringed."));
+                + "spread sideways by a fixed (seeded) jitter; values beyond the whiskers are ringed."
+                + (thinned ? " A group of more than " + String.format(java.util.Locale.ROOT, "%,d", MAX_DRAWN)
+                + " values is drawn by " + String.format(java.util.Locale.ROOT, "%,d", MAX_DRAWN) + " of them, evenly "
+                + "spaced in rank order (every value beyond the whiskers among them while they are fewer than "
+                + String.format(java.util.Locale.ROOT, "%,d", MAX_DRAWN / 2) + "); the box and the counts use "
+                + "every value." : "")));
         chart.addSubtitle(legend(plot));
         theme.apply(chart);
         return chart;
@@ -122,6 +131,50 @@ public final class BoxPlotChart {
         // min/max outlier at the data extremes: JFreeChart then draws no value as a "far out" marker at an edge
         return new BoxAndWhiskerItem(s.mean(), s.median(), s.q1(), s.q3(), s.lowerWhisker(), s.upperWhisker(),
                 s.min(), s.max(), outliers);
+    }
+
+    /** The most values drawn per group; beyond it the points would hide the box. */
+    static final int MAX_DRAWN = 2000;
+
+    /**
+     * The values drawn for a group: all of them up to {@link #MAX_DRAWN}; above, the values beyond the whiskers
+     * (up to half the budget, evenly spaced in rank) and the rest of the budget evenly spaced in rank among
+     * the values within the whiskers, so that the picture keeps the shape of the whole group.
+     *
+     * @param v     the values
+     * @param stats their box statistics
+     * @return the values to draw
+     */
+    static double[] drawn(double[] v, BoxStatistics stats) {
+        if (v.length <= MAX_DRAWN) {
+            return v;
+        }
+        double[] sorted = v.clone();
+        java.util.Arrays.sort(sorted);
+        List<Double> inside = new ArrayList<>();
+        List<Double> outside = new ArrayList<>();
+        for (double x : sorted) {
+            (x < stats.lowerFence() || x > stats.upperFence() ? outside : inside).add(x);
+        }
+        List<Double> out = evenly(outside, MAX_DRAWN / 2);
+        out.addAll(evenly(inside, MAX_DRAWN - out.size()));
+        double[] a = new double[out.size()];
+        for (int i = 0; i < a.length; i++) {
+            a[i] = out.get(i);
+        }
+        return a;
+    }
+
+    /** At most k of the sorted values, evenly spaced in rank, the smallest and the largest included. */
+    private static List<Double> evenly(List<Double> sorted, int k) {
+        if (sorted.size() <= k) {
+            return new ArrayList<>(sorted);
+        }
+        List<Double> out = new ArrayList<>(k);
+        for (int i = 0; i < k; i++) {
+            out.add(sorted.get((int) Math.round(i * (sorted.size() - 1) / (double) (k - 1))));
+        }
+        return out;
     }
 
     private static List<Double> boxed(double[] v) {
@@ -202,10 +255,16 @@ public final class BoxPlotChart {
             return;
         }
         ValueMarker m = limitMarker(value, label, theme, nominal);
-        // label just inside the left edge, on the side of the line facing the data, so it is never clipped
+        // limits labelled just inside the left edge, on the side of the line facing the data, so they are never
+        // clipped; the nominal on the right edge, so that it never sits on a limit's label when the two are close
         boolean below = label.equals("USL");
-        m.setLabelAnchor(below ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.TOP_LEFT);
-        m.setLabelTextAnchor(below ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
+        if (nominal) {
+            m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+            m.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+        } else {
+            m.setLabelAnchor(below ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.TOP_LEFT);
+            m.setLabelTextAnchor(below ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
+        }
         m.setLabelOffset(new RectangleInsets(2, 4, 2, 4));
         plot.addRangeMarker(m);
     }

@@ -92,7 +92,8 @@ public final class DistributionCharts {
         JFreeChart chart = new JFreeChart(data.name(), theme.titleFont(), plot, false);
         chart.addSubtitle(theme.subtitle("distribution before and after, with the fitted normal curve"));
         chart.addSubtitle(theme.note(String.format(java.util.Locale.ROOT, "Common bins of width %s (%d bins, "
-                + "Freedman\u2013Diaconis rule, in whole measuring steps when the values lie on a grid); curve: "
+                + "Freedman\u2013Diaconis rule with at least \u221an + 2 bins, in whole measuring steps when the values lie on a "
+                + "grid); curve: "
                 + "normal density with the group's mean and sd, scaled to counts.",
                 Numbers.fixed(edges[1] - edges[0], Math.max(decimals - 2, decimalsOf(edges[1] - edges[0]))),
                 edges.length - 1)));
@@ -141,6 +142,8 @@ public final class DistributionCharts {
             line.setSeriesStroke(0, new BasicStroke(1.8f));
             p.setDataset(1, new XYSeriesCollection(curve));
             p.setRenderer(1, line);
+            // the fitted curve over the bars, not hidden behind them
+            p.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
         }
         y.setRange(0, Math.max(1, Math.max(max, curveMax)) * 1.25);
         addLimits(p, limits, theme, g == 0);
@@ -279,6 +282,10 @@ public final class DistributionCharts {
         }
         double iqr = Quantiles.type7(sorted, 0.75) - Quantiles.type7(sorted, 0.25);
         double fd = iqr > 0 ? 2 * iqr / Math.cbrt(n) : span / 5;
+        // at least √n + 2 bins (at most 12 by this floor): the Freedman-Diaconis width alone gives 5 coarse bins
+        // for 30 parts (the floor is common practice, no source)
+        int floor = (int) Math.min(12, Math.ceil(Math.sqrt(n)) + 2);
+        fd = Math.min(fd, span / floor);
         double step = resolution(sorted);
         if (step > 0) {
             // values on a measuring grid: whole grid steps per bin, edges half a step off the grid, so that every

@@ -165,4 +165,32 @@ class BoxPlotChartTest {
         }
         return r;
     }
+
+    /**
+     * Above {@value BoxPlotChart#MAX_DRAWN} values a group is drawn by a sample evenly spaced in rank, the
+     * extremes included, so the points never become a solid blob over the box; the note says so. (Invented
+     * values; the rule is the project's own, common practice, no source.)
+     */
+    @Test
+    void aHugeGroupIsDrawnByASampleEvenlySpacedInRank() {
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(11);
+        double[] big = new double[400_000];
+        for (int i = 0; i < big.length; i++) {
+            big[i] = 10 + rnd.nextGaussian();
+        }
+        org.holdpoint.stats.Sample s = org.holdpoint.stats.Sample.of(big);
+        org.holdpoint.stats.BoxStatistics st = org.holdpoint.stats.BoxStatistics.of(s);
+        double[] drawn = BoxPlotChart.drawn(big, st);
+        assertThat(drawn.length).isLessThanOrEqualTo(BoxPlotChart.MAX_DRAWN);
+        double[] sorted = big.clone();
+        java.util.Arrays.sort(sorted);
+        assertThat(drawn).contains(sorted[0], sorted[sorted.length - 1]);
+        double[] small = java.util.Arrays.copyOf(big, 300);
+        assertThat(BoxPlotChart.drawn(small, org.holdpoint.stats.BoxStatistics.of(
+                org.holdpoint.stats.Sample.of(small)))).hasSize(300);
+        org.jfree.chart.JFreeChart chart = BoxPlotChart.create("Big", "mm", s, s,
+                org.holdpoint.study.SpecLimits.NONE, ChartTheme.withDefaults());
+        assertThat(((org.jfree.chart.title.TextTitle) chart.getSubtitle(0)).getText()).contains("a sample of the values");
+        assertThat(((org.jfree.chart.title.TextTitle) chart.getSubtitle(1)).getText()).contains("evenly spaced in rank");
+    }
 }
