@@ -115,6 +115,59 @@ public final class BoxPlotChart {
         return chart;
     }
 
+    /**
+     * Shows on a box plot what decided the verdict: the margin as a band around the before mean (where the
+     * after mean may lie; the confidence interval of the difference decides, see the equivalence chart), and a
+     * line under the title with the spread and capability criteria against their limits.
+     *
+     * @param chart  a chart from {@link #create}
+     * @param result the characteristic's analysis
+     * @param theme  the theme
+     * @return the same chart
+     */
+    public static JFreeChart withCriteria(JFreeChart chart, org.holdpoint.study.CharacteristicResult result,
+            ChartTheme theme) {
+        CategoryPlot plot = chart.getCategoryPlot();
+        var margin = result.margin();
+        if (margin != null && result.before() != null) {
+            double centre = result.before().mean();
+            double lo = margin.lower() == null ? plot.getRangeAxis().getLowerBound() : centre + margin.lower();
+            double hi = margin.upper() == null ? plot.getRangeAxis().getUpperBound() : centre + margin.upper();
+            org.jfree.chart.plot.IntervalMarker band = new org.jfree.chart.plot.IntervalMarker(lo, hi,
+                    new Color(ChartTheme.BAND.getRed(), ChartTheme.BAND.getGreen(), ChartTheme.BAND.getBlue(), 110));
+            // named in the legend, not on the plot, where a label would sit on the values
+            if (plot.getFixedLegendItems() != null) {
+                plot.getFixedLegendItems().add(new org.jfree.chart.LegendItem("margin around the before mean", null,
+                        null, null, new java.awt.Rectangle(-7, -4, 14, 8), band.getPaint()));
+            }
+            plot.addRangeMarker(band, org.jfree.chart.ui.Layer.BACKGROUND);
+            NumberAxis axis = (NumberAxis) plot.getRangeAxis();
+            axis.setRange(ChartRanges.padded(new double[] {Math.min(axis.getLowerBound(), lo),
+                Math.max(axis.getUpperBound(), hi)}, 0.0));
+        }
+        List<String> parts = new ArrayList<>();
+        var eq = result.decidingTost();
+        if (eq != null) {
+            parts.add("mean: " + eq.conclusion().words());
+        }
+        var g = result.sdGrowth();
+        if (g != null) {
+            parts.add("spread: sd ratio bound " + String.format(java.util.Locale.ROOT, "%.3f", g.upperBound())
+                    + (g.met() ? " below" : " NOT below") + " the limit " + Numbers.format(g.limit()));
+        }
+        var checks = result.checks();
+        if (checks != null && checks.capabilityMet() != null && checks.after().capability() != null
+                && checks.after().capability().ppkLower() != null) {
+            parts.add("capability: Ppk bound " + String.format(java.util.Locale.ROOT, "%.3f",
+                    checks.after().capability().ppkLower()) + (checks.capabilityMet() ? " meets" : " does NOT meet")
+                    + " the required " + Numbers.format(result.settings().capabilityRequirement()));
+        }
+        if (!parts.isEmpty()) {
+            chart.addSubtitle(1, theme.subtitle(String.join("; ", parts)));
+        }
+        return chart;
+    }
+
     static LegendTitle legend(org.jfree.chart.plot.Plot plot) {
         LegendTitle legend = new LegendTitle(plot);
         legend.setPosition(RectangleEdge.BOTTOM);

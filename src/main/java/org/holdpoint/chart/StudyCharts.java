@@ -135,7 +135,8 @@ public final class StudyCharts {
         double h = theme.standardHeight();
         return List.of(
                 new NamedChart(stem + ChartKind.BOX_PLOT.fileSuffix() + ".png", ChartKind.BOX_PLOT, data.name(),
-                        BoxPlotChart.create(d, limits, theme), theme.width(), h),
+                        BoxPlotChart.withCriteria(BoxPlotChart.create(d, limits, theme), result, theme), theme.width(),
+                        h),
                 new NamedChart(stem + ChartKind.HISTOGRAM.fileSuffix() + ".png", ChartKind.HISTOGRAM, data.name(),
                         DistributionCharts.histogram(d, limits, theme), theme.width(), h),
                 new NamedChart(stem + ChartKind.NORMAL_PROBABILITY.fileSuffix() + ".png",

@@ -223,4 +223,32 @@ class EquivalenceChartTest {
         }
         throw new AssertionError("no interval for row " + row);
     }
+
+    /** The box plot names the criteria that decided, and draws the margin around the before mean. */
+    @Test
+    void theBoxPlotShowsTheDecidingCriteria() {
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(7);
+        double[] before = ChartFixtures.normal(rnd, 30, 20.0, 0.01, 3);
+        double[] after = ChartFixtures.normal(rnd, 30, 20.0, 0.04, 3);
+        var data = new org.holdpoint.study.CharacteristicData("Flange height", "mm",
+                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(before), "b.csv"),
+                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(after), "a.csv"), false, List.of());
+        var own = new org.holdpoint.study.CharacteristicSettings("mm", org.holdpoint.study.SpecLimits.NONE,
+                new org.holdpoint.study.MarginSpec(org.holdpoint.study.MarginSpec.Kind.ABSOLUTE, -0.05, 0.05), 1.3,
+                null, null);
+        var settings = new org.holdpoint.study.AnalysisSettings(0.05, false, false, null,
+                java.util.Map.of("Flange height", own), null, null);
+        CharacteristicResult r = new org.holdpoint.workflow.StudyAnalyzer().analyze(
+                new org.holdpoint.study.Dataset(List.of(data), List.of(), new org.holdpoint.study.ImportReport(60,
+                        java.util.Map.of(), List.of(), List.of())), settings, org.holdpoint.study.Progress.NONE)
+                .characteristics().get(0);
+        JFreeChart chart = BoxPlotChart.withCriteria(BoxPlotChart.create(data, org.holdpoint.study.SpecLimits.NONE,
+                theme), r, theme);
+        String line = ((org.jfree.chart.title.TextTitle) chart.getSubtitle(1)).getText();
+        assertThat(line).contains("mean: ").contains("spread: sd ratio bound").contains("NOT below the limit 1.3");
+        var band = (org.jfree.chart.plot.IntervalMarker) chart.getCategoryPlot()
+                .getRangeMarkers(org.jfree.chart.ui.Layer.BACKGROUND).iterator().next();
+        assertThat(band.getStartValue()).isCloseTo(r.before().mean() - 0.05, org.assertj.core.api.Assertions.within(1e-12));
+        assertThat(band.getEndValue()).isCloseTo(r.before().mean() + 0.05, org.assertj.core.api.Assertions.within(1e-12));
+    }
 }
