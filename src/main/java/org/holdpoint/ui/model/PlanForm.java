@@ -476,6 +476,9 @@ public final class PlanForm {
             l.add(new String[] {"Parts after (n₂)", Integer.toString(r.nAfter())});
         }
         l.add(new String[] {"Parts measured in all", Long.toString(r.totalUnits())});
+        if (r.targetPower() != null) {
+            l.add(new String[] {"Target power", pct(r.targetPower())});
+        }
         l.add(new String[] {"Achieved power (exact TOST)", pct(r.achievedPower())});
         l.add(new String[] {r.design() == Design.PAIRED ? "Power with one pair fewer"
                 : "Power with one part fewer in each group", r.powerAtPrevious() == null ? "not defined"

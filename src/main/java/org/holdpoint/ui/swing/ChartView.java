@@ -51,13 +51,14 @@ final class ChartView extends JComponent {
      */
     void show(Supplier<JFreeChart> build) {
         int gen = ++generation;
+        boolean dark = Themes.isDark();
         chart = null;
         image = null;
         message = "Drawing the chart…";
         repaint();
         renderer.submit(() -> {
             try {
-                JFreeChart c = build.get();
+                JFreeChart c = dark ? DarkCharts.darken(build.get()) : build.get();
                 SwingUtilities.invokeLater(() -> {
                     if (gen == generation) {
                         chart = c;

@@ -280,8 +280,9 @@ public final class MainWindow extends JFrame {
         banner.setIconTextGap(12);
         banner.setHorizontalTextPosition(javax.swing.SwingConstants.LEADING);
         banner.setText(r.overallWords());
-        bannerCounts.setText(r.counts().isEmpty() ? " " : "      " + r.counts()
-                + ".  The change is verified only when every characteristic passes.");
+        bannerCounts.setText(r.counts().isEmpty() ? " " : r.staleBecause() != null ? "      The results on screen "
+                + "are those of the last analysis (" + r.counts() + "); they cannot be written or signed."
+                : "      " + r.counts() + ".  The change is verified only when every characteristic passes.");
     }
 
     private void refreshTitle() {

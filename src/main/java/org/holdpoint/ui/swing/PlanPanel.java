@@ -313,9 +313,12 @@ final class PlanPanel extends JPanel {
 
     private void refreshTitle() {
         var r = form.result();
-        resultTitle.setText(r == null ? "No plan yet: type the values or take them from the baseline data"
-                : "Plan for " + form.resultFor() + " — target power " + Math.round(100 * r.targetPower()) + " %"
-                        + (form.stale() ? "  (values changed: press Plan)" : ""));
+        // a heading short enough for the pane; the longer words go into its tip
+        resultTitle.setText(r == null ? "No plan yet"
+                : "Plan for " + form.resultFor() + (form.stale() ? " (values changed)" : ""));
+        resultTitle.setToolTipText(r == null ? "Type the values or take them from the baseline data, then press Plan"
+                : "Target power " + Math.round(100 * r.targetPower()) + " %" + (form.stale()
+                        ? "; the values changed since: press Plan" : ""));
     }
 
     private static String sizeWords(org.holdpoint.stats.PlanResult p) {
