@@ -219,6 +219,9 @@ final class ChecksPlan {
                     + " do not exist; Ppk is " + (any.lsl() == null ? "Ppu" : "Ppl") + ".");
         }
         String lvl = Texts.percent(1 - any.alpha());
+        if (plan.layout() >= 2) {
+            return tolerance(r, n, c, k, b, a, any, lvl, notes);
+        }
         s.text(r, c0, "Capability (normal model)", Style.HEADER, n + ": capability header");
         s.text(r, c0 + 1, "Before", Style.HEADER, n + ": capability before header");
         s.text(r, c0 + 2, "After", Style.HEADER, n + ": capability after header");
@@ -248,6 +251,58 @@ final class ChecksPlan {
         s.text(r + 4, col + 1, "", Style.CELL_WRAP, n + ": within estimator");
         s.text(r + 5, col + 1, "", Style.CELL_WRAP, n + ": within estimator");
         return r + 9;
+    }
+
+    /**
+     * Layout 2: how the parts sit in the tolerance, in the project's own order: the sentence that decides,
+     * then the indices before and after (the one that decides first), then the expected share outside.
+     */
+    private int tolerance(int r, String n, CharacteristicResult c, AssumptionChecks k, CapabilityResult b,
+            CapabilityResult a, CapabilityResult any, String lvl, List<String> notes) {
+        s.text(r, c0, "In the tolerance (normal model)", Style.HEADER, n + ": capability header");
+        s.merge(r, r, c0, c0 + 5);
+        Double req = c.settings().capabilityRequirement();
+        String decides;
+        if (a == null || a.ppkLower() == null || !Double.isFinite(a.ppkLower())) {
+            decides = "The after group's lower bound of Ppk is undefined" + (req == null ? "; no requirement set."
+                    : ", so the requirement of " + Texts.num(req) + " is not judged.");
+            if (req != null) {
+                notes.add("Capability requirement: not judged, the after group's lower bound of Ppk is undefined.");
+            }
+        } else {
+            decides = "Decides: the after group's " + lvl + " lower bound of Ppk, " + WorkbookPlan.fixed(a.ppkLower(),
+                    3) + (req == null ? "; no requirement set." : Boolean.TRUE.equals(k.capabilityMet())
+                    ? ", meets the required " + Texts.num(req) + "." : ", does NOT meet the required " + Texts.num(req)
+                    + ".");
+        }
+        s.text(r + 1, c0, decides, Style.WRAP, n + ": capability decides");
+        s.merge(r + 1, r + 1, c0, c0 + 5);
+        s.height(r + 1, 16f);
+        s.text(r + 2, c0, "Index", Style.HEADER, n + ": capability index header");
+        s.text(r + 2, c0 + 1, "Before", Style.HEADER, n + ": capability before header");
+        s.text(r + 2, c0 + 2, "After", Style.HEADER, n + ": capability after header");
+        capRow(r + 3, "Ppk (overall sd)", b, a, CapabilityResult::ppk, n + ": Ppk");
+        capRow(r + 4, lvl + " lower bound of Ppk (Bissell)", b, a, CapabilityResult::ppkLower, n + ": Ppk lower bound");
+        capRow(r + 5, "Pp (overall sd)", b, a, CapabilityResult::pp, n + ": Pp");
+        capRow(r + 6, "Cpk (within subgroups)", b, a, CapabilityResult::cpk, n + ": Cpk");
+        capRow(r + 7, "Cp (within subgroups)", b, a, CapabilityResult::cp, n + ": Cp");
+        row(r + 8, "Expected ppm below LSL", b == null ? null : b.ppmBelow(), a == null ? null : a.ppmBelow(),
+                Style.NUMBER, 2, n + ": ppm below LSL");
+        row(r + 9, "Expected ppm above USL", b == null ? null : b.ppmAbove(), a == null ? null : a.ppmAbove(),
+                Style.NUMBER, 2, n + ": ppm above USL");
+        int col = c0 + 4;
+        s.text(r + 2, col, "Within-subgroup sd", Style.HEADER, n + ": within header");
+        s.text(r + 2, col + 1, "", Style.HEADER, n + ": within header");
+        String est = any.estimator() == null ? "none: Cp and Cpk need a subgroup column"
+                : any.estimator().description();
+        s.text(r + 3, col, est, Style.CELL_WRAP, n + ": within estimator");
+        s.merge(r + 3, r + 5, col, col + 1);
+        s.text(r + 3, col + 1, "", Style.CELL_WRAP, n + ": within estimator");
+        for (int i = 4; i <= 5; i++) {
+            s.text(r + i, col, "", Style.CELL_WRAP, n + ": within estimator");
+            s.text(r + i, col + 1, "", Style.CELL_WRAP, n + ": within estimator");
+        }
+        return r + 11;
     }
 
     static String met(Boolean met, Double requirement) {

@@ -308,7 +308,7 @@ class SignoffWorkbookTest {
             int top = rowOf(d, 0, "1. Bore diameter: shape, distribution-free comparison and capability", 0);
             assertThat(rowOf(d, 0, "Shape and outliers", top)).isGreaterThan(top);
             assertThat(rowOf(d, 4, "Distribution-free comparison", top)).isGreaterThan(top);
-            assertThat(rowOf(d, 0, "Capability (normal model)", top)).isGreaterThan(top);
+            assertThat(rowOf(d, 0, "In the tolerance (normal model)", top)).isGreaterThan(top);
             assertThat(rowOf(d, 0, "Recommendation", top)).isGreaterThan(top);
             int sw = rowOf(d, 0, "Shapiro\u2013Wilk p", top);
             assertThat(d.getRow(sw).getCell(1).getNumericCellValue()).isEqualTo(k.before().normality().shapiroP());
@@ -349,8 +349,9 @@ class SignoffWorkbookTest {
             // no subgroup column: Cp and Cpk are empty cells, never 0 or NaN, and the notes say why
             Cell cp = d.getRow(rowOf(d, 0, "Cp (within subgroups)", top)).getCell(2);
             assertThat(cp.getCellType()).isEqualTo(CellType.BLANK);
-            assertThat(text(d, "F" + (rowOf(d, 4, "After group's lower bound", top) + 1)))
-                    .isEqualTo("meets it");
+            // the sentence that decides comes first in the tolerance block
+            assertThat(text(d, "A" + (rowOf(d, 0, "In the tolerance (normal model)", top) + 2)))
+                    .isEqualTo("Decides: the after group's 95 % lower bound of Ppk, 3.512, meets the required 1.33.");
             assertThat(text(d, "A" + (rowOf(d, 0, "Recommendation", top) + 2))).isEqualTo(k.recommendation());
             Sheet summary = wb.getSheet("Summary");
             assertThat(text(summary, "L14")).startsWith("Capability");
@@ -434,7 +435,7 @@ class SignoffWorkbookTest {
             assertThat(d.getRow(rowOf(d, 0, "Lots", top)).getCell(2).getNumericCellValue()).isEqualTo(2.0);
             assertThat(d.getRow(rowOf(d, 0, "Cpk (within subgroups)", top)).getCell(2).getNumericCellValue())
                     .isEqualTo(k.after().capability().cpk());
-            assertThat(text(d, "F" + (rowOf(d, 4, "Within-subgroup sd estimator", top) + 1)))
+            assertThat(text(d, "E" + (rowOf(d, 4, "Within-subgroup sd", top) + 2)))
                     .isEqualTo(k.after().capability().estimator().description());
         }
         assertThat(verify(f).differences()).isEmpty();

@@ -72,10 +72,69 @@ public final class ResultDetail {
             s.add(equivalence(eq, u));
         }
         s.add(spread(r));
+        Section tolerance = tolerance(r);
+        if (tolerance != null) {
+            s.add(tolerance);
+        }
         if (!r.notes().isEmpty()) {
             s.add(new Section("Notes", r.notes().stream().map(n -> new Line("", n)).toList()));
         }
         return s;
+    }
+
+    /**
+     * How the parts sit in the tolerance, before → after, in the same form as the other sections: the decision
+     * first (the after group's lower bound of Ppk against the requirement), then the indices and the expected
+     * share outside the limits under the normal model.
+     */
+    private static Section tolerance(CharacteristicResult r) {
+        var k = r.checks();
+        if (k == null) {
+            return null;
+        }
+        var b = k.before() == null ? null : k.before().capability();
+        var a = k.after() == null ? null : k.after().capability();
+        if (a == null && b == null) {
+            return null;
+        }
+        List<Line> l = new ArrayList<>();
+        Double req = r.settings().capabilityRequirement();
+        double level = 1 - (a != null ? a.alpha() : b.alpha());
+        if (a != null && a.ppkLower() != null) {
+            l.add(new Line("Decides", "after: " + Format.percent(level) + " lower bound of Ppk " + Format.ratio(
+                    a.ppkLower()) + (req == null ? " (no requirement set)" : Boolean.TRUE.equals(k.capabilityMet())
+                    ? " meets the required " + Format.num(req) : " does NOT meet the required " + Format.num(req))));
+        }
+        l.add(new Line("Ppk", opt(b == null ? null : b.ppk()) + "  →  " + opt(a == null ? null : a.ppk())));
+        l.add(new Line("Ppk lower bound", opt(b == null ? null : b.ppkLower()) + "  →  "
+                + opt(a == null ? null : a.ppkLower())));
+        if ((b != null && b.pp() != null) || (a != null && a.pp() != null)) {
+            l.add(new Line("Pp (both limits)", opt(b == null ? null : b.pp()) + "  →  " + opt(a == null ? null
+                    : a.pp())));
+        }
+        if ((b != null && b.cpk() != null) || (a != null && a.cpk() != null)) {
+            l.add(new Line("Cpk (within)", opt(b == null ? null : b.cpk()) + "  →  " + opt(a == null ? null
+                    : a.cpk())));
+        }
+        l.add(new Line("Outside, ppm", outside(b) + "  →  " + outside(a)));
+        l.add(new Line("", "Ppk from the overall sd; expected parts per million below LSL + above USL under the "
+                + "normal model, which a skewed characteristic does not follow (see the shape checks)."));
+        return new Section("In the tolerance", l);
+    }
+
+    private static String opt(Double v) {
+        return v == null ? "–" : Format.ratio(v);
+    }
+
+    private static String outside(org.holdpoint.stats.CapabilityResult c) {
+        if (c == null) {
+            return "–";
+        }
+        return ppm(c.ppmBelow()) + " + " + ppm(c.ppmAbove());
+    }
+
+    private static String ppm(Double v) {
+        return v == null ? "–" : Format.num(v, 3);
     }
 
     private static Section groups(Descriptives b, Descriptives a, String unit,

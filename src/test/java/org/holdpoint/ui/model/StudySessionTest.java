@@ -92,6 +92,26 @@ class StudySessionTest {
         assertThat(checked).as("the demo fails on spread and on capability").isGreaterThanOrEqualTo(2);
     }
 
+    /** The detail pane shows how the parts sit in the tolerance, the deciding bound first. */
+    @Test
+    void theDetailShowsTheCapabilityThatDecided() {
+        ResultsTable r = s.results();
+        for (int i = 0; i < r.rowCount(); i++) {
+            var c = r.row(i);
+            if (!c.name().equals("Chamfer width")) {
+                continue;
+            }
+            var sections = ResultDetail.of(c, r.decimals(c.name()));
+            var tol = sections.stream().filter(x -> x.title().equals("In the tolerance")).findFirst().orElseThrow();
+            assertThat(tol.lines().get(0).label()).isEqualTo("Decides");
+            assertThat(tol.lines().get(0).value()).contains("does NOT meet the required 1")
+                    .contains(org.holdpoint.workflow.Format.ratio(c.checks().after().capability().ppkLower()));
+            assertThat(tol.lines()).extracting(ResultDetail.Line::label).contains("Ppk", "Outside, ppm");
+            return;
+        }
+        throw new AssertionError("the demo has a Chamfer width");
+    }
+
     @Test
     void typingMarksTheStudyUnsaved() {
         s.change().set(ChangeForm.Field.TITLE, "edited");
