@@ -150,6 +150,14 @@ final class ResultsPanel extends JPanel {
         split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), lower);
         split.setResizeWeight(0.42);
         split.setBorder(BorderFactory.createEmptyBorder(0, 24, 12, 24));
+        // on every resize the table again gets the height of its rows (up to half the step), so a window made
+        // smaller still shows every row of a short study, failures included
+        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                fitTable();
+            }
+        });
         add(split, BorderLayout.CENTER);
     }
 
@@ -216,7 +224,7 @@ final class ResultsPanel extends JPanel {
             return;
         }
         int want = table.getTableHeader().getPreferredSize().height + table.getRowCount() * table.getRowHeight() + 6;
-        split.setDividerLocation(Math.min(h / 2, Math.max(h / 4, want)));
+        split.setDividerLocation(Math.min(h * 11 / 20, Math.max(h / 4, want)));
     }
 
     private void selectInTable(String name) {

@@ -1,6 +1,7 @@
 package org.holdpoint.ui.swing;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
 import java.awt.GraphicsEnvironment;
@@ -248,6 +249,48 @@ class MainWindowGuiTest {
         assertThat(WindowDriver.onEdt(() -> w.session().results().rowCount())).isEqualTo(6);
         assertThat(WindowDriver.onEdt(() -> w.session().study().data().report().messages()))
                 .anyMatch(m -> m.contains("not analysed") && m.contains("Mould temp"));
+    }
+
+    /**
+     * At 1280 × 800 every row of the demo's results is in view, the detail pane is wide enough to read and
+     * the chart keeps its share after the window was made smaller from 1920 × 1080 (screenshots of both sizes
+     * go to target/gui-smoke and were looked at).
+     */
+    @Test
+    void isUsableAt1280By800AndKeepsItsProportionsOnResize() throws Exception {
+        driver = new WindowDriver();
+        MainWindow w = driver.open(Themes.LIGHT, 1920, 1080);
+        WindowDriver.onEdt(() -> {
+            w.session().openDemo();
+            return null;
+        });
+        WindowDriver.await("the demo study analysed", () -> w.session().results().result() != null, 60_000);
+        Files.createDirectories(OUT);
+        driver.screenshot(OUT.resolve("results-1920x1080.png"));
+        JComponent charts = WindowDriver.onEdt(() -> find(w.getContentPane(), "charts"));
+        double wide = WindowDriver.onEdt(() -> charts.getWidth() / (double) w.getContentPane().getWidth());
+        WindowDriver.onEdt(() -> {
+            w.setSize(1280, 800);
+            w.validate();
+            return null;
+        });
+        Thread.sleep(500);
+        WindowDriver.onEdt(() -> {
+            w.validate();
+            return null;
+        });
+        driver.screenshot(OUT.resolve("results-1280x800.png"));
+        JTable results = WindowDriver.onEdt(() -> (JTable) find(w.getContentPane(), "results"));
+        java.awt.Rectangle view = WindowDriver.onEdt(results::getVisibleRect);
+        int rows = WindowDriver.onEdt(results::getRowCount);
+        int rowHeight = WindowDriver.onEdt(results::getRowHeight);
+        assertThat(view.height).as("all %d rows in view at 1280 x 800", rows).isGreaterThanOrEqualTo(rows * rowHeight);
+        JComponent detail = WindowDriver.onEdt(() -> find(w.getContentPane(), "detail"));
+        assertThat(WindowDriver.onEdt(detail::getWidth)).as("the detail pane is wide enough to read")
+                .isGreaterThanOrEqualTo(320);
+        double narrow = WindowDriver.onEdt(() -> charts.getWidth() / (double) w.getContentPane().getWidth());
+        assertThat(narrow).as("the chart keeps its share of the window").isCloseTo(wide, within(0.08));
+        assertThat(WindowDriver.onEdt(charts::getWidth)).isGreaterThanOrEqualTo(480);
     }
 
     static JComponent find(java.awt.Container root, String name) {
