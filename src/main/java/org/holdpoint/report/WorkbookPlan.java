@@ -25,16 +25,6 @@ final class WorkbookPlan {
         "%s CI (equivalence)", "Equivalence conclusion", "Variance ratio (after / before)", "F-test p",
         "Brown\u2013Forsythe p", "Sd growth", "Capability: after-group Ppk lower bound vs required", "Verdict"};
     static final int[] SUMMARY_WIDTHS = {3, 22, 5, 8, 10, 10, 10, 22, 21, 22, 13, 9, 8, 10, 27, 20, 15};
-    /**
-     * Layout 2: the Summary a manager reads at 100 % on a landscape page: the deciding numbers only (the
-     * difference test's interval, the variance ratio and the spread tests' p-values are on the Details sheet),
-     * with the criteria that decided a failure in words.
-     */
-    static final String[] SUMMARY_HEADERS_2 = {"#", "Characteristic", "Unit", "n before / after", "Mean before",
-        "Mean after", "Difference (after \u2212 before)", "Margin (L, U)", "%s interval (equivalence)",
-        "Mean: equivalence", "Spread: sd ratio bound vs limit", "Capability: Ppk bound (after) vs required",
-        "Verdict", "Decided by"};
-    static final int[] SUMMARY_WIDTHS_2 = {3, 22, 5, 8, 10, 10, 10, 19, 19, 13, 18, 18, 11, 18};
     /** The widest a Summary column grows to fit its content (longer text wraps or is cut). */
     static final int MAX_SUMMARY_WIDTH = 44;
 
@@ -71,7 +61,11 @@ final class WorkbookPlan {
         }
         WorkbookPlan p = new WorkbookPlan(input, anchors, chartCounts, layout);
         p.header();
-        p.summary();
+        if (layout == 1) {
+            p.summary();
+        } else {
+            p.summary2();
+        }
         new DetailPlan(p).build();
         new TextBlocks(p).build();
         p.rawHeader();
@@ -137,15 +131,11 @@ final class WorkbookPlan {
         String eq = Texts.percent(1 - 2 * alpha);
         int r0 = a.row();
         int c0 = a.column();
-        String[] headers = layout == 1 ? SUMMARY_HEADERS : SUMMARY_HEADERS_2;
-        int[] widths = layout == 1 ? SUMMARY_WIDTHS : SUMMARY_WIDTHS_2;
+        String[] headers = SUMMARY_HEADERS;
+        int[] widths = SUMMARY_WIDTHS;
         for (int i = 0; i < headers.length; i++) {
             String h = headers[i];
-            if (layout == 1) {
-                h = i == 7 ? String.format(Locale.ROOT, h, ci) : i == 9 ? String.format(Locale.ROOT, h, eq) : h;
-            } else {
-                h = i == 8 ? String.format(Locale.ROOT, h, eq) : h;
-            }
+            h = i == 7 ? String.format(Locale.ROOT, h, ci) : i == 9 ? String.format(Locale.ROOT, h, eq) : h;
             s.text(r0, c0 + i, h, Style.HEADER, "summary table header");
             s.width(c0 + i, widths[i]);
         }
@@ -154,11 +144,7 @@ final class WorkbookPlan {
         int row = r0 + 1;
         int k = 1;
         for (CharacteristicResult c : input.result().characteristics()) {
-            if (layout == 1) {
-                summaryRow(s, row++, c0, k++, c);
-            } else {
-                summaryRow2(s, row++, c0, k++, c);
-            }
+            summaryRow(s, row++, c0, k++, c);
         }
         // columns as wide as their content (a long name, a wide interval), so that nothing is cut or shown
         // as ### when printed
@@ -190,21 +176,8 @@ final class WorkbookPlan {
                 + Texts.num(alpha) + "). Capability: the after group's lower confidence bound of Ppk against the "
                 + "required value. An empty cell means the value does not apply or is undefined; the "
                 + "Details sheet says why.";
-        if (layout >= 2) {
-            legend = "Marks: " + Texts.status(Verdict.Status.PASSED) + " \u00b7 " + Texts.status(
-                    Verdict.Status.FAILED) + " \u00b7 " + Texts.status(Verdict.Status.INCONCLUSIVE) + " \u00b7 "
-                    + Texts.status(Verdict.Status.NOT_ASSESSED) + ". Difference = after \u2212 before. Equivalence "
-                    + "intervals " + eq + " (two one-sided tests at \u03b1 = " + Texts.num(alpha) + "). Spread: the "
-                    + "upper confidence bound of sd(after)/sd(before) against the limit. Capability: the after "
-                    + "group's lower confidence bound of Ppk against the required value. An empty cell means the "
-                    + "value does not apply or is undefined; the Details sheet gives every number and why.";
-        }
         s.text(row + 1, c0, legend, Style.NOTE, "summary legend");
         s.merge(row + 1, row + 1, c0, c0 + headers.length - 1);
-        if (layout >= 2) {
-            s.height(row + 1, 40f);
-            return;
-        }
         s.height(row + 1, 26f);
     }
 
@@ -241,7 +214,102 @@ final class WorkbookPlan {
                 n + ": verdict");
     }
 
-    private void summaryRow2(SheetContent s, int row, int c0, int index, CharacteristicResult c) {
+    /** Layout 2, the means: ten columns, intervals on two lines, so that the page prints near 100 %. */
+    static final String[] MEANS_HEADERS = {"#", "Characteristic", "Unit", "n before / after", "Mean before",
+        "Mean after", "Difference (after \u2212 before)", "Margin (L, U)", "%s interval (equivalence)",
+        "Mean: equivalence"};
+    static final int[] MEANS_WIDTHS = {3, 18, 5, 8, 10, 10, 10, 13, 13, 13};
+    /** Layout 2, spread, capability and the verdict: merged over the same columns (first column of each). */
+    static final String[] VERDICT_HEADERS = {"#", "Characteristic", "Spread: sd ratio bound vs limit",
+        "Capability: Ppk bound (after) vs required", "Verdict", "Decided by"};
+    private static final int[][] VERDICT_SPANS = {{0, 0}, {1, 1}, {2, 4}, {5, 6}, {7, 7}, {8, 9}};
+
+    /**
+     * Layout 2: the Summary as two tables one above the other, the means and then the other criteria with the
+     * verdict, each no wider than a landscape page at about 100 %; the columns of the header block at the right
+     * are narrow.
+     */
+    private void summary2() {
+        Anchor a = at(TemplateName.SUMMARY_TABLE);
+        SheetContent s = sheet(TemplateName.SUMMARY_TABLE);
+        String eq = Texts.percent(1 - 2 * alpha);
+        int r0 = a.row();
+        int c0 = a.column();
+        for (int i = 0; i < MEANS_HEADERS.length; i++) {
+            s.text(r0, c0 + i, i == 8 ? String.format(Locale.ROOT, MEANS_HEADERS[i], eq) : MEANS_HEADERS[i],
+                    Style.HEADER, "summary table header");
+            s.width(c0 + i, MEANS_WIDTHS[i]);
+        }
+        // the header block's columns beside the tables (part number and the like sit in columns M and O)
+        int[] rest = {2, 2, 13, 2, 16};
+        for (int i = 0; i < rest.length; i++) {
+            s.width(c0 + MEANS_HEADERS.length + i, rest[i]);
+        }
+        s.height(r0, 40f);
+        int row = r0 + 1;
+        int k = 1;
+        List<CharacteristicResult> all = input.result().characteristics();
+        for (CharacteristicResult c : all) {
+            meansRow(s, row++, c0, k++, c);
+        }
+        // the second table starts on a page of its own unless both fit under the header block (about 330 pt of
+        // rows on a landscape A4 page): a table is never split from its header row by the page end
+        float used = 0;
+        for (int r = r0; r < row; r++) {
+            used += s.rowHeights.getOrDefault(r, 15f);
+        }
+        if (used + 60 + 20f * all.size() > 330f) {
+            s.rowBreaks.add(row);
+        }
+        row++;
+        s.text(row, c0, "Spread, capability and the verdict", Style.LABEL, "summary verdict table title");
+        row++;
+        for (int i = 0; i < VERDICT_HEADERS.length; i++) {
+            spanned(s, row, c0, i, VERDICT_HEADERS[i], Style.HEADER, "summary verdict header");
+        }
+        s.height(row, 28f);
+        row++;
+        k = 1;
+        for (CharacteristicResult c : all) {
+            String n = c.name();
+            s.number(row, c0, (double) k++, Style.INTEGER, 0, n + ": verdict table index");
+            spanned(s, row, c0, 1, n, Style.CELL_WRAP, n + ": verdict table name");
+            spanned(s, row, c0, 2, sdGrowth(c, 2), Style.CELL, n + ": sd growth");
+            spanned(s, row, c0, 3, capability(c), Style.CELL, n + ": capability");
+            spanned(s, row, c0, 4, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
+                    n + ": verdict");
+            spanned(s, row, c0, 5, decidedBy(c), Style.CELL_WRAP, n + ": decided by");
+            s.height(row, Math.max(14f, 11.5f * (int) Math.ceil(n.length() / 16.0) + 3f));
+            row++;
+        }
+        String legend = "Marks: " + Texts.status(Verdict.Status.PASSED) + " \u00b7 " + Texts.status(
+                Verdict.Status.FAILED) + " \u00b7 " + Texts.status(Verdict.Status.INCONCLUSIVE) + " \u00b7 "
+                + Texts.status(Verdict.Status.NOT_ASSESSED) + ". Difference = after \u2212 before. Equivalence "
+                + "intervals " + eq + " (two one-sided tests at \u03b1 = " + Texts.num(alpha) + "). Spread: the "
+                + "upper confidence bound of sd(after)/sd(before) against the limit. Capability: the after "
+                + "group's lower confidence bound of Ppk against the required value. An empty cell means the "
+                + "value does not apply or is undefined; the Details sheet gives every number and why.";
+        s.text(row + 1, c0, legend, Style.NOTE, "summary legend");
+        s.merge(row + 1, row + 1, c0, c0 + MEANS_HEADERS.length - 1);
+        s.height(row + 1, 52f);
+    }
+
+    /** A cell of the verdict table, merged over its span, the other cells of the span written empty. */
+    private static void spanned(SheetContent s, int row, int c0, int i, String text, Style style, String what) {
+        int from = c0 + VERDICT_SPANS[i][0];
+        int to = c0 + VERDICT_SPANS[i][1];
+        if (text != null) {
+            s.text(row, from, text, style, what);
+        }
+        for (int c = from + 1; c <= to; c++) {
+            s.text(row, c, "", style, what);
+        }
+        if (to > from && text != null) {
+            s.merge(row, row, from, to);
+        }
+    }
+
+    private void meansRow(SheetContent s, int row, int c0, int index, CharacteristicResult c) {
         int d = statDecimals(data(c.name()));
         String n = c.name();
         s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
@@ -254,18 +322,15 @@ final class WorkbookPlan {
         var t = c.decidingTest();
         s.number(row, c0 + 6, t == null ? null : t.estimate(), Style.NUMBER, d, n + ": difference");
         s.text(row, c0 + 7, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
-                Style.CELL, n + ": margin");
+                Style.CELL_WRAP, n + ": margin");
         EquivalenceResult eq = c.decidingTost();
-        s.text(row, c0 + 8, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL,
+        s.text(row, c0 + 8, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL_WRAP,
                 n + ": equivalence CI");
         s.text(row, c0 + 9, c.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE
-                ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL,
+                ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL_WRAP,
                 n + ": equivalence conclusion");
-        s.text(row, c0 + 10, sdGrowth(c, 2), Style.CELL, n + ": sd growth");
-        s.text(row, c0 + 11, capability(c), Style.CELL, n + ": capability");
-        s.text(row, c0 + 12, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
-                n + ": verdict");
-        s.text(row, c0 + 13, decidedBy(c), Style.CELL_WRAP, n + ": decided by");
+        // an interval wraps after its comma: two lines; a long name more
+        s.height(row, Math.max(25f, 11.5f * (int) Math.ceil(n.length() / 16.0) + 3f));
     }
 
     /**

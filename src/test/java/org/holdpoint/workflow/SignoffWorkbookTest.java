@@ -100,7 +100,7 @@ class SignoffWorkbookTest {
                 Arguments.of("Details", "F10", (Consumer<Cell>) c -> c.setCellValue(-0.005), "margin L"),
                 Arguments.of("Sign-off", "D6", (Consumer<Cell>) c -> c.setCellValue("2026-11-25T16:00:00Z"),
                         "sign-off prepared: date and time"),
-                Arguments.of("Summary", "M15", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
+                Arguments.of("Summary", "H21", (Consumer<Cell>) c -> c.setCellFormula("\"\u2714 passed\""),
                         "verdict"));
     }
 
@@ -354,10 +354,11 @@ class SignoffWorkbookTest {
                     .isEqualTo("Decides: the after group's 95 % lower bound of Ppk, 3.512, meets the required 1.33.");
             assertThat(text(d, "A" + (rowOf(d, 0, "Recommendation", top) + 2))).isEqualTo(k.recommendation());
             Sheet summary = wb.getSheet("Summary");
-            assertThat(text(summary, "L14")).startsWith("Capability");
-            assertThat(text(summary, "L15")).isEqualTo("met: 3.512 > 1.33");
+            // layout 2: the verdict table under the means table (3 characteristics: header in row 20)
+            assertThat(text(summary, "F20")).startsWith("Capability");
+            assertThat(text(summary, "F21")).isEqualTo("met: 3.512 > 1.33");
             // torque has no specification limits: an empty capability cell
-            assertThat(text(summary, "L17")).isEmpty();
+            assertThat(text(summary, "F23")).isEmpty();
         }
         assertThat(verify(f).differences()).isEmpty();
         int top;
@@ -381,7 +382,7 @@ class SignoffWorkbookTest {
             assertThat(x.cell()).isEqualTo(pCell);
             assertThat(x.what()).contains("rank p");
         });
-        VerifyResult r3 = verify(edit(f, "Summary", "L15", c -> c.setCellValue("met: 1.500 > 1.33")));
+        VerifyResult r3 = verify(edit(f, "Summary", "F21", c -> c.setCellValue("met: 1.500 > 1.33")));
         assertThat(r3.differences()).singleElement().satisfies(x -> assertThat(x.what()).contains("capability"));
     }
 
