@@ -15,28 +15,28 @@ final class Failures implements CommandLine.IExecutionExceptionHandler, CommandL
     public int handleExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parse) {
         PrintWriter err = cl.getErr();
         if (ex instanceof StatsException) {
-            err.println("holdpoint: " + ex.getMessage());
+            err.println("holdpoint: " + OptionWords.of(ex.getMessage()));
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
         if (ex instanceof AnalysisException a) {
             if (a.problems().size() == 1) {
-                err.println("holdpoint: " + a.problems().get(0));
+                err.println("holdpoint: " + OptionWords.of(a.problems().get(0)));
             } else {
                 err.println("holdpoint: the study cannot be analysed as given:");
-                a.problems().forEach(p -> err.println("  - " + p));
+                a.problems().forEach(p -> err.println("  - " + OptionWords.of(p)));
             }
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
         if (ex instanceof org.holdpoint.workflow.SignoffException
                 || ex instanceof org.holdpoint.workflow.StudyFileException) {
-            err.println("holdpoint: " + ex.getMessage());
+            err.println("holdpoint: " + OptionWords.of(ex.getMessage()));
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
         if (ex instanceof UserInputException u) {
-            err.println("holdpoint: " + u.getMessage());
+            err.println("holdpoint: " + OptionWords.of(u.getMessage()));
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
@@ -53,7 +53,7 @@ final class Failures implements CommandLine.IExecutionExceptionHandler, CommandL
     public int handleParseException(CommandLine.ParameterException ex, String[] args) {
         CommandLine cl = ex.getCommandLine();
         PrintWriter err = cl.getErr();
-        err.println("holdpoint: " + ex.getMessage());
+        err.println("holdpoint: " + OptionWords.of(ex.getMessage()));
         if (!CommandLine.UnmatchedArgumentException.printSuggestions(ex, err)) {
             err.println("Run '" + cl.getCommandSpec().qualifiedName() + " --help' for the options.");
         }

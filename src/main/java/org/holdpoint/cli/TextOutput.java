@@ -105,7 +105,7 @@ final class TextOutput {
         }
         out.println();
         for (String m : report.messages()) {
-            out.println("  " + m);
+            out.println("  " + OptionWords.of(m));
         }
         int shown = 0;
         for (var cell : report.firstSkipped()) {

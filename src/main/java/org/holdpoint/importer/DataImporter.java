@@ -455,7 +455,7 @@ public final class DataImporter {
     private Dataset finish(ImportRequest r, List<Source> sources, Map<String, LayoutReader.Accum> accums,
             List<InputInfo> inputs, SkipLog log, boolean paired) {
         if (accums.isEmpty()) {
-            throw new ImportException("%s: no values found below the header. Check the layout options",
+            throw new ImportException("%s: no values found below the header. Check the layout, header row and column choices",
                     describe(r));
         }
         List<CharacteristicData> out = new ArrayList<>();
@@ -573,8 +573,8 @@ public final class DataImporter {
             if (smaller >= 2 && common >= PAIRING_HINT_OVERLAP * smaller) {
                 return String.format(Locale.ROOT, "PAIRING HINT: %d of the %d unit ids of characteristic \"%s\" occur "
                         + "in both the before and the after group, so the same parts seem to have been measured "
-                        + "twice, but they were analysed as independent groups. If so, analyse again with --paired "
-                        + "(in the window: the layout \"paired\" on the Data step); the values are then "
+                        + "twice, but they were analysed as independent groups. If so, analyse them as paired (the "
+                        + "paired choice); the values are then "
                         + "matched by unit id and the paired tests are used", common, smaller, c.name());
             }
         }
@@ -605,12 +605,12 @@ public final class DataImporter {
                 .anyMatch(k -> k.equals(noB ? sources.get(1).plan().afterKey() : sources.get(0).plan().beforeKey()))) {
             // a two-file study whose before file is labelled "after" (or the other way round)
             sb.append(String.format(Locale.ROOT, ". The %s file's group column says %s: the two files seem to be "
-                    + "given the other way round (--before is the file measured before the change), or its rows are "
+                    + "given the other way round (the before file is the one measured before the change), or its rows are "
                     + "labelled wrongly", noB ? "before" : "after", a.unknownLabels.stream().map(x -> "\"" + x + "\"")
                             .collect(Collectors.joining(", "))));
         } else if (!a.unknownLabels.isEmpty()) {
             sb.append(String.format(Locale.ROOT, ". The group column holds the label(s) %s, which are neither \"%s\" nor "
-                    + "\"%s\": name the labels with the before-label and after-label options", a.unknownLabels
+                    + "\"%s\": name the labels that mean before and after", a.unknownLabels
                             .stream().map(s -> "\"" + s + "\"").collect(Collectors.joining(", ")), plan.beforeKey(),
                     plan.afterKey()));
         } else if (sources.size() == 1 && plan.groupCol() >= 0) {

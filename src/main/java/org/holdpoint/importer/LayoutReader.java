@@ -222,8 +222,7 @@ final class LayoutReader {
     private ImportException mixedSeparators(int col) {
         char sep = data.decimalSeparator();
         return new ImportException("%s, column %s: numbers are written %s (mixed decimal separators; '%s' is in "
-                + "force). Correct those cells to one decimal separator, or give the one the numbers use with "
-                + "--decimal", data.where(), Origin.columnName(col + 1), data.separatorCells(col), sep);
+                + "force). Correct those cells to one decimal separator, or choose the decimal mark the numbers use", data.where(), Origin.columnName(col + 1), data.separatorCells(col), sep);
     }
 
     private void skip(Accum a, boolean before, int r, int col, SkipReason reason, String text) {

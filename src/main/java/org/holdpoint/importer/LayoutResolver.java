@@ -109,7 +109,7 @@ final class LayoutResolver {
                 throw new ImportException("%s: cannot tell the layout from the header in row %d (%s). Name the columns "
                         + "before and after (side by side), or add a group column such as phase with the labels before "
                         + "and after next to a value column (stacked); or say which column holds the group and which "
-                        + "labels mean before and after (group column, before label, after label options)",
+                        + "labels mean before and after (the group column and its before and after labels)",
                         data.where(), header.row(), header.describe());
             }
         }
@@ -117,7 +117,7 @@ final class LayoutResolver {
         if (layout == Layout.SIDE_BY_SIDE || layout == Layout.PAIRED) {
             if (pairs.isEmpty()) {
                 throw new ImportException("%s: the %s layout needs a before column and an after column, but the header "
-                        + "in row %d has %s. Name the columns before and after, or give their names as options",
+                        + "in row %d has %s. Name the columns that hold the before and the after values",
                         data.where(), layout.words(), header.row(), header.describe());
             }
             return plan(layout, paired, -1, -1, pairs, unitCol, lotCol, subgroupCol, sequenceCol, uomCol, bKey, aKey);

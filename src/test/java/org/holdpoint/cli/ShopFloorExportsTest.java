@@ -429,4 +429,14 @@ class ShopFloorExportsTest {
         Run comma = run("analyze", xlsx.toString(), "--margin", "0.01", "--decimal", ",");
         assertThat(comma.code()).as(comma.err()).isZero();
     }
+
+    /** Messages name a choice in plain words; the command line adds the option that makes it. */
+    @Test
+    void theCommandLineNamesTheOptionBehindAChoice() {
+        assertThat(OptionWords.of("… If so, analyse them as paired (the paired choice); the values …"))
+                .contains("(--paired)");
+        assertThat(OptionWords.of("Correct those cells to one decimal separator, or choose the decimal mark the "
+                + "numbers use")).endsWith("with --decimal");
+        assertThat(OptionWords.of("nothing to translate")).isEqualTo("nothing to translate");
+    }
 }
