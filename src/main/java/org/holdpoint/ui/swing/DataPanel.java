@@ -177,9 +177,12 @@ final class DataPanel extends JPanel {
         radios.add(twoFiles);
         top.add(radios, c);
         c.gridwidth = 1;
-        row(top, c, Bind.label("Data file", 'F', file), file, chooseFile);
-        row(top, c, Bind.label("Before file", 'B', before), before, chooseBefore);
-        row(top, c, Bind.label("After file", 'A', after), after, chooseAfter);
+        fileLabel = Bind.label("Data file", 'F', file);
+        beforeLabel = Bind.label("Before file", 'B', before);
+        row(top, c, fileLabel, file, chooseFile);
+        row(top, c, beforeLabel, before, chooseBefore);
+        afterLabel = Bind.label("After file", 'A', after);
+        row(top, c, afterLabel, after, chooseAfter);
         c.gridy++;
         c.gridx = 0;
         c.fill = GridBagConstraints.NONE;
@@ -306,8 +309,20 @@ final class DataPanel extends JPanel {
         }
     }
 
+    private JLabel fileLabel;
+    private JLabel beforeLabel;
+    private JLabel afterLabel;
+
     private void refreshForm() {
         boolean one = form.source() == DataForm.Source.ONE_FILE;
+        // only the rows of the chosen way are shown: the preview below keeps the room
+        for (java.awt.Component x : new java.awt.Component[] {fileLabel, file, chooseFile}) {
+            x.setVisible(one);
+        }
+        for (java.awt.Component x : new java.awt.Component[] {beforeLabel, before, chooseBefore, afterLabel, after,
+            chooseAfter}) {
+            x.setVisible(!one);
+        }
         oneFile.setSelected(one);
         twoFiles.setSelected(!one);
         file.setText(form.file() == null ? "" : form.file().toString());
