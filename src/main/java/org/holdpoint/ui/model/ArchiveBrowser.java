@@ -449,7 +449,7 @@ public final class ArchiveBrowser {
         ChangeStudy study;
         try {
             study = why == null ? session.study() : null;
-        } catch (RuntimeException e) {
+        } catch (IllegalStateException | IllegalArgumentException e) {
             why = e.getMessage();
             study = null;
         }

@@ -401,7 +401,7 @@ public final class PlanForm {
         }
         try {
             return session.currentSettings();
-        } catch (RuntimeException e) {
+        } catch (IllegalStateException | IllegalArgumentException e) {
             session.problem(new UserMessage("Criteria to correct", e.getMessage(),
                     "Correct the marked cells on the Criteria step, then plan again."));
             return null;

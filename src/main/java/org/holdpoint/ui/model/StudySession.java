@@ -279,7 +279,7 @@ public final class StudySession {
         AnalysisSettings settings;
         try {
             settings = settings(criteria.toSettings());
-        } catch (RuntimeException e) {
+        } catch (IllegalStateException | IllegalArgumentException e) {
             problem(new UserMessage("Criteria to correct", e.getMessage(),
                     "Correct the marked cells on the Criteria step (the reason is shown beside each), then analyse "
                             + "again."));
@@ -492,7 +492,7 @@ public final class StudySession {
         ChangeStudy study;
         try {
             study = study();
-        } catch (RuntimeException e) {
+        } catch (IllegalStateException | IllegalArgumentException e) {
             problem(new UserMessage("Cannot save yet", e.getMessage(), data == null
                     ? "Open data and set the criteria first." : "Correct what is named, then save again."));
             return;
@@ -529,7 +529,7 @@ public final class StudySession {
         ChangeStudy study;
         try {
             study = study();
-        } catch (RuntimeException e) {
+        } catch (IllegalStateException | IllegalArgumentException e) {
             problem(new UserMessage("Cannot write yet", e.getMessage(), data == null
                     ? "Open data and analyse them first." : "Correct what is named, then write again."));
             return;

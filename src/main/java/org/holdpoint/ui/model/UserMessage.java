@@ -41,9 +41,13 @@ public record UserMessage(String title, String what, String whatToDo) {
                     "Start Holdpoint with more memory (for example java -Xmx4g -jar holdpoint.jar), or split the "
                             + "file by characteristic.");
         }
-        String m = failure.getMessage() == null ? failure.getClass().getSimpleName() : failure.getMessage();
-        return new UserMessage("Something unexpected went wrong", m,
-                "Save your work under a new name, then try again. If it happens again, report the steps that led "
-                        + "to it together with the data file.");
+        // a fault of the program, not of the input: said as one, with the details in the fault log
+        String m = failure.getClass().getSimpleName() + (failure.getMessage() == null ? "" : ": "
+                + failure.getMessage());
+        java.nio.file.Path log = FaultLog.write("task failed", failure);
+        return new UserMessage("Internal error", "Holdpoint met a fault of its own (" + m + "). Your data and "
+                + "criteria are not the cause.", "Save your work under a new name, then try again. If it happens "
+                + "again, report the steps that led to it" + (log == null ? "" : " with the file " + log)
+                + " and the data file.");
     }
 }

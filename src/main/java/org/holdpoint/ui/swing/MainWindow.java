@@ -107,6 +107,15 @@ public final class MainWindow extends JFrame {
                     + "(holdpoint --help)");
         }
         SwingUtilities.invokeLater(() -> {
+            // a fault on the event thread is shown as one and written in full to the fault log
+            Thread.setDefaultUncaughtExceptionHandler((t, e) -> {
+                java.nio.file.Path log = org.holdpoint.ui.model.FaultLog.write("uncaught on " + t.getName(), e);
+                SwingUtilities.invokeLater(() -> JOptionPane.showMessageDialog(null, "<html><body style='width: "
+                        + "420px'><b>Holdpoint met a fault of its own (" + Dialogs.esc(e.getClass().getSimpleName())
+                        + ").</b><br><br>Save your work under a new name. The details are in " + (log == null
+                        ? "the standard error output" : Dialogs.esc(log.toString())) + "; please send them with a "
+                        + "report.</body></html>", "Internal error", JOptionPane.ERROR_MESSAGE));
+            });
             PreferenceStore prefs = safePrefs();
             Themes.remembered(prefs).install();
             MainWindow w = new MainWindow(prefs);
@@ -121,6 +130,9 @@ public final class MainWindow extends JFrame {
             p.get("theme");
             return p;
         } catch (RuntimeException | Error e) {
+            // said, not silent: the window works, but nothing chosen in it is remembered
+            System.err.println("holdpoint: the user preferences cannot be read (" + e + "); this session's "
+                    + "choices (theme, recent files, last folder) will not be remembered");
             return PreferenceStore.inMemory();
         }
     }

@@ -67,6 +67,29 @@ class FormsTest {
         assertThatThrownBy(() -> f.set(ChangeForm.Field.KIND, "paint")).hasMessageContaining("is not a kind of change");
     }
 
+    /**
+     * A fault of the program (here a NullPointerException in a task) is told as an internal error with its
+     * details in the fault log, never as a problem with the user's input; an input problem keeps its words.
+     */
+    @Test
+    void aProgramFaultIsToldAsOneAndLoggedAnInputProblemAsItself() throws Exception {
+        TaskRunner.Outcome<Object> fault = TaskRunner.outcome(p -> {
+            throw new NullPointerException("boom in a test");
+        }, org.holdpoint.study.Progress.NONE);
+        assertThat(fault.status()).isEqualTo(TaskStatus.FAILED);
+        assertThat(fault.problem().title()).isEqualTo("Internal error");
+        assertThat(fault.problem().what()).contains("NullPointerException: boom in a test")
+                .contains("not the cause");
+        assertThat(java.nio.file.Files.readString(FaultLog.file())).contains("boom in a test")
+                .contains("at org.holdpoint");
+        TaskRunner.Outcome<Object> input = TaskRunner.outcome(p -> {
+            throw new org.holdpoint.workflow.StudyProblem(org.holdpoint.workflow.StudyProblem.Kind.BAD_INPUT, null,
+                    "%s", "data.csv, cell B7: not a number");
+        }, org.holdpoint.study.Progress.NONE);
+        assertThat(input.problem().title()).isEqualTo("The data could not be read");
+        assertThat(input.problem().what()).isEqualTo("data.csv, cell B7: not a number");
+    }
+
     /** The dates of the change are calendar dates written yyyy-mm-dd (ISO 8601), or left empty. */
     @Test
     void datesOfTheChangeAreIsoDatesOrEmpty() {
@@ -168,7 +191,7 @@ class FormsTest {
         TaskRunner.Outcome<Object> odd = TaskRunner.outcome(p -> {
             throw new IllegalStateException("boom");
         }, Progress.NONE);
-        assertThat(odd.problem().what()).isEqualTo("boom").doesNotContain("at org.");
+        assertThat(odd.problem().what()).contains("IllegalStateException: boom").doesNotContain("at org.");
         assertThat(odd.problem().whatToDo()).contains("Save your work");
     }
 }
