@@ -108,57 +108,53 @@ class ArchitectureTest {
     private static ArchRule adapterRule(String adapter) {
         return noClasses().that().resideInAPackage(adapter)
                 .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY, FILES, adapter))
-                .orShould().dependOnClassesThat().resideInAPackage(ROOT)
-                .allowEmptyShould(true);
+                .orShould().dependOnClassesThat().resideInAPackage(ROOT);
     }
 
     @ArchTest
     static final ArchRule reportNeverImportsJFreeChart = noClasses().that().resideInAPackage(REPORT)
             .should().dependOnClassesThat().resideInAPackage("org.jfree..")
-            .because("the report embeds an already rendered PNG received as bytes").allowEmptyShould(true);
+            .because("the report embeds an already rendered PNG received as bytes");
 
     @ArchTest
     static final ArchRule chartNeverImportsPoi = noClasses().that().resideInAPackage(CHART)
-            .should().dependOnClassesThat().resideInAPackage("org.apache.poi..").allowEmptyShould(true);
+            .should().dependOnClassesThat().resideInAPackage("org.apache.poi..");
 
     // ---- workflow: use cases ----
 
     @ArchTest
     static final ArchRule workflowNeverImportsShellsSwingOrJdbc = noClasses().that().resideInAPackage(WORKFLOW)
             .should().dependOnClassesThat().resideInAnyPackage(CLI, UI, ROOT, "javax.swing..", "java.sql..",
-                    "javax.sql..")
-            .allowEmptyShould(true);
+                    "javax.sql..");
 
     @ArchTest
     static final ArchRule workflowReachesTheArchiveOnlyThroughItsPort = noClasses().that().resideInAPackage(WORKFLOW)
-            .should().dependOnClassesThat().resideInAPackage(ARCHIVE).allowEmptyShould(true);
+            .should().dependOnClassesThat().resideInAPackage(ARCHIVE);
 
     // ---- cli and ui: thin shells over workflow ----
 
     @ArchTest
     static final ArchRule cliNeverImportsUi = noClasses().that().resideInAPackage(CLI)
-            .should().dependOnClassesThat().resideInAPackage(UI).allowEmptyShould(true);
+            .should().dependOnClassesThat().resideInAPackage(UI);
 
     @ArchTest
     static final ArchRule uiNeverImportsCli = noClasses().that().resideInAPackage(UI)
-            .should().dependOnClassesThat().resideInAPackage(CLI).allowEmptyShould(true);
+            .should().dependOnClassesThat().resideInAPackage(CLI);
 
     @ArchTest
     static final ArchRule cliGoesThroughWorkflow = noClasses().that().resideInAPackage(CLI)
-            .should().dependOnClassesThat().resideInAnyPackage(IMPORTER, REPORT, ARCHIVE, CHART, ROOT)
-            .allowEmptyShould(true);
+            .should().dependOnClassesThat().resideInAnyPackage(IMPORTER, REPORT, ARCHIVE, CHART, ROOT);
 
     @ArchTest
     static final ArchRule uiGoesThroughWorkflow = noClasses().that().resideInAPackage(UI)
             .should().dependOnClassesThat().resideInAnyPackage(IMPORTER, REPORT, ARCHIVE, ROOT)
-            .because("ui may use chart to show a chart panel, everything else through workflow")
-            .allowEmptyShould(true);
+            .because("ui may use chart to show a chart panel, everything else through workflow");
 
     // ---- the root package is the composition root ----
 
     @ArchTest
     static final ArchRule onlyTheRootPackageUsesArchiveClasses = classes().that().resideInAPackage(ARCHIVE)
-            .should().onlyHaveDependentClassesThat().resideInAnyPackage(ROOT, ARCHIVE).allowEmptyShould(true);
+            .should().onlyHaveDependentClassesThat().resideInAnyPackage(ROOT, ARCHIVE);
 
     // ---- third-party libraries stay in their package ----
 
