@@ -54,6 +54,7 @@ final class Quadrature {
      * @param breaks increasing break points, at least two
      * @param relTol the relative tolerance, e.g. 1e-13
      * @return the integral
+     * @throws StatsException when the tolerance is not reached within the work bound
      */
     static double integrate(DoubleUnaryOperator f, double[] breaks, double relTol) {
         PriorityQueue<Piece> open = new PriorityQueue<>((p, q) -> Double.compare(q.error, p.error));
@@ -86,6 +87,12 @@ final class Quadrature {
                     open.add(p);
                 }
             }
+        }
+        if (!open.isEmpty() && error > Math.max(relTol * Math.abs(value), ABSOLUTE_FLOOR)) {
+            // fail loudly: a result short of its tolerance is never handed on as if it were met
+            throw new StatsException("numerical integration did not reach its tolerance %s after %d bisections "
+                    + "(estimated relative error %s); the integrand is too rough for this method", relTol,
+                    MAX_BISECTIONS, error / Math.max(Math.abs(value), ABSOLUTE_FLOOR));
         }
         // re-add in one pass to avoid the drift of the running update
         double sum = settled;
