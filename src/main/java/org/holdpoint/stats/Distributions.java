@@ -181,8 +181,17 @@ public final class Distributions {
                 break;
             }
         }
+        // fail loudly: a quantile is handed on only when its tail probability is the one asked for
+        double reached = tail.applyAsDouble(x);
+        if (!(reached > 0) || Math.abs(Math.log(reached / p)) > CONVERGED) {
+            throw new StatsException("a quantile solver did not converge: the tail at %s is %s, asked %s", x, reached,
+                    p);
+        }
         return x;
     }
+
+    /** The largest |ln(tail/p)| accepted from {@link #logNewton} (a relative error of 1e-9 in the tail). */
+    private static final double CONVERGED = 1e-9;
 
     /**
      * Upper t quantile t_{1−q,ν} for an upper-tail probability q, without forming 1 − q.
