@@ -1,27 +1,27 @@
 package org.holdpoint.archive;
 
+import com.zaxxer.hikari.HikariConfig;
+import com.zaxxer.hikari.HikariDataSource;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.SQLException;
-import java.util.ArrayDeque;
-import java.util.Deque;
 import java.util.Properties;
-import java.util.concurrent.atomic.AtomicInteger;
 import org.holdpoint.study.ArchiveException;
 
 /**
- * A tiny pool of JDBC connections to one URL: a few idle connections are kept for reuse (which also keeps
- * an embedded database open between calls) and all are closed by {@link #close()}.
+ * The archive's JDBC connections to one URL, pooled by HikariCP: a connection is checked before it is lent
+ * (so a connection that died with a database restart or an idle timeout is replaced, not handed out), the
+ * pool is bounded, and a lease returns its connection once however often it is closed. Idle connections
+ * also keep an embedded database open between calls; all are closed by {@link #close()}.
  */
 final class ConnectionPool implements AutoCloseable {
-
-    private static final int MAX_IDLE = 4;
+    /** At most this many connections to one archive (a desktop program or one command needs two or three). */
+    static final int MAX_CONNECTIONS = 4;
+    /** How long a lease waits for a connection before it is refused. */
+    static final long CONNECT_TIMEOUT_MS = 10_000;
 
     private final String url;
-    private final Properties properties;
-    private final Deque<Connection> idle = new ArrayDeque<>();
-    private final AtomicInteger open = new AtomicInteger();
-    private boolean closed;
+    private final HikariDataSource pool;
+    private volatile boolean closed;
 
     /**
      * @param url        the JDBC URL
@@ -29,14 +29,35 @@ final class ConnectionPool implements AutoCloseable {
      */
     ConnectionPool(String url, Properties properties) {
         this.url = url;
-        this.properties = new Properties();
-        this.properties.putAll(properties);
+        HikariConfig c = new HikariConfig();
+        c.setJdbcUrl(url);
+        Properties p = new Properties();
+        p.putAll(properties);
+        if (p.getProperty("user") != null) {
+            c.setUsername(p.getProperty("user"));
+            p.remove("user");
+        }
+        if (p.getProperty("password") != null) {
+            c.setPassword(p.getProperty("password"));
+            p.remove("password");
+        }
+        c.setDataSourceProperties(p);
+        c.setMaximumPoolSize(MAX_CONNECTIONS);
+        c.setMinimumIdle(0);
+        c.setConnectionTimeout(CONNECT_TIMEOUT_MS);
+        // no connection at construction: the first lease says what is wrong, in the archive's words
+        c.setInitializationFailTimeout(-1);
+        c.setPoolName("holdpoint-archive");
+        // every connection is lent in auto-commit mode; a transaction sets it off and back itself
+        c.setAutoCommit(true);
+        this.pool = new HikariDataSource(c);
     }
 
-    /** A borrowed connection, returned to the pool on close. */
+    /** A borrowed connection, returned to the pool on close (once, however often close is called). */
     final class Lease implements AutoCloseable {
         private final Connection connection;
         private boolean broken;
+        private boolean returned;
 
         private Lease(Connection connection) {
             this.connection = connection;
@@ -54,7 +75,20 @@ final class ConnectionPool implements AutoCloseable {
 
         @Override
         public void close() {
-            release(connection, broken);
+            if (returned) {
+                return;
+            }
+            returned = true;
+            if (broken) {
+                pool.evictConnection(connection);
+                return;
+            }
+            try {
+                connection.close();
+            } catch (SQLException e) {
+                // the pool's proxy reports a connection that broke while lent; the pool drops it itself
+                pool.evictConnection(connection);
+            }
         }
     }
 
@@ -62,79 +96,44 @@ final class ConnectionPool implements AutoCloseable {
     private static final int H2_ALREADY_OPEN = 90020;
 
     /**
-     * Borrows a connection.
+     * Borrows a connection, checked alive by the pool.
      *
      * @return the lease
      * @throws ArchiveException when the pool is closed or the database cannot be reached
      */
     Lease lease() throws ArchiveException {
-        synchronized (this) {
-            if (closed) {
-                throw new ArchiveException(ArchiveException.Reason.DATABASE, "the archive is closed");
-            }
-            Connection c = idle.pollFirst();
-            if (c != null) {
-                return new Lease(c);
-            }
+        if (closed) {
+            throw new ArchiveException(ArchiveException.Reason.DATABASE, "the archive is closed");
         }
         try {
-            Connection c = DriverManager.getConnection(url, properties);
-            open.incrementAndGet();
-            return new Lease(c);
+            return new Lease(pool.getConnection());
         } catch (SQLException e) {
-            if (e.getErrorCode() == H2_ALREADY_OPEN || "90020".equals(e.getSQLState())) {
+            SQLException cause = e.getCause() instanceof SQLException s ? s : e;
+            if (cause.getErrorCode() == H2_ALREADY_OPEN || "90020".equals(cause.getSQLState())) {
                 // H2's own text advises its server mode: speak of the archive instead
                 throw new ArchiveException(ArchiveException.Reason.DATABASE, "the archive at " + redact(url)
                         + " is open in another Holdpoint program or window; the embedded archive serves one "
                         + "program at a time. Close the other one and try again, or keep a shared archive on "
-                        + "PostgreSQL (docs/archive.md)", e);
+                        + "PostgreSQL (docs/archive.md)", cause);
             }
             throw new ArchiveException(ArchiveException.Reason.DATABASE, "cannot open the archive at "
-                    + redact(url) + ": " + e.getMessage() + " (SQLSTATE " + e.getSQLState() + ")", e);
+                    + redact(url) + ": " + cause.getMessage() + " (SQLSTATE " + cause.getSQLState() + ")", cause);
         }
     }
 
-    private void release(Connection c, boolean broken) {
-        boolean keep;
-        try {
-            keep = !broken && !c.isClosed() && c.getAutoCommit();
-        } catch (SQLException e) {
-            keep = false;
-        }
-        synchronized (this) {
-            if (keep && !closed && idle.size() < MAX_IDLE) {
-                idle.addFirst(c);
-                return;
-            }
-        }
-        closeQuietly(c);
-    }
-
-    /** @return the number of connections this pool has open (idle and leased) */
+    /** @return the number of connections this pool has open (idle and leased); 0 once closed */
     int openConnections() {
-        return open.get();
+        if (closed || pool.getHikariPoolMXBean() == null) {
+            return 0;
+        }
+        return pool.getHikariPoolMXBean().getTotalConnections();
     }
 
-    /** Closes every idle connection; leased ones are closed when they come back. */
+    /** Closes every connection (leased ones are closed when they come back). */
     @Override
     public void close() {
-        Deque<Connection> toClose;
-        synchronized (this) {
-            closed = true;
-            toClose = new ArrayDeque<>(idle);
-            idle.clear();
-        }
-        toClose.forEach(this::closeQuietly);
-    }
-
-    private void closeQuietly(Connection c) {
-        try {
-            c.close();
-        } catch (SQLException e) {
-            // closing a broken connection cannot be helped; the driver has already released it
-        } finally {
-            open.decrementAndGet();
-        }
+        closed = true;
+        pool.close();
     }
 
     /**

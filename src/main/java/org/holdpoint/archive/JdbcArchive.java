@@ -408,6 +408,12 @@ public final class JdbcArchive implements ChangeRecordArchive {
                 try {
                     return inTransaction(work);
                 } catch (ArchiveException e) {
+                    if (connectionLost(e) && attempt < MAX_ATTEMPTS) {
+                        // the database went away (a restart, an idle timeout): nothing was committed, the dead
+                        // connection was dropped, and the transaction runs again on a fresh one
+                        pause(attempt);
+                        continue;
+                    }
                     if (!e.isRetryable()) {
                         throw e;
                     }
@@ -437,15 +443,37 @@ public final class JdbcArchive implements ChangeRecordArchive {
                 commit(c);
                 return result;
             } catch (ArchiveException | RuntimeException e) {
+                if (connectionLost(e)) {
+                    lease.discard();
+                }
                 rollback(c, lease);
                 throw e;
             } catch (SQLException e) {
                 lease.discard();
-                throw new ArchiveException(Reason.DATABASE, "cannot start a write transaction: " + e.getMessage(), e);
+                throw new ArchiveException(Reason.DATABASE, "cannot start a write transaction: " + e.getMessage()
+                        + " (SQLSTATE " + e.getSQLState() + ")", e);
             } finally {
                 restore(c, lease);
             }
         }
+    }
+
+    /**
+     * Whether a failure means the connection itself was lost (SQLSTATE class 08, connection exception, or
+     * 57P01–57P03, the server shutting down or not yet accepting connections): then nothing was committed and
+     * the work may run again on a new connection.
+     *
+     * @param e a failure
+     * @return true when a cause says the connection was lost
+     */
+    static boolean connectionLost(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof SQLException q && q.getSQLState() != null
+                    && (q.getSQLState().startsWith("08") || q.getSQLState().startsWith("57P0"))) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static void commit(Connection c) throws ArchiveException {

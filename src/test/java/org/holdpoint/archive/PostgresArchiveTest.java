@@ -239,7 +239,7 @@ class PostgresArchiveTest {
         }
     }
 
-    private static void exec(String jdbcUrl, String sql) throws SQLException {
+    static void exec(String jdbcUrl, String sql) throws SQLException {
         try (Connection c = DriverManager.getConnection(jdbcUrl); Statement s = c.createStatement()) {
             for (String statement : SqlScript.split(sql)) {
                 s.execute(statement);
@@ -247,7 +247,7 @@ class PostgresArchiveTest {
         }
     }
 
-    private static String resource(String name) throws IOException {
+    static String resource(String name) throws IOException {
         try (InputStream in = JdbcArchive.class.getResourceAsStream(name)) {
             assertThat(in).as(name.toLowerCase(Locale.ROOT)).isNotNull();
             return new String(in.readAllBytes(), StandardCharsets.UTF_8);
