@@ -63,7 +63,6 @@ class StrdUnivariateTest {
         Descriptives d = Descriptives.of(Sample.ofDecimals(s.data().toArray(String[]::new)));
         double lreMean = Accuracy.lre(d.mean(), s.mean(), 15);
         double lreSd = Accuracy.lre(d.sd(), s.sd(), 15);
-        System.out.printf(Locale.ROOT, "StRD %-8s decimal LRE mean %.1f sd %.1f%n", name, lreMean, lreSd);
         assertThat(d.n()).isEqualTo(s.n());
         assertThat(lreMean).as("%s mean %s vs certified %s, LRE %.1f", name, d.mean(), s.mean(), lreMean)
                 .isGreaterThanOrEqualTo(13);
@@ -90,7 +89,6 @@ class StrdUnivariateTest {
         Descriptives d = Descriptives.of(Sample.of(x));
         double lreMean = Accuracy.lre(d.mean(), s.mean(), 15);
         double lreSd = Accuracy.lre(d.sd(), s.sd(), 15);
-        System.out.printf(Locale.ROOT, "StRD %-8s doubles-only LRE mean %.1f sd %.1f%n", name, lreMean, lreSd);
         assertThat(lreMean).as("%s mean LRE", name).isGreaterThanOrEqualTo(meanFloor);
         assertThat(lreSd).as("%s sd LRE", name).isGreaterThanOrEqualTo(sdFloor);
     }
