@@ -134,13 +134,13 @@ public final class SignoffWorkbookReader {
         return names;
     }
 
-    private static boolean readSheet(XSSFReader reader, String sheet, SheetCells.Sink sink) throws Exception {
+    private static boolean readSheet(XSSFReader reader, String sheet, WrittenCellStream.Sink sink) throws Exception {
         SharedStrings strings = reader.getSharedStringsTable();
         XSSFReader.SheetIterator it = (XSSFReader.SheetIterator) reader.getSheetsData();
         while (it.hasNext()) {
             try (InputStream in = it.next()) {
                 if (it.getSheetName().equals(sheet)) {
-                    SheetCells.read(in, strings, sink);
+                    WrittenCellStream.read(in, strings, sink);
                     return true;
                 }
             }
@@ -438,7 +438,7 @@ public final class SignoffWorkbookReader {
      * compared with its expected value and style; every other non-empty cell must be the template's own
      * text at that place.
      */
-    private static final class Merge implements SheetCells.Sink {
+    private static final class Merge implements WrittenCellStream.Sink {
         private final String sheet;
         private final Iterator<ShownCell> expected;
         private final List<WorkbookDifference> diffs;
@@ -489,7 +489,7 @@ public final class SignoffWorkbookReader {
         }
 
         @Override
-        public void cell(int row, int col, SheetCells.Kind kind, String text, String formula) {
+        public void cell(int row, int col, WrittenCellStream.Kind kind, String text, String formula) {
             if (row < lastRow || row == lastRow && col <= lastCol) {
                 diffs.add(new WorkbookDifference(sheet, ref(row, col), "a repeated or out-of-order cell element",
                         shown(kind, text, formula), "(each cell once, in order, as the writer writes them)"));
@@ -513,7 +513,7 @@ public final class SignoffWorkbookReader {
         }
 
         /** A non-empty cell the writer did not write: the template's own text, or an edit. */
-        private void unwritten(int row, int col, SheetCells.Kind kind, String text) {
+        private void unwritten(int row, int col, WrittenCellStream.Kind kind, String text) {
             if (templateTexts == null) {
                 return;
             }
@@ -524,7 +524,7 @@ public final class SignoffWorkbookReader {
                         shown(kind, text, null), "(empty)"));
             } else {
                 templateSeen.add(k);
-                boolean same = kind == SheetCells.Kind.TEXT ? own.equals(text) : sameNumber(own, text);
+                boolean same = kind == WrittenCellStream.Kind.TEXT ? own.equals(text) : sameNumber(own, text);
                 if (!same) {
                     diffs.add(new WorkbookDifference(sheet, ref(row, col), "the template's text",
                             shown(kind, text, null), "\"" + own + "\""));
@@ -574,18 +574,18 @@ public final class SignoffWorkbookReader {
             return c.row() < row || (c.row() == row && c.column() < col);
         }
 
-        private void check(ShownCell e, SheetCells.Kind kind, String text, String formula, int styleIndex) {
+        private void check(ShownCell e, WrittenCellStream.Kind kind, String text, String formula, int styleIndex) {
             written.add(key(e.row(), e.column()));
             String shown = shown(kind, text, formula);
             Object v = e.value();
-            boolean empty = kind == null || (kind == SheetCells.Kind.TEXT && text.isEmpty());
+            boolean empty = kind == null || (kind == WrittenCellStream.Kind.TEXT && text.isEmpty());
             boolean ok;
             boolean caption = e.label() != null && e.label().endsWith(DetailPlan.CAPTION);
             if (formula != null) {
                 ok = false;
             } else if (caption) {
                 // the name of the chart beside it: charts are renderings, not part of the record
-                ok = empty || kind == SheetCells.Kind.TEXT;
+                ok = empty || kind == WrittenCellStream.Kind.TEXT;
             } else if (v == null || (v instanceof String s && s.isEmpty())) {
                 ok = empty;
                 if (!ok && e.style() == Style.FILLABLE) {
@@ -593,9 +593,9 @@ public final class SignoffWorkbookReader {
                     return;
                 }
             } else if (v instanceof String s) {
-                ok = kind == SheetCells.Kind.TEXT && s.equals(text);
+                ok = kind == WrittenCellStream.Kind.TEXT && s.equals(text);
             } else {
-                ok = kind == SheetCells.Kind.NUMBER && close((Double) v, text);
+                ok = kind == WrittenCellStream.Kind.NUMBER && close((Double) v, text);
             }
             String what = e.label() != null ? e.label() : labeller != null ? labeller.label(e.row(), e.column())
                     : "value";
@@ -687,14 +687,14 @@ public final class SignoffWorkbookReader {
             }
         }
 
-        private static String shown(SheetCells.Kind kind, String text, String formula) {
+        private static String shown(WrittenCellStream.Kind kind, String text, String formula) {
             if (formula != null) {
                 return "formula =" + formula;
             }
             if (kind == null || text == null || text.isEmpty()) {
                 return "(empty)";
             }
-            return kind == SheetCells.Kind.TEXT ? "\"" + text + "\"" : text;
+            return kind == WrittenCellStream.Kind.TEXT ? "\"" + text + "\"" : text;
         }
 
         private static String expectedText(Object v) {

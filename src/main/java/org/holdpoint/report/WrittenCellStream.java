@@ -12,10 +12,11 @@ import org.xml.sax.SAXException;
 import org.xml.sax.helpers.DefaultHandler;
 
 /**
- * Streams the cells of one worksheet part in file order (row-major, as the file format requires),
+ * Streams the cells of one written worksheet part back in file order (for verify; the importer has its own
+ * reader of the sheets it imports) (row-major, as the file format requires),
  * giving each cell's raw value and type, so that a sheet of a million values is read in constant memory.
  */
-final class SheetCells extends DefaultHandler {
+final class WrittenCellStream extends DefaultHandler {
     /** What a cell holds. */
     enum Kind {
         /** A number. */
@@ -78,7 +79,7 @@ final class SheetCells extends DefaultHandler {
     private int lastRow = -1;
     private int nextCol;
 
-    private SheetCells(SharedStrings strings, Sink sink) {
+    private WrittenCellStream(SharedStrings strings, Sink sink) {
         this.strings = strings;
         this.sink = sink;
     }
@@ -94,7 +95,7 @@ final class SheetCells extends DefaultHandler {
     static void read(InputStream in, SharedStrings strings, Sink sink) throws IOException {
         try {
             SAXParser parser = XMLHelper.getSaxParserFactory().newSAXParser();
-            parser.parse(in, new SheetCells(strings, sink));
+            parser.parse(in, new WrittenCellStream(strings, sink));
         } catch (SAXException | ParserConfigurationException e) {
             throw new IOException("the sheet XML cannot be parsed: " + e.getMessage(), e);
         }
