@@ -19,7 +19,7 @@ import org.holdpoint.study.SpecLimits;
 import org.holdpoint.workflow.AnalysisOutcome;
 import org.holdpoint.workflow.AnalyzeUseCase;
 import org.holdpoint.workflow.ChartsUseCase;
-import org.holdpoint.workflow.ConsoleProgress;
+
 import org.holdpoint.workflow.ImportOptions;
 import org.holdpoint.workflow.ReportOptions;
 import org.holdpoint.workflow.ReportUseCase;

@@ -13,7 +13,7 @@ import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.workflow.AnalysisOutcome;
 import org.holdpoint.workflow.AnalyzeUseCase;
-import org.holdpoint.workflow.ConsoleProgress;
+
 import org.holdpoint.workflow.ImportOptions;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;

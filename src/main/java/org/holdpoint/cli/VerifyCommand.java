@@ -4,7 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.holdpoint.workflow.ConsoleProgress;
+
 import org.holdpoint.workflow.VerifyResult;
 import org.holdpoint.workflow.VerifyUseCase;
 import picocli.CommandLine;

@@ -1,10 +1,10 @@
-package org.holdpoint.workflow;
+package org.holdpoint.cli;
 
 import java.io.PrintWriter;
 import org.holdpoint.study.Progress;
 
 /** Progress on the console (stderr): one line per step when verbose, nothing otherwise; never cancelled. */
-public final class ConsoleProgress implements Progress {
+final class ConsoleProgress implements Progress {
     private final PrintWriter err;
     private final boolean verbose;
 
@@ -12,7 +12,7 @@ public final class ConsoleProgress implements Progress {
      * @param err     where to write
      * @param verbose whether to print the steps
      */
-    public ConsoleProgress(PrintWriter err, boolean verbose) {
+    ConsoleProgress(PrintWriter err, boolean verbose) {
         this.err = err;
         this.verbose = verbose;
     }
