@@ -55,7 +55,7 @@ public final class StudyAnalyzer {
             CharacteristicResult r;
             try {
                 r = analyzeOne(c, settings);
-            } catch (StatsException e) {
+            } catch (StatsException | CharacteristicProblem e) {
                 // reported on this characteristic only; the rest of the study goes on
                 r = notAssessable(c, settings, e.getMessage());
             }
@@ -112,7 +112,7 @@ public final class StudyAnalyzer {
         notes.addAll(applied.notes());
         boolean paired = s.paired() != null ? s.paired() : c.paired();
         if (paired && !c.paired()) {
-            throw new StatsException("a paired analysis was requested but the data are not matched by unit; "
+            throw new CharacteristicProblem("a paired analysis was requested but the data are not matched by unit; "
                     + "give a unit id column and read the file with --paired");
         }
         if (!c.unmatchedUnits().isEmpty()) {
@@ -170,7 +170,7 @@ public final class StudyAnalyzer {
             notes.add("the " + which + " group has zero spread (all values equal), so the variance ratio and the "
                     + "sd-growth check are undefined; check the measurement resolution");
             if (s.sdGrowthLimit() != null) {
-                throw new StatsException("the %s group has zero spread, so the sd-growth limit cannot be checked; "
+                throw new CharacteristicProblem("the %s group has zero spread, so the sd-growth limit cannot be checked; "
                         + "check the measurement resolution", which);
             }
         }
@@ -278,10 +278,10 @@ public final class StudyAnalyzer {
 
     private static void checkSizes(Sample before, Sample after) {
         if (before.size() < 2) {
-            throw new StatsException("the before group has %d value(s); at least 2 are needed", before.size());
+            throw new CharacteristicProblem("the before group has %d value(s); at least 2 are needed", before.size());
         }
         if (after.size() < 2) {
-            throw new StatsException("the after group has %d value(s); at least 2 are needed", after.size());
+            throw new CharacteristicProblem("the after group has %d value(s); at least 2 are needed", after.size());
         }
     }
 
