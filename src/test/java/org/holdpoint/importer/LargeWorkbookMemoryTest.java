@@ -18,6 +18,7 @@ import org.junit.jupiter.api.io.TempDir;
  * The streaming import of a million-value workbook fits a 256 MB heap: a child JVM started with
  * -Xmx256m on the test class path imports a generated stacked .xlsx of 500,000 values per group.
  */
+@org.junit.jupiter.api.Tag("slow")
 class LargeWorkbookMemoryTest {
     @TempDir
     Path dir;

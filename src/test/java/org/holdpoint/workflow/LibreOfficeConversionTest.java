@@ -23,6 +23,7 @@ import org.junit.jupiter.api.io.TempDir;
  * A real spreadsheet application opens the workbook: LibreOffice headless converts it to PDF (and CSV)
  * without errors. Skipped when soffice is not installed (CI installs libreoffice-calc).
  */
+@org.junit.jupiter.api.Tag("libreoffice")
 class LibreOfficeConversionTest {
     @TempDir
     Path dir;
