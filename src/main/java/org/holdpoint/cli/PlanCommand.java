@@ -43,10 +43,12 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--margin", paramLabel = "D", description = "Symmetric margin: equivalent within -D..D.")
     Double margin;
 
-    @Option(names = "--margin-lower", paramLabel = "L", description = "Lower margin L < 0 (with --margin-upper).")
+    @Option(names = "--margin-lower", paramLabel = "L", description = "Lower margin L < 0; alone, a one-sided "
+            + "(non-inferiority) plan.")
     Double marginLower;
 
-    @Option(names = "--margin-upper", paramLabel = "U", description = "Upper margin U > 0 (with --margin-lower).")
+    @Option(names = "--margin-upper", paramLabel = "U", description = "Upper margin U > 0; alone, a one-sided "
+            + "(non-superiority) plan.")
     Double marginUpper;
 
     @Option(names = "--difference", paramLabel = "T",
@@ -206,8 +208,8 @@ public final class PlanCommand implements Callable<Integer> {
         } catch (org.holdpoint.workflow.AnalysisException e) {
             throw bad(String.join("; ", e.problems()));
         }
-        out.printf(java.util.Locale.ROOT, "Equivalence trial plan from %s (two one-sided tests, exact power; sd from "
-                + "the before sample, so the power is conditional on sigma = s)%n", from);
+        out.printf(java.util.Locale.ROOT, "Equivalence trial plan from %s (two one-sided tests, or one for a one-sided "
+                + "margin; exact power; sd from the before sample, so the power is conditional on sigma = s)%n", from);
         out.printf(java.util.Locale.ROOT, "  alpha %s per one-sided test, target power %s, expected difference %s%s%n",
                 alpha, target, t, ratio == 1 ? "" : ", ratio " + ratio);
         out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s  %s%n", "characteristic", "baseline sd", "margin",
@@ -225,8 +227,10 @@ public final class PlanCommand implements Callable<Integer> {
             rows.add(row);
             out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s  %s%n", p.name(),
                     org.holdpoint.workflow.Format.num(p.sd(), 4), p.margin() == null ? "-" : "("
-                            + org.holdpoint.workflow.Format.num(p.margin().lower(), 4) + ", "
-                            + org.holdpoint.workflow.Format.num(p.margin().upper(), 4) + ")",
+                            + (p.margin().lower() == null ? "none" : org.holdpoint.workflow.Format.num(
+                                    p.margin().lower(), 4)) + ", "
+                            + (p.margin().upper() == null ? "none" : org.holdpoint.workflow.Format.num(
+                                    p.margin().upper(), 4)) + ")",
                     p.plan() == null ? "-" : Integer.toString(p.plan().n()),
                     p.plan() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f", p.plan().achievedPower()),
                     p.note() == null ? "" : p.note());
@@ -259,10 +263,11 @@ public final class PlanCommand implements Callable<Integer> {
         if (margin != null) {
             return Margin.symmetric(margin);
         }
-        if (marginLower == null || marginUpper == null) {
-            throw bad("give --margin D, or both --margin-lower L and --margin-upper U");
+        if (marginLower == null && marginUpper == null) {
+            throw bad("give --margin D, or --margin-lower L and/or --margin-upper U (one of them alone plans a "
+                    + "one-sided, non-inferiority or non-superiority, test)");
         }
-        return Margin.of(marginLower, marginUpper);
+        return new Margin(marginLower, marginUpper);
     }
 
     private SuccessRunPlan successRunPlan() {

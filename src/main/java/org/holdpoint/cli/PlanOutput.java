@@ -22,7 +22,10 @@ final class PlanOutput {
         b.append("Equivalence trial plan (two one-sided tests, exact power)\n");
         line(b, "design", pairs ? "paired (sd of the differences)" : "two groups, pooled sd");
         line(b, "alpha", r.alpha() + " per one-sided test");
-        line(b, "margin", r.marginLower() + " to " + r.marginUpper());
+        line(b, "margin", Double.isInfinite(r.marginLower()) ? "upper bound only: " + r.marginUpper()
+                + " (non-superiority, one one-sided test)" : Double.isInfinite(r.marginUpper())
+                ? "lower bound only: " + r.marginLower() + " (non-inferiority, one one-sided test)"
+                : r.marginLower() + " to " + r.marginUpper());
         line(b, "expected difference", Double.toString(r.difference()));
         line(b, "sd", Double.toString(r.sd()));
         if (r.targetPower() != null) {
@@ -64,8 +67,9 @@ final class PlanOutput {
         boolean pairs = r.design() == Design.PAIRED;
         m.put("design", pairs ? "paired" : "parallel");
         m.put("alpha", r.alpha());
-        m.put("marginLower", r.marginLower());
-        m.put("marginUpper", r.marginUpper());
+        // an absent bound of a one-sided margin is null, never an infinity (not valid JSON)
+        m.put("marginLower", Double.isInfinite(r.marginLower()) ? null : r.marginLower());
+        m.put("marginUpper", Double.isInfinite(r.marginUpper()) ? null : r.marginUpper());
         m.put("difference", r.difference());
         m.put("sd", r.sd());
         if (!pairs) {

@@ -61,8 +61,8 @@ public final class EquivalencePlan {
      * @throws StatsException if the margin is null or one-sided
      */
     public EquivalencePlan withMargin(Margin newMargin) {
-        if (newMargin == null || newMargin.claim() != Margin.Claim.EQUIVALENCE) {
-            throw new StatsException("planning needs a two-sided margin (L, U), got %s", newMargin);
+        if (newMargin == null) {
+            throw new StatsException("planning needs a margin: (L, U), or one bound for a one-sided claim");
         }
         return new EquivalencePlan(newMargin, alpha, design, ratio, targetPower, cap, tablePoints);
     }
@@ -166,7 +166,31 @@ public final class EquivalencePlan {
     public double tostPower(double difference, double sd, int n) {
         Margin m = requireMargin();
         Sizes s = sizes(n, Checks.positive(sd, "the sd"));
-        return clamp(ExactPower.tost(alpha, m.lower(), m.upper(), finite(difference), s.se, s.df));
+        return power(m, finite(difference), s);
+    }
+
+    /**
+     * Two one-sided tests for a margin with both bounds; one one-sided test (non-inferiority or
+     * non-superiority) for a margin with one bound.
+     */
+    private double power(Margin m, double difference, Sizes s) {
+        if (m.lower() != null && m.upper() != null) {
+            return clamp(ExactPower.tost(alpha, m.lower(), m.upper(), difference, s.se, s.df));
+        }
+        double delta = m.lower() != null ? (difference - m.lower()) / s.se : (m.upper() - difference) / s.se;
+        return clamp(ExactPower.oneSided(alpha, delta, s.df));
+    }
+
+    /** The distance of the true difference from the nearer bound, on the claim's side (negative outside). */
+    private static double distanceInside(Margin m, double difference) {
+        double d = Double.POSITIVE_INFINITY;
+        if (m.lower() != null) {
+            d = Math.min(d, difference - m.lower());
+        }
+        if (m.upper() != null) {
+            d = Math.min(d, m.upper() - difference);
+        }
+        return d;
     }
 
     /**
@@ -193,9 +217,21 @@ public final class EquivalencePlan {
     public List<PowerPoint> powerTable(double sd, int n) {
         Margin m = requireMargin();
         List<PowerPoint> table = new ArrayList<>(tablePoints);
-        double step = (m.upper() - m.lower()) / (tablePoints - 1);
+        // one-sided: from the bound over as far again on the claim's side (at least 4 sd of the difference)
+        double lo;
+        double hi;
+        if (m.lower() != null && m.upper() != null) {
+            lo = m.lower();
+            hi = m.upper();
+        } else {
+            double reach = Math.max(Math.abs(m.lower() != null ? m.lower() : m.upper()),
+                    4 * sizes(n, Checks.positive(sd, "the sd")).se);
+            lo = m.lower() != null ? m.lower() : m.upper() - 2 * reach;
+            hi = m.lower() != null ? m.lower() + 2 * reach : m.upper();
+        }
+        double step = (hi - lo) / (tablePoints - 1);
         for (int i = 0; i < tablePoints; i++) {
-            double t = i == tablePoints - 1 ? m.upper() : m.lower() + i * step;
+            double t = i == tablePoints - 1 ? hi : lo + i * step;
             table.add(new PowerPoint(t, tostPower(t, sd, n)));
         }
         return table;
@@ -210,8 +246,9 @@ public final class EquivalencePlan {
      * @return the plan (targetPower null)
      */
     public PlanResult powerAt(double difference, double sd, int n) {
-        checkInside(difference);
-        return result(difference, sd, n, null, tostPower(difference, sd, n));
+        // defined wherever the difference lies: on a bound it is at most α, outside it is smaller still
+        requireMargin();
+        return result(finite(difference), sd, n, null, tostPower(difference, sd, n));
     }
 
     /**
@@ -229,14 +266,14 @@ public final class EquivalencePlan {
         Checks.positive(sd, "the sd");
         double zAlpha = Normal.upperQuantile(alpha);
         double needed = Normal.quantile(targetPower - BOUND_SLACK) + zAlpha;
-        double near = Math.min(difference - m.lower(), m.upper() - difference);
+        double near = distanceInside(m, difference);
         for (int n = smallestN(); n <= cap; n++) {
             Sizes s = sizes(n, sd);
             // UB(n) < target − 1e-12 ⇔ min(dL, −dU) − z_{1−α} < Φ⁻¹(target − 1e-12), Φ being increasing
             if (near / s.se < needed) {
                 continue;
             }
-            double p = clamp(ExactPower.tost(alpha, m.lower(), m.upper(), difference, s.se, s.df));
+            double p = power(m, difference, s);
             if (p >= targetPower) {
                 return result(difference, sd, n, targetPower, p);
             }
@@ -283,8 +320,9 @@ public final class EquivalencePlan {
     private PlanResult result(double difference, double sd, int n, Double target, double power) {
         Margin m = margin;
         Double previous = n > smallestN() ? tostPower(difference, sd, n - 1) : null;
-        return new PlanResult(design, alpha, m.lower(), m.upper(), difference, sd, ratioUsed(), target, n, nAfter(n),
-                power, previous, tTestPower(difference, sd, n), powerTable(sd, n));
+        return new PlanResult(design, alpha, m.lower() == null ? Double.NEGATIVE_INFINITY : m.lower(),
+                m.upper() == null ? Double.POSITIVE_INFINITY : m.upper(), difference, sd, ratioUsed(), target, n,
+                nAfter(n), power, previous, tTestPower(difference, sd, n), powerTable(sd, n));
     }
 
     /** The smallest before-group size (or pairs) with at least one degree of freedom. */
@@ -327,9 +365,12 @@ public final class EquivalencePlan {
 
     private void checkInside(double difference) {
         Margin m = requireMargin();
-        if (!(m.lower() < difference && difference < m.upper())) {
-            throw new StatsException("the margin (%s, %s) must contain the expected difference %s strictly inside",
-                    m.lower(), m.upper(), difference);
+        if (!(distanceInside(m, difference) > 0)) {
+            throw new StatsException("no number of parts reaches a target power when the expected difference %s lies "
+                    + "on or outside the margin %s: there the power is at most alpha = %s. Plan for an expected "
+                    + "difference inside the margin, or widen the margin if the drawing or the customer allows it",
+                    difference, "(" + (m.lower() == null ? "none" : m.lower()) + ", " + (m.upper() == null ? "none"
+                            : m.upper()) + ")", alpha);
         }
     }
 

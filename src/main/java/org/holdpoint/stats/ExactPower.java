@@ -57,6 +57,29 @@ final class ExactPower {
     }
 
     /**
+     * Exact power of one one-sided t-test at level α (non-inferiority against a lower margin L, or
+     * non-superiority against an upper margin U): with δ = (T − L)/se, or (U − T)/se, and tc = t_{1−α,ν},
+     * power = ∫_0^∞ Φ(δ − tc·x/√ν)·f_χν(x) dx = 1 − F(tc; ν, δ), F the noncentral t distribution.
+     *
+     * @param alpha the level of the one-sided test, in (0, 0.5)
+     * @param delta the standardised distance of the true difference from the bound, on the claim's side
+     *              positive (any real value)
+     * @param df    ν ≥ 1
+     * @return P(the one-sided test rejects)
+     */
+    static double oneSided(double alpha, double delta, double df) {
+        double tc = Distributions.tUpperQuantile(alpha, df);
+        double k = tc / Math.sqrt(df);
+        double logConst = logChiConstant(df);
+        double mode = df > 1 ? Math.sqrt(df - 1) : 0;
+        double lo = Math.max(0, mode - HALF_WIDTH);
+        double hi = mode + HALF_WIDTH;
+        double p = Quadrature.integrate(x -> Normal.cdf(delta - k * x) * chiDensity(x, df, logConst),
+                breaks(lo, hi, mode), REL_TOL);
+        return Math.min(1, p);
+    }
+
+    /**
      * Exact power of the two-sided t-test at level α for a true shift with standard error se.
      *
      * @param alpha the two-sided level, in (0, 1)

@@ -38,9 +38,10 @@ public record PlanResult(Design design, double alpha, double marginLower, double
             Checks.probability(powerAtPrevious, "power at n - 1");
         }
         Checks.probability(tTestPower, "t-test power");
-        if (!(marginLower < difference && difference < marginUpper)) {
-            throw new StatsException("the margin (%s, %s) must contain the expected difference %s", marginLower,
-                    marginUpper, difference);
+        // a one-sided margin has an infinite other bound; the difference may lie anywhere when the size was given
+        if (!(marginLower < marginUpper) || Double.isNaN(difference) || Double.isInfinite(difference)) {
+            throw new StatsException("a plan needs a margin with L < U and a finite difference, got (%s, %s) and %s",
+                    marginLower, marginUpper, difference);
         }
         powerTable = List.copyOf(powerTable);
     }

@@ -95,9 +95,9 @@ public final class PlanFromDataUseCase {
                 plans.add(new CharacteristicPlan(c.name(), unit, sd, null, null, e.getMessage()));
                 continue;
             }
-            if (m == null || m.lower() == null || m.upper() == null) {
+            if (m == null || (m.lower() == null && m.upper() == null)) {
                 plans.add(new CharacteristicPlan(c.name(), unit, sd, m, null,
-                        "no two-sided margin set for this characteristic"));
+                        "no margin set for this characteristic"));
                 continue;
             }
             if (!(sd > 0)) {

@@ -121,12 +121,54 @@ class PlanCommandTest {
         assertThat(out.toString()).contains("parts to test        93");
     }
 
+    /**
+     * A margin with one bound plans one one-sided test (its exact power: OneSidedPlanTest against R); the
+     * power at a size where the expected difference sits on the bound is given (alpha), not refused.
+     */
+    @Test
+    void aOneSidedMarginPlansANonInferiorityTest() throws IOException {
+        assertThat(run("--margin-lower", "-0.02", "--difference", "0", "--sd", "0.03", "--power", "0.8")).as(err.toString())
+                .isZero();
+        assertThat(out.toString()).contains("lower bound only: -0.02", "non-inferiority");
+        assertThat(out.toString()).containsPattern("\\b29\\b");
+        Path json = dir.resolve("upper.json");
+        assertThat(run("--margin-upper", "0.02", "--difference", "0.02", "--sd", "0.03", "--n", "30", "--json",
+                json.toString())).as(err.toString()).isZero();
+        JsonNode j = json(json);
+        assertThat(j.path("marginLower").isNull()).isTrue();
+        assertThat(j.path("achievedPower").asDouble()).isCloseTo(0.05, org.assertj.core.api.Assertions.within(1e-9));
+    }
+
+    /**
+     * The failing case of the planning issue: a settings file whose flatness may only grow (an upper margin
+     * alone) made `plan --from` stop with an internal error (exit 3); it now plans that characteristic with one
+     * one-sided test. Invented data: a housing's flatness and bore, 25 parts before and after.
+     */
+    @Test
+    void planFromAStudyWithAnUpperOnlyMarginPlansEveryCharacteristic() throws IOException {
+        StringBuilder csv = new StringBuilder("phase,flatness,bore\n");
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(17);
+        for (String phase : new String[] {"before", "after"}) {
+            for (int i = 0; i < 25; i++) {
+                csv.append(phase).append(String.format(java.util.Locale.ROOT, ",%.4f,%.4f%n",
+                        Math.abs(0.012 + 0.004 * rnd.nextGaussian()), 25 + 0.003 * rnd.nextGaussian()));
+            }
+        }
+        Path data = Files.writeString(dir.resolve("housing.csv"), csv.toString());
+        Files.writeString(dir.resolve("housing.settings.csv"),
+                "characteristic,unit,usl,margin_upper,margin\nflatness,mm,0.05,0.004,\nbore,mm,,,0.004\n");
+        int code = run("--from", data.toString(), "--power", "0.9");
+        assertThat(code).as(err.toString()).isZero();
+        assertThat(out.toString()).containsPattern("flatness\\s+\\S+\\s+\\(none, 0.004\\)\\s+\\d+");
+        assertThat(out.toString()).containsPattern("bore\\s+\\S+\\s+\\(-0.004, 0.004\\)\\s+\\d+");
+    }
+
     @Test
     void badInputExitsWithTwoAndAOneLineMessage() {
         String[][] cases = {
-            {"must contain the expected difference 0.3", "--margin", "0.2", "--difference", "0.3", "--sd", "1",
+            {"the expected difference 0.3 lies on or outside the margin", "--margin", "0.2", "--difference", "0.3", "--sd", "1",
                 "--power", "0.8"},
-            {"must contain the expected difference 0.2", "--margin", "0.2", "--difference", "0.2", "--sd", "1",
+            {"the expected difference 0.2 lies on or outside the margin", "--margin", "0.2", "--difference", "0.2", "--sd", "1",
                 "--power", "0.8"},
             {"--sd must be positive", "--margin", "0.2", "--difference", "0", "--sd", "0", "--power", "0.8"},
             {"--sd must be positive", "--margin", "0.2", "--difference", "0", "--sd", "-1", "--power", "0.8"},
@@ -137,8 +179,6 @@ class PlanCommandTest {
             {"the cap was reached", "--margin", "0.2", "--difference", "0.15", "--sd", "100", "--power", "0.8"},
             {"not both", "--margin", "0.2", "--margin-lower", "-0.1", "--margin-upper", "0.1", "--difference", "0",
                 "--sd", "1", "--power", "0.8"},
-            {"both --margin-lower L and --margin-upper U", "--margin-lower", "-0.1", "--difference", "0", "--sd", "1",
-                "--power", "0.8"},
             {"either --power P", "--margin", "0.2", "--difference", "0", "--sd", "1", "--power", "0.8", "--n", "5"},
             {"missing --difference", "--margin", "0.2", "--sd", "1", "--power", "0.8"},
             {"alpha must lie strictly between 0 and 0.5", "--alpha", "0.6", "--margin", "0.2", "--difference", "0",

@@ -485,7 +485,8 @@ public final class PlanForm {
                 : pct(r.powerAtPrevious())});
         l.add(new String[] {"t-test power for the expected difference", pct(r.tTestPower())});
         String u = unit() == null ? "" : " " + unit();
-        l.add(new String[] {"Margin (L, U)", "(" + fmt(r.marginLower()) + ", " + fmt(r.marginUpper()) + ")" + u});
+        l.add(new String[] {"Margin (L, U)", "(" + (Double.isInfinite(r.marginLower()) ? "none" : fmt(r.marginLower()))
+                + ", " + (Double.isInfinite(r.marginUpper()) ? "none" : fmt(r.marginUpper())) + ")" + u});
         l.add(new String[] {"α, σ, expected difference", fmt(r.alpha()) + ", " + fmt(r.sd()) + u + ", "
                 + fmt(r.difference()) + u});
         return l;
