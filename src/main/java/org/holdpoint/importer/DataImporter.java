@@ -52,6 +52,39 @@ public final class DataImporter {
         }
     }
 
+    /**
+     * Reads the baseline that exists before a trial (for planning): one file, any layout; without a group
+     * column every row is a before value, with one the rows labelled before are. The after groups are empty
+     * (or hold the rows labelled after, if the file has some).
+     *
+     * @param request the one data file and the import options
+     * @return the data, before groups filled
+     * @throws ImportException as {@link #read}, or when two files are given
+     */
+    public Dataset readBaseline(ImportRequest request) {
+        if (request == null || request.file() == null) {
+            throw new ImportException("planning from data reads one file of baseline (before) values; name it");
+        }
+        try {
+            SkipLog log = new SkipLog();
+            Map<String, LayoutReader.Accum> accums = new LinkedHashMap<>();
+            Choosing choosing = new Choosing(request.choice());
+            Source s = readSource(request.file(), request.sheet(), request, Plan.Role.BASELINE, log, accums, choosing);
+            choosing.chooseStacked(accums, log);
+            choosing.check();
+            if (s.plan.groupCol() < 0) {
+                log.message("file " + s.name + ": no group column, so every row is a baseline (before) value");
+            }
+            List<InputInfo> inputs = List.of(new InputInfo(s.name, s.sha256, s.sheet, s.plan.layout(), "baseline"));
+            return finish(request, List.of(s), accums, inputs, log, false, true);
+        } catch (ImportException e) {
+            throw e;
+        } catch (RuntimeException | StackOverflowError e) {
+            throw new ImportException(e, "%s could not be read: %s. The file may be damaged; open it in its program, "
+                    + "save a fresh copy and try again", describe(request), e.getMessage());
+        }
+    }
+
     private static String describe(ImportRequest r) {
         return r.file() != null ? "file " + r.file() : "files " + r.beforeFile() + " and " + r.afterFile();
     }
@@ -300,7 +333,8 @@ public final class DataImporter {
     private static String describePlan(SheetData data, Plan p, boolean requested) {
         StringBuilder sb = new StringBuilder(data.where()).append(": layout ").append(p.layout().words());
         if (p.role() != Plan.Role.BOTH) {
-            sb.append(" (").append(p.role() == Plan.Role.BEFORE ? "before" : "after").append(" values only)");
+            sb.append(" (").append(p.role() == Plan.Role.BEFORE ? "before values only" : p.role() == Plan.Role.AFTER
+                    ? "after values only" : "baseline: before values").append(")");
         }
         if (p.paired()) {
             sb.append(", pairs matched by unit id in ").append(col(p.header(), p.unitCol()));
@@ -454,6 +488,11 @@ public final class DataImporter {
 
     private Dataset finish(ImportRequest r, List<Source> sources, Map<String, LayoutReader.Accum> accums,
             List<InputInfo> inputs, SkipLog log, boolean paired) {
+        return finish(r, sources, accums, inputs, log, paired, false);
+    }
+
+    private Dataset finish(ImportRequest r, List<Source> sources, Map<String, LayoutReader.Accum> accums,
+            List<InputInfo> inputs, SkipLog log, boolean paired, boolean baseline) {
         if (accums.isEmpty()) {
             throw new ImportException("%s: no values found below the header. Check the layout, header row and column choices",
                     describe(r));
@@ -464,7 +503,10 @@ public final class DataImporter {
         List<String> problems = new ArrayList<>();
         Set<String> incomplete = new java.util.HashSet<>();
         for (Map.Entry<String, LayoutReader.Accum> e : accums.entrySet()) {
-            String p = missingGroup(e.getValue(), sources);
+            LayoutReader.Accum acc = e.getValue();
+            // a baseline has no after values yet: only a characteristic without before values is a problem
+            String p = baseline ? (acc.before == null || acc.before.size() == 0 ? "characteristic \"" + acc.name
+                    + "\" has no baseline (before) values" : null) : missingGroup(acc, sources);
             if (p != null) {
                 problems.add(p);
                 incomplete.add(e.getKey());

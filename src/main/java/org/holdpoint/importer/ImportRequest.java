@@ -60,7 +60,7 @@ public record ImportRequest(Path file, Path beforeFile, Path afterFile, String s
         return switch (role) {
             case BEFORE -> beforeHeaderRow != null ? beforeHeaderRow : headerRow;
             case AFTER -> afterHeaderRow != null ? afterHeaderRow : headerRow;
-            case BOTH -> headerRow;
+            case BOTH, BASELINE -> headerRow;
         };
     }
 

@@ -153,7 +153,7 @@ final class LayoutReader {
      */
     private Boolean groupOf(Cursor group, int r, int vi, int vc, String name) {
         if (plan.groupCol() < 0) {
-            return plan.role() == Plan.Role.BEFORE;
+            return plan.role() == Plan.Role.BEFORE || plan.role() == Plan.Role.BASELINE;
         }
         int gi = group.at(r);
         String key = gi < 0 ? null : group.col.kind(gi) == CellKind.NUMBER ? data.display(group.col, gi)

@@ -34,7 +34,12 @@ record Plan(Layout layout, boolean paired, Role role, Header header, int groupCo
         /** Only the before group (the before file of two). */
         BEFORE,
         /** Only the after group. */
-        AFTER
+        AFTER,
+        /**
+         * The baseline, before a trial: every row is "before" when the sheet has no group column; with one,
+         * the rows labelled before are the baseline (rows labelled after, if any, are kept apart).
+         */
+        BASELINE
     }
 
     /**

@@ -58,11 +58,24 @@ public final class AnalyzeUseCase {
      * @return the data and merged settings; the result is null
      */
     public AnalysisOutcome importOnly(ImportOptions options, Path settingsFile, AnalysisSettings settings) {
-        return read(options.toRequest(), settingsFile, settings, Progress.NONE);
+        return read(options.toRequest(), settingsFile, settings, Progress.NONE, false);
+    }
+
+    /**
+     * Reads the baseline that exists before a trial, for planning: one file whose rows are all before values
+     * when it has no group column (or whose rows labelled before are the baseline), or the before file of two.
+     *
+     * @param options      what to import
+     * @param settingsFile criteria file, or null to look beside the data
+     * @param settings     the analysis settings the criteria are merged into
+     * @return the data (after groups empty for a baseline-only file) and the merged criteria
+     */
+    public AnalysisOutcome importBaseline(ImportOptions options, Path settingsFile, AnalysisSettings settings) {
+        return read(options.toRequest(), settingsFile, settings, Progress.NONE, true);
     }
 
     AnalysisOutcome run(ImportRequest request, Path settingsFile, AnalysisSettings settings, Progress progress) {
-        AnalysisOutcome read = read(request, settingsFile, settings, progress);
+        AnalysisOutcome read = read(request, settingsFile, settings, progress, false);
         List<String> bad = Exclusions.problems(read.data(), read.settings().exclusions());
         if (!bad.isEmpty()) {
             throw new AnalysisException(bad);
@@ -73,7 +86,7 @@ public final class AnalyzeUseCase {
     }
 
     private AnalysisOutcome read(ImportRequest request, Path settingsFile, AnalysisSettings settings,
-            Progress progress) {
+            Progress progress, boolean baseline) {
         Path main = request.file() != null ? request.file() : request.beforeFile();
         Path found = settingsFile;
         if (found == null && main != null) {
@@ -108,7 +121,8 @@ public final class AnalyzeUseCase {
         progress.step("reading the data", 0);
         Dataset data;
         try {
-            data = new DataImporter().read(effective);
+            data = baseline && effective.file() != null ? new DataImporter().readBaseline(effective)
+                    : new DataImporter().read(effective);
         } catch (ImportException e) {
             throw new AnalysisException(List.of(e.getMessage()));
         }

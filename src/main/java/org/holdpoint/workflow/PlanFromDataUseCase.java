@@ -60,7 +60,7 @@ public final class PlanFromDataUseCase {
      */
     public static Outcome run(ImportOptions data, Path settingsFile, Margin margin, EquivalencePlan plan,
             double difference) {
-        AnalysisOutcome imported = new AnalyzeUseCase().importOnly(data, settingsFile,
+        AnalysisOutcome imported = new AnalyzeUseCase().importBaseline(data, settingsFile,
                 AnalysisSettings.defaultSettings());
         return run(imported.data(), imported.settings(), margin, plan, difference);
     }

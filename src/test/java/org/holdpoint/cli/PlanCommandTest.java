@@ -163,6 +163,26 @@ class PlanCommandTest {
         assertThat(out.toString()).containsPattern("bore\\s+\\S+\\s+\\(-0.004, 0.004\\)\\s+\\d+");
     }
 
+    /**
+     * Before a trial only the baseline exists: a file without a group column is read as before values only
+     * (its sd is the sd of all its rows), and a stacked file's before rows are the baseline.
+     */
+    @Test
+    void planFromABaselineOnlyFile() throws IOException {
+        // invented: eight flatness readings of the current process, nothing measured after the change yet
+        Path baseline = Files.writeString(dir.resolve("baseline.csv"),
+                "flatness\n0.011\n0.014\n0.009\n0.012\n0.016\n0.010\n0.013\n0.012\n");
+        int code = run("--from", baseline.toString(), "--margin-upper", "0.004", "--power", "0.9", "--json",
+                dir.resolve("b.json").toString());
+        assertThat(code).as(err.toString()).isZero();
+        JsonNode row = json(dir.resolve("b.json")).path("characteristics").get(0);
+        // sd of the eight values (arithmetic: mean 0.012125, sum of squared deviations 3.4875e-5, /7, square root)
+        assertThat(row.path("sd").asDouble()).isCloseTo(Math.sqrt(3.4875e-5 / 7),
+                org.assertj.core.api.Assertions.within(1e-12));
+        assertThat(row.path("nPerGroup").asInt()).isPositive();
+        assertThat(row.path("marginLower").isNull()).isTrue();
+    }
+
     @Test
     void badInputExitsWithTwoAndAOneLineMessage() {
         String[][] cases = {
