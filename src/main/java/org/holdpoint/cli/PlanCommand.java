@@ -9,6 +9,8 @@ import org.holdpoint.stats.Design;
 import org.holdpoint.stats.EquivalencePlan;
 import org.holdpoint.stats.Margin;
 import org.holdpoint.stats.PlanResult;
+import org.holdpoint.stats.SpreadPlan;
+import org.holdpoint.workflow.Format;
 import org.holdpoint.stats.StatsException;
 import org.holdpoint.stats.SuccessRunPlan;
 import org.holdpoint.stats.SuccessRunResult;
@@ -94,6 +96,15 @@ public final class PlanCommand implements Callable<Integer> {
             + "NAME.settings.csv beside the data).")
     Path settings;
 
+    @Option(names = "--sd-growth-limit", paramLabel = "R", description = "Also plan the spread criterion: parts per "
+            + "group so that the one-sided upper bound of sd(after)/sd(before) falls below R (with --from: for every "
+            + "characteristic; otherwise alone with --power, or beside an equivalence plan).")
+    Double sdGrowthLimit;
+
+    @Option(names = "--sd-ratio", paramLabel = "RHO", description = "The true sd(after)/sd(before) assumed for the "
+            + "spread plan (default 1: the spread did not change).")
+    Double sdRatio;
+
     @Option(names = "--json", paramLabel = "FILE", description = "Also write the plan as JSON to FILE.")
     Path json;
 
@@ -129,10 +140,26 @@ public final class PlanCommand implements Callable<Integer> {
                 SuccessRunResult r = successRunPlan().sampleSize();
                 out.print(PlanOutput.text(r));
                 document = PlanOutput.json(r);
+            } else if (sdGrowthLimit != null && margin == null && marginLower == null && marginUpper == null
+                    && difference == null && sd == null) {
+                // the spread criterion by itself
+                SpreadPlan.Result s = spreadPlan();
+                out.print(spreadText(s));
+                document = new java.util.LinkedHashMap<>();
+                document.put("spread", spreadJson(s));
             } else {
                 PlanResult r = equivalencePlan();
                 out.print(PlanOutput.text(r));
                 document = PlanOutput.json(r);
+                if (sdGrowthLimit != null) {
+                    SpreadPlan.Result s = spreadPlan();
+                    out.print(spreadText(s));
+                    document.put("spread", spreadJson(s));
+                    boolean spreadDrives = s.nBefore() > r.n();
+                    out.printf(java.util.Locale.ROOT, "Measure %d parts per group: the %s criterion needs the most.%n",
+                            Math.max(s.nBefore(), r.n()), spreadDrives ? "spread" : "equivalence");
+                    document.put("drivenBy", spreadDrives ? "spread" : "equivalence");
+                }
                 if (chart != null) {
                     try {
                         org.holdpoint.workflow.PlanChartUseCase.write(r, null, chart);
@@ -157,6 +184,47 @@ public final class PlanCommand implements Callable<Integer> {
             }
         }
         return 0;
+    }
+
+    private SpreadPlan.Result spreadPlan() {
+        if (paired) {
+            throw bad("the spread plan compares two independent groups; it does not take --paired");
+        }
+        SpreadPlan p = SpreadPlan.forLimit(sdGrowthLimit).withSdRatio(sdRatio == null ? 1 : sdRatio).withAlpha(alpha)
+                .withRatio(ratio);
+        if ((power == null) == (n == null)) {
+            throw bad("give either --power P (search the size) or --n N (power at that size), not both or neither");
+        }
+        if (power != null) {
+            if (!(power > alpha && power < 1)) {
+                throw bad("--power must lie strictly between alpha = " + alpha + " and 1, got " + power);
+            }
+            return p.withTargetPower(power).sampleSize();
+        }
+        return p.powerAt(n);
+    }
+
+    static String spreadText(SpreadPlan.Result s) {
+        return String.format(java.util.Locale.ROOT, "Spread criterion: the one-sided %s upper bound of sd(after)/"
+                + "sd(before) must fall below the limit %s; true ratio assumed %s (F distribution, exact under "
+                + "normality)%n  parts before %d, after %d; power %.4f%s%s%n", Format.percent(1 - s.alpha()),
+                Format.num(s.limit()), Format.num(s.sdRatio()), s.nBefore(), s.nAfter(), s.achievedPower(),
+                s.targetPower() == null ? "" : String.format(java.util.Locale.ROOT, " (target %s)", Format.num(
+                        s.targetPower())), s.powerAtPrevious() == null ? "" : String.format(java.util.Locale.ROOT,
+                        "; with one part fewer before %.4f", s.powerAtPrevious()));
+    }
+
+    static Map<String, Object> spreadJson(SpreadPlan.Result s) {
+        Map<String, Object> m = new java.util.LinkedHashMap<>();
+        m.put("limit", s.limit());
+        m.put("sdRatio", s.sdRatio());
+        m.put("alpha", s.alpha());
+        m.put("targetPower", s.targetPower());
+        m.put("nPerGroup", s.nBefore());
+        m.put("nAfter", s.nAfter());
+        m.put("achievedPower", s.achievedPower());
+        m.put("powerAtNMinus1", s.powerAtPrevious());
+        return m;
     }
 
     private PlanResult equivalencePlan() {
@@ -204,7 +272,7 @@ public final class PlanCommand implements Callable<Integer> {
         org.holdpoint.workflow.PlanFromDataUseCase.Outcome o;
         try {
             o = org.holdpoint.workflow.PlanFromDataUseCase.run(org.holdpoint.workflow.ImportOptions.file(from),
-                    settings, m, plan, t);
+                    settings, m, plan, t, sdGrowthLimit, sdRatio == null ? 1 : sdRatio);
         } catch (org.holdpoint.workflow.AnalysisException e) {
             throw bad(String.join("; ", e.problems()));
         }
@@ -212,8 +280,8 @@ public final class PlanCommand implements Callable<Integer> {
                 + "margin; exact power; sd from the before sample, so the power is conditional on sigma = s)%n", from);
         out.printf(java.util.Locale.ROOT, "  alpha %s per one-sided test, target power %s, expected difference %s%s%n",
                 alpha, target, t, ratio == 1 ? "" : ", ratio " + ratio);
-        out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s  %s%n", "characteristic", "baseline sd", "margin",
-                "n/group", "power", "note");
+        out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s  %s%n", "characteristic", "baseline sd",
+                "margin", "n/group", "power", "n spread", "power", "note");
         java.util.List<Map<String, Object>> rows = new java.util.ArrayList<>();
         for (var p : o.plans()) {
             Map<String, Object> row = new java.util.LinkedHashMap<>();
@@ -224,16 +292,24 @@ public final class PlanCommand implements Callable<Integer> {
             row.put("nPerGroup", p.plan() == null ? null : p.plan().n());
             row.put("achievedPower", p.plan() == null ? null : p.plan().achievedPower());
             row.put("note", p.note());
+            row.put("spread", p.spread() == null ? null : spreadJson(p.spread()));
+            row.put("spreadNote", p.spreadNote());
+            row.put("drivenBy", p.drivenBy());
             rows.add(row);
-            out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s  %s%n", p.name(),
+            String spreadN = p.spread() == null ? "-" : p.spread().nBefore() + ("spread".equals(p.drivenBy()) ? "*" : "");
+            String spreadP = p.spread() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f",
+                    p.spread().achievedPower());
+            out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s  %s%n", p.name(),
                     org.holdpoint.workflow.Format.num(p.sd(), 4), p.margin() == null ? "-" : "("
                             + (p.margin().lower() == null ? "none" : org.holdpoint.workflow.Format.num(
                                     p.margin().lower(), 4)) + ", "
                             + (p.margin().upper() == null ? "none" : org.holdpoint.workflow.Format.num(
                                     p.margin().upper(), 4)) + ")",
-                    p.plan() == null ? "-" : Integer.toString(p.plan().n()),
+                    p.plan() == null ? "-" : p.plan().n() + ("equivalence".equals(p.drivenBy()) && p.spread() != null
+                            ? "*" : ""),
                     p.plan() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f", p.plan().achievedPower()),
-                    p.note() == null ? "" : p.note());
+                    spreadN, spreadP, String.join("; ", java.util.stream.Stream.of(p.note(), p.spreadNote())
+                            .filter(java.util.Objects::nonNull).toList()));
         }
         Map<String, Object> doc = new java.util.LinkedHashMap<>();
         doc.put("from", from.toString());
@@ -242,11 +318,14 @@ public final class PlanCommand implements Callable<Integer> {
         doc.put("difference", t);
         doc.put("characteristics", rows);
         if (o.driving() != null) {
-            out.printf(java.util.Locale.ROOT, "Measure %d parts %s: %s needs the most.%n", o.driving().plan().n(),
-                    ratio == 1 ? "per group" : "before and " + o.driving().plan().nAfter() + " after",
-                    o.driving().name());
-            doc.put("nPerGroup", o.driving().plan().n());
-            doc.put("drivenBy", o.driving().name());
+            var d = o.driving();
+            int needed = d.needed();
+            out.printf(java.util.Locale.ROOT, "Measure %d parts %s: %s needs the most (its %s criterion; * marks the "
+                    + "criterion that drives each row).%n", needed, ratio == 1 ? "per group" : "before and "
+                    + (int) Math.ceil(ratio * needed - 1e-9) + " after", d.name(), d.drivenBy());
+            doc.put("nPerGroup", needed);
+            doc.put("drivenBy", d.name());
+            doc.put("drivingCriterion", d.drivenBy());
         } else {
             out.println("No characteristic could be planned; see the notes.");
         }

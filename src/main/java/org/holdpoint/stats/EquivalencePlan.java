@@ -132,6 +132,16 @@ public final class EquivalencePlan {
         return alpha;
     }
 
+    /** @return the allocation ratio n_after / n_before */
+    public double ratio() {
+        return ratio;
+    }
+
+    /** @return the target power of a search */
+    public double targetPower() {
+        return targetPower;
+    }
+
     /** @return the design */
     public Design design() {
         return design;

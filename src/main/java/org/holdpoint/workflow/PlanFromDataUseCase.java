@@ -32,7 +32,30 @@ public final class PlanFromDataUseCase {
      * @param plan   the plan, or null
      * @param note   why it was not planned, or null
      */
-    public record CharacteristicPlan(String name, String unit, double sd, Margin margin, PlanResult plan, String note) {
+    public record CharacteristicPlan(String name, String unit, double sd, Margin margin, PlanResult plan, String note,
+            org.holdpoint.stats.SpreadPlan.Result spread, String spreadNote) {
+
+        /** A plan without the spread criterion. */
+        public CharacteristicPlan(String name, String unit, double sd, Margin margin, PlanResult plan, String note) {
+            this(name, unit, sd, margin, plan, note, null, null);
+        }
+
+        /** @return the parts per group the criteria planned here need (the largest), or 0 when none was planned */
+        public int needed() {
+            return Math.max(plan == null ? 0 : plan.n(), spread == null ? 0 : spread.nBefore());
+        }
+
+        /** @return the criterion that needs the most parts here: "equivalence" or "spread", or null */
+        public String drivenBy() {
+            if (needed() == 0) {
+                return null;
+            }
+            return spread != null && (plan == null || spread.nBefore() > plan.n()) ? "spread" : "equivalence";
+        }
+
+        CharacteristicPlan withSpread(org.holdpoint.stats.SpreadPlan.Result r, String why) {
+            return new CharacteristicPlan(name, unit, sd, margin, plan, note, r, why);
+        }
     }
 
     /**
@@ -60,9 +83,48 @@ public final class PlanFromDataUseCase {
      */
     public static Outcome run(ImportOptions data, Path settingsFile, Margin margin, EquivalencePlan plan,
             double difference) {
+        return run(data, settingsFile, margin, plan, difference, null, 1);
+    }
+
+    /**
+     * Plans every characteristic of the baseline, the equivalence test and the spread criterion.
+     *
+     * @param data          the baseline data
+     * @param settingsFile  criteria file, or null to look beside the data
+     * @param margin        one margin for all, or null for each one's
+     * @param plan          the equivalence planning settings
+     * @param difference    the expected true difference
+     * @param sdGrowthLimit one sd-growth limit for all, or null for each one's from the criteria
+     * @param sdRatio       the assumed true sd(after)/sd(before)
+     * @return the plans
+     */
+    public static Outcome run(ImportOptions data, Path settingsFile, Margin margin, EquivalencePlan plan,
+            double difference, Double sdGrowthLimit, double sdRatio) {
         AnalysisOutcome imported = new AnalyzeUseCase().importBaseline(data, settingsFile,
                 AnalysisSettings.defaultSettings());
-        return run(imported.data(), imported.settings(), margin, plan, difference);
+        Outcome o = run(imported.data(), imported.settings(), margin, plan, difference);
+        // the spread criterion, where a limit is set: parts per group so that the sd-ratio bound passes
+        List<CharacteristicPlan> out = new ArrayList<>();
+        CharacteristicPlan driving = null;
+        for (CharacteristicPlan p : o.plans()) {
+            Double limit = sdGrowthLimit != null ? sdGrowthLimit
+                    : imported.settings().resolve(p.name()).sdGrowthLimit();
+            CharacteristicPlan q = p;
+            if (limit != null) {
+                try {
+                    q = p.withSpread(org.holdpoint.stats.SpreadPlan.forLimit(limit).withSdRatio(sdRatio)
+                            .withAlpha(plan.alpha()).withRatio(plan.ratio()).withTargetPower(plan.targetPower())
+                            .sampleSize(), null);
+                } catch (StatsException e) {
+                    q = p.withSpread(null, e.getMessage());
+                }
+            }
+            out.add(q);
+            if (q.needed() > 0 && (driving == null || q.needed() > driving.needed())) {
+                driving = q;
+            }
+        }
+        return new Outcome(out, driving);
     }
 
     /**

@@ -183,6 +183,29 @@ class PlanCommandTest {
         assertThat(row.path("marginLower").isNull()).isTrue();
     }
 
+    /**
+     * The spread criterion planned by itself and beside the equivalence test; the larger size is named with
+     * its criterion. Reference: R 4.2.2, pf(R^2*qf(alpha, n-1, n-1)/rho^2, n-1, n-1) (SpreadPlanTest): limit 1.3,
+     * rho 1, power 0.8 needs 92 per group (0.80134336731073985).
+     */
+    @Test
+    void theSpreadCriterionIsPlannedAndCanDriveTheSize() throws IOException {
+        Path alone = dir.resolve("spread.json");
+        assertThat(run("--sd-growth-limit", "1.3", "--power", "0.8", "--json", alone.toString())).as(err.toString())
+                .isZero();
+        JsonNode s = json(alone).path("spread");
+        assertThat(s.path("nPerGroup").asInt()).isEqualTo(92);
+        assertThat(s.path("achievedPower").asDouble()).isCloseTo(0.80134336731073985,
+                org.assertj.core.api.Assertions.within(1e-12));
+        assertThat(keys(s)).containsExactly("limit", "sdRatio", "alpha", "targetPower", "nPerGroup", "nAfter",
+                "achievedPower", "powerAtNMinus1");
+        Path both = dir.resolve("both.json");
+        assertThat(run("--margin", "0.004", "--difference", "0", "--sd", "0.003", "--power", "0.8",
+                "--sd-growth-limit", "1.3", "--json", both.toString())).as(err.toString()).isZero();
+        assertThat(out.toString()).contains("Measure 92 parts per group: the spread criterion needs the most.");
+        assertThat(json(both).path("drivenBy").asText()).isEqualTo("spread");
+    }
+
     @Test
     void badInputExitsWithTwoAndAOneLineMessage() {
         String[][] cases = {
