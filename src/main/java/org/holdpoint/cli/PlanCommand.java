@@ -68,8 +68,6 @@ public final class PlanCommand implements Callable<Integer> {
             description = "Size to evaluate instead of searching (per group, before; paired: pairs).")
     Integer n;
 
-    @Option(names = "--paired", description = "Paired design: the same parts measured before and after.")
-    boolean paired;
 
     @Option(names = "--ratio", paramLabel = "R",
             description = "Allocation ratio n_after/n_before (default 1); n_after = ceil(R*n_before).")
@@ -87,14 +85,15 @@ public final class PlanCommand implements Callable<Integer> {
     @Option(names = "--failures", paramLabel = "c", description = "Pass/fail: failures allowed (default 0).")
     Integer failures;
 
-    @Option(names = "--from", paramLabel = "FILE", description = "Plan every characteristic of a study data file: "
-            + "sd from its before (baseline) sample, margins from its criteria file (or --margin); the largest n "
-            + "decides.")
+    @Option(names = "--from", paramLabel = "FILE", description = "Plan every characteristic of the baseline data "
+            + "(a file of before values only is fine; in a file with a group column the before rows): sd from the "
+            + "baseline, margins and sd-growth limits from its criteria file (or the options); the largest n, with "
+            + "its criterion, decides. Takes the input options below.")
     Path from;
 
-    @Option(names = "--settings", paramLabel = "FILE", description = "With --from: the criteria file (default: "
-            + "NAME.settings.csv beside the data).")
-    Path settings;
+    @picocli.CommandLine.ArgGroup(exclusive = false, heading = "%nInput (reading the baseline with --from, or --before and "
+            + "--after; --paired also plans a paired design without data)%n", order = 1)
+    InputArguments input = new InputArguments();
 
     @Option(names = "--sd-growth-limit", paramLabel = "R", description = "Also plan the spread criterion: parts per "
             + "group so that the one-sided upper bound of sd(after)/sd(before) falls below R (with --from: for every "
@@ -127,14 +126,14 @@ public final class PlanCommand implements Callable<Integer> {
      */
     @Override
     public Integer call() {
-        Path beside = settings == null && from != null && java.nio.file.Files.isRegularFile(from)
+        Path beside = input.settings == null && from != null && java.nio.file.Files.isRegularFile(from)
                 ? org.holdpoint.workflow.AnalyzeUseCase.settingsBeside(from) : null;
-        new OutputGuard().input("the data file", from).input("the settings file", settings)
+        new OutputGuard().input("the data file", from).input("the settings file", input.settings)
                 .input("the settings file", beside).output("--json", json).output("--chart", chart).check(overwrite);
         Map<String, Object> document;
         PrintWriter out = spec.commandLine().getOut();
         try {
-            if (from != null) {
+            if (from != null || input.before != null || input.after != null) {
                 document = fromData(out);
             } else if (successRun) {
                 SuccessRunResult r = successRunPlan().sampleSize();
@@ -187,7 +186,7 @@ public final class PlanCommand implements Callable<Integer> {
     }
 
     private SpreadPlan.Result spreadPlan() {
-        if (paired) {
+        if (input.paired) {
             throw bad("the spread plan compares two independent groups; it does not take --paired");
         }
         SpreadPlan p = SpreadPlan.forLimit(sdGrowthLimit).withSdRatio(sdRatio == null ? 1 : sdRatio).withAlpha(alpha)
@@ -232,8 +231,8 @@ public final class PlanCommand implements Callable<Integer> {
             throw bad("--confidence, --reliability and --failures belong to --success-run");
         }
         EquivalencePlan plan = EquivalencePlan.withDefaults().withMargin(margin()).withAlpha(alpha)
-                .with(paired ? Design.PAIRED : Design.PARALLEL);
-        if (paired && ratio != 1) {
+                .with(input.paired ? Design.PAIRED : Design.PARALLEL);
+        if (input.paired && ratio != 1) {
             throw bad("--ratio applies to two groups; a paired design has one set of pairs");
         }
         plan = plan.withRatio(ratio);
@@ -255,13 +254,14 @@ public final class PlanCommand implements Callable<Integer> {
     }
 
     private Map<String, Object> fromData(PrintWriter out) {
-        if (successRun || paired || sd != null || n != null) {
+        if (successRun || input.paired || sd != null || n != null) {
             throw bad("--from plans two groups from the baseline sd: it does not take --success-run, --paired, --sd "
                     + "or --n");
         }
-        if (!java.nio.file.Files.isRegularFile(from)) {
+        if (from != null && !java.nio.file.Files.isRegularFile(from)) {
             throw bad(from + ": file not found; check the path");
         }
+        org.holdpoint.workflow.ImportOptions data = input.toImportOptions(spec.commandLine(), from);
         double target = require(power, "--power P (the target power, e.g. 0.9)");
         if (!(target > alpha && target < 1)) {
             throw bad("--power must lie strictly between alpha = " + alpha + " and 1, got " + target);
@@ -271,8 +271,8 @@ public final class PlanCommand implements Callable<Integer> {
         double t = difference == null ? 0 : difference;
         org.holdpoint.workflow.PlanFromDataUseCase.Outcome o;
         try {
-            o = org.holdpoint.workflow.PlanFromDataUseCase.run(org.holdpoint.workflow.ImportOptions.file(from),
-                    settings, m, plan, t, sdGrowthLimit, sdRatio == null ? 1 : sdRatio);
+            o = org.holdpoint.workflow.PlanFromDataUseCase.run(data, input.settings, m, plan, t, sdGrowthLimit,
+                    sdRatio == null ? 1 : sdRatio);
         } catch (org.holdpoint.workflow.AnalysisException e) {
             throw bad(String.join("; ", e.problems()));
         }
@@ -351,7 +351,7 @@ public final class PlanCommand implements Callable<Integer> {
 
     private SuccessRunPlan successRunPlan() {
         if (margin != null || marginLower != null || marginUpper != null || difference != null || sd != null
-                || power != null || n != null || paired || ratio != 1) {
+                || power != null || n != null || input.paired || ratio != 1) {
             throw bad("--success-run takes only --confidence, --reliability and --failures");
         }
         SuccessRunPlan plan = SuccessRunPlan.withDefaults()
