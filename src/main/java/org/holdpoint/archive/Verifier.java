@@ -100,23 +100,21 @@ final class Verifier {
             }
             studies.put(row.id(), row);
         });
+        attach(c, Sql.ALL_CHARACTERISTICS, StudyRow::withCharacteristics);
+        // the document's signers are part of the row its CREATED event vouches for
+        attach(c, Sql.ALL_DOCUMENT_SIGNERS, StudyRow::withDocumentSigners);
+    }
+
+    /** Reads (study_id, name) rows in order and gives each study row its list of names. */
+    private void attach(Connection c, Stmt all, java.util.function.BiFunction<StudyRow, List<String>, StudyRow> with)
+            throws ArchiveException {
         Map<Long, List<String>> names = new HashMap<>();
-        Jdbc.stream(c, Sql.ALL_CHARACTERISTICS, rs -> names.computeIfAbsent(rs.getLong("study_id"),
-                k -> new ArrayList<>()).add(rs.getString("name")));
+        Jdbc.stream(c, all, rs -> names.computeIfAbsent(rs.getLong("study_id"), k -> new ArrayList<>())
+                .add(rs.getString("name")));
         for (Map.Entry<Long, List<String>> e : names.entrySet()) {
             StudyRow row = studies.get(e.getKey());
             if (row != null) {
-                studies.put(row.id(), row.withCharacteristics(e.getValue()));
-            }
-        }
-        // the document's signers are part of the row its CREATED event vouches for
-        Map<Long, List<String>> signers = new HashMap<>();
-        Jdbc.stream(c, Sql.ALL_DOCUMENT_SIGNERS, rs -> signers.computeIfAbsent(rs.getLong("study_id"),
-                k -> new ArrayList<>()).add(rs.getString("name")));
-        for (Map.Entry<Long, List<String>> e : signers.entrySet()) {
-            StudyRow row = studies.get(e.getKey());
-            if (row != null) {
-                studies.put(row.id(), row.withDocumentSigners(e.getValue()));
+                studies.put(row.id(), with.apply(row, e.getValue()));
             }
         }
     }

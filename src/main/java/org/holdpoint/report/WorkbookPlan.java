@@ -181,8 +181,14 @@ final class WorkbookPlan {
         s.height(row + 1, 26f);
     }
 
-    private void summaryRow(SheetContent s, int row, int c0, int index, CharacteristicResult c) {
-        int d = statDecimals(data(c.name()));
+    /**
+     * The first seven cells of a characteristic's Summary row, the same in both layouts: index, name, unit, n,
+     * the two means and the difference.
+     *
+     * @return the deciding difference test, or null
+     */
+    private static org.holdpoint.stats.TTestResult leadingCells(SheetContent s, int row, int c0, int index,
+            CharacteristicResult c, int d) {
         String n = c.name();
         s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
         s.text(row, c0 + 1, n, Style.CELL_WRAP, n + ": name");
@@ -193,6 +199,13 @@ final class WorkbookPlan {
         s.number(row, c0 + 5, c.after() == null ? null : c.after().mean(), Style.NUMBER, d, n + ": mean after");
         var t = c.decidingTest();
         s.number(row, c0 + 6, t == null ? null : t.estimate(), Style.NUMBER, d, n + ": difference");
+        return t;
+    }
+
+    private void summaryRow(SheetContent s, int row, int c0, int index, CharacteristicResult c) {
+        int d = statDecimals(data(c.name()));
+        String n = c.name();
+        var t = leadingCells(s, row, c0, index, c, d);
         s.text(row, c0 + 7, t == null ? "" : interval(t.ciLower(), t.ciUpper(), d), Style.CELL,
                 n + ": CI of the difference");
         s.text(row, c0 + 8, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
@@ -312,15 +325,7 @@ final class WorkbookPlan {
     private void meansRow(SheetContent s, int row, int c0, int index, CharacteristicResult c) {
         int d = statDecimals(data(c.name()));
         String n = c.name();
-        s.number(row, c0, (double) index, Style.INTEGER, 0, n + ": index");
-        s.text(row, c0 + 1, n, Style.CELL_WRAP, n + ": name");
-        s.text(row, c0 + 2, c.unit() == null ? "" : c.unit(), Style.CELL, n + ": unit");
-        s.text(row, c0 + 3, (c.before() == null ? 0 : c.before().n()) + " / " + (c.after() == null ? 0 : c.after().n()),
-                Style.CELL, n + ": n before / after");
-        s.number(row, c0 + 4, c.before() == null ? null : c.before().mean(), Style.NUMBER, d, n + ": mean before");
-        s.number(row, c0 + 5, c.after() == null ? null : c.after().mean(), Style.NUMBER, d, n + ": mean after");
-        var t = c.decidingTest();
-        s.number(row, c0 + 6, t == null ? null : t.estimate(), Style.NUMBER, d, n + ": difference");
+        var t = leadingCells(s, row, c0, index, c, d);
         s.text(row, c0 + 7, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
                 Style.CELL_WRAP, n + ": margin");
         EquivalenceResult eq = c.decidingTost();

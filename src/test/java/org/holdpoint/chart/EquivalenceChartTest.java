@@ -92,20 +92,7 @@ class EquivalenceChartTest {
     void aRowThatPassedTheMeanButFailedOtherwiseSaysWhy() {
         // invented: the mean stays, the spread grows fourfold against a limit of 1.3 (the analysis, not the
         // chart, decides; the chart must say why it failed)
-        java.util.SplittableRandom rnd = new java.util.SplittableRandom(7);
-        double[] before = ChartFixtures.normal(rnd, 30, 20.0, 0.01, 3);
-        double[] after = ChartFixtures.normal(rnd, 30, 20.0, 0.04, 3);
-        var data = new org.holdpoint.study.CharacteristicData("Flange height", "mm",
-                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(before), "b.csv"),
-                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(after), "a.csv"), false, List.of());
-        var own = new org.holdpoint.study.CharacteristicSettings("mm", org.holdpoint.study.SpecLimits.NONE,
-                new org.holdpoint.study.MarginSpec(org.holdpoint.study.MarginSpec.Kind.ABSOLUTE, -0.5, 0.5), 1.3,
-                null, null);
-        var settings = new org.holdpoint.study.AnalysisSettings(0.05, false, false, null,
-                java.util.Map.of("Flange height", own), null, null);
-        List<CharacteristicResult> results = new org.holdpoint.workflow.StudyAnalyzer().analyze(
-                new org.holdpoint.study.Dataset(List.of(data), List.of(), new org.holdpoint.study.ImportReport(60, java.util.Map.of(), List.of(), List.of())),
-                settings, org.holdpoint.study.Progress.NONE).characteristics();
+        List<CharacteristicResult> results = List.of(flangeHeight(0.5).result());
         JFreeChart chart = EquivalenceChart.create(results, null, theme);
         String[] words = ((SymbolAxis) chart.getXYPlot().getRangeAxis(1)).getSymbols();
         boolean seen = false;
@@ -227,21 +214,9 @@ class EquivalenceChartTest {
     /** The box plot names the criteria that decided, and draws the margin around the before mean. */
     @Test
     void theBoxPlotShowsTheDecidingCriteria() {
-        java.util.SplittableRandom rnd = new java.util.SplittableRandom(7);
-        double[] before = ChartFixtures.normal(rnd, 30, 20.0, 0.01, 3);
-        double[] after = ChartFixtures.normal(rnd, 30, 20.0, 0.04, 3);
-        var data = new org.holdpoint.study.CharacteristicData("Flange height", "mm",
-                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(before), "b.csv"),
-                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(after), "a.csv"), false, List.of());
-        var own = new org.holdpoint.study.CharacteristicSettings("mm", org.holdpoint.study.SpecLimits.NONE,
-                new org.holdpoint.study.MarginSpec(org.holdpoint.study.MarginSpec.Kind.ABSOLUTE, -0.05, 0.05), 1.3,
-                null, null);
-        var settings = new org.holdpoint.study.AnalysisSettings(0.05, false, false, null,
-                java.util.Map.of("Flange height", own), null, null);
-        CharacteristicResult r = new org.holdpoint.workflow.StudyAnalyzer().analyze(
-                new org.holdpoint.study.Dataset(List.of(data), List.of(), new org.holdpoint.study.ImportReport(60,
-                        java.util.Map.of(), List.of(), List.of())), settings, org.holdpoint.study.Progress.NONE)
-                .characteristics().get(0);
+        ChartFixtures.Item flange = flangeHeight(0.05);
+        var data = flange.data();
+        CharacteristicResult r = flange.result();
         JFreeChart chart = BoxPlotChart.withCriteria(BoxPlotChart.create(data, org.holdpoint.study.SpecLimits.NONE,
                 theme), r, theme);
         String line = ((org.jfree.chart.title.TextTitle) chart.getSubtitle(1)).getText();
@@ -250,5 +225,28 @@ class EquivalenceChartTest {
                 .getRangeMarkers(org.jfree.chart.ui.Layer.BACKGROUND).iterator().next();
         assertThat(band.getStartValue()).isCloseTo(r.before().mean() - 0.05, org.assertj.core.api.Assertions.within(1e-12));
         assertThat(band.getEndValue()).isCloseTo(r.before().mean() + 0.05, org.assertj.core.api.Assertions.within(1e-12));
+    }
+
+    /**
+     * Invented: a flange height whose mean stays while its spread grows fourfold, analysed by the real
+     * analysis against a margin ±m and an sd-growth limit of 1.3.
+     */
+    private static ChartFixtures.Item flangeHeight(double m) {
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(7);
+        double[] before = ChartFixtures.normal(rnd, 30, 20.0, 0.01, 3);
+        double[] after = ChartFixtures.normal(rnd, 30, 20.0, 0.04, 3);
+        var data = new org.holdpoint.study.CharacteristicData("Flange height", "mm",
+                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(before), "b.csv"),
+                org.holdpoint.study.GroupData.typed(org.holdpoint.stats.Sample.of(after), "a.csv"), false, List.of());
+        var own = new org.holdpoint.study.CharacteristicSettings("mm", org.holdpoint.study.SpecLimits.NONE,
+                new org.holdpoint.study.MarginSpec(org.holdpoint.study.MarginSpec.Kind.ABSOLUTE, -m, m), 1.3, null,
+                null);
+        var settings = new org.holdpoint.study.AnalysisSettings(0.05, false, false, null,
+                java.util.Map.of("Flange height", own), null, null);
+        CharacteristicResult r = new org.holdpoint.workflow.StudyAnalyzer().analyze(
+                new org.holdpoint.study.Dataset(List.of(data), List.of(), new org.holdpoint.study.ImportReport(60,
+                        java.util.Map.of(), List.of(), List.of())), settings, org.holdpoint.study.Progress.NONE)
+                .characteristics().get(0);
+        return new ChartFixtures.Item(data, r);
     }
 }
