@@ -80,6 +80,37 @@ final class ExactPower {
     }
 
     /**
+     * The probability that the estimated Ppk of n normal values is at least p* (its lower bound then passes a
+     * requirement): with the true process in σ units a = (USL − μ)/σ and b = (μ − LSL)/σ (∞ for a missing
+     * limit), s = σ·x/√ν, x ~ χ_ν, and x̄ − μ ~ N(0, σ²/n) independent of s, the event is
+     * x̄ − μ ∈ [−b + 3·s·p*, a − 3·s·p*], so P = ∫ [Φ(√n·(a − 3·x·pStar/√ν)) − Φ(√n·(−b + 3·x·pStar/√ν))]⁺ f_χν(x) dx,
+     * exact for one and for two limits.
+     *
+     * @param n     the sample size, ≥ 3
+     * @param a     (USL − μ)/σ, or +∞
+     * @param b     (μ − LSL)/σ, or +∞
+     * @param pStar the estimated Ppk that must be reached
+     * @return the probability
+     */
+    static double ppkAtLeast(int n, double a, double b, double pStar) {
+        double df = n - 1.0;
+        double rootN = Math.sqrt(n);
+        double k = 3 * pStar / Math.sqrt(df);
+        double logConst = logChiConstant(df);
+        double mode = Math.sqrt(df - 1);
+        double lo = Math.max(0, mode - HALF_WIDTH);
+        double hi = mode + HALF_WIDTH;
+        double p = Quadrature.integrate(x -> {
+            double up = Double.isInfinite(a) ? Double.POSITIVE_INFINITY : rootN * (a - k * x);
+            double down = Double.isInfinite(b) ? Double.NEGATIVE_INFINITY : rootN * (-b + k * x);
+            double inside = Double.isInfinite(up) ? 1 - Normal.cdf(down) : Double.isInfinite(down) ? Normal.cdf(up)
+                    : normalDifference(up, down);
+            return Math.max(0, inside) * chiDensity(x, df, logConst);
+        }, breaks(lo, hi, mode), REL_TOL);
+        return Math.min(1, Math.max(0, p));
+    }
+
+    /**
      * Exact power of the two-sided t-test at level α for a true shift with standard error se.
      *
      * @param alpha the two-sided level, in (0, 1)
