@@ -280,8 +280,8 @@ public final class PlanCommand implements Callable<Integer> {
                 + "margin; exact power; sd from the before sample, so the power is conditional on sigma = s)%n", from);
         out.printf(java.util.Locale.ROOT, "  alpha %s per one-sided test, target power %s, expected difference %s%s%n",
                 alpha, target, t, ratio == 1 ? "" : ", ratio " + ratio);
-        out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s  %s%n", "characteristic", "baseline sd",
-                "margin", "n/group", "power", "n spread", "power", "note");
+        out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s %8s %8s  %s%n", "characteristic",
+                "baseline sd", "margin", "n/group", "power", "n spread", "power", "n capab", "power", "note");
         java.util.List<Map<String, Object>> rows = new java.util.ArrayList<>();
         for (var p : o.plans()) {
             Map<String, Object> row = new java.util.LinkedHashMap<>();
@@ -295,21 +295,39 @@ public final class PlanCommand implements Callable<Integer> {
             row.put("spread", p.spread() == null ? null : spreadJson(p.spread()));
             row.put("spreadNote", p.spreadNote());
             row.put("drivenBy", p.drivenBy());
+            if (p.capability() != null) {
+                Map<String, Object> cap = new java.util.LinkedHashMap<>();
+                cap.put("requirement", p.capability().requirement());
+                cap.put("truePpk", p.capability().truePpk());
+                cap.put("method", "lower bound of Ppk (Bissell) above the requirement; exact probability for the "
+                        + "baseline's mean and sd (chi integral)");
+                cap.put("nAfter", p.capability().nAfter());
+                cap.put("achievedPower", p.capability().achievedPower());
+                cap.put("powerAtNMinus1", p.capability().powerAtPrevious());
+                row.put("capability", cap);
+            } else {
+                row.put("capability", null);
+            }
+            row.put("capabilityNote", p.capabilityNote());
             rows.add(row);
+            String capN = p.capability() == null ? "-" : p.capability().nAfter() + ("capability".equals(p.drivenBy())
+                    ? "*" : "");
+            String capP = p.capability() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f",
+                    p.capability().achievedPower());
             String spreadN = p.spread() == null ? "-" : p.spread().nBefore() + ("spread".equals(p.drivenBy()) ? "*" : "");
             String spreadP = p.spread() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f",
                     p.spread().achievedPower());
-            out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s  %s%n", p.name(),
+            out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s %8s %8s  %s%n", p.name(),
                     org.holdpoint.workflow.Format.num(p.sd(), 4), p.margin() == null ? "-" : "("
                             + (p.margin().lower() == null ? "none" : org.holdpoint.workflow.Format.num(
                                     p.margin().lower(), 4)) + ", "
                             + (p.margin().upper() == null ? "none" : org.holdpoint.workflow.Format.num(
                                     p.margin().upper(), 4)) + ")",
-                    p.plan() == null ? "-" : p.plan().n() + ("equivalence".equals(p.drivenBy()) && p.spread() != null
-                            ? "*" : ""),
+                    p.plan() == null ? "-" : p.plan().n() + ("equivalence".equals(p.drivenBy())
+                            && (p.spread() != null || p.capability() != null) ? "*" : ""),
                     p.plan() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f", p.plan().achievedPower()),
-                    spreadN, spreadP, String.join("; ", java.util.stream.Stream.of(p.note(), p.spreadNote())
-                            .filter(java.util.Objects::nonNull).toList()));
+                    spreadN, spreadP, capN, capP, String.join("; ", java.util.stream.Stream.of(p.note(),
+                            p.spreadNote(), p.capabilityNote()).filter(java.util.Objects::nonNull).toList()));
         }
         Map<String, Object> doc = new java.util.LinkedHashMap<>();
         doc.put("from", from.toString());

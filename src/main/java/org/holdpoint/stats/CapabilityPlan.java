@@ -103,7 +103,7 @@ public final class CapabilityPlan {
     public Result sampleSize(double a, double b) {
         double truePpk = Math.min(a, b) / 3;
         if (!(truePpk > requirement)) {
-            throw new StatsException("no number of parts shows a Ppk bound above %s when the true Ppk is %s: plan for a "
+            throw new StatsException("no number of parts shows a Ppk bound above %s when the true Ppk is %.3f: plan for a "
                     + "process whose Ppk exceeds the requirement", requirement, truePpk);
         }
         Double previous = null;

@@ -33,28 +33,38 @@ public final class PlanFromDataUseCase {
      * @param note   why it was not planned, or null
      */
     public record CharacteristicPlan(String name, String unit, double sd, Margin margin, PlanResult plan, String note,
-            org.holdpoint.stats.SpreadPlan.Result spread, String spreadNote) {
+            org.holdpoint.stats.SpreadPlan.Result spread, String spreadNote,
+            org.holdpoint.stats.CapabilityPlan.Result capability, String capabilityNote) {
 
-        /** A plan without the spread criterion. */
+        /** A plan without the spread and capability criteria. */
         public CharacteristicPlan(String name, String unit, double sd, Margin margin, PlanResult plan, String note) {
-            this(name, unit, sd, margin, plan, note, null, null);
+            this(name, unit, sd, margin, plan, note, null, null, null, null);
         }
 
         /** @return the parts per group the criteria planned here need (the largest), or 0 when none was planned */
         public int needed() {
-            return Math.max(plan == null ? 0 : plan.n(), spread == null ? 0 : spread.nBefore());
+            return Math.max(Math.max(plan == null ? 0 : plan.n(), spread == null ? 0 : spread.nBefore()),
+                    capability == null ? 0 : capability.nAfter());
         }
 
-        /** @return the criterion that needs the most parts here: "equivalence" or "spread", or null */
+        /** @return the criterion that needs the most parts here: "equivalence", "spread" or "capability", or null */
         public String drivenBy() {
-            if (needed() == 0) {
+            int n = needed();
+            if (n == 0) {
                 return null;
             }
-            return spread != null && (plan == null || spread.nBefore() > plan.n()) ? "spread" : "equivalence";
+            if (plan != null && plan.n() == n) {
+                return "equivalence";
+            }
+            return spread != null && spread.nBefore() == n ? "spread" : "capability";
         }
 
         CharacteristicPlan withSpread(org.holdpoint.stats.SpreadPlan.Result r, String why) {
-            return new CharacteristicPlan(name, unit, sd, margin, plan, note, r, why);
+            return new CharacteristicPlan(name, unit, sd, margin, plan, note, r, why, capability, capabilityNote);
+        }
+
+        CharacteristicPlan withCapability(org.holdpoint.stats.CapabilityPlan.Result r, String why) {
+            return new CharacteristicPlan(name, unit, sd, margin, plan, note, spread, spreadNote, r, why);
         }
     }
 
@@ -117,6 +127,23 @@ public final class PlanFromDataUseCase {
                             .sampleSize(), null);
                 } catch (StatsException e) {
                     q = p.withSpread(null, e.getMessage());
+                }
+            }
+            // the capability criterion, where a requirement and limits are set: the process as the baseline shows it
+            var cs = imported.settings().resolve(p.name());
+            if (cs.capabilityRequirement() != null && cs.spec().any()) {
+                var c = imported.data().characteristics().stream().filter(x -> x.name().equals(p.name())).findFirst();
+                if (c.isPresent() && c.get().before().size() >= 2 && p.sd() > 0) {
+                    double mean = org.holdpoint.stats.Descriptives.of(c.get().before().sample()).mean();
+                    double a = cs.spec().usl() == null ? Double.POSITIVE_INFINITY : (cs.spec().usl() - mean) / p.sd();
+                    double b = cs.spec().lsl() == null ? Double.POSITIVE_INFINITY : (mean - cs.spec().lsl()) / p.sd();
+                    try {
+                        q = q.withCapability(org.holdpoint.stats.CapabilityPlan.forRequirement(
+                                cs.capabilityRequirement()).withAlpha(plan.alpha())
+                                .withTargetPower(plan.targetPower()).sampleSize(a, b), null);
+                    } catch (StatsException e) {
+                        q = q.withCapability(null, e.getMessage());
+                    }
                 }
             }
             out.add(q);

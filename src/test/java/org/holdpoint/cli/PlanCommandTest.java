@@ -206,6 +206,34 @@ class PlanCommandTest {
         assertThat(json(both).path("drivenBy").asText()).isEqualTo("spread");
     }
 
+    /**
+     * plan --from plans every criterion a characteristic's settings name (equivalence, spread, capability)
+     * and marks the one that needs the most parts; the capability size is the one CapabilityPlan gives for the
+     * baseline's mean and sd (that class is checked against the noncentral t and a simulation).
+     */
+    @Test
+    void planFromPlansEveryCriterionAndNamesTheDrivingOne() throws IOException {
+        Path baseline = Files.writeString(dir.resolve("shaft.csv"),
+                "diameter\n12.004\n11.998\n12.001\n12.006\n11.997\n12.002\n12.000\n12.003\n11.999\n12.005\n");
+        Files.writeString(dir.resolve("shaft.settings.csv"),
+                "characteristic,unit,lsl,usl,margin,sd_growth_limit,capability_min\ndiameter,mm,11.98,12.02,0.004,1.5,1.0\n");
+        assertThat(run("--from", baseline.toString(), "--power", "0.9", "--json", dir.resolve("s.json").toString()))
+                .as(err.toString()).isZero();
+        JsonNode row = json(dir.resolve("s.json")).path("characteristics").get(0);
+        double mean = 12.0015;
+        double sdv = row.path("sd").asDouble();
+        int expectCap = org.holdpoint.stats.CapabilityPlan.forRequirement(1.0).withTargetPower(0.9)
+                .sampleSize((12.02 - mean) / sdv, (mean - 11.98) / sdv).nAfter();
+        assertThat(row.path("capability").path("nAfter").asInt()).isEqualTo(expectCap);
+        assertThat(row.path("spread").path("nPerGroup").asInt()).isEqualTo(54);
+        int[] ns = {row.path("nPerGroup").asInt(), 54, expectCap};
+        int max = Math.max(ns[0], Math.max(ns[1], ns[2]));
+        String criterion = row.path("drivenBy").asText();
+        assertThat(criterion.equals("equivalence") ? ns[0] : criterion.equals("spread") ? ns[1] : ns[2])
+                .isEqualTo(max);
+        assertThat(json(dir.resolve("s.json")).path("drivingCriterion").asText()).isEqualTo(criterion);
+    }
+
     @Test
     void badInputExitsWithTwoAndAOneLineMessage() {
         String[][] cases = {

@@ -70,6 +70,6 @@ class CapabilityPlanTest {
     @Test
     void aTrueProcessAtTheRequirementCannotBePlannedFor() {
         assertThatThrownBy(() -> CapabilityPlan.forRequirement(1.33).sampleSize(3.99, Double.POSITIVE_INFINITY))
-                .isInstanceOf(StatsException.class).hasMessageContaining("true Ppk is 1.33");
+                .isInstanceOf(StatsException.class).hasMessageContaining("true Ppk is 1.330");
     }
 }
