@@ -112,13 +112,31 @@ public final class PlanFromDataUseCase {
             double difference, Double sdGrowthLimit, double sdRatio) {
         AnalysisOutcome imported = new AnalyzeUseCase().importBaseline(data, settingsFile,
                 AnalysisSettings.defaultSettings());
-        Outcome o = run(imported.data(), imported.settings(), margin, plan, difference);
+        return run(imported.data(), imported.settings(), margin, plan, difference, sdGrowthLimit, sdRatio);
+    }
+
+    /**
+     * Plans every characteristic of data already imported, every criterion its settings name (the window's
+     * Plan step and {@code plan --from}).
+     *
+     * @param data          the study data (the before group is the baseline)
+     * @param settings      the criteria
+     * @param margin        one margin for all, or null for each one's
+     * @param plan          the equivalence planning settings
+     * @param difference    the expected true difference
+     * @param sdGrowthLimit one sd-growth limit for all, or null for each one's from the criteria
+     * @param sdRatio       the assumed true sd(after)/sd(before)
+     * @return the plans
+     */
+    public static Outcome run(Dataset data, AnalysisSettings settings, Margin margin, EquivalencePlan plan,
+            double difference, Double sdGrowthLimit, double sdRatio) {
+        Outcome o = run(data, settings, margin, plan, difference);
         // the spread criterion, where a limit is set: parts per group so that the sd-ratio bound passes
         List<CharacteristicPlan> out = new ArrayList<>();
         CharacteristicPlan driving = null;
         for (CharacteristicPlan p : o.plans()) {
             Double limit = sdGrowthLimit != null ? sdGrowthLimit
-                    : imported.settings().resolve(p.name()).sdGrowthLimit();
+                    : settings.resolve(p.name()).sdGrowthLimit();
             CharacteristicPlan q = p;
             if (limit != null) {
                 try {
@@ -130,9 +148,9 @@ public final class PlanFromDataUseCase {
                 }
             }
             // the capability criterion, where a requirement and limits are set: the process as the baseline shows it
-            var cs = imported.settings().resolve(p.name());
+            var cs = settings.resolve(p.name());
             if (cs.capabilityRequirement() != null && cs.spec().any()) {
-                var c = imported.data().characteristics().stream().filter(x -> x.name().equals(p.name())).findFirst();
+                var c = data.characteristics().stream().filter(x -> x.name().equals(p.name())).findFirst();
                 if (c.isPresent() && c.get().before().size() >= 2 && p.sd() > 0) {
                     double mean = org.holdpoint.stats.Descriptives.of(c.get().before().sample()).mean();
                     double a = cs.spec().usl() == null ? Double.POSITIVE_INFINITY : (cs.spec().usl() - mean) / p.sd();

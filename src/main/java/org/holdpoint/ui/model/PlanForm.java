@@ -375,7 +375,8 @@ public final class PlanForm {
         }
         EquivalencePlan p = settings(null);
         Dataset d = session.data();
-        session.start("Planning every characteristic", x -> PlanFromDataUseCase.run(d, settings, null, p, t), o -> {
+        session.start("Planning every characteristic", x -> PlanFromDataUseCase.run(d, settings, null, p, t, null, 1),
+                o -> {
             var drive = o.driving();
             if (drive == null) {
                 show(null, "");
@@ -385,11 +386,16 @@ public final class PlanForm {
                         "Set a two-sided margin for each characteristic on the Criteria step."));
                 return;
             }
-            fill(drive.sd(), drive.margin(), drive.unit(), drive.name());
             all = o;
-            show(drive.plan(), drive.name());
+            if (drive.plan() != null) {
+                fill(drive.sd(), drive.margin(), drive.unit(), drive.name());
+                show(drive.plan(), drive.name());
+            } else {
+                show(null, "");
+                bound.fireChanged(Property.RESULT);
+            }
             session.status("Planned every characteristic; \"" + drive.name() + "\" needs the most parts: "
-                    + sizeWords(drive.plan()) + ".");
+                    + drive.needed() + " per group, for its " + drive.drivenBy() + " criterion.");
         });
     }
 

@@ -288,11 +288,23 @@ final class PlanPanel extends JPanel {
             allPlans.setText("");
             allPlans.setVisible(false);
         } else {
-            StringBuilder b = new StringBuilder("Every characteristic (baseline σ, criteria margin):\n");
+            StringBuilder b = new StringBuilder("Every characteristic (baseline mean and σ, the criteria's margin, "
+                    + "sd-growth limit and capability requirement):\n");
             for (var p : all.plans()) {
-                b.append("  ").append(p.name()).append(": ").append(p.plan() != null ? sizeWords(p.plan())
-                        : "not planned, " + p.note()).append(p == all.driving() ? "   ← needs the most parts" : "")
-                        .append('\n');
+                b.append("  ").append(p.name()).append(": equivalence ").append(p.plan() != null
+                        ? sizeWords(p.plan()) : "not planned (" + p.note() + ")");
+                if (p.spread() != null || p.spreadNote() != null) {
+                    b.append("; spread ").append(p.spread() != null ? p.spread().nBefore() + " per group"
+                            : "not planned (" + p.spreadNote() + ")");
+                }
+                if (p.capability() != null || p.capabilityNote() != null) {
+                    b.append("; capability ").append(p.capability() != null ? p.capability().nAfter() + " after"
+                            : "not planned (" + p.capabilityNote() + ")");
+                }
+                if (p.drivenBy() != null) {
+                    b.append(" — decided by ").append(p.drivenBy());
+                }
+                b.append(p == all.driving() ? "   ← needs the most parts" : "").append('\n');
             }
             allPlans.setText(b.toString().stripTrailing());
             allPlans.setVisible(true);
