@@ -46,6 +46,16 @@ public final class PlanArchiveTour {
             return null;
         });
         d.screenshot(out.resolve("window-plan-check" + suffix + ".png"));
+        // Every characteristic, every criterion its settings name.
+        WindowDriver.onEdt(() -> {
+            win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.SD, "0.0121286");
+            win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.POWER, "0.9");
+            win.session().plan().planAll();
+            return null;
+        });
+        WindowDriver.await("every plan", () -> !win.session().busy() && win.session().plan().allPlans() != null,
+                60_000);
+        d.screenshot(out.resolve("window-plan-all" + suffix + ".png"));
         WindowDriver.onEdt(() -> {
             win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.SD, "0.0121286");
             win.session().plan().set(org.holdpoint.ui.model.PlanForm.Field.POWER, "0.9");
