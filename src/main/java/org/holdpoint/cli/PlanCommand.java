@@ -9,6 +9,7 @@ import org.holdpoint.stats.Design;
 import org.holdpoint.stats.EquivalencePlan;
 import org.holdpoint.stats.Margin;
 import org.holdpoint.stats.PlanResult;
+import org.holdpoint.stats.CapabilityPlan;
 import org.holdpoint.stats.SpreadPlan;
 import org.holdpoint.workflow.Format;
 import org.holdpoint.stats.StatsException;
@@ -104,6 +105,15 @@ public final class PlanCommand implements Callable<Integer> {
             + "spread plan (default 1: the spread did not change).")
     Double sdRatio;
 
+    @Option(names = "--capability-min", paramLabel = "R", description = "Plan the capability criterion: parts after "
+            + "the change so that the lower bound of Ppk exceeds R (with --ppk; --from takes each characteristic's "
+            + "requirement and its baseline).")
+    Double capabilityMin;
+
+    @Option(names = "--ppk", paramLabel = "P", description = "The true Ppk assumed for the capability plan (one "
+            + "specification limit; for two limits the nearer one, which decides when the process is off centre).")
+    Double ppk;
+
     @Option(names = "--json", paramLabel = "FILE", description = "Also write the plan as JSON to FILE.")
     Path json;
 
@@ -139,6 +149,11 @@ public final class PlanCommand implements Callable<Integer> {
                 SuccessRunResult r = successRunPlan().sampleSize();
                 out.print(PlanOutput.text(r));
                 document = PlanOutput.json(r);
+            } else if (capabilityMin != null || ppk != null) {
+                CapabilityPlan.Result c = capabilityPlan();
+                out.print(capabilityText(c));
+                document = new java.util.LinkedHashMap<>();
+                document.put("capability", capabilityJson(c));
             } else if (sdGrowthLimit != null && margin == null && marginLower == null && marginUpper == null
                     && difference == null && sd == null) {
                 // the spread criterion by itself
@@ -203,6 +218,57 @@ public final class PlanCommand implements Callable<Integer> {
         return p.powerAt(n);
     }
 
+    private CapabilityPlan.Result capabilityPlan() {
+        if (capabilityMin == null || ppk == null) {
+            throw bad("the capability plan needs --capability-min R (the requirement) and --ppk P (the true Ppk assumed)");
+        }
+        if (margin != null || marginLower != null || marginUpper != null || sdGrowthLimit != null || input.paired) {
+            throw bad("--capability-min plans the capability criterion by itself; plan the others in their own run, or "
+                    + "all of them per characteristic with --from");
+        }
+        if (!(ppk > 0)) {
+            throw bad("--ppk must be positive, got " + ppk);
+        }
+        CapabilityPlan p = CapabilityPlan.forRequirement(capabilityMin).withAlpha(alpha);
+        double a = 3 * ppk;
+        if ((power == null) == (n == null)) {
+            throw bad("give either --power P (search the size) or --n N (power at that size), not both or neither");
+        }
+        if (power != null) {
+            if (!(power > alpha && power < 1)) {
+                throw bad("--power must lie strictly between alpha = " + alpha + " and 1, got " + power);
+            }
+            return p.withTargetPower(power).sampleSize(a, Double.POSITIVE_INFINITY);
+        }
+        double at = p.power(n, a, Double.POSITIVE_INFINITY);
+        return new CapabilityPlan.Result(capabilityMin, ppk, alpha, Double.NaN, n, at,
+                n > 3 ? p.power(n - 1, a, Double.POSITIVE_INFINITY) : null);
+    }
+
+    static String capabilityText(CapabilityPlan.Result c) {
+        return String.format(java.util.Locale.ROOT, "Capability criterion: the %s lower bound of Ppk (Bissell) after "
+                + "the change must exceed %s; true Ppk assumed %s, one specification limit (exact: noncentral t)%n"
+                + "  parts after %d; power %.4f%s%s%n", Format.percent(1 - c.alpha()), Format.num(c.requirement()),
+                Format.num(c.truePpk()), c.nAfter(), c.achievedPower(), Double.isNaN(c.targetPower()) ? ""
+                : String.format(java.util.Locale.ROOT, " (target %s)", Format.num(c.targetPower())),
+                c.powerAtPrevious() == null ? "" : String.format(java.util.Locale.ROOT, "; with one part fewer %.4f",
+                        c.powerAtPrevious()));
+    }
+
+    static Map<String, Object> capabilityJson(CapabilityPlan.Result c) {
+        Map<String, Object> m = new java.util.LinkedHashMap<>();
+        m.put("requirement", c.requirement());
+        m.put("truePpk", c.truePpk());
+        m.put("alpha", c.alpha());
+        m.put("targetPower", Double.isNaN(c.targetPower()) ? null : c.targetPower());
+        m.put("method", "lower bound of Ppk (Bissell) above the requirement; exact probability for one limit "
+                + "(noncentral t as a chi integral)");
+        m.put("nAfter", c.nAfter());
+        m.put("achievedPower", c.achievedPower());
+        m.put("powerAtNMinus1", c.powerAtPrevious());
+        return m;
+    }
+
     static String spreadText(SpreadPlan.Result s) {
         return String.format(java.util.Locale.ROOT, "Spread criterion: the one-sided %s upper bound of sd(after)/"
                 + "sd(before) must fall below the limit %s; true ratio assumed %s (F distribution, exact under "
@@ -254,6 +320,10 @@ public final class PlanCommand implements Callable<Integer> {
     }
 
     private Map<String, Object> fromData(PrintWriter out) {
+        if (capabilityMin != null || ppk != null) {
+            throw bad("with --from the capability requirement is each characteristic's capability_min and the process "
+                    + "its baseline; --capability-min and --ppk plan one assumed process without data");
+        }
         if (successRun || input.paired || sd != null || n != null) {
             throw bad("--from plans two groups from the baseline sd: it does not take --success-run, --paired, --sd "
                     + "or --n");

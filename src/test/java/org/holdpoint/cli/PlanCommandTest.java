@@ -234,6 +234,20 @@ class PlanCommandTest {
         assertThat(json(dir.resolve("s.json")).path("drivingCriterion").asText()).isEqualTo(criterion);
     }
 
+    /** The capability criterion by itself: the size CapabilityPlan gives (checked there against R and scipy). */
+    @Test
+    void theCapabilityCriterionIsPlannedByItself() throws IOException {
+        Path file = dir.resolve("cap.json");
+        assertThat(run("--capability-min", "1.33", "--ppk", "1.6", "--power", "0.9", "--json", file.toString()))
+                .as(err.toString()).isZero();
+        JsonNode c = json(file).path("capability");
+        // the smallest n reaching 0.9 for a true Ppk of 1.6 (a = 4.8) is 141 (CapabilityPlanTest)
+        assertThat(c.path("nAfter").asInt()).isEqualTo(141);
+        assertThat(out.toString()).contains("parts after 141");
+        assertThat(run("--capability-min", "1.33", "--power", "0.9")).isEqualTo(2);
+        assertThat(err.toString()).contains("--ppk P");
+    }
+
     @Test
     void badInputExitsWithTwoAndAOneLineMessage() {
         String[][] cases = {
