@@ -135,6 +135,10 @@ final class AnalyzeCommand implements Callable<Integer> {
         @Option(names = "--margin-percent", paramLabel = "P", description = "Symmetric margin as P %% of the "
                 + "tolerance width USL - LSL.")
         Double marginPercent;
+        @Option(names = "--margin-percent-of-usl", paramLabel = "P", description = "Upper margin as P %% of the USL, "
+                + "for a characteristic with an upper limit only (e.g. flatness may grow by at most P %% of its "
+                + "USL).")
+        Double marginPercentOfUsl;
         @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
         Double lsl;
         @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
@@ -361,8 +365,9 @@ final class AnalyzeCommand implements Callable<Integer> {
                 case LSL -> "--lsl";
                 case NOMINAL -> "--nominal";
                 case USL -> "--usl";
-                case MARGIN -> c.margin != null ? "--margin" : c.marginPercent != null ? "--margin-percent"
-                        : c.marginLower != null ? "--margin-lower" : "--margin-upper";
+                case MARGIN -> c.marginPercentOfUsl != null ? "--margin-percent-of-usl" : c.margin != null ? "--margin"
+                        : c.marginPercent != null ? "--margin-percent" : c.marginLower != null ? "--margin-lower"
+                        : "--margin-upper";
                 case SD_GROWTH_LIMIT -> "--sd-growth-limit";
                 default -> throw new IllegalStateException("not an analyze option: " + p.field());
             };
@@ -384,10 +389,13 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     private MarginSpec marginSpec(CriteriaOptions c) {
         int given = (c.margin != null ? 1 : 0) + (c.marginLower != null || c.marginUpper != null ? 1 : 0)
-                + (c.marginPercent != null ? 1 : 0);
+                + (c.marginPercent != null ? 1 : 0) + (c.marginPercentOfUsl != null ? 1 : 0);
         if (given > 1) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "give one kind of margin: --margin, or --margin-lower/--margin-upper, or --margin-percent");
+            throw new CommandLine.ParameterException(spec.commandLine(), "give one kind of margin: --margin, or "
+                    + "--margin-lower/--margin-upper, or --margin-percent, or --margin-percent-of-usl");
+        }
+        if (c.marginPercentOfUsl != null) {
+            return new MarginSpec(MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT, null, c.marginPercentOfUsl);
         }
         if (c.margin != null) {
             if (!(c.margin > 0) || !Double.isFinite(c.margin)) {

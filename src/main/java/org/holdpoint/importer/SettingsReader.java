@@ -40,6 +40,7 @@ public final class SettingsReader {
     /** The columns (CSV) or keys (JSON) a settings file may use. */
     public static final List<String> COLUMNS = List.of("characteristic", "unit", "lsl", "nominal", "usl", "margin",
             "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower", "margin_percent_upper",
+            "margin_percent_of_usl",
             "sd_growth_limit", "capability_min", "paired");
 
     /** Creates a reader. */
@@ -204,7 +205,9 @@ public final class SettingsReader {
         putIf(o, "nominal", s.spec().nominal());
         putIf(o, "usl", s.spec().usl());
         MarginSpec m = s.margin();
-        if (m != null) {
+        if (m != null && m.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT) {
+            o.put("margin_percent_of_usl", m.upper());
+        } else if (m != null) {
             boolean abs = m.kind() == MarginSpec.Kind.ABSOLUTE;
             boolean symmetric = m.lower() != null && m.upper() != null
                     && (abs ? -m.lower() == m.upper() : m.lower().equals(m.upper()));
@@ -326,8 +329,16 @@ public final class SettingsReader {
         Double pct = number(v, "margin_percent", w, dec);
         Double pctLo = number(v, "margin_percent_lower", w, dec);
         Double pctHi = number(v, "margin_percent_upper", w, dec);
+        Double pctUsl = number(v, "margin_percent_of_usl", w, dec);
         boolean abs = sym != null || lo != null || hi != null;
         boolean rel = pct != null || pctLo != null || pctHi != null;
+        if (pctUsl != null) {
+            if (abs || rel) {
+                throw w.bad("margin_percent_of_usl", v.get("margin_percent_of_usl"), "cannot be combined with another "
+                        + "margin; give the margin one way");
+            }
+            return new MarginSpec(MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT, null, pctUsl);
+        }
         if (abs && rel) {
             throw w.bad(sym != null ? "margin" : lo != null ? "margin_lower" : "margin_upper",
                     v.getOrDefault("margin", v.getOrDefault("margin_lower", v.get("margin_upper"))),
@@ -359,7 +370,7 @@ public final class SettingsReader {
     /** The margin column the row uses (for messages). */
     private static String marginColumn(Map<String, String> v) {
         for (String c : List.of("margin", "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower",
-                "margin_percent_upper")) {
+                "margin_percent_upper", "margin_percent_of_usl")) {
             if (v.get(c) != null) {
                 return c;
             }

@@ -71,6 +71,25 @@ public record Margin(Double lower, Double upper) {
         return new Margin(lo, hi);
     }
 
+    /**
+     * An upper margin as a percentage of the upper specification limit, for a characteristic bounded at zero
+     * with an upper limit only (flatness, runout, roughness): U = p % of USL, in decimal arithmetic on the
+     * numbers as entered (10 % of 0.05 is 0.005 exactly); no lower bound (the characteristic may shrink freely).
+     *
+     * @param percent p &gt; 0
+     * @param usl     the upper specification limit, &gt; 0
+     * @return the one-sided margin (non-superiority)
+     */
+    public static Margin percentOfUpperLimit(double percent, double usl) {
+        if (!(usl > 0) || !Double.isFinite(usl)) {
+            throw new StatsException("a margin in percent of the USL needs a positive USL, got %s", usl);
+        }
+        if (!(percent > 0 && percent < 1000)) {
+            throw new StatsException("a margin in percent of the USL must be positive, got %s", percent);
+        }
+        return new Margin(null, percentOf(percent, java.math.BigDecimal.valueOf(usl)));
+    }
+
     private static double percentOf(double percent, java.math.BigDecimal width) {
         return java.math.BigDecimal.valueOf(percent).multiply(width).movePointLeft(2).doubleValue();
     }

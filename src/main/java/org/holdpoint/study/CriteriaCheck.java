@@ -72,6 +72,9 @@ public final class CriteriaCheck {
             add(out, Field.NOMINAL, "the nominal value (" + text(nominal) + ") must lie between the LSL and the USL");
         }
         add(out, Field.MARGIN, margin(margin));
+        if (margin != null && margin.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT && margin(margin) == null) {
+            add(out, Field.MARGIN, resolvable(margin, new SpecLimits(lsl, nominal, usl)));
+        }
         add(out, Field.SD_GROWTH_LIMIT, positive(sdGrowthLimit, "the sd-growth limit", "1.25"));
         add(out, Field.CAPABILITY_REQUIREMENT, positive(capabilityRequirement, "the capability requirement",
                 "1.33"));
@@ -116,6 +119,9 @@ public final class CriteriaCheck {
             }
             return null;
         }
+        if (margin.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT && lo != null) {
+            return "a margin in % of the USL bounds the rise only; leave the lower side empty";
+        }
         for (Double p : new Double[] {lo, hi}) {
             if (p != null && !(p > 0 && p <= MAX_MARGIN_PERCENT)) {
                 return "a margin in % of the tolerance width must lie above 0 and at most " + text(MAX_MARGIN_PERCENT)
@@ -136,6 +142,11 @@ public final class CriteriaCheck {
         if (margin != null && margin.kind() == MarginSpec.Kind.PERCENT_OF_TOLERANCE
                 && (spec == null || spec.lsl() == null || spec.usl() == null)) {
             return "a margin in % of the tolerance needs both the LSL and the USL";
+        }
+        if (margin != null && margin.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT
+                && (spec == null || spec.usl() == null || spec.lsl() != null || !(spec.usl() > 0))) {
+            return "a margin in % of the USL is for a characteristic with a positive USL and no LSL; with both limits "
+                    + "give it in % of the tolerance";
         }
         return null;
     }

@@ -17,7 +17,9 @@ public record MarginSpec(Kind kind, Double lower, Double upper) {
         /** In the characteristic's unit. */
         ABSOLUTE,
         /** As a percentage of the tolerance width USL − LSL. */
-        PERCENT_OF_TOLERANCE
+        PERCENT_OF_TOLERANCE,
+        /** An upper margin as a percentage of the USL, for a characteristic with an upper limit only. */
+        PERCENT_OF_UPPER_LIMIT
     }
 
     /** Validates the spec. */
@@ -41,6 +43,14 @@ public record MarginSpec(Kind kind, Double lower, Double upper) {
         if (kind == Kind.ABSOLUTE) {
             return new Margin(lower, upper);
         }
+        if (kind == Kind.PERCENT_OF_UPPER_LIMIT) {
+            if (spec == null || spec.usl() == null || spec.lsl() != null || lower != null) {
+                throw new org.holdpoint.stats.StatsException("a margin in percent of the USL is for a characteristic "
+                        + "with an upper specification limit only (an upper margin, e.g. flatness may grow by 10 %% "
+                        + "of its USL); with both limits give the margin in percent of the tolerance");
+            }
+            return Margin.percentOfUpperLimit(upper, spec.usl());
+        }
         if (spec == null || spec.lsl() == null || spec.usl() == null) {
             throw new org.holdpoint.stats.StatsException(
                     "a margin in percent of tolerance needs both LSL and USL; set them or give the margin in units");
@@ -51,7 +61,8 @@ public record MarginSpec(Kind kind, Double lower, Double upper) {
 
     /** @return how the margin was set, in words, e.g. "±10 % of tolerance" */
     public String describe() {
-        String unit = kind == Kind.ABSOLUTE ? "" : " % of tolerance";
+        String unit = kind == Kind.ABSOLUTE ? "" : kind == Kind.PERCENT_OF_UPPER_LIMIT ? " % of the USL"
+                : " % of tolerance";
         if (lower != null && upper != null) {
             return kind == Kind.ABSOLUTE ? "(" + fmt(lower) + ", " + fmt(upper) + ") in units"
                     : "-" + fmt(lower) + unit + " / +" + fmt(upper) + unit;

@@ -206,8 +206,11 @@ public final class ResultJson {
         numOrNull(n, "usl", s.spec().usl());
         if (s.margin() != null) {
             ObjectNode m = n.putObject("margin");
-            m.put("entered", s.margin().kind() == org.holdpoint.study.MarginSpec.Kind.ABSOLUTE ? "units"
-                    : "percent of tolerance");
+            m.put("entered", switch (s.margin().kind()) {
+                case ABSOLUTE -> "units";
+                case PERCENT_OF_TOLERANCE -> "percent of tolerance";
+                case PERCENT_OF_UPPER_LIMIT -> "percent of the USL";
+            });
             m.put("description", s.margin().describe());
             numOrNull(m, "lower", r.margin().lower());
             numOrNull(m, "upper", r.margin().upper());

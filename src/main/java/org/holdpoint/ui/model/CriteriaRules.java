@@ -69,15 +69,23 @@ final class CriteriaRules {
         if (t.isEmpty()) {
             return null;
         }
-        boolean percent = CriteriaTable.IN_PERCENT.equals(r[CriteriaColumn.MARGIN_IN.ordinal()]);
+        MarginSpec.Kind kind = kindOf(r[CriteriaColumn.MARGIN_IN.ordinal()]);
+        Bounds b;
         try {
-            margin(t, percent);
+            b = margin(t, kind);
         } catch (IllegalArgumentException e) {
             return e.getMessage();
         }
-        return org.holdpoint.study.CriteriaCheck.resolvable(percent ? new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE,
-                1.0, 1.0) : null, specOrNone(number(r[CriteriaColumn.LSL.ordinal()]),
+        return kind == MarginSpec.Kind.ABSOLUTE ? null : org.holdpoint.study.CriteriaCheck.resolvable(new MarginSpec(kind,
+                b.lower(), b.upper()), specOrNone(number(r[CriteriaColumn.LSL.ordinal()]),
                         number(r[CriteriaColumn.USL.ordinal()])));
+    }
+
+    /** The kind of margin the Margin-in choice names. */
+    static MarginSpec.Kind kindOf(String marginIn) {
+        return CriteriaTable.IN_PERCENT.equals(marginIn) ? MarginSpec.Kind.PERCENT_OF_TOLERANCE
+                : CriteriaTable.IN_PERCENT_USL.equals(marginIn) ? MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT
+                : MarginSpec.Kind.ABSOLUTE;
     }
 
     private static SpecLimits specOrNone(Double lsl, Double usl) {
@@ -92,9 +100,28 @@ final class CriteriaRules {
      * @throws IllegalArgumentException with the reason in plain words
      */
     static Bounds margin(String text, boolean percent) {
+        return margin(text, percent ? MarginSpec.Kind.PERCENT_OF_TOLERANCE : MarginSpec.Kind.ABSOLUTE);
+    }
+
+    /**
+     * Parses a margin of the given kind; in percent of the USL one number p means an upper margin of p %.
+     *
+     * @return the bounds, or null when the text is empty
+     * @throws IllegalArgumentException with the reason in plain words
+     */
+    static Bounds margin(String text, MarginSpec.Kind kind) {
+        boolean percent = kind != MarginSpec.Kind.ABSOLUTE;
         String t = text.replace("±", "").replace("+/-", "").trim();
         if (t.isEmpty()) {
             return null;
+        }
+        if (kind == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT) {
+            Double d = parse(t.replace("/", "").trim());
+            if (d == null || !(d > 0)) {
+                throw new IllegalArgumentException("give a positive percentage p: the characteristic may grow by at "
+                        + "most p % of its USL");
+            }
+            return new Bounds(null, d);
         }
         if (!t.contains("/")) {
             Double d = parse(t);
@@ -130,10 +157,9 @@ final class CriteriaRules {
         String unit = r[CriteriaColumn.UNIT.ordinal()];
         SpecLimits spec = new SpecLimits(number(r[CriteriaColumn.LSL.ordinal()]),
                 number(r[CriteriaColumn.NOMINAL.ordinal()]), number(r[CriteriaColumn.USL.ordinal()]));
-        boolean percent = CriteriaTable.IN_PERCENT.equals(r[CriteriaColumn.MARGIN_IN.ordinal()]);
-        Bounds b = margin(r[CriteriaColumn.MARGIN.ordinal()], percent);
-        MarginSpec m = b == null ? null : new MarginSpec(percent ? MarginSpec.Kind.PERCENT_OF_TOLERANCE
-                : MarginSpec.Kind.ABSOLUTE, b.lower(), b.upper());
+        MarginSpec.Kind kind = kindOf(r[CriteriaColumn.MARGIN_IN.ordinal()]);
+        Bounds b = margin(r[CriteriaColumn.MARGIN.ordinal()], kind);
+        MarginSpec m = b == null ? null : new MarginSpec(kind, b.lower(), b.upper());
         String paired = r[CriteriaColumn.PAIRED.ordinal()];
         Boolean p = CriteriaTable.FROM_DATA.equals(paired) ? null : "yes".equals(paired);
         return new CharacteristicSettings(unit.isEmpty() ? null : unit, spec, m,
@@ -141,6 +167,9 @@ final class CriteriaRules {
     }
 
     static String marginText(MarginSpec m) {
+        if (m.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT) {
+            return text(m.upper());
+        }
         boolean percent = m.kind() == MarginSpec.Kind.PERCENT_OF_TOLERANCE;
         if (m.lower() != null && m.upper() != null) {
             double lo = percent ? m.lower() : -m.lower();

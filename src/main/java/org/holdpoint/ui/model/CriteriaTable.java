@@ -20,6 +20,8 @@ public final class CriteriaTable {
     public static final String IN_UNITS = "units";
     /** Choice of {@link CriteriaColumn#MARGIN_IN}: the margin is in percent of USL − LSL. */
     public static final String IN_PERCENT = "% of tolerance";
+    /** Choice of {@link CriteriaColumn#MARGIN_IN}: an upper margin in percent of the USL (upper limit only). */
+    public static final String IN_PERCENT_USL = "% of USL";
     /** Choice of {@link CriteriaColumn#PAIRED}: take the design from the data layout. */
     public static final String FROM_DATA = "from data";
 
@@ -277,7 +279,8 @@ public final class CriteriaTable {
         MarginSpec m = s.margin();
         if (m != null) {
             r[CriteriaColumn.MARGIN.ordinal()] = CriteriaRules.marginText(m);
-            r[CriteriaColumn.MARGIN_IN.ordinal()] = m.kind() == MarginSpec.Kind.ABSOLUTE ? IN_UNITS : IN_PERCENT;
+            r[CriteriaColumn.MARGIN_IN.ordinal()] = m.kind() == MarginSpec.Kind.ABSOLUTE ? IN_UNITS
+                    : m.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT ? IN_PERCENT_USL : IN_PERCENT;
         }
         r[CriteriaColumn.SD_GROWTH.ordinal()] = CriteriaRules.text(s.sdGrowthLimit());
         r[CriteriaColumn.CAPABILITY.ordinal()] = CriteriaRules.text(s.capabilityRequirement());

@@ -290,9 +290,11 @@ final class CriteriaPanel extends JPanel {
             Color error = UIManager.getColor("Component.error.focusedBorderColor");
             if (mc == CriteriaColumn.MARGIN.ordinal() && problem == null && !getText().isBlank()) {
                 // the margin says what it is in: percent of the tolerance or the characteristic's unit
-                boolean pct = CriteriaTable.IN_PERCENT.equals(table.get(r, CriteriaColumn.MARGIN_IN));
+                String in = table.get(r, CriteriaColumn.MARGIN_IN);
                 String unit = table.get(r, CriteriaColumn.UNIT);
-                setText(getText() + (pct ? " % of tol." : unit == null || unit.isBlank() ? "" : " " + unit));
+                setText(getText() + (CriteriaTable.IN_PERCENT.equals(in) ? " % of tol."
+                        : CriteriaTable.IN_PERCENT_USL.equals(in) ? " % of USL"
+                        : unit == null || unit.isBlank() ? "" : " " + unit));
             }
             if (problem != null) {
                 setText("⚠ " + getText());
