@@ -41,17 +41,40 @@ public final class PowerCurveChart {
      */
     public static JFreeChart create(String title, String unit, double[] differences, double[] power,
             double targetPower, ChartTheme theme) {
+        return create(title, unit == null || unit.isBlank() ? "true difference after \u2212 before"
+                : "true difference after \u2212 before [" + unit + "]", "power of the equivalence test against the "
+                + "true difference", "power (probability of showing equivalence)", differences, power, targetPower,
+                theme);
+    }
+
+    /**
+     * The power curve of any criterion against the true value of what it judges (the difference, the sd
+     * ratio, the Ppk).
+     *
+     * @param title       the chart title
+     * @param xLabel      the x axis: the true value, with its unit
+     * @param subtitle    what the curve shows, in words
+     * @param yLabel      the y axis: the probability of what
+     * @param xs          the true values, strictly increasing, at least 2, finite
+     * @param power       the power at each, in [0, 1]
+     * @param targetPower the target power, in (0, 1)
+     * @param theme       the theme
+     * @return the chart
+     * @throws ChartException as {@link #create(String, String, double[], double[], double, ChartTheme)}
+     */
+    public static JFreeChart create(String title, String xLabel, String subtitle, String yLabel, double[] xs,
+            double[] power, double targetPower, ChartTheme theme) {
+        double[] differences = xs;
         validate(differences, power, targetPower);
         XYSeries s = new XYSeries("power", false, true);
         for (int i = 0; i < differences.length; i++) {
             s.add(differences[i], power[i]);
         }
-        NumberAxis x = new NumberAxis(unit == null || unit.isBlank() ? "true difference after \u2212 before"
-                : "true difference after \u2212 before [" + unit + "]");
+        NumberAxis x = new NumberAxis(xLabel);
         x.setAutoRangeIncludesZero(false);
         x.setNumberFormatOverride(Numbers.plainFormat());
         x.setRange(ChartRanges.padded(new double[] {differences[0], differences[differences.length - 1]}, 0.02));
-        NumberAxis y = new NumberAxis("power (probability of showing equivalence)");
+        NumberAxis y = new NumberAxis(yLabel);
         y.setRange(0, 1.04);
         NumberFormat pct = NumberFormat.getPercentInstance(Locale.ROOT);
         y.setTickUnit(new NumberTickUnit(0.2, pct));
@@ -78,7 +101,7 @@ public final class PowerCurveChart {
                 target.getStroke(), ChartTheme.AFTER));
         plot.setFixedLegendItems(items);
         JFreeChart chart = new JFreeChart(title, theme.titleFont(), plot, false);
-        chart.addSubtitle(theme.subtitle("power of the equivalence test against the true difference"));
+        chart.addSubtitle(theme.subtitle(subtitle));
         chart.addSubtitle(BoxPlotChart.legend(plot));
         theme.apply(chart);
         return chart;

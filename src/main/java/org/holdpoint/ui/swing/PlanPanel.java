@@ -51,6 +51,7 @@ final class PlanPanel extends JPanel {
     private final JPanel numbers = new JPanel(new GridBagLayout());
     private final JLabel resultTitle = Bind.heading("No plan yet");
     private final JTextArea allPlans = new JTextArea(4, 40);
+    private JScrollPane allPlansBox;
     private final transient ExecutorService renderer = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "holdpoint-plan-chart");
         t.setDaemon(true);
@@ -200,12 +201,17 @@ final class PlanPanel extends JPanel {
         JPanel head = new JPanel(new BorderLayout(0, 6));
         head.add(resultTitle, BorderLayout.NORTH);
         head.add(numbers, BorderLayout.CENTER);
-        head.add(allPlans, BorderLayout.SOUTH);
+        // every characteristic's plan scrolls in a box of a few lines, so the power curve keeps its room
+        allPlansBox = new JScrollPane(allPlans);
+        allPlansBox.setBorder(BorderFactory.createEmptyBorder());
+        allPlansBox.setPreferredSize(new java.awt.Dimension(300, 150));
+        allPlansBox.setVisible(false);
+        head.add(allPlansBox, BorderLayout.SOUTH);
         right.add(head, BorderLayout.NORTH);
         right.add(chart, BorderLayout.CENTER);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(left), right);
         split.setResizeWeight(0.0);
-        split.setDividerLocation(580);
+        split.setDividerLocation(560);
         split.setBorder(null);
         add(split, BorderLayout.CENTER);
     }
@@ -287,6 +293,7 @@ final class PlanPanel extends JPanel {
         if (all == null) {
             allPlans.setText("");
             allPlans.setVisible(false);
+            allPlansBox.setVisible(false);
         } else {
             StringBuilder b = new StringBuilder("Every characteristic (baseline mean and σ, the criteria's margin, "
                     + "sd-growth limit and capability requirement):\n");
@@ -308,8 +315,15 @@ final class PlanPanel extends JPanel {
             }
             allPlans.setText(b.toString().stripTrailing());
             allPlans.setVisible(true);
+            allPlansBox.setVisible(true);
+            javax.swing.SwingUtilities.invokeLater(() -> allPlans.setCaretPosition(0));
         }
-        if (r == null) {
+        var curve = form.drivingCurve();
+        if (curve != null) {
+            // the criterion that decides the size draws its own curve
+            chart.show(() -> PowerCurveChart.create(curve.title(), curve.xLabel(), curve.subtitle(), curve.yLabel(),
+                    curve.x(), curve.power(), curve.target(), ChartTheme.withDefaults()));
+        } else if (r == null) {
             chart.clear("The power curve appears here after planning.");
         } else {
             double[] x = form.curveDifferences();

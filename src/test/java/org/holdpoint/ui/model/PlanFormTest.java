@@ -156,6 +156,39 @@ class PlanFormTest {
             assertThat(f.result()).isEqualTo(all.driving().plan());
         }
         assertThat(s.lastStatus()).contains("needs the most parts").contains(all.driving().drivenBy() + " criterion");
+        // when spread or capability decides, the window draws that criterion's power curve: at the planned size
+        // it reaches the target at the assumed true value (the sd ratio 1, or the baseline's Ppk)
+        var curve = f.drivingCurve();
+        if (!"equivalence".equals(all.driving().drivenBy())) {
+            assertThat(curve).isNotNull();
+            assertThat(curve.x()).hasSize(25).isSorted();
+            double achieved = "spread".equals(all.driving().drivenBy()) ? all.driving().spread().achievedPower()
+                    : all.driving().capability().achievedPower();
+            assertThat(achieved).isGreaterThanOrEqualTo(curve.target());
+        } else {
+            assertThat(curve).isNull();
+        }
+    }
+
+    /**
+     * A tight sd-growth limit (1.2 on every characteristic of the demo) makes the spread criterion decide; the
+     * window then draws the spread criterion's power curve, falling as the true ratio rises towards the limit.
+     */
+    @Test
+    void whenSpreadDecidesItsPowerCurveIsDrawn() {
+        s.openDemo();
+        for (int i = 0; i < s.criteria().rowCount(); i++) {
+            s.criteria().set(i, org.holdpoint.ui.model.CriteriaColumn.SD_GROWTH, "1.2");
+        }
+        f.set(Field.DIFFERENCE, "0");
+        f.planAll();
+        assertThat(f.allPlans().driving().drivenBy()).isEqualTo("spread");
+        var curve = f.drivingCurve();
+        assertThat(curve).isNotNull();
+        assertThat(curve.xLabel()).contains("sd(after) / sd(before)");
+        assertThat(curve.power()[0]).isGreaterThan(curve.power()[curve.power().length - 1]);
+        // at the limit itself the bound passes with probability alpha (SpreadPlanTest checks the power against R)
+        assertThat(curve.power()[curve.power().length - 1]).isCloseTo(0.05, org.assertj.core.api.Assertions.within(1e-9));
     }
 
     @Test
