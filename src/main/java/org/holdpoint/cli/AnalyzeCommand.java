@@ -373,6 +373,11 @@ final class AnalyzeCommand implements Callable<Integer> {
             };
             throw new CommandLine.ParameterException(spec.commandLine(), option + ": " + p.message());
         }
+        if (margin != null && margin.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT && c.lsl != null) {
+            // the limits given here are the ones the margin is judged against
+            throw new CommandLine.ParameterException(spec.commandLine(), "--margin-percent-of-usl: "
+                    + CriteriaCheck.resolvable(margin, new SpecLimits(c.lsl, c.nominal, c.usl)));
+        }
         CharacteristicSettings overrides = new CharacteristicSettings(c.unit, new SpecLimits(c.lsl, c.nominal, c.usl),
                 margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null);
         List<Exclusion> exclusions = new ArrayList<>();

@@ -105,6 +105,14 @@ public final class PlanCommand implements Callable<Integer> {
             + "spread plan (default 1: the spread did not change).")
     Double sdRatio;
 
+    @Option(names = "--margin-percent", paramLabel = "P", description = "With --from: a symmetric margin of P %% of "
+            + "each characteristic's own tolerance width USL - LSL.")
+    Double marginPercent;
+
+    @Option(names = "--margin-percent-of-usl", paramLabel = "P", description = "With --from: an upper margin of P %% "
+            + "of each characteristic's USL (characteristics with an upper limit only).")
+    Double marginPercentOfUsl;
+
     @Option(names = "--capability-min", paramLabel = "R", description = "Plan the capability criterion: parts after "
             + "the change so that the lower bound of Ppk exceeds R (with --ppk; --from takes each characteristic's "
             + "requirement and its baseline).")
@@ -293,6 +301,10 @@ public final class PlanCommand implements Callable<Integer> {
     }
 
     private PlanResult equivalencePlan() {
+        if (marginPercent != null || marginPercentOfUsl != null) {
+            throw bad("--margin-percent and --margin-percent-of-usl need each characteristic's limits: use them with "
+                    + "--from, or give the margin in units (--margin D)");
+        }
         if (confidence != null || reliability != null || failures != null) {
             throw bad("--confidence, --reliability and --failures belong to --success-run");
         }
@@ -337,12 +349,25 @@ public final class PlanCommand implements Callable<Integer> {
             throw bad("--power must lie strictly between alpha = " + alpha + " and 1, got " + target);
         }
         Margin m = margin != null || marginLower != null || marginUpper != null ? margin() : null;
+        if ((marginPercent != null || marginPercentOfUsl != null) && (m != null
+                || marginPercent != null && marginPercentOfUsl != null)) {
+            throw bad("give one kind of margin: --margin, --margin-lower/--margin-upper, --margin-percent or "
+                    + "--margin-percent-of-usl");
+        }
+        org.holdpoint.study.MarginSpec relative = marginPercent != null ? new org.holdpoint.study.MarginSpec(
+                org.holdpoint.study.MarginSpec.Kind.PERCENT_OF_TOLERANCE, marginPercent, marginPercent)
+                : marginPercentOfUsl != null ? new org.holdpoint.study.MarginSpec(
+                        org.holdpoint.study.MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT, null, marginPercentOfUsl) : null;
+        if (relative != null && org.holdpoint.study.CriteriaCheck.margin(relative) != null) {
+            throw bad((marginPercent != null ? "--margin-percent: " : "--margin-percent-of-usl: ")
+                    + org.holdpoint.study.CriteriaCheck.margin(relative));
+        }
         EquivalencePlan plan = EquivalencePlan.withDefaults().withAlpha(alpha).withRatio(ratio).withTargetPower(target);
         double t = difference == null ? 0 : difference;
         org.holdpoint.workflow.PlanFromDataUseCase.Outcome o;
         try {
-            o = org.holdpoint.workflow.PlanFromDataUseCase.run(data, input.settings, m, plan, t, sdGrowthLimit,
-                    sdRatio == null ? 1 : sdRatio);
+            o = org.holdpoint.workflow.PlanFromDataUseCase.run(data, input.settings, m, relative, plan, t,
+                    sdGrowthLimit, sdRatio == null ? 1 : sdRatio);
         } catch (org.holdpoint.workflow.AnalysisException e) {
             throw bad(String.join("; ", e.problems()));
         }

@@ -72,9 +72,6 @@ public final class CriteriaCheck {
             add(out, Field.NOMINAL, "the nominal value (" + text(nominal) + ") must lie between the LSL and the USL");
         }
         add(out, Field.MARGIN, margin(margin));
-        if (margin != null && margin.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT && margin(margin) == null) {
-            add(out, Field.MARGIN, resolvable(margin, new SpecLimits(lsl, nominal, usl)));
-        }
         add(out, Field.SD_GROWTH_LIMIT, positive(sdGrowthLimit, "the sd-growth limit", "1.25"));
         add(out, Field.CAPABILITY_REQUIREMENT, positive(capabilityRequirement, "the capability requirement",
                 "1.33"));

@@ -110,9 +110,37 @@ public final class PlanFromDataUseCase {
      */
     public static Outcome run(ImportOptions data, Path settingsFile, Margin margin, EquivalencePlan plan,
             double difference, Double sdGrowthLimit, double sdRatio) {
+        return run(data, settingsFile, margin, null, plan, difference, sdGrowthLimit, sdRatio);
+    }
+
+    /**
+     * As {@link #run(ImportOptions, Path, Margin, EquivalencePlan, double, Double, double)}, with a margin for
+     * every characteristic given relative to its own limits (in percent of its tolerance, or of its USL).
+     *
+     * @param data           the baseline data
+     * @param settingsFile   criteria file, or null to look beside the data
+     * @param margin         one margin in units for all, or null
+     * @param marginSpec     one relative margin for all, resolved against each characteristic's limits, or null
+     * @param plan           the equivalence planning settings
+     * @param difference     the expected true difference
+     * @param sdGrowthLimit  one sd-growth limit for all, or null
+     * @param sdRatio        the assumed true sd ratio
+     * @return the plans
+     */
+    public static Outcome run(ImportOptions data, Path settingsFile, Margin margin,
+            org.holdpoint.study.MarginSpec marginSpec, EquivalencePlan plan, double difference, Double sdGrowthLimit,
+            double sdRatio) {
         AnalysisOutcome imported = new AnalyzeUseCase().importBaseline(data, settingsFile,
                 AnalysisSettings.defaultSettings());
-        return run(imported.data(), imported.settings(), margin, plan, difference, sdGrowthLimit, sdRatio);
+        AnalysisSettings settings = imported.settings();
+        if (marginSpec != null) {
+            // the relative margin wins over each characteristic's own, resolved against its own limits
+            CharacteristicSettings over = new CharacteristicSettings(null, null, marginSpec, null, null, null);
+            settings = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(),
+                    settings.defaults(), settings.perCharacteristic(), settings.overrides() == null ? over
+                    : settings.overrides().overriddenBy(over), settings.exclusions());
+        }
+        return run(imported.data(), settings, margin, plan, difference, sdGrowthLimit, sdRatio);
     }
 
     /**

@@ -248,6 +248,32 @@ class PlanCommandTest {
         assertThat(err.toString()).contains("--ppk P");
     }
 
+    /**
+     * Margins relative to each characteristic's own limits in plan --from: 20 % of a 0.02 tolerance is ±0.004,
+     * 10 % of a USL of 0.05 an upper margin of 0.005 (arithmetic); a characteristic whose limits do not allow it
+     * is reported on its own row. Invented baseline.
+     */
+    @Test
+    void relativeMarginsAreResolvedPerCharacteristic() throws IOException {
+        Path baseline = Files.writeString(dir.resolve("housing.csv"),
+                "flatness,bore\n0.011,25.001\n0.014,24.998\n0.009,25.003\n0.012,25.000\n0.016,24.997\n0.010,25.002\n");
+        Files.writeString(dir.resolve("housing.settings.csv"),
+                "characteristic,unit,lsl,usl\nflatness,mm,,0.05\nbore,mm,24.99,25.01\n");
+        Path json = dir.resolve("rel.json");
+        assertThat(run("--from", baseline.toString(), "--power", "0.9", "--margin-percent", "20", "--json",
+                json.toString())).as(err.toString()).isZero();
+        JsonNode rows = json(json).path("characteristics");
+        assertThat(rows.get(1).path("marginUpper").asDouble()).isEqualTo(0.004);
+        assertThat(rows.get(0).path("note").asText()).contains("needs both LSL and USL");
+        assertThat(run("--from", baseline.toString(), "--power", "0.9", "--margin-percent-of-usl", "10", "--json",
+                json.toString(), "--overwrite")).as(err.toString()).isZero();
+        rows = json(json).path("characteristics");
+        assertThat(rows.get(0).path("marginUpper").asDouble()).isEqualTo(0.005);
+        assertThat(rows.get(0).path("marginLower").isNull()).isTrue();
+        assertThat(run("--margin-percent", "20", "--difference", "0", "--sd", "1", "--power", "0.8")).isEqualTo(2);
+        assertThat(err.toString()).contains("use them with --from");
+    }
+
     @Test
     void badInputExitsWithTwoAndAOneLineMessage() {
         String[][] cases = {
