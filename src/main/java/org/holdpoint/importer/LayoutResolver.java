@@ -331,11 +331,8 @@ final class LayoutResolver {
     }
 
     private static int letters(String s) {
-        int c = 0;
-        for (char ch : s.toCharArray()) {
-            c = c * 26 + (ch - 'A' + 1);
-        }
-        return c - 1;
+        // column letters as the spreadsheet writes them (A = 0, AA = 26), by POI's own rule
+        return org.apache.poi.ss.util.CellReference.convertColStringToIndex(s);
     }
 
     /** A column whose text cells below the header are exactly the two labels (case-insensitive). */

@@ -189,7 +189,10 @@ final class SheetCells {
         }
     }
 
-    /** 0-based column of a reference such as "AB12", or −1. */
+    /**
+     * 0-based column of a reference such as "AB12", or −1. Hand-written rather than POI's CellReference: it is
+     * called for every cell of a streamed sheet and must not allocate (a million cells per import).
+     */
     static int columnOf(CharSequence ref) {
         int c = 0;
         int i = 0;
