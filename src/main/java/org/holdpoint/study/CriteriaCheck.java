@@ -121,7 +121,8 @@ public final class CriteriaCheck {
         }
         for (Double p : new Double[] {lo, hi}) {
             if (p != null && !(p > 0 && p <= MAX_MARGIN_PERCENT)) {
-                return "a margin in % of the tolerance width must lie above 0 and at most " + text(MAX_MARGIN_PERCENT)
+                return "a margin in % of the " + (margin.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT ? "USL"
+                        : "tolerance width") + " must lie above 0 and at most " + text(MAX_MARGIN_PERCENT)
                         + ", e.g. 10; got " + text(p);
             }
         }

@@ -252,4 +252,75 @@ public final class PlanFromDataUseCase {
         }
         return new Outcome(plans, driving);
     }
+
+    /**
+     * The power curve of a spread or capability plan: power at the planned size against the true value the
+     * criterion judges.
+     *
+     * @param title    the chart title
+     * @param xLabel   the x axis
+     * @param subtitle what the curve shows
+     * @param yLabel   the y axis
+     * @param x        the true values, increasing
+     * @param power    the power at each
+     * @param target   the target power
+     */
+    public record Curve(String title, String xLabel, String subtitle, String yLabel, double[] x, double[] power,
+            double target) {
+    }
+
+    /**
+     * The power curve of the criterion that decides the driving characteristic's size, when that is spread or
+     * capability (the equivalence curve is the plan's own power table): power at the planned size against the
+     * true sd ratio, or against the true Ppk (the baseline's centring kept, its sd scaled).
+     *
+     * @param o  the plans
+     * @param d  the data they were made from
+     * @param settings the criteria
+     * @param eq the equivalence planning settings (ratio, target)
+     * @return the curve, or null when the equivalence test decides or nothing was planned
+     */
+    public static Curve drivingCurve(Outcome o, Dataset d, AnalysisSettings settings, EquivalencePlan eq) {
+        CharacteristicPlan p = o.driving();
+        if (p == null) {
+            return null;
+        }
+        int points = 25;
+        double[] x = new double[points];
+        double[] y = new double[points];
+        if ("spread".equals(p.drivenBy()) && p.spread() != null) {
+            var r = p.spread();
+            var sp = org.holdpoint.stats.SpreadPlan.forLimit(r.limit()).withAlpha(r.alpha()).withRatio(eq.ratio());
+            double lo = Math.min(0.5, r.limit() / 2);
+            for (int i = 0; i < points; i++) {
+                x[i] = lo + (r.limit() - lo) * i / (points - 1);
+                y[i] = sp.withSdRatio(x[i]).power(r.nBefore());
+            }
+            return new Curve("Power at " + r.nBefore() + " before + " + r.nAfter() + " after — " + p.name(),
+                    "true sd(after) / sd(before)", "power of the spread criterion (sd-ratio bound below "
+                    + Format.num(r.limit()) + ") against the true ratio", "power (probability the bound passes)", x,
+                    y, eq.targetPower());
+        }
+        if ("capability".equals(p.drivenBy()) && p.capability() != null) {
+            var r = p.capability();
+            var c = d.characteristics().stream().filter(q -> q.name().equals(p.name())).findFirst().orElseThrow();
+            var spec = settings.resolve(p.name()).spec();
+            double mean = org.holdpoint.stats.Descriptives.of(c.before().sample()).mean();
+            double a = spec.usl() == null ? Double.POSITIVE_INFINITY : (spec.usl() - mean) / p.sd();
+            double b = spec.lsl() == null ? Double.POSITIVE_INFINITY : (mean - spec.lsl()) / p.sd();
+            var cp = org.holdpoint.stats.CapabilityPlan.forRequirement(r.requirement()).withAlpha(r.alpha());
+            double lo = r.requirement() * 0.9;
+            double hi = Math.max(r.truePpk() * 1.4, r.requirement() * 1.5);
+            for (int i = 0; i < points; i++) {
+                x[i] = lo + (hi - lo) * i / (points - 1);
+                double scale = x[i] / r.truePpk();
+                y[i] = cp.power(r.nAfter(), a * scale, b * scale);
+            }
+            return new Curve("Power at " + r.nAfter() + " after — " + p.name(), "true Ppk (the process's centring "
+                    + "kept, its sd scaled)", "power of the capability criterion (Ppk bound above "
+                    + Format.num(r.requirement()) + ") against the true Ppk", "power (probability the bound passes)",
+                    x, y, eq.targetPower());
+        }
+        return null;
+    }
 }

@@ -99,70 +99,14 @@ public final class PlanForm {
     private PlanResult result;
     private String resultFor = "";
     private PlanFromDataUseCase.Outcome all;
-    private Curve drivingCurve;
-
-    /**
-     * The power curve of the criterion that decides the size when it is not the equivalence test: power at the
-     * planned size against the true value the criterion judges.
-     *
-     * @param title    the chart title
-     * @param xLabel   the x axis
-     * @param subtitle what the curve shows
-     * @param yLabel   the y axis
-     * @param x        the true values, increasing
-     * @param power    the power at each
-     * @param target   the target power
-     */
-    public record Curve(String title, String xLabel, String subtitle, String yLabel, double[] x, double[] power,
-            double target) {
-    }
+    private PlanFromDataUseCase.Curve drivingCurve;
 
     /** @return the curve of the driving criterion of the last "plan all" when spread or capability drives, or null */
-    public Curve drivingCurve() {
+    public PlanFromDataUseCase.Curve drivingCurve() {
         return drivingCurve;
     }
 
-    /** The curve of a spread or capability plan at its size, on the worker thread. */
-    private static Curve curveOf(PlanFromDataUseCase.CharacteristicPlan p, Dataset d, AnalysisSettings settings,
-            EquivalencePlan eq) {
-        int points = 25;
-        double[] x = new double[points];
-        double[] y = new double[points];
-        if ("spread".equals(p.drivenBy()) && p.spread() != null) {
-            var r = p.spread();
-            var sp = org.holdpoint.stats.SpreadPlan.forLimit(r.limit()).withAlpha(r.alpha()).withRatio(eq.ratio());
-            double lo = Math.min(0.5, r.limit() / 2);
-            for (int i = 0; i < points; i++) {
-                x[i] = lo + (r.limit() - lo) * i / (points - 1);
-                y[i] = sp.withSdRatio(x[i]).power(r.nBefore());
-            }
-            return new Curve("Power at " + r.nBefore() + " before + " + r.nAfter() + " after — " + p.name(),
-                    "true sd(after) / sd(before)", "power of the spread criterion (sd-ratio bound below "
-                    + org.holdpoint.workflow.Format.num(r.limit()) + ") against the true ratio", "power (probability the bound passes)", x,
-                    y, eq.targetPower());
-        }
-        if ("capability".equals(p.drivenBy()) && p.capability() != null) {
-            var r = p.capability();
-            var c = d.characteristics().stream().filter(q -> q.name().equals(p.name())).findFirst().orElseThrow();
-            var spec = settings.resolve(p.name()).spec();
-            double mean = org.holdpoint.stats.Descriptives.of(c.before().sample()).mean();
-            double a = spec.usl() == null ? Double.POSITIVE_INFINITY : (spec.usl() - mean) / p.sd();
-            double b = spec.lsl() == null ? Double.POSITIVE_INFINITY : (mean - spec.lsl()) / p.sd();
-            var cp = org.holdpoint.stats.CapabilityPlan.forRequirement(r.requirement()).withAlpha(r.alpha());
-            double lo = r.requirement() * 0.9;
-            double hi = Math.max(r.truePpk() * 1.4, r.requirement() * 1.5);
-            for (int i = 0; i < points; i++) {
-                x[i] = lo + (hi - lo) * i / (points - 1);
-                double scale = x[i] / r.truePpk();
-                y[i] = cp.power(r.nAfter(), a * scale, b * scale);
-            }
-            return new Curve("Power at " + r.nAfter() + " after — " + p.name(), "true Ppk (the process's centring "
-                    + "kept, its sd scaled)", "power of the capability criterion (Ppk bound above "
-                    + org.holdpoint.workflow.Format.num(r.requirement()) + ") against the true Ppk", "power (probability the bound passes)",
-                    x, y, eq.targetPower());
-        }
-        return null;
-    }
+
     private boolean stale;
 
     PlanForm(StudySession session) {
@@ -442,7 +386,7 @@ public final class PlanForm {
         Dataset d = session.data();
         session.start("Planning every characteristic", x -> {
             var out = PlanFromDataUseCase.run(d, settings, null, p, t, null, 1);
-            Curve curve = out.driving() == null ? null : curveOf(out.driving(), d, settings, p);
+            PlanFromDataUseCase.Curve curve = PlanFromDataUseCase.drivingCurve(out, d, settings, p);
             return java.util.Map.entry(out, java.util.Optional.ofNullable(curve));
         }, done -> {
             var o = done.getKey();
