@@ -253,10 +253,10 @@ public final class EquivalenceChart {
      */
     static String otherFailures(CharacteristicResult r) {
         List<String> failed = new ArrayList<>();
-        if (r.sdGrowth() != null && !r.sdGrowth().met()) {
+        if (r.spreadFailed()) {
             failed.add("spread");
         }
-        if (r.checks() != null && Boolean.FALSE.equals(r.checks().capabilityMet())) {
+        if (r.capabilityFailed()) {
             failed.add("capability");
         }
         return String.join(" and ", failed);

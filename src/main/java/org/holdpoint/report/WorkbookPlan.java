@@ -356,10 +356,10 @@ final class WorkbookPlan {
         } else if (!eq.conclusion().claimHolds()) {
             failed.add("mean (" + eq.conclusion().words() + ")");
         }
-        if (c.sdGrowth() != null && !c.sdGrowth().met()) {
+        if (c.spreadFailed()) {
             failed.add("spread");
         }
-        if (c.checks() != null && Boolean.FALSE.equals(c.checks().capabilityMet())) {
+        if (c.capabilityFailed()) {
             failed.add("capability");
         }
         return failed.isEmpty() ? "all criteria met" : String.join("; ", failed);

@@ -104,4 +104,14 @@ public record CharacteristicResult(String name, String unit, CharacteristicSetti
     public EquivalenceResult decidingTost() {
         return method == LocationMethod.POOLED ? tostPooled : tost;
     }
+
+    /** @return whether the spread criterion was judged and not met */
+    public boolean spreadFailed() {
+        return sdGrowth != null && !sdGrowth.met();
+    }
+
+    /** @return whether the capability requirement was judged and not met */
+    public boolean capabilityFailed() {
+        return checks != null && Boolean.FALSE.equals(checks.capabilityMet());
+    }
 }

@@ -47,7 +47,7 @@ final class Verdicts {
             };
             reasons.add(c.words() + ": " + interval + " " + Format.margin(eq, decimals));
         }
-        if (r.sdGrowth() != null && !r.sdGrowth().met()) {
+        if (r.spreadFailed()) {
             reasons.add(String.format(Locale.ROOT, "spread: the %s upper bound of sd(after)/sd(before) is %s, not "
                     + "below the limit %s", Format.percent(r.sdGrowth().level()), Format.ratio(r.sdGrowth().upperBound()),
                     Format.num(r.sdGrowth().limit())));
@@ -55,7 +55,7 @@ final class Verdicts {
                 status = Status.FAILED;
             }
         }
-        if (r.checks() != null && Boolean.FALSE.equals(r.checks().capabilityMet())) {
+        if (r.capabilityFailed()) {
             var cap = r.checks().after().capability();
             reasons.add(String.format(Locale.ROOT, "capability: the %s lower bound of Ppk after the change is %s, not "
                     + "above the requirement %s", Format.percent(1 - cap.alpha()), Format.ratio(cap.ppkLower()),

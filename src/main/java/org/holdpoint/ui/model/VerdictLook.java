@@ -96,11 +96,11 @@ public enum VerdictLook {
             return String.join("; ", r.verdict().reasons());
         }
         java.util.List<String> failed = new java.util.ArrayList<>();
-        if (r.sdGrowth() != null && !r.sdGrowth().met()) {
+        if (r.spreadFailed()) {
             failed.add("spread: sd ratio bound " + org.holdpoint.workflow.Format.ratio(r.sdGrowth().upperBound())
                     + " above " + org.holdpoint.workflow.Format.num(r.sdGrowth().limit()));
         }
-        if (r.checks() != null && Boolean.FALSE.equals(r.checks().capabilityMet())) {
+        if (r.capabilityFailed()) {
             var cap = r.checks().after().capability();
             failed.add("capability: Ppk bound " + (cap == null || cap.ppkLower() == null ? "undefined"
                     : org.holdpoint.workflow.Format.ratio(cap.ppkLower())) + " below "
