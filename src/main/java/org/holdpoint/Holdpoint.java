@@ -6,6 +6,7 @@ import org.holdpoint.cli.HoldpointCommand;
 import org.holdpoint.ui.swing.MainWindow;
 import org.holdpoint.workflow.ArchiveAccess;
 import org.holdpoint.workflow.WindowLauncher;
+import picocli.CommandLine;
 
 /**
  * The launcher and composition root: with no arguments on a machine with a display it opens the
@@ -16,9 +17,19 @@ public final class Holdpoint {
     private Holdpoint() {
     }
 
-    /** Connects the adapters to the use cases: the JDBC archive behind the archive port. */
-    public static void wire() {
-        ArchiveAccess.install(url -> url == null ? JdbcArchive.openDefault() : JdbcArchive.open(url));
+    /** @return the archive port with the JDBC adapter behind it (H2 embedded by default, PostgreSQL by URL) */
+    public static ArchiveAccess archives() {
+        return new ArchiveAccess(url -> url == null ? JdbcArchive.openDefault() : JdbcArchive.open(url));
+    }
+
+    /**
+     * The command line wired to its adapters.
+     *
+     * @param launcher opens the window for {@code holdpoint gui}
+     * @return the command line
+     */
+    public static CommandLine commandLine(WindowLauncher launcher) {
+        return HoldpointCommand.create(launcher, archives());
     }
 
     /**
@@ -27,10 +38,10 @@ public final class Holdpoint {
      * @param args command-line arguments
      */
     public static void main(String[] args) {
-        wire();
+        ArchiveAccess archives = archives();
         boolean[] opened = {false};
         WindowLauncher launcher = () -> {
-            MainWindow.launch();
+            MainWindow.launch(archives);
             opened[0] = true;
         };
         if (args.length == 0 && !GraphicsEnvironment.isHeadless()) {
@@ -39,7 +50,7 @@ public final class Holdpoint {
         }
         int code;
         try {
-            code = HoldpointCommand.create(launcher).execute(args);
+            code = HoldpointCommand.create(launcher, archives).execute(args);
         } catch (OutOfMemoryError e) {
             // one line, exit 3: never a stack trace, never the "edited" code of verify
             System.err.println("holdpoint: out of memory (the Java heap of " + (Runtime.getRuntime().maxMemory() >> 20)

@@ -2,6 +2,7 @@ package org.holdpoint;
 
 import static com.tngtech.archunit.base.DescribedPredicate.describe;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.fields;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
@@ -15,15 +16,16 @@ import java.util.Set;
 
 /**
  * The package dependency rules (DEVELOPERS.md, "Packages": stats pure, study the model, adapters apart,
- * workflow the use cases, thin shells), one rule per direction, checked on the main classes. Rules on
- * packages that do not exist yet allow an empty "should" so they bite as soon as the package
- * appears.
+ * result the rules of the verdict, workflow the use cases, thin shells; docs/architecture.md), one rule per
+ * direction, checked on the main classes. ArchUnit fails a rule whose "that" finds no class, so a renamed
+ * package breaks its rules instead of passing them.
  */
 @AnalyzeClasses(packages = "org.holdpoint", importOptions = ImportOption.DoNotIncludeTests.class)
 class ArchitectureTest {
     private static final String ROOT = "org.holdpoint";
     private static final String STATS = ROOT + ".stats..";
     private static final String STUDY = ROOT + ".study..";
+    private static final String RESULT = ROOT + ".result..";
     private static final String IMPORTER = ROOT + ".importer..";
     private static final String CHART = ROOT + ".chart..";
     private static final String REPORT = ROOT + ".report..";
@@ -32,8 +34,8 @@ class ArchitectureTest {
     private static final String CLI = ROOT + ".cli..";
     private static final String UI = ROOT + ".ui..";
     private static final String FILES = ROOT + ".files..";
-    private static final String[] PROJECT = {STATS, STUDY, FILES, IMPORTER, CHART, REPORT, ARCHIVE, WORKFLOW, CLI,
-        UI};
+    private static final String[] PROJECT = {STATS, STUDY, RESULT, FILES, IMPORTER, CHART, REPORT, ARCHIVE, WORKFLOW,
+        CLI, UI};
 
     private static final String[] IO_AND_UI = {"java.io..", "java.nio.file..", "java.awt..", "javax.swing..",
         "java.sql..", "javax.sql..", "org.apache.poi..", "org.jfree.."};
@@ -75,6 +77,22 @@ class ArchitectureTest {
                     c.getPackageName().equals("java.io")
                             && (c.getSimpleName().startsWith("File") || c.getSimpleName().equals("RandomAccessFile"))));
 
+    // ---- result: the result model and the verdict rules, on the model and the numerics only ----
+
+    @ArchTest
+    static final ArchRule resultDependsOnlyOnStudyAndStats = noClasses().that().resideInAPackage(RESULT)
+            .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY, RESULT))
+            .orShould().dependOnClassesThat().resideInAPackage(ROOT);
+
+    @ArchTest
+    static final ArchRule resultHasNoIoDatabaseOrUi = noClasses().that().resideInAPackage(RESULT)
+            .should().dependOnClassesThat().resideInAnyPackage(IO_AND_UI);
+
+    @ArchTest
+    static final ArchRule studyNeverSeesTheResults = noClasses().that().resideInAPackage(STUDY)
+            .should().dependOnClassesThat().resideInAPackage(RESULT)
+            .because("the model of the study's inputs is read by the rules, never the other way round");
+
     // ---- files: the one atomic-write and hash helper, a leaf every adapter may use ----
 
     @ArchTest
@@ -91,7 +109,7 @@ class ArchitectureTest {
             .should().callMethod(java.security.MessageDigest.class, "getInstance", String.class)
             .because("every SHA-256 is computed by files.Sha256");
 
-    // ---- adapters: importer, chart, report, archive depend on study/stats (and files) only, never on each other ----
+    // ---- adapters: importer, chart, report, archive depend on study/result/stats (and files) only, never on each other ----
 
     @ArchTest
     static final ArchRule importerDependsOnlyOnStudyAndStats = adapterRule(IMPORTER);
@@ -107,7 +125,7 @@ class ArchitectureTest {
 
     private static ArchRule adapterRule(String adapter) {
         return noClasses().that().resideInAPackage(adapter)
-                .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY, FILES, adapter))
+                .should().dependOnClassesThat().resideInAnyPackage(projectExcept(STATS, STUDY, RESULT, FILES, adapter))
                 .orShould().dependOnClassesThat().resideInAPackage(ROOT);
     }
 
@@ -130,6 +148,15 @@ class ArchitectureTest {
     @ArchTest
     static final ArchRule workflowReachesTheArchiveOnlyThroughItsPort = noClasses().that().resideInAPackage(WORKFLOW)
             .should().dependOnClassesThat().resideInAPackage(ARCHIVE);
+
+    @ArchTest
+    static final ArchRule noMutableStaticStateBelowTheShells = fields().that().areStatic()
+            .and().areDeclaredInClassesThat().resideInAnyPackage(STATS, STUDY, RESULT, WORKFLOW, IMPORTER, REPORT, CHART)
+            // the one exception mirrors POI's own process-wide temporary-file setting, made once per process
+            .and().areNotDeclaredIn("org.holdpoint.report.PoiTempFiles")
+            .should().beFinal()
+            .because("adapters reach the use cases through constructors from the composition root, never through a "
+                    + "static locator that one caller can change under another");
 
     // ---- cli and ui: thin shells over workflow ----
 

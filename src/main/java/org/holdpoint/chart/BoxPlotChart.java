@@ -125,7 +125,7 @@ public final class BoxPlotChart {
      * @param theme  the theme
      * @return the same chart
      */
-    public static JFreeChart withCriteria(JFreeChart chart, org.holdpoint.study.CharacteristicResult result,
+    public static JFreeChart withCriteria(JFreeChart chart, org.holdpoint.result.CharacteristicResult result,
             ChartTheme theme) {
         CategoryPlot plot = chart.getCategoryPlot();
         var margin = result.margin();

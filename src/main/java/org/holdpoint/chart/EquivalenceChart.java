@@ -13,7 +13,7 @@ import java.util.Map;
 import org.holdpoint.stats.Conclusion;
 import org.holdpoint.stats.EquivalenceResult;
 import org.holdpoint.stats.Margin;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;
 import org.jfree.chart.LegendItemCollection;
@@ -96,7 +96,7 @@ public final class EquivalenceChart {
             CharacteristicResult r = results.get(row);
             EquivalenceResult t = r.decidingTost();
             left[row] = rowLabel(r);
-            if (r.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+            if (r.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE) {
                 right[row] = "not assessable (see the verdict)";
                 continue;
             }

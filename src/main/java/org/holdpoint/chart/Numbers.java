@@ -2,6 +2,7 @@ package org.holdpoint.chart;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import org.holdpoint.result.Format;
 
 /** Number text on charts: up to six significant digits, no exponent for everyday magnitudes, Locale-free. */
 final class Numbers {
@@ -24,17 +25,15 @@ final class Numbers {
 
     /**
      * A value in a characteristic's unit with a fixed number of decimals (its resolution plus two for a
-     * statistic, its resolution for a bin width), so that a chart shows what the text and the workbook show.
+     * statistic, its resolution for a bin width), rounded by the same rule as the text and the workbook
+     * ({@link Format#fixed}), with a typographic minus.
      *
      * @param v        a finite value
      * @param decimals 0..10
      * @return e.g. "12.0483" or "−0.0035"
      */
     static String fixed(double v, int decimals) {
-        String s = new BigDecimal(v).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
-        if (s.matches("-0\\.?0*")) {
-            s = s.substring(1);
-        }
+        String s = Format.fixed(v, decimals);
         return s.startsWith("-") ? "\u2212" + s.substring(1) : s;
     }
 

@@ -13,9 +13,9 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * All charts of a change study: the equivalence picture (in pages of rows) and, per characteristic, the box plot,

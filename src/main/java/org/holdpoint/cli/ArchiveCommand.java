@@ -22,7 +22,6 @@ import org.holdpoint.study.AuditEvent;
 import org.holdpoint.study.ChangeRecordArchive;
 import org.holdpoint.study.StudyVersion;
 import org.holdpoint.study.VerificationReport;
-import org.holdpoint.workflow.ArchiveAccess;
 import org.holdpoint.workflow.ArchiveUseCase;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -69,7 +68,7 @@ final class ArchiveCommand implements Runnable {
 
         ChangeRecordArchive open() {
             try {
-                return ArchiveAccess.open(url);
+                return HoldpointCommand.archives(spec).open(url);
             } catch (ArchiveException e) {
                 throw new UserInputException("cannot open the archive: %s", e.getMessage());
             }

@@ -1,5 +1,6 @@
 package org.holdpoint.cli;
 
+import org.holdpoint.workflow.ArchiveAccess;
 import org.holdpoint.workflow.Version;
 import org.holdpoint.workflow.WindowLauncher;
 import picocli.CommandLine;
@@ -24,6 +25,16 @@ public final class HoldpointCommand implements Runnable {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    private ArchiveAccess archives;
+
+    /**
+     * @param spec the spec of any command of this command line
+     * @return the archive access the command line was built with
+     */
+    static ArchiveAccess archives(CommandLine.Model.CommandSpec spec) {
+        return ((HoldpointCommand) spec.root().userObject()).archives;
+    }
+
     @Override
     public void run() {
         spec.commandLine().usage(spec.commandLine().getOut());
@@ -38,22 +49,18 @@ public final class HoldpointCommand implements Runnable {
     }
 
     /**
-     * The configured command line: output through its writers, exit codes mapped.
-     *
-     * @return the command line
-     */
-    public static CommandLine create() {
-        return create(WindowLauncher.NONE);
-    }
-
-    /**
-     * The configured command line with the {@code gui} subcommand opening the window through {@code launcher}.
+     * The configured command line with the {@code gui} subcommand opening the window through {@code launcher}
+     * and the archive commands reaching the archive through {@code archives}; output through its writers,
+     * exit codes mapped.
      *
      * @param launcher opens the window (supplied by the composition root)
+     * @param archives opens the change-record archive (supplied by the composition root)
      * @return the command line
      */
-    public static CommandLine create(WindowLauncher launcher) {
-        CommandLine cl = new CommandLine(new HoldpointCommand());
+    public static CommandLine create(WindowLauncher launcher, ArchiveAccess archives) {
+        HoldpointCommand root = new HoldpointCommand();
+        root.archives = java.util.Objects.requireNonNull(archives, "archives");
+        CommandLine cl = new CommandLine(root);
         cl.addSubcommand("gui", new GuiCommand(launcher));
         cl.setExecutionExceptionHandler(new Failures());
         cl.setParameterExceptionHandler(new Failures());

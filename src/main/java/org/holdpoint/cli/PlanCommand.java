@@ -11,7 +11,7 @@ import org.holdpoint.stats.Margin;
 import org.holdpoint.stats.PlanResult;
 import org.holdpoint.stats.CapabilityPlan;
 import org.holdpoint.stats.SpreadPlan;
-import org.holdpoint.workflow.Format;
+import org.holdpoint.result.Format;
 import org.holdpoint.stats.StatsException;
 import org.holdpoint.stats.SuccessRunPlan;
 import org.holdpoint.stats.SuccessRunResult;
@@ -413,10 +413,10 @@ public final class PlanCommand implements Callable<Integer> {
             String spreadP = p.spread() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f",
                     p.spread().achievedPower());
             out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s %8s %8s  %s%n", p.name(),
-                    org.holdpoint.workflow.Format.num(p.sd(), 4), p.margin() == null ? "-" : "("
-                            + (p.margin().lower() == null ? "none" : org.holdpoint.workflow.Format.num(
+                    org.holdpoint.result.Format.num(p.sd(), 4), p.margin() == null ? "-" : "("
+                            + (p.margin().lower() == null ? "none" : org.holdpoint.result.Format.num(
                                     p.margin().lower(), 4)) + ", "
-                            + (p.margin().upper() == null ? "none" : org.holdpoint.workflow.Format.num(
+                            + (p.margin().upper() == null ? "none" : org.holdpoint.result.Format.num(
                                     p.margin().upper(), 4)) + ")",
                     p.plan() == null ? "-" : p.plan().n() + ("equivalence".equals(p.drivenBy())
                             && (p.spread() != null || p.capability() != null) ? "*" : ""),

@@ -8,13 +8,13 @@ import org.holdpoint.stats.EquivalenceResult;
 import org.holdpoint.stats.TTestResult;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.Cautions;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.ImportReport;
 import org.holdpoint.study.InputInfo;
-import org.holdpoint.study.StudyResult;
-import org.holdpoint.study.Verdict;
-import org.holdpoint.workflow.Format;
+import org.holdpoint.result.StudyResult;
+import org.holdpoint.result.Verdict;
+import org.holdpoint.result.Format;
 import org.holdpoint.workflow.Version;
 
 /** The readable text result of {@code holdpoint analyze}: a summary table, details, verdict, cautions. */
@@ -207,7 +207,7 @@ final class TextOutput {
         }
     }
 
-    private void printChecks(String name, org.holdpoint.study.AssumptionChecks c) {
+    private void printChecks(String name, org.holdpoint.result.AssumptionChecks c) {
         if (c.rankSum() != null) {
             var r = c.rankSum();
             out.printf(Locale.ROOT, "  Rank sum (Wilcoxon-Mann-Whitney, %s): U = %s, p = %s; Hodges-Lehmann shift %s, %s "
@@ -226,7 +226,7 @@ final class TextOutput {
         }
         out.printf(Locale.ROOT, "  Shape: before %s; after %s%n", shape(c.before().normality()),
                 shape(c.after().normality()));
-        for (var g : new org.holdpoint.study.GroupChecks[] {c.before(), c.after()}) {
+        for (var g : new org.holdpoint.result.GroupChecks[] {c.before(), c.after()}) {
             var cap = g.capability();
             if (cap != null) {
                 out.printf(Locale.ROOT, "  Capability %s: Pp = %s, Ppk = %s (%s lower bound %s)%s, expected out of "

@@ -9,10 +9,10 @@ import org.holdpoint.stats.RankInterval;
 import org.holdpoint.stats.RankMethod;
 import org.holdpoint.stats.RankSumResult;
 import org.holdpoint.stats.SignedRankResult;
-import org.holdpoint.study.AssumptionChecks;
-import org.holdpoint.study.CharacteristicResult;
-import org.holdpoint.study.FlaggedValue;
-import org.holdpoint.study.GroupChecks;
+import org.holdpoint.result.AssumptionChecks;
+import org.holdpoint.result.CharacteristicResult;
+import org.holdpoint.result.FlaggedValue;
+import org.holdpoint.result.GroupChecks;
 
 /**
  * The second page of a characteristic's detail section: shape and outliers (Shapiro–Wilk, Anderson–Darling,

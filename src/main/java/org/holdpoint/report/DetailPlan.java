@@ -4,8 +4,9 @@ import java.util.List;
 import org.holdpoint.stats.Descriptives;
 import org.holdpoint.stats.EquivalenceResult;
 import org.holdpoint.stats.TTestResult;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.result.Verdict;
 
 /**
  * The detail sections: one printed page per characteristic with descriptives, criteria, the difference
@@ -62,7 +63,7 @@ final class DetailPlan {
         s.height(r + 1, lines(reasons, 80) * 12f + 4);
         descriptives(r + 3, n, c, d);
         criteria(r + 3, n, c, d);
-        if (c.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+        if (c.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE) {
             s.text(r + 13, c0, "No test was computed: the data of this characteristic cannot show a change (see the "
                     + "verdict above). The other characteristics were analysed.", Style.WRAP, n + ": not assessable");
             s.merge(r + 13, r + 13, c0, c0 + 5);

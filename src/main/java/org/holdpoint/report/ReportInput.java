@@ -4,7 +4,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.holdpoint.study.ChangeStudy;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * Everything the sign-off workbook shows and embeds. The caller builds the canonical study record

@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Map;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.Cautions;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Exclusion;
 import org.holdpoint.study.ImportReport;

@@ -1,7 +1,7 @@
 package org.holdpoint.report;
 
 import java.util.Locale;
-import org.holdpoint.study.Verdict;
+import org.holdpoint.result.Verdict;
 
 /** Text for people inside the workbook: numbers in sentences, levels, verdict marks. Locale-independent. */
 final class Texts {

@@ -6,14 +6,13 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.holdpoint.stats.Descriptives;
 import org.holdpoint.stats.EquivalenceResult;
 import org.holdpoint.study.ChangeDescription;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.Signature;
-import org.holdpoint.study.StudyResult;
-import org.holdpoint.study.Verdict;
+import org.holdpoint.result.StudyResult;
+import org.holdpoint.result.Verdict;
 
 /**
  * Where every shown value of a sign-off workbook goes, given the template's anchors. The writer writes
@@ -213,7 +212,7 @@ final class WorkbookPlan {
         EquivalenceResult eq = c.decidingTost();
         s.text(row, c0 + 9, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL,
                 n + ": equivalence CI");
-        s.text(row, c0 + 10, c.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE
+        s.text(row, c0 + 10, c.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE
                 ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL,
                 n + ": equivalence conclusion");
         s.number(row, c0 + 11, c.variance() == null ? null : c.variance().ratio(), Style.NUMBER, 3,
@@ -331,7 +330,7 @@ final class WorkbookPlan {
         EquivalenceResult eq = c.decidingTost();
         s.text(row, c0 + 8, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL_WRAP,
                 n + ": equivalence CI");
-        s.text(row, c0 + 9, c.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE
+        s.text(row, c0 + 9, c.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE
                 ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL_WRAP,
                 n + ": equivalence conclusion");
         // an interval wraps after its comma: two lines; a long name more

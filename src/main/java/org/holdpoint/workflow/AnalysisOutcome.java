@@ -3,7 +3,7 @@ package org.holdpoint.workflow;
 import java.nio.file.Path;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.Dataset;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * What one analysis produced: the data as imported, the settings in force and the results.

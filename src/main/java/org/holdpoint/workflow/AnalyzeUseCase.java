@@ -14,7 +14,7 @@ import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.Progress;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * Import, then analyse: the use case behind {@code holdpoint analyze} and the window's analysis.

@@ -11,7 +11,8 @@ import org.holdpoint.study.ChangeRecordArchive;
 
 /**
  * How the use cases reach the change-record archive: through the {@link ChangeRecordArchive} port,
- * opened by a function the composition root installs (the JDBC adapter). The URL comes from the
+ * opened by the adapter the composition root hands to the command line and the window when it builds
+ * them (no global state: two command lines in one process may use two archives). The URL comes from the
  * {@code --archive} option, else from {@code archive.url} in the settings file
  * ({@code $XDG_CONFIG_HOME/holdpoint/settings.properties}, default {@code ~/.config/holdpoint/}), else
  * the embedded default in the user's data folder.
@@ -28,34 +29,36 @@ public final class ArchiveAccess {
         ChangeRecordArchive open(String url) throws ArchiveException;
     }
 
-    private static volatile Opener opener;
+    private final Opener opener;
 
-    private ArchiveAccess() {
+    /**
+     * @param opener the adapter that opens an archive (the composition root supplies the JDBC one)
+     */
+    public ArchiveAccess(Opener opener) {
+        this.opener = java.util.Objects.requireNonNull(opener, "opener");
     }
 
     /**
-     * Installs the adapter; called once by the composition root.
+     * For a build without an archive adapter (and tests that never reach the archive): opening says so.
      *
-     * @param o the opener
+     * @return an access whose every open fails with a plain message
      */
-    public static void install(Opener o) {
-        opener = o;
+    public static ArchiveAccess none() {
+        return new ArchiveAccess(url -> {
+            throw new ArchiveException(ArchiveException.Reason.DATABASE, "no archive adapter is wired into this "
+                    + "build");
+        });
     }
 
     /**
      * Opens the archive at a URL, at the configured one, or the embedded default.
      *
      * @param url an explicit JDBC URL, or null
-     * @return the archive
+     * @return the archive (the caller closes it)
      * @throws ArchiveException when it cannot be opened
      */
-    public static ChangeRecordArchive open(String url) throws ArchiveException {
-        Opener o = opener;
-        if (o == null) {
-            throw new ArchiveException(ArchiveException.Reason.DATABASE,
-                    "no archive adapter is installed in this build");
-        }
-        return o.open(url != null ? url : configuredUrl(System.getenv(), Path.of(System.getProperty("user.home"))));
+    public ChangeRecordArchive open(String url) throws ArchiveException {
+        return opener.open(url != null ? url : configuredUrl(System.getenv(), Path.of(System.getProperty("user.home"))));
     }
 
     /**

@@ -14,7 +14,7 @@ import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.Exclusion;
 import org.holdpoint.study.Progress;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 import org.holdpoint.study.StudyVersion;
 
 /**

@@ -24,12 +24,13 @@ import org.holdpoint.stats.SignedRankResult;
 import org.holdpoint.stats.SignedRankTest;
 import org.holdpoint.stats.StatsException;
 import org.holdpoint.stats.WithinEstimator;
-import org.holdpoint.study.AssumptionChecks;
+import org.holdpoint.result.AssumptionChecks;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicSettings;
-import org.holdpoint.study.FlaggedValue;
-import org.holdpoint.study.GroupChecks;
+import org.holdpoint.result.FlaggedValue;
+import org.holdpoint.result.GroupChecks;
 import org.holdpoint.study.GroupData;
+import org.holdpoint.result.Format;
 
 /**
  * The checks behind a t-based conclusion: shape, outliers, order, lots, capability and the

@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Map;
 import org.holdpoint.report.NamedImage;
 import org.holdpoint.study.ChangeStudy;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * Supplies the chart PNGs of every characteristic for the sign-off workbook. The workflow plugs the chart

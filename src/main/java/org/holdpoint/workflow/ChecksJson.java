@@ -11,9 +11,9 @@ import org.holdpoint.stats.RankEquivalence;
 import org.holdpoint.stats.RankInterval;
 import org.holdpoint.stats.RankSumResult;
 import org.holdpoint.stats.SignedRankResult;
-import org.holdpoint.study.AssumptionChecks;
-import org.holdpoint.study.FlaggedValue;
-import org.holdpoint.study.GroupChecks;
+import org.holdpoint.result.AssumptionChecks;
+import org.holdpoint.result.FlaggedValue;
+import org.holdpoint.result.GroupChecks;
 
 /** The JSON blocks of the further checks: rankSum, signedRank, normality, capability, outliers, order. */
 final class ChecksJson {

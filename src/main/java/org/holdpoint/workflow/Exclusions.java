@@ -9,6 +9,7 @@ import org.holdpoint.study.Exclusion;
 import org.holdpoint.study.GroupData;
 import org.holdpoint.study.NameKeys;
 import org.holdpoint.study.Origin;
+import org.holdpoint.result.Format;
 
 /**
  * Applies the user's exclusions (by cell, each with a mandatory reason) to one characteristic. In a

@@ -12,6 +12,7 @@ import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
+import org.holdpoint.result.Format;
 
 /**
  * Plans every characteristic of a study at once from its data: σ is the sd of the baseline (before)

@@ -18,7 +18,7 @@ import org.holdpoint.report.SignoffWorkbook;
 import org.holdpoint.report.Template;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.Signature;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * Writes the sign-off workbook of an analysed study: builds the canonical study record

@@ -16,14 +16,14 @@ import org.holdpoint.stats.TTestResult;
 import org.holdpoint.stats.VarianceRatioResult;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.Cautions;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.ImportReport;
 import org.holdpoint.study.InputInfo;
 import org.holdpoint.study.SkipReason;
 import org.holdpoint.study.SkippedCell;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * The machine-readable result of {@code holdpoint analyze --json}: the contract described in the README
@@ -191,7 +191,7 @@ public final class ResultJson {
         ChecksJson.put(n, r.checks());
         ObjectNode v = n.putObject("verdict");
         v.put("status", r.verdict().status().words());
-        v.put("passed", r.verdict().status() == org.holdpoint.study.Verdict.Status.PASSED);
+        v.put("passed", r.verdict().status() == org.holdpoint.result.Verdict.Status.PASSED);
         ArrayNode reasons = v.putArray("reasons");
         r.verdict().reasons().forEach(reasons::add);
         ArrayNode notes = n.putArray("notes");

@@ -9,7 +9,7 @@ import org.holdpoint.report.SignoffWorkbookReader;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.Progress;
 import org.holdpoint.study.Signature;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * Adds a later sign-off stage to a sign-off workbook without analysing again: the workbook is verified

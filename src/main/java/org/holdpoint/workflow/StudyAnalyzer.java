@@ -19,13 +19,15 @@ import org.holdpoint.stats.TTestResult;
 import org.holdpoint.stats.VarianceAssumption;
 import org.holdpoint.stats.VarianceRatioResult;
 import org.holdpoint.study.AnalysisSettings;
-import org.holdpoint.study.AssumptionChecks;
+import org.holdpoint.result.AssumptionChecks;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.Progress;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
+import org.holdpoint.result.Verdicts;
+import org.holdpoint.result.Format;
 
 /**
  * The analysis use case: every characteristic of a data set against its criteria, then the overall
@@ -59,7 +61,7 @@ public final class StudyAnalyzer {
                 // reported on this characteristic only; the rest of the study goes on
                 r = notAssessable(c, settings, e.getMessage());
             }
-            if (r.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+            if (r.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE) {
                 problems.add("characteristic \"" + c.name() + "\": " + String.join("; ", r.verdict().reasons()));
             }
             double unusable = data.report().unusableFraction(c.name());
@@ -183,7 +185,7 @@ public final class StudyAnalyzer {
         String unit = s.unit() != null ? s.unit() : c.unit();
         CharacteristicResult draft = new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, welch, pooled,
                 pairedTest, tost, tostPooled, variance, levene, growth, null, method, checks,
-                new org.holdpoint.study.Verdict(org.holdpoint.study.Verdict.Status.NOT_ASSESSED, List.of()), notes);
+                new org.holdpoint.result.Verdict(org.holdpoint.result.Verdict.Status.NOT_ASSESSED, List.of()), notes);
         return Verdicts.judge(draft, Math.min(10, c.resolutionDecimals() + 2));
     }
 
@@ -272,7 +274,7 @@ public final class StudyAnalyzer {
         return new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, null, null, null, null, null, null,
                 null, null, null, paired ? LocationMethod.PAIRED
                         : study.equalVariances() ? LocationMethod.POOLED : LocationMethod.WELCH, null,
-                new org.holdpoint.study.Verdict(org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE, List.of(reason)),
+                new org.holdpoint.result.Verdict(org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE, List.of(reason)),
                 notes);
     }
 

@@ -9,9 +9,9 @@ import org.holdpoint.chart.StudyCharts;
 import org.holdpoint.report.NamedImage;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.Progress;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * The charts the sign-off workbook embeds: per characteristic its box plot, histograms and normal

@@ -39,7 +39,7 @@ import org.holdpoint.study.Signature;
 import org.holdpoint.study.SkipReason;
 import org.holdpoint.study.SkippedCell;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * The study file: one JSON document holding a whole change study (change, settings, raw values with

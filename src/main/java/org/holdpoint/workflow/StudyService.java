@@ -16,7 +16,7 @@ import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.Progress;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * The use cases of the window, step by step (import, analyse, save, open), each run on the caller's
@@ -37,6 +37,19 @@ public final class StudyService {
     /** The name of the bundled demo study (files {@code NAME.csv} and {@code NAME.settings.csv}). */
     public static final String DEMO_STUDY = "boring-bar-insert";
     private final StudyAnalyzer analyzer = new StudyAnalyzer();
+    private final ArchiveAccess archives;
+
+    /**
+     * @param archives how the window reaches the change-record archive (from the composition root)
+     */
+    public StudyService(ArchiveAccess archives) {
+        this.archives = java.util.Objects.requireNonNull(archives, "archives");
+    }
+
+    /** @return how the window reaches the change-record archive */
+    public ArchiveAccess archives() {
+        return archives;
+    }
 
     /**
      * What an import produced: the data, and the criteria found in a settings file beside the data.

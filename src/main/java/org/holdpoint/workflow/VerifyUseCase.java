@@ -12,9 +12,9 @@ import org.holdpoint.report.SignoffWorkbookReader;
 import org.holdpoint.report.Template;
 import org.holdpoint.report.WorkbookDifference;
 import org.holdpoint.study.ChangeStudy;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.Progress;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * Re-verifies a sign-off workbook: reads the embedded study record, checks its SHA-256 (and the optional
@@ -244,7 +244,7 @@ public final class VerifyUseCase {
                     && v.path("status").asText().equals(r.verdict().status().words())) {
                 List<String> reasons = new ArrayList<>();
                 v.path("reasons").forEach(x -> reasons.add(x.asText()));
-                r = r.with(r.holmP(), new org.holdpoint.study.Verdict(r.verdict().status(), reasons), r.notes());
+                r = r.with(r.holmP(), new org.holdpoint.result.Verdict(r.verdict().status(), reasons), r.notes());
             }
             out.add(r);
         }

@@ -13,7 +13,7 @@ import java.util.stream.Stream;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /**
  * Not a test (a benchmark measures, a test asserts): renders every chart of an invented, seeded 200-characteristic

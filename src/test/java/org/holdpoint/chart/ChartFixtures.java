@@ -11,13 +11,13 @@ import org.holdpoint.stats.Margin;
 import org.holdpoint.stats.Sample;
 import org.holdpoint.stats.TTest;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.GroupData;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
-import org.holdpoint.study.Verdict;
+import org.holdpoint.result.StudyResult;
+import org.holdpoint.result.Verdict;
 
 /**
  * An invented change study (a turned shaft after a new cutting insert) for rendering checks. The values are

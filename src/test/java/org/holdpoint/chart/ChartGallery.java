@@ -30,7 +30,7 @@ public final class ChartGallery {
                 EquivalenceChart.create(ChartFixtures.study(demo).characteristics(), null, theme), theme.width(),
                 theme.equivalenceHeight(demo.size())).writeTo(dir, theme.scale());
         if (all) {
-            List<org.holdpoint.study.CharacteristicResult> rows = EquivalenceChartTest.manyRows(40, 7);
+            List<org.holdpoint.result.CharacteristicResult> rows = EquivalenceChartTest.manyRows(40, 7);
             new NamedChart("forty-rows.png", ChartKind.EQUIVALENCE, null, EquivalenceChart.create(rows,
                     "characteristics 1\u201340 of 40", theme), theme.width(), theme.equivalenceHeight(40))
                     .writeTo(dir, theme.scale());

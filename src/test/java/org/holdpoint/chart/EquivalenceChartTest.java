@@ -10,7 +10,7 @@ import java.util.SplittableRandom;
 import org.holdpoint.stats.Conclusion;
 import org.holdpoint.stats.EquivalenceResult;
 import org.holdpoint.stats.Margin;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.SpecLimits;
 import org.jfree.chart.JFreeChart;
@@ -98,7 +98,7 @@ class EquivalenceChartTest {
         boolean seen = false;
         for (int row = 0; row < results.size(); row++) {
             CharacteristicResult r = results.get(row);
-            if (r.verdict().status() == org.holdpoint.study.Verdict.Status.FAILED && r.decidingTost() != null
+            if (r.verdict().status() == org.holdpoint.result.Verdict.Status.FAILED && r.decidingTost() != null
                     && r.decidingTost().conclusion().claimHolds()) {
                 assertThat(words[row]).contains("; FAILED on ");
                 seen = true;

@@ -9,8 +9,6 @@ import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.DriverManager;
 import java.sql.Statement;
-import org.holdpoint.Holdpoint;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -19,11 +17,6 @@ import org.junit.jupiter.api.io.TempDir;
  * sign it, correct it, verify the chain, and find an edit made directly in the database.
  */
 class ArchiveCommandTest {
-    @BeforeAll
-    static void wire() {
-        Holdpoint.wire();
-    }
-
     private static String sha(String text, String after) {
         java.util.regex.Matcher m = java.util.regex.Pattern.compile(java.util.regex.Pattern.quote(after)
                 + "\\s*([0-9a-f]{64})").matcher(text);

@@ -22,11 +22,6 @@ import org.junit.jupiter.api.io.TempDir;
  * summarised here in our own words; a typed name is not an electronic signature and the workbook says so.
  */
 class SignOffStagesTest {
-    @org.junit.jupiter.api.BeforeAll
-    static void wire() {
-        org.holdpoint.Holdpoint.wire();
-    }
-
     private static String sha(String out) {
         Matcher m = Pattern.compile("record\\s+SHA-256 ([0-9a-f]{64})").matcher(out);
         assertThat(m.find()).as(out).isTrue();

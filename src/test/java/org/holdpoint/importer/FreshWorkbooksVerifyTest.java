@@ -19,7 +19,7 @@ import org.holdpoint.study.Dataset;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.Progress;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 import org.holdpoint.workflow.ReportOptions;
 import org.holdpoint.workflow.ReportUseCase;
 import org.holdpoint.workflow.StudyAnalyzer;

@@ -94,8 +94,7 @@ class HostileStudyFilesTest {
     @MethodSource("edits")
     void isRefusedByTheCommandsWithExitTwo(String name, Consumer<ObjectNode> edit, String message) throws Exception {
         Path f = edited(edit);
-        org.holdpoint.Holdpoint.wire();
-        var cl = org.holdpoint.cli.HoldpointCommand.create();
+        var cl = org.holdpoint.Holdpoint.commandLine(org.holdpoint.workflow.WindowLauncher.NONE);
         java.io.StringWriter err = new java.io.StringWriter();
         cl.setErr(new java.io.PrintWriter(err, true));
         cl.setOut(new java.io.PrintWriter(new java.io.StringWriter(), true));

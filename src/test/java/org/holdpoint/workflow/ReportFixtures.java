@@ -30,7 +30,7 @@ import org.holdpoint.study.Origin;
 import org.holdpoint.study.SkipReason;
 import org.holdpoint.study.SkippedCell;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 
 /** A small invented change study (a new honing stone for a valve body), built in code for the report tests. */
 final class ReportFixtures {

@@ -9,7 +9,7 @@ import java.util.Map;
 import org.holdpoint.stats.Sample;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.GroupData;

@@ -23,7 +23,7 @@ import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.Progress;
 import org.holdpoint.study.Signature;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;

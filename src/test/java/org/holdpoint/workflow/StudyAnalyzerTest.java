@@ -10,7 +10,7 @@ import org.holdpoint.stats.LocationMethod;
 import org.holdpoint.stats.Sample;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.Exclusion;
@@ -19,8 +19,8 @@ import org.holdpoint.study.ImportReport;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.Progress;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
-import org.holdpoint.study.Verdict;
+import org.holdpoint.result.StudyResult;
+import org.holdpoint.result.Verdict;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -132,7 +132,7 @@ class StudyAnalyzerTest {
                 List.of(), List.of()));
         var result = new StudyAnalyzer().analyze(d, AnalysisSettings.defaultSettings(), Progress.NONE);
         var flatResult = result.characteristics().get(0);
-        assertThat(flatResult.verdict().status()).isEqualTo(org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE);
+        assertThat(flatResult.verdict().status()).isEqualTo(org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE);
         assertThat(flatResult.verdict().reasons().get(0)).contains("every before value is 0.500 mm",
                 "values recorded to 0.001 mm", "check the measurement system");
         assertThat(flatResult.decidingTest()).isNull();

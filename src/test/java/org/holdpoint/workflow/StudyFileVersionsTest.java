@@ -9,7 +9,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.Progress;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 import org.junit.jupiter.api.Test;
 
 /**

@@ -25,7 +25,7 @@ import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.Progress;
 import org.holdpoint.study.Signature;
 import org.holdpoint.study.SpecLimits;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -15,10 +15,9 @@ import org.holdpoint.study.ArchiveQuery;
 import org.holdpoint.study.AuditEvent;
 import org.holdpoint.study.ChangeRecordArchive;
 import org.holdpoint.study.ChangeStudy;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 import org.holdpoint.study.StudyVersion;
 import org.holdpoint.study.VerificationReport;
-import org.holdpoint.workflow.ArchiveAccess;
 import org.holdpoint.workflow.ArchiveUseCase;
 import org.holdpoint.workflow.StudyFiles;
 import org.holdpoint.workflow.StudyProblem;
@@ -248,7 +247,7 @@ public final class ArchiveBrowser {
         }
         String url = url();
         session.start("Searching the archive", p -> {
-            try (ChangeRecordArchive a = ArchiveAccess.open(url)) {
+            try (ChangeRecordArchive a = service.archives().open(url)) {
                 return new ArchiveUseCase(a).list(q);
             }
         }, l -> {
@@ -293,7 +292,7 @@ public final class ArchiveBrowser {
         String url = url();
         session.start("Opening archived version " + v.id(), p -> {
             ArchiveUseCase.Shown shown;
-            try (ChangeRecordArchive a = ArchiveAccess.open(url)) {
+            try (ChangeRecordArchive a = service.archives().open(url)) {
                 shown = new ArchiveUseCase(a).show(v.id());
             }
             ChangeStudy s = shown.changeStudy();
@@ -375,7 +374,7 @@ public final class ArchiveBrowser {
         }
         String url = url();
         session.start("Verifying the archive", p -> {
-            try (ChangeRecordArchive a = ArchiveAccess.open(url)) {
+            try (ChangeRecordArchive a = service.archives().open(url)) {
                 return new ArchiveUseCase(a).verify();
             }
         }, r -> {
@@ -469,7 +468,7 @@ public final class ArchiveBrowser {
         String because = reason == null ? "" : reason.trim();
         session.start("Saving to the archive", p -> {
             Path tmp = Files.createTempFile("holdpoint-archive-", ".study.json");
-            try (ChangeRecordArchive ar = ArchiveAccess.open(url)) {
+            try (ChangeRecordArchive ar = service.archives().open(url)) {
                 session.checkSignaturesOf(s, r);
                 StudyFiles.write(s, r, tmp);
                 var current = ar.currentVersion(s.change().id());

@@ -5,8 +5,9 @@ import java.util.List;
 import org.holdpoint.stats.Descriptives;
 import org.holdpoint.stats.EquivalenceResult;
 import org.holdpoint.stats.TTestResult;
-import org.holdpoint.study.CharacteristicResult;
-import org.holdpoint.workflow.Format;
+import org.holdpoint.result.CharacteristicResult;
+import org.holdpoint.result.Format;
+import org.holdpoint.result.Verdict;
 
 /**
  * The numbers, checks and notes of one characteristic, as labelled sections of text; the window
@@ -57,7 +58,7 @@ public final class ResultDetail {
         r.verdict().reasons().forEach(x -> verdict.add(new Line("Because", x)));
         s.add(new Section("Verdict", verdict));
         s.add(groups(r.before(), r.after(), r.unit(), u, raw));
-        if (r.verdict().status() == org.holdpoint.study.Verdict.Status.NOT_ASSESSABLE) {
+        if (r.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE) {
             s.add(new Section("Not assessable", List.of(new Line("", "No test was computed: the data of this "
                     + "characteristic cannot show a change (the reason is above). The other characteristics were "
                     + "analysed."))));

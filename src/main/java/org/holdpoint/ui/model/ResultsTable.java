@@ -3,10 +3,10 @@ package org.holdpoint.ui.model;
 import java.util.List;
 import org.holdpoint.stats.EquivalenceResult;
 import org.holdpoint.stats.Margin;
-import org.holdpoint.study.CharacteristicResult;
-import org.holdpoint.study.StudyResult;
-import org.holdpoint.study.Verdict;
-import org.holdpoint.workflow.Format;
+import org.holdpoint.result.CharacteristicResult;
+import org.holdpoint.result.StudyResult;
+import org.holdpoint.result.Verdict;
+import org.holdpoint.result.Format;
 
 /**
  * The Results step: one row per characteristic, a filter, the selected row, and the overall verdict.

@@ -11,7 +11,7 @@ import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.Dataset;
 import org.holdpoint.study.Exclusion;
-import org.holdpoint.study.StudyResult;
+import org.holdpoint.result.StudyResult;
 import org.holdpoint.workflow.DataSources;
 import org.holdpoint.workflow.StudyService;
 

@@ -1,7 +1,7 @@
 package org.holdpoint.ui.model;
 
-import org.holdpoint.study.CharacteristicResult;
-import org.holdpoint.study.Verdict;
+import org.holdpoint.result.CharacteristicResult;
+import org.holdpoint.result.Verdict;
 
 /**
  * How a verdict is shown: words first, then a mark of the project's own design whose outline and sign tell
@@ -97,14 +97,14 @@ public enum VerdictLook {
         }
         java.util.List<String> failed = new java.util.ArrayList<>();
         if (r.spreadFailed()) {
-            failed.add("spread: sd ratio bound " + org.holdpoint.workflow.Format.ratio(r.sdGrowth().upperBound())
-                    + " above " + org.holdpoint.workflow.Format.num(r.sdGrowth().limit()));
+            failed.add("spread: sd ratio bound " + org.holdpoint.result.Format.ratio(r.sdGrowth().upperBound())
+                    + " above " + org.holdpoint.result.Format.num(r.sdGrowth().limit()));
         }
         if (r.capabilityFailed()) {
             var cap = r.checks().after().capability();
             failed.add("capability: Ppk bound " + (cap == null || cap.ppkLower() == null ? "undefined"
-                    : org.holdpoint.workflow.Format.ratio(cap.ppkLower())) + " below "
-                    + org.holdpoint.workflow.Format.num(r.settings().capabilityRequirement()));
+                    : org.holdpoint.result.Format.ratio(cap.ppkLower())) + " below "
+                    + org.holdpoint.result.Format.num(r.settings().capabilityRequirement()));
         }
         var eq = r.decidingTost();
         failed.add("mean: " + (eq == null ? "no margin set" : eq.conclusion().words()));

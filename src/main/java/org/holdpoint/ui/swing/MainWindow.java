@@ -72,13 +72,14 @@ public final class MainWindow extends JFrame {
     /**
      * Creates the window (event thread).
      *
-     * @param prefs where recent files, last folder and theme are kept
+     * @param prefs    where recent files, last folder and theme are kept
+     * @param archives how the window reaches the change-record archive (from the composition root)
      */
-    public MainWindow(PreferenceStore prefs) {
+    public MainWindow(PreferenceStore prefs, org.holdpoint.workflow.ArchiveAccess archives) {
         super("Holdpoint");
         this.prefs = prefs;
         RecentFiles recent = new RecentFiles(prefs);
-        this.session = new StudySession(new StudyService(), new SwingTaskRunner(progress), recent,
+        this.session = new StudySession(new StudyService(archives), new SwingTaskRunner(progress), recent,
                 Clock.systemDefaultZone());
         this.dialogs = new Dialogs(this, recent);
         createComponents();
@@ -99,9 +100,10 @@ public final class MainWindow extends JFrame {
      * Opens the window on the event thread with the remembered theme, and loads the demo study.
      * Called on any thread; returns at once.
      *
+     * @param archives how the window reaches the change-record archive (from the composition root)
      * @throws IllegalStateException when there is no display
      */
-    public static void launch() {
+    public static void launch(org.holdpoint.workflow.ArchiveAccess archives) {
         if (GraphicsEnvironment.isHeadless()) {
             throw new IllegalStateException("no display is available for the window; run a command instead "
                     + "(holdpoint --help)");
@@ -118,7 +120,7 @@ public final class MainWindow extends JFrame {
             });
             PreferenceStore prefs = safePrefs();
             Themes.remembered(prefs).install();
-            MainWindow w = new MainWindow(prefs);
+            MainWindow w = new MainWindow(prefs, archives);
             w.setVisible(true);
             w.session().openDemo();
         });

@@ -21,13 +21,13 @@ import javax.swing.table.TableRowSorter;
 import org.holdpoint.chart.NamedChart;
 import org.holdpoint.chart.StudyCharts;
 import org.holdpoint.study.CharacteristicData;
-import org.holdpoint.study.CharacteristicResult;
+import org.holdpoint.result.CharacteristicResult;
 import org.holdpoint.ui.model.ResultColumn;
 import org.holdpoint.ui.model.ResultDetail;
 import org.holdpoint.ui.model.ResultsTable;
 import org.holdpoint.ui.model.StudySession;
 import org.holdpoint.ui.model.VerdictLook;
-import org.holdpoint.workflow.Format;
+import org.holdpoint.result.Format;
 import org.jfree.chart.JFreeChart;
 
 /** The Results step: one row per characteristic, sortable and filterable; the selected one in detail with its chart. */

@@ -33,8 +33,7 @@ class ArchiveBrowserTest {
 
     @BeforeEach
     void open() {
-        Holdpoint.wire();
-        s = new StudySession(new StudyService(), TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()),
+        s = new StudySession(new StudyService(Holdpoint.archives()), TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()),
                 Clock.fixed(Instant.parse("2026-12-01T08:00:00Z"), ZoneOffset.UTC));
         s.addListener(StudySession.Property.PROBLEM, e -> problems.add((UserMessage) e.getNewValue()));
         s.openDemo();

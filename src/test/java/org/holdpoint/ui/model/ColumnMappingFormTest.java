@@ -32,7 +32,7 @@ class ColumnMappingFormTest {
 
     @BeforeEach
     void open() {
-        s = new StudySession(new StudyService(), TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()),
+        s = new StudySession(new StudyService(org.holdpoint.workflow.ArchiveAccess.none()), TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()),
                 Clock.fixed(Instant.parse("2026-12-01T08:00:00Z"), ZoneOffset.UTC));
         s.addListener(StudySession.Property.PROBLEM, e -> problems.add((UserMessage) e.getNewValue()));
     }

@@ -11,7 +11,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Consumer;
 import org.holdpoint.study.SkipReason;
-import org.holdpoint.study.Verdict;
+import org.holdpoint.result.Verdict;
 import org.holdpoint.workflow.StudyService;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -30,7 +30,7 @@ class StudySessionTest {
 
     @BeforeEach
     void open() {
-        s = new StudySession(new StudyService(), TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()),
+        s = new StudySession(new StudyService(org.holdpoint.workflow.ArchiveAccess.none()), TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()),
                 Clock.fixed(Instant.parse("2026-12-01T08:00:00Z"), ZoneOffset.UTC));
         s.addListener(StudySession.Property.PROBLEM, e -> problems.add(e.getNewValue()));
         s.addListener(StudySession.Property.STEP, e -> steps.add(e.getNewValue()));
@@ -105,7 +105,7 @@ class StudySessionTest {
             var tol = sections.stream().filter(x -> x.title().equals("In the tolerance")).findFirst().orElseThrow();
             assertThat(tol.lines().get(0).label()).isEqualTo("Decides");
             assertThat(tol.lines().get(0).value()).contains("does NOT meet the required 1")
-                    .contains(org.holdpoint.workflow.Format.ratio(c.checks().after().capability().ppkLower()));
+                    .contains(org.holdpoint.result.Format.ratio(c.checks().after().capability().ppkLower()));
             assertThat(tol.lines()).extracting(ResultDetail.Line::label).contains("Ppk", "Outside, ppm");
             return;
         }
@@ -269,7 +269,7 @@ class StudySessionTest {
         assertThat(s.dirty()).isFalse();
         assertThat(s.recent().list()).first().isEqualTo(file.toAbsolutePath().normalize());
 
-        StudySession other = new StudySession(new StudyService(), TaskRunner.DIRECT,
+        StudySession other = new StudySession(new StudyService(org.holdpoint.workflow.ArchiveAccess.none()), TaskRunner.DIRECT,
                 new RecentFiles(PreferenceStore.inMemory()), Clock.systemUTC());
         other.openStudy(file);
         assertThat(other.criteria().get(1, CriteriaColumn.CAPABILITY)).isEqualTo("1.67");
@@ -315,7 +315,7 @@ class StudySessionTest {
                 return false;
             }
         };
-        StudySession c = new StudySession(new StudyService(), cancelling, new RecentFiles(PreferenceStore.inMemory()),
+        StudySession c = new StudySession(new StudyService(org.holdpoint.workflow.ArchiveAccess.none()), cancelling, new RecentFiles(PreferenceStore.inMemory()),
                 Clock.systemUTC());
         c.openDemo();
         assertThat(c.data()).isNull();

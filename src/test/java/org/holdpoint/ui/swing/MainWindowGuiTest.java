@@ -127,7 +127,6 @@ class MainWindowGuiTest {
 
     @Test
     void plansFromTheBaselineAndSearchesOpensAndVerifiesTheArchive() throws Exception {
-        org.holdpoint.Holdpoint.wire();
         driver = new WindowDriver();
         MainWindow w = driver.open(Themes.LIGHT, 1440, 900);
         WindowDriver.onEdt(() -> {

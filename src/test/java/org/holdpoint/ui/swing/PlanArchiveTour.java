@@ -2,7 +2,6 @@ package org.holdpoint.ui.swing;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.holdpoint.Holdpoint;
 import org.holdpoint.ui.model.ArchiveBrowser;
 import org.holdpoint.ui.model.Step;
 
@@ -20,7 +19,6 @@ public final class PlanArchiveTour {
      * @throws Exception on failure
      */
     public static void main(String[] args) throws Exception {
-        Holdpoint.wire();
         Path out = Path.of(args.length > 0 ? args[0] : "target/screens");
         Themes theme = args.length > 1 ? Themes.valueOf(args[1]) : Themes.LIGHT;
         WindowDriver d = new WindowDriver();

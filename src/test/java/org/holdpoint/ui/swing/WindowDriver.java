@@ -27,7 +27,7 @@ final class WindowDriver {
             theme.install();
             PreferenceStore prefs = PreferenceStore.inMemory();
             theme.remember(prefs);
-            window = new MainWindow(prefs);
+            window = new MainWindow(prefs, org.holdpoint.Holdpoint.archives());
             window.setSize(width, height);
             window.setLocation(0, 0);
             window.setVisible(true);

@@ -1,4 +1,4 @@
-package org.holdpoint.study;
+package org.holdpoint.result;
 
 import java.util.List;
 import org.holdpoint.stats.Descriptives;
@@ -9,6 +9,7 @@ import org.holdpoint.stats.Margin;
 import org.holdpoint.stats.SdGrowthResult;
 import org.holdpoint.stats.TTestResult;
 import org.holdpoint.stats.VarianceRatioResult;
+import org.holdpoint.study.CharacteristicSettings;
 
 /**
  * Everything computed for one characteristic. A block that does not apply is null.

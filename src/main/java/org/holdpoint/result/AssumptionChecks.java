@@ -1,4 +1,4 @@
-package org.holdpoint.study;
+package org.holdpoint.result;
 
 import org.holdpoint.stats.RankSumResult;
 import org.holdpoint.stats.SignedRankResult;

@@ -1,21 +1,18 @@
-package org.holdpoint.workflow;
+package org.holdpoint.result;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.holdpoint.stats.Conclusion;
 import org.holdpoint.stats.EquivalenceResult;
-import org.holdpoint.study.CharacteristicResult;
-import org.holdpoint.study.StudyResult;
-import org.holdpoint.study.Verdict;
-import org.holdpoint.study.Verdict.Status;
+import org.holdpoint.result.Verdict.Status;
 
 /**
  * The verdict rules: a characteristic passes when its equivalence (or one-sided margin) claim holds
  * and every limit that was set is met; the change is verified only when every characteristic passes
  * (intersection–union, Berger 1982), so that claim needs no multiplicity adjustment.
  */
-final class Verdicts {
+public final class Verdicts {
     private Verdicts() {
     }
 
@@ -24,7 +21,7 @@ final class Verdicts {
      * @param decimals decimals for values in the characteristic's unit (its resolution plus two)
      * @return the result with its verdict and the reasons in words
      */
-    static CharacteristicResult judge(CharacteristicResult r, int decimals) {
+    public static CharacteristicResult judge(CharacteristicResult r, int decimals) {
         if (r.verdict().status() == Status.NOT_ASSESSABLE) {
             return r;
         }
@@ -79,7 +76,7 @@ final class Verdicts {
         };
     }
 
-    static StudyResult overall(List<CharacteristicResult> results) {
+    public static StudyResult overall(List<CharacteristicResult> results) {
         List<String> failing = new ArrayList<>();
         for (CharacteristicResult r : results) {
             if (r.verdict().status() != Status.PASSED) {

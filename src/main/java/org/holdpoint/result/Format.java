@@ -1,4 +1,4 @@
-package org.holdpoint.workflow;
+package org.holdpoint.result;
 
 import java.util.Locale;
 import org.holdpoint.stats.EquivalenceResult;

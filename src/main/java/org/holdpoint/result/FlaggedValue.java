@@ -1,4 +1,6 @@
-package org.holdpoint.study;
+package org.holdpoint.result;
+
+import org.holdpoint.study.Origin;
 
 /**
  * A value flagged as a possible outlier: flagged, never dropped.

@@ -1,4 +1,4 @@
-package org.holdpoint.study;
+package org.holdpoint.result;
 
 import java.util.List;
 
