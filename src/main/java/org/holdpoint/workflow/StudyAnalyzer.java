@@ -183,9 +183,13 @@ public final class StudyAnalyzer {
         }
         AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin, alpha, paired, study.equalVariances(), notes);
         String unit = s.unit() != null ? s.unit() : c.unit();
-        CharacteristicResult draft = new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, welch, pooled,
-                pairedTest, tost, tostPooled, variance, levene, growth, null, method, checks,
-                new org.holdpoint.result.Verdict(org.holdpoint.result.Verdict.Status.NOT_ASSESSED, List.of()), notes);
+        CharacteristicResult draft = CharacteristicResult.builder(c.name(), unit, s, paired, method).margin(margin)
+                .descriptives(db, da)
+                .location(new CharacteristicResult.LocationTests(welch, pooled, pairedTest, tost, tostPooled))
+                .spread(new CharacteristicResult.SpreadTests(variance, levene, growth))
+                .checks(checks)
+                .verdict(new org.holdpoint.result.Verdict(org.holdpoint.result.Verdict.Status.NOT_ASSESSED, List.of()))
+                .notes(notes).build();
         return Verdicts.judge(draft, Math.min(10, c.resolutionDecimals() + 2));
     }
 
@@ -271,11 +275,12 @@ public final class StudyAnalyzer {
         boolean paired = s.paired() != null ? s.paired() : c.paired();
         String unit = s.unit() != null ? s.unit() : c.unit();
         List<String> notes = new ArrayList<>();
-        return new CharacteristicResult(c.name(), unit, s, margin, paired, db, da, null, null, null, null, null, null,
-                null, null, null, paired ? LocationMethod.PAIRED
-                        : study.equalVariances() ? LocationMethod.POOLED : LocationMethod.WELCH, null,
-                new org.holdpoint.result.Verdict(org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE, List.of(reason)),
-                notes);
+        return CharacteristicResult.builder(c.name(), unit, s, paired, paired ? LocationMethod.PAIRED
+                        : study.equalVariances() ? LocationMethod.POOLED : LocationMethod.WELCH).margin(margin)
+                .descriptives(db, da)
+                .verdict(new org.holdpoint.result.Verdict(org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE,
+                        List.of(reason)))
+                .notes(notes).build();
     }
 
     private static void checkSizes(Sample before, Sample after) {

@@ -88,9 +88,10 @@ final class ChartFixtures {
                     default -> Verdict.Status.FAILED;
                 }, List.of());
         CharacteristicSettings settings = new CharacteristicSettings(unit, spec, margin, null, null, false);
-        CharacteristicResult result = new CharacteristicResult(name, unit, settings, m, false, Descriptives.of(b),
-                Descriptives.of(a), TTest.withDefaults().test(b, a), null, null, tost, null, null, null, null, null,
-                LocationMethod.WELCH, verdict, List.of());
+        CharacteristicResult result = CharacteristicResult.builder(name, unit, settings, false, LocationMethod.WELCH)
+                .margin(m).descriptives(Descriptives.of(b), Descriptives.of(a))
+                .location(new CharacteristicResult.LocationTests(TTest.withDefaults().test(b, a), null, null, tost, null))
+                .verdict(verdict).build();
         return new Item(data, result);
     }
 }
