@@ -1,6 +1,6 @@
 package org.holdpoint.stats;
 
-import java.util.concurrent.ConcurrentHashMap;
+import java.util.Map;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.distribution.ChiSquaredDistribution;
 import org.apache.commons.math3.distribution.FDistribution;
@@ -20,12 +20,38 @@ import org.apache.commons.math3.special.Gamma;
  */
 public final class Distributions {
     private static final double SOLVER_ACCURACY = 1e-14;
+    /**
+     * The most terms of a series or continued fraction of the incomplete beta and gamma functions: far beyond
+     * what any argument here needs (hundreds), and past it Commons Math throws instead of looping on.
+     */
+    private static final int MAX_SERIES = 1_000_000;
     private static final double BETA_EPS = 1e-15;
     /** Below this lower-tail probability the solver's 1e-15 function-value accuracy is no guide. */
     private static final double FAR_TAIL = 1e-8;
-    private static final ConcurrentHashMap<Double, TDistribution> T_CACHE = new ConcurrentHashMap<>();
-    private static final ConcurrentHashMap<Long, FDistribution> F_CACHE = new ConcurrentHashMap<>();
-    private static final ConcurrentHashMap<Double, ChiSquaredDistribution> CHI2_CACHE = new ConcurrentHashMap<>();
+    /**
+     * Instances kept for reuse: degrees of freedom are often fractional (Welch, fitted gamma shapes), so each
+     * cache keeps its most recently used entries only and never grows while the window stays open.
+     */
+    private static final int CACHE_SIZE = 256;
+    private static final Map<Double, TDistribution> T_CACHE = lru();
+    private static final Map<Long, FDistribution> F_CACHE = lru();
+    private static final Map<Double, ChiSquaredDistribution> CHI2_CACHE = lru();
+
+    private static <K, V> Map<K, V> lru() {
+        return java.util.Collections.synchronizedMap(new java.util.LinkedHashMap<K, V>(CACHE_SIZE, 0.75f, true) {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            protected boolean removeEldestEntry(Map.Entry<K, V> eldest) {
+                return size() > CACHE_SIZE;
+            }
+        });
+    }
+
+    /** @return the number of cached distribution instances (for the test that they stay bounded) */
+    static int cachedInstances() {
+        return T_CACHE.size() + F_CACHE.size() + CHI2_CACHE.size();
+    }
 
     private Distributions() {
     }
@@ -48,9 +74,9 @@ public final class Distributions {
             return 1;
         }
         if (x > (a + 1) / (a + b + 2)) {
-            return 1 - Beta.regularizedBeta(y, b, a, BETA_EPS, Integer.MAX_VALUE);
+            return 1 - Beta.regularizedBeta(y, b, a, BETA_EPS, MAX_SERIES);
         }
-        return Beta.regularizedBeta(x, a, b, BETA_EPS, Integer.MAX_VALUE);
+        return Beta.regularizedBeta(x, a, b, BETA_EPS, MAX_SERIES);
     }
 
     /**
@@ -311,7 +337,7 @@ public final class Distributions {
         if (x <= 0) {
             return 0;
         }
-        return Gamma.regularizedGammaP(0.5 * df, 0.5 * x, 1e-15, Integer.MAX_VALUE);
+        return Gamma.regularizedGammaP(0.5 * df, 0.5 * x, 1e-15, MAX_SERIES);
     }
 
     /**
@@ -326,7 +352,7 @@ public final class Distributions {
         if (x <= 0) {
             return 1;
         }
-        return Gamma.regularizedGammaQ(0.5 * df, 0.5 * x, 1e-15, Integer.MAX_VALUE);
+        return Gamma.regularizedGammaQ(0.5 * df, 0.5 * x, 1e-15, MAX_SERIES);
     }
 
     /**
@@ -368,6 +394,36 @@ public final class Distributions {
             x = next;
         }
         return x;
+    }
+
+    /**
+     * Quantile of the standard gamma distribution (shape a, rate 1): the Wilson–Hilferty start (Johnson, Kotz
+     * &amp; Balakrishnan 1994, eq. 17.xx form of the cube-root normal approximation; the small-x limit
+     * (p·Γ(a + 1))^(1/a) when that start is not positive), then Newton steps in ln x on the smaller tail, each
+     * tail the regularized incomplete gamma from its own side. No solver instance is built, so the many
+     * fractional shapes of a bootstrap cost no cache.
+     *
+     * @param p a probability in (0, 1)
+     * @param a the shape &gt; 0
+     * @return x with P(a, x) = p
+     */
+    public static double gammaQuantile(double p, double a) {
+        checkOpenProbability(p);
+        if (!(a > 0) || Double.isInfinite(a)) {
+            throw new StatsException("the gamma shape must be a positive number, got %s", a);
+        }
+        double z = p <= 0.5 ? Normal.quantile(p) : -Normal.quantile(1 - p);
+        double c = 1 / (9 * a);
+        double start = a * Math.pow(1 - c + z * Math.sqrt(c), 3);
+        if (!(start > 0) || p < 1e-3 && a < 1) {
+            start = Math.exp((Math.log(p) + Gamma.logGamma(a + 1)) / a);
+        }
+        DoubleUnaryOperator density = x -> Math.exp((a - 1) * Math.log(x) - x - Gamma.logGamma(a));
+        if (p <= 0.5) {
+            return logNewton(x -> Gamma.regularizedGammaP(a, x, 1e-15, MAX_SERIES), density, p, start);
+        }
+        return logNewton(x -> Gamma.regularizedGammaQ(a, x, 1e-15, MAX_SERIES), x -> -density.applyAsDouble(x),
+                1 - p, start);
     }
 
     private static double chiSquaredDensity(double x, double df) {
