@@ -156,10 +156,9 @@ public final class BoxPlotChart {
                     + (g.met() ? " below" : " NOT below") + " the limit " + Numbers.format(g.limit()));
         }
         var checks = result.checks();
-        if (checks != null && checks.capabilityMet() != null && checks.after().capability() != null
-                && checks.after().capability().ppkLower() != null) {
+        if (checks != null && checks.capabilityMet() != null && checks.after().ppkLower() != null) {
             parts.add("capability: Ppk bound " + String.format(java.util.Locale.ROOT, "%.3f",
-                    checks.after().capability().ppkLower()) + (checks.capabilityMet() ? " meets" : " does NOT meet")
+                    checks.after().ppkLower()) + (checks.capabilityMet() ? " meets" : " does NOT meet")
                     + " the required " + Numbers.format(result.settings().capabilityRequirement()));
         }
         if (!parts.isEmpty()) {

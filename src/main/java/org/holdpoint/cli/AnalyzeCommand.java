@@ -11,6 +11,7 @@ import org.holdpoint.study.ChangeDescription;
 import org.holdpoint.study.ChangeKind;
 import org.holdpoint.study.ChangeStudy;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.DistributionSetting;
 import org.holdpoint.study.CriteriaCheck;
 import org.holdpoint.study.Signature;
 import org.holdpoint.study.Exclusion;
@@ -150,6 +151,11 @@ final class AnalyzeCommand implements Callable<Integer> {
         @Option(names = "--sd-growth-limit", paramLabel = "R", description = "Largest acceptable "
                 + "sd(after)/sd(before); judged on its upper confidence bound.")
         Double sdGrowthLimit;
+        @Option(names = "--distribution", paramLabel = "FAMILY", description = "Judge capability of every "
+                + "characteristic by this distribution: normal, lognormal, weibull, gamma, rayleigh, or auto (the "
+                + "family with the lowest AIC). Default: auto for a characteristic bounded at zero with an upper "
+                + "limit, or one that departs strongly from a normal shape; normal otherwise.")
+        String distribution;
     }
 
     static final class MethodOptions {
@@ -378,8 +384,16 @@ final class AnalyzeCommand implements Callable<Integer> {
             throw new CommandLine.ParameterException(spec.commandLine(), "--margin-percent-of-usl: "
                     + CriteriaCheck.resolvable(margin, new SpecLimits(c.lsl, c.nominal, c.usl)));
         }
+        DistributionSetting distribution = null;
+        if (c.distribution != null) {
+            distribution = DistributionSetting.parse(c.distribution);
+            if (distribution == null) {
+                throw new CommandLine.ParameterException(spec.commandLine(), "--distribution: '" + c.distribution
+                        + "' is not a distribution; use " + DistributionSetting.words());
+            }
+        }
         CharacteristicSettings overrides = new CharacteristicSettings(c.unit, new SpecLimits(c.lsl, c.nominal, c.usl),
-                margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null);
+                margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null, distribution);
         List<Exclusion> exclusions = new ArrayList<>();
         for (String e : method.exclude) {
             try {

@@ -226,7 +226,24 @@ final class TextOutput {
         }
         out.printf(Locale.ROOT, "  Shape: before %s; after %s%n", shape(c.before().normality()),
                 shape(c.after().normality()));
+        if (c.distribution() != null && (c.distribution().automatic()
+                || c.distribution().chosen() != org.holdpoint.stats.DistributionFamily.NORMAL)) {
+            out.printf(Locale.ROOT, "  Capability model: %s (%s)%n", c.distribution().chosen().key(),
+                    c.distribution().reason());
+        }
         for (var g : new org.holdpoint.result.GroupChecks[] {c.before(), c.after()}) {
+            var pc = g.percentile();
+            if (pc != null) {
+                StringBuilder params = new StringBuilder();
+                pc.fit().parameters().forEach((k, v) -> params.append(params.length() == 0 ? "" : ", ").append(k)
+                        .append(" = ").append(Format.num(v)));
+                out.printf(Locale.ROOT, "  Capability %s (%s fit: %s; percentile method): X0.135%% = %s, X50%% = %s, "
+                        + "X99.865%% = %s; Pp = %s, Ppk = %s (%s lower bound %s, bootstrap seed %d, %d resamples), "
+                        + "expected out of spec %s ppm below, %s ppm above%n", g == c.before() ? "before" : "after ",
+                        pc.fit().family().key(), params, Format.num(pc.x00135()), Format.num(pc.x50()),
+                        Format.num(pc.x99865()), opt(pc.pp()), opt(pc.ppk()), Format.percent(1 - pc.alpha()),
+                        opt(pc.ppkLower()), pc.seed(), pc.resamples(), opt(pc.ppmBelow()), opt(pc.ppmAbove()));
+            }
             var cap = g.capability();
             if (cap != null) {
                 out.printf(Locale.ROOT, "  Capability %s: Pp = %s, Ppk = %s (%s lower bound %s)%s, expected out of "

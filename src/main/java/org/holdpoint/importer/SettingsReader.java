@@ -19,6 +19,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.DistributionSetting;
 import org.holdpoint.study.CriteriaCheck;
 import org.holdpoint.study.MarginSpec;
 import org.holdpoint.study.SpecLimits;
@@ -41,7 +42,7 @@ public final class SettingsReader {
     public static final List<String> COLUMNS = List.of("characteristic", "unit", "lsl", "nominal", "usl", "margin",
             "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower", "margin_percent_upper",
             "margin_percent_of_usl",
-            "sd_growth_limit", "capability_min", "paired");
+            "sd_growth_limit", "capability_min", "paired", "distribution");
 
     /** Creates a reader. */
     public SettingsReader() {
@@ -223,6 +224,9 @@ public final class SettingsReader {
         if (s.paired() != null) {
             o.put("paired", s.paired());
         }
+        if (s.distribution() != null) {
+            o.put("distribution", s.distribution().key());
+        }
         return o;
     }
 
@@ -314,9 +318,18 @@ public final class SettingsReader {
             throw w.bad(col, v.get(col), "is not accepted: " + p.message());
         }
         Boolean paired = bool(v, "paired", w);
+        DistributionSetting distribution = null;
+        String d = v.get("distribution");
+        if (d != null && !d.isBlank()) {
+            distribution = DistributionSetting.parse(d);
+            if (distribution == null) {
+                throw w.bad("distribution", d, "is not a distribution; use " + DistributionSetting.words()
+                        + ", or leave it empty for the default rule");
+            }
+        }
         try {
             out.put(name, new CharacteristicSettings(v.get("unit"), new SpecLimits(lsl, nominal, usl), margin, sdGrowth,
-                    capMin, paired));
+                    capMin, paired, distribution));
         } catch (IllegalArgumentException e) {
             throw new ImportException(e, "settings file %s, %s: %s", w.file(), w.place(), e.getMessage());
         }

@@ -1,5 +1,6 @@
 package org.holdpoint.result;
 
+import org.holdpoint.stats.FamilySelection;
 import org.holdpoint.stats.RankSumResult;
 import org.holdpoint.stats.SignedRankResult;
 
@@ -12,7 +13,8 @@ import org.holdpoint.stats.SignedRankResult;
  * @param signedRank        Wilcoxon signed rank with Hodges–Lehmann shift (paired), or null
  * @param capabilityMet     whether the after group's lower Ppk bound exceeds the requirement, or null
  * @param recommendation    which comparison the data support, with the reason in plain words
+ * @param distribution      the family capability is judged by and why, or null without limits
  */
 public record AssumptionChecks(GroupChecks before, GroupChecks after, RankSumResult rankSum,
-        SignedRankResult signedRank, Boolean capabilityMet, String recommendation) {
+        SignedRankResult signedRank, Boolean capabilityMet, String recommendation, FamilySelection distribution) {
 }

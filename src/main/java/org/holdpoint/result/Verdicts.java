@@ -53,10 +53,10 @@ public final class Verdicts {
             }
         }
         if (r.capabilityFailed()) {
-            var cap = r.checks().after().capability();
-            reasons.add(String.format(Locale.ROOT, "capability: the %s lower bound of Ppk after the change is %s, not "
-                    + "above the requirement %s", Format.percent(1 - cap.alpha()), Format.ratio(cap.ppkLower()),
-                    Format.num(r.settings().capabilityRequirement())));
+            var cap = r.checks().after();
+            reasons.add(String.format(Locale.ROOT, "capability: the %s lower bound of Ppk%s after the change is %s, "
+                    + "not above the requirement %s", Format.percent(1 - cap.capabilityAlpha()), cap.modelWords(),
+                    Format.ratio(cap.ppkLower()), Format.num(r.settings().capabilityRequirement())));
             if (status == Status.PASSED || status == Status.INCONCLUSIVE) {
                 status = Status.FAILED;
             }

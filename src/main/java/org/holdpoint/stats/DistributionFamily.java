@@ -17,7 +17,7 @@ public enum DistributionFamily {
     /** Gamma: {@code shape} α, {@code rate} β; density β^α x^(α−1) e^(−βx)/Γ(α). */
     GAMMA(List.of("shape", "rate"), true),
     /** Rayleigh (radial deviation of a centred circular normal): {@code sigma}; F(x) = 1 − exp(−x²/(2σ²)). */
-    RAYLEIGH(List.of("sigma"), false);
+    RAYLEIGH(List.of("sigma"), true);
 
     private final List<String> parameterNames;
     private final boolean positiveOnly;
@@ -51,13 +51,13 @@ public enum DistributionFamily {
     public String refusal(double[] x) {
         int bad = 0;
         for (double v : x) {
-            if (positiveOnly ? !(v > 0) : this == RAYLEIGH && v < 0) {
+            if (positiveOnly && !(v > 0)) {
                 bad++;
             }
         }
         if (bad > 0) {
-            return String.format(Locale.ROOT, "the %s family needs values %s; %d value(s) are not", key(),
-                    positiveOnly ? "above 0" : "of 0 or more", bad);
+            return String.format(Locale.ROOT, "needs values above 0; %d value(s) are 0 or below (e.g. readings "
+                    + "at the gauge's resolution)", bad);
         }
         return null;
     }

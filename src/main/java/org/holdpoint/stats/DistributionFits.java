@@ -41,7 +41,7 @@ public final class DistributionFits {
         }
         String refusal = family.refusal(x);
         if (refusal != null) {
-            throw new StatsException("%s", refusal);
+            throw new StatsException("the %s family %s", family.key(), refusal);
         }
         double min = Double.POSITIVE_INFINITY;
         double max = Double.NEGATIVE_INFINITY;
@@ -55,9 +55,6 @@ public final class DistributionFits {
         if (min == max && family != DistributionFamily.RAYLEIGH) {
             throw new StatsException("all %d values are equal; no %s distribution can be fitted", x.length,
                     family.key());
-        }
-        if (max == 0) {
-            throw new StatsException("all values are 0; no rayleigh distribution can be fitted");
         }
         int n = x.length;
         double a;

@@ -12,12 +12,36 @@ import java.util.List;
  * @param sdGrowthLimit         the largest acceptable σ_after/σ_before, or null
  * @param capabilityRequirement the minimum acceptable capability index (judged on the lower bound), or null
  * @param paired                whether the same units were measured before and after, or null (from layout)
+ * @param distribution          the distribution capability is judged by, or null (the default rule)
  */
 public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
-        Double capabilityRequirement, Boolean paired) {
+        Double capabilityRequirement, Boolean paired, DistributionSetting distribution) {
     /** Nothing set. */
     public static final CharacteristicSettings EMPTY = new CharacteristicSettings(null, SpecLimits.NONE, null, null,
-            null, null);
+            null, null, null);
+
+    /**
+     * Criteria without a distribution setting.
+     *
+     * @param unit                  unit of measure
+     * @param spec                  specification limits
+     * @param margin                the equivalence margin as entered
+     * @param sdGrowthLimit         the largest acceptable σ_after/σ_before, or null
+     * @param capabilityRequirement the minimum acceptable capability index, or null
+     * @param paired                whether the design is paired, or null
+     */
+    public CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
+            Double capabilityRequirement, Boolean paired) {
+        this(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, null);
+    }
+
+    /**
+     * @param d the distribution setting, or null
+     * @return these criteria with it
+     */
+    public CharacteristicSettings withDistribution(DistributionSetting d) {
+        return new CharacteristicSettings(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, d);
+    }
 
     /** Normalises a null spec to {@link SpecLimits#NONE}. */
     public CharacteristicSettings {
@@ -43,7 +67,7 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
                 pick(other.spec.usl(), spec.usl()));
         return new CharacteristicSettings(pick(other.unit, unit), s, pick(other.margin, margin),
                 pick(other.sdGrowthLimit, sdGrowthLimit), pick(other.capabilityRequirement, capabilityRequirement),
-                pick(other.paired, paired));
+                pick(other.paired, paired), pick(other.distribution, distribution));
     }
 
     private static <T> T pick(T preferred, T fallback) {

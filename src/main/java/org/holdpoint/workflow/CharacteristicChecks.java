@@ -9,6 +9,12 @@ import java.util.Map;
 import java.util.Set;
 import org.holdpoint.stats.Capability;
 import org.holdpoint.stats.CapabilityResult;
+import org.holdpoint.stats.DistributionFamily;
+import org.holdpoint.stats.DistributionFits;
+import org.holdpoint.stats.FamilySelection;
+import org.holdpoint.stats.FittedDistribution;
+import org.holdpoint.stats.PercentileCapability;
+import org.holdpoint.stats.PercentileCapabilityResult;
 import org.holdpoint.stats.EsdResult;
 import org.holdpoint.stats.GeneralizedEsd;
 import org.holdpoint.stats.Grubbs;
@@ -27,6 +33,7 @@ import org.holdpoint.stats.WithinEstimator;
 import org.holdpoint.result.AssumptionChecks;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicSettings;
+import org.holdpoint.study.DistributionSetting;
 import org.holdpoint.result.FlaggedValue;
 import org.holdpoint.result.GroupChecks;
 import org.holdpoint.study.GroupData;
@@ -55,8 +62,12 @@ final class CharacteristicChecks {
 
     static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Margin margin, double alpha,
             boolean paired, boolean equalVariances, List<String> notes) {
-        GroupChecks before = group("before", c.before(), s, alpha, notes);
-        GroupChecks after = group("after", c.after(), s, alpha, notes);
+        NormalityResult nb = NormalityResult.of(c.before().sample());
+        NormalityResult na = NormalityResult.of(c.after().sample());
+        FamilySelection distribution = s.spec().any() ? selectFamily(c, s, nb, na, notes) : null;
+        DistributionFamily family = distribution == null ? DistributionFamily.NORMAL : distribution.chosen();
+        GroupChecks before = group("before", c.before(), nb, s, family, alpha, notes);
+        GroupChecks after = group("after", c.after(), na, s, family, alpha, notes);
         RankSumResult rankSum = null;
         SignedRankResult signedRank = null;
         try {
@@ -74,30 +85,89 @@ final class CharacteristicChecks {
         }
         Boolean capabilityMet = null;
         if (s.capabilityRequirement() != null) {
-            if (after.capability() == null || after.capability().ppkLower() == null) {
+            if (after.ppkLower() == null) {
                 notes.add("the capability requirement could not be judged: it needs LSL or USL and at least 2 "
-                        + "after values");
+                        + "after values" + (family != DistributionFamily.NORMAL ? " that the " + family.key()
+                        + " family can be fitted to" : ""));
             } else {
-                capabilityMet = after.capability().meets(s.capabilityRequirement());
+                capabilityMet = after.ppkLower() > s.capabilityRequirement();
             }
         }
         String recommendation = recommend(before, after, c, paired, equalVariances);
-        return new AssumptionChecks(before, after, rankSum, signedRank, capabilityMet, recommendation);
+        return new AssumptionChecks(before, after, rankSum, signedRank, capabilityMet, recommendation, distribution);
     }
 
-    private static GroupChecks group(String label, GroupData g, CharacteristicSettings s, double alpha,
-            List<String> notes) {
-        NormalityResult normality = NormalityResult.of(g.sample());
+    /**
+     * The family capability is judged by (docs/methods.md §14): the one set for the characteristic; else the
+     * default rule: {@code auto} when the characteristic is bounded at a natural zero (a USL, no LSL or an LSL of 0,
+     * and no negative value) or when either group departs strongly from a normal shape (Shapiro–Wilk p below
+     * {@link #SHAPE_STRONG}); the normal model otherwise.
+     */
+    static FamilySelection selectFamily(CharacteristicData c, CharacteristicSettings s, NormalityResult nb,
+            NormalityResult na, List<String> notes) {
+        DistributionSetting set = s.distribution();
+        if (set != null && set != DistributionSetting.AUTO) {
+            return FamilySelection.given(set.family(), "set in the criteria");
+        }
+        String why;
+        if (set == DistributionSetting.AUTO) {
+            why = "auto set in the criteria";
+        } else {
+            boolean zeroBounded = s.spec().usl() != null && (s.spec().lsl() == null || s.spec().lsl() == 0)
+                    && min(c.before().sample().values()) >= 0 && min(c.after().sample().values()) >= 0;
+            boolean skewed = strong(nb) || strong(na);
+            if (!zeroBounded && !skewed) {
+                return FamilySelection.given(DistributionFamily.NORMAL, "default rule: limits not at a natural zero "
+                        + "and no strong departure from a normal shape");
+            }
+            why = zeroBounded ? "default rule: an upper limit on a characteristic bounded at zero"
+                    : "default rule: a group departs strongly from a normal shape (Shapiro-Wilk p < " + SHAPE_STRONG + ")";
+        }
+        try {
+            FamilySelection byAic = FamilySelection.byAic(c.before().sample().values(), c.after().sample().values());
+            if (byAic.chosen() == DistributionFamily.NORMAL
+                    && byAic.candidates().stream().anyMatch(k -> k.refusal() != null)) {
+                notes.add("capability by the normal model only because no family bounded at zero could be fitted (it "
+                        + byAic.candidates().stream().filter(k -> k.refusal() != null).findFirst().orElseThrow()
+                                .refusal() + "); its tail below zero is not physical, so read Ppk and ppm with care");
+            }
+            return new FamilySelection(byAic.chosen(), true, why + "; " + byAic.reason(), byAic.candidates());
+        } catch (StatsException e) {
+            notes.add("no distribution could be fitted (" + e.getMessage() + "); capability by the normal model");
+            return FamilySelection.given(DistributionFamily.NORMAL, why + "; no other family could be fitted");
+        }
+    }
+
+    private static GroupChecks group(String label, GroupData g, NormalityResult normality, CharacteristicSettings s,
+            DistributionFamily family, double alpha, List<String> notes) {
         normality.notes().forEach(n -> notes.add(label + ": " + n));
+        FittedDistribution fit = null;
+        if (family != DistributionFamily.NORMAL && s.spec().any()) {
+            try {
+                fit = DistributionFits.fit(family, g.sample().values());
+            } catch (StatsException e) {
+                notes.add(label + ": the " + family.key() + " distribution could not be fitted: " + e.getMessage());
+            }
+        }
         GrubbsResult grubbs = null;
         EsdResult esd = null;
         List<FlaggedValue> flagged = new ArrayList<>();
+        String outliersOn = fit == null ? "values" : "normal scores of the fitted " + family.key() + " distribution";
         try {
-            grubbs = Grubbs.withDefaults().withAlpha(alpha).test(g.sample());
+            // on a skewed family the long tail is the process, not an outlier: test the values mapped to the
+            // normal scale through the fit, z = Φ⁻¹(F(x)) (docs/methods.md §14)
+            org.holdpoint.stats.Sample tested = fit == null ? g.sample() : normalScores(fit, g.sample());
+            grubbs = Grubbs.withDefaults().withAlpha(alpha).test(tested);
+            if (fit != null) {
+                // report the suspect as measured, not as its normal score
+                grubbs = new GrubbsResult(grubbs.n(), grubbs.side(), grubbs.g(), grubbs.index(),
+                        g.sample().value(grubbs.index()), grubbs.critical(), grubbs.p(), grubbs.alpha(), grubbs.outlier());
+            }
             int upTo = (int) Math.min(ESD_MAX_OUTLIERS, Math.max(1, (g.size() + 9L) / 10));
-            esd = GeneralizedEsd.withDefaults().withMaxOutliers(upTo).withAlpha(alpha).test(g.sample());
+            esd = GeneralizedEsd.withDefaults().withMaxOutliers(upTo).withAlpha(alpha).test(tested);
             for (int i : esd.outlierIndices()) {
-                flagged.add(new FlaggedValue(label, g.sample().value(i), g.origin(i), "generalized ESD (Rosner 1983)"));
+                flagged.add(new FlaggedValue(label, g.sample().value(i), g.origin(i), fit == null
+                        ? "generalized ESD (Rosner 1983)" : "generalized ESD (Rosner 1983) on the " + outliersOn));
             }
             if (!flagged.isEmpty()) {
                 notes.add(String.format(Locale.ROOT, "%s: %d value(s) flagged as possible outliers (kept in the "
@@ -136,7 +206,16 @@ final class CharacteristicChecks {
             }
         }
         CapabilityResult capability = null;
-        if (s.spec().any()) {
+        PercentileCapabilityResult percentile = null;
+        if (fit != null) {
+            try {
+                percentile = PercentileCapability.of(s.spec().lsl(), s.spec().usl(), alpha).compute(fit,
+                        g.sample().values());
+                percentile.notes().forEach(n -> notes.add(label + " capability: " + n));
+            } catch (StatsException e) {
+                notes.add(label + ": capability not computed: " + e.getMessage());
+            }
+        } else if (s.spec().any()) {
             try {
                 Capability cap = Capability.withDefaults().withLimits(s.spec().lsl(), s.spec().usl()).withAlpha(alpha);
                 capability = g.hasSubgroups() ? cap.with(WithinEstimator.POOLED_SD).compute(g.sample(),
@@ -146,7 +225,27 @@ final class CharacteristicChecks {
                 notes.add(label + ": capability not computed: " + e.getMessage());
             }
         }
-        return new GroupChecks(normality, grubbs, esd, flagged, lag1, runs, lots, capability);
+        return new GroupChecks(normality, grubbs, esd, flagged, lag1, runs, lots, capability, percentile, outliersOn);
+    }
+
+    private static double min(double[] v) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double x : v) {
+            m = Math.min(m, x);
+        }
+        return m;
+    }
+
+    private static org.holdpoint.stats.Sample normalScores(FittedDistribution fit, org.holdpoint.stats.Sample x) {
+        double[] z = new double[x.size()];
+        for (int i = 0; i < z.length; i++) {
+            double lo = fit.lowerTail(x.value(i));
+            double up = fit.upperTail(x.value(i));
+            // each side from its own tail, so a far value keeps its distance
+            z[i] = lo <= up ? org.holdpoint.stats.Normal.quantile(Math.max(lo, Double.MIN_NORMAL))
+                    : -org.holdpoint.stats.Normal.quantile(Math.max(up, Double.MIN_NORMAL));
+        }
+        return org.holdpoint.stats.Sample.of(z);
     }
 
     /** The group in the order of its sequence column (numeric when every entry is a number, else as text). */

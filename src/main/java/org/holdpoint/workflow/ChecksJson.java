@@ -4,6 +4,8 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.holdpoint.stats.CapabilityResult;
+import org.holdpoint.stats.FamilySelection;
+import org.holdpoint.stats.PercentileCapabilityResult;
 import org.holdpoint.stats.EsdResult;
 import org.holdpoint.stats.GrubbsResult;
 import org.holdpoint.stats.NormalityResult;
@@ -35,12 +37,15 @@ final class ChecksJson {
         ObjectNode normality = n.putObject("normality");
         normality.set("before", normality(c.before().normality()));
         normality.set("after", normality(c.after().normality()));
-        if (c.before().capability() != null || c.after().capability() != null) {
+        if (c.before().hasCapability() || c.after().hasCapability()) {
             ObjectNode cap = n.putObject("capability");
-            cap.set("before", capability(c.before().capability()));
-            cap.set("after", capability(c.after().capability()));
+            cap.set("before", capability(c.before()));
+            cap.set("after", capability(c.after()));
             if (c.capabilityMet() != null) {
                 cap.put("requirementMet", c.capabilityMet());
+            }
+            if (c.distribution() != null) {
+                cap.set("model", model(c.distribution()));
             }
         }
         ObjectNode outliers = n.putObject("outliers");
@@ -110,11 +115,41 @@ final class ChecksJson {
         return o;
     }
 
-    private static ObjectNode capability(CapabilityResult c) {
+    private static ObjectNode model(FamilySelection m) {
+        ObjectNode o = F.objectNode();
+        o.put("distribution", m.chosen().key());
+        o.put("chosenBy", m.automatic() ? "aic" : "setting or rule");
+        o.put("reason", m.reason());
+        ArrayNode candidates = o.putArray("candidates");
+        for (FamilySelection.Candidate c : m.candidates()) {
+            ObjectNode x = candidates.addObject();
+            x.put("distribution", c.family().key());
+            ResultJson.numOrNull(x, "aic", c.aic());
+            ArrayNode ad = x.putArray("andersonDarling");
+            c.ad().forEach(v -> ResultJson.addNum(ad, v));
+            x.put("notFitted", c.refusal());
+        }
+        return o;
+    }
+
+    private static ObjectNode capability(GroupChecks g) {
+        if (g.percentile() != null) {
+            return percentile(g.percentile());
+        }
+        CapabilityResult c = g.capability();
         ObjectNode o = F.objectNode();
         if (c == null) {
             return o;
         }
+        o.put("method", "normal");
+        o.put("distribution", "normal");
+        ObjectNode p = o.putObject("parameters");
+        ResultJson.num(p, "mean", c.mean());
+        ResultJson.num(p, "sd", c.sd());
+        // the normal model's indices rest on x̄ ± 3s: those are its "quantiles"
+        ResultJson.num(o, "x00135", c.mean() - 3 * c.sd());
+        ResultJson.num(o, "x50", c.mean());
+        ResultJson.num(o, "x99865", c.mean() + 3 * c.sd());
         ResultJson.numOrNull(o, "pp", c.pp());
         ResultJson.numOrNull(o, "ppk", c.ppk());
         ResultJson.numOrNull(o, "ppkLower", c.ppkLower());
@@ -129,8 +164,31 @@ final class ChecksJson {
         return o;
     }
 
+    private static ObjectNode percentile(PercentileCapabilityResult c) {
+        ObjectNode o = F.objectNode();
+        o.put("method", "percentile");
+        o.put("distribution", c.fit().family().key());
+        ObjectNode p = o.putObject("parameters");
+        c.fit().parameters().forEach((k, v) -> ResultJson.num(p, k, v));
+        ResultJson.num(o, "x00135", c.x00135());
+        ResultJson.num(o, "x50", c.x50());
+        ResultJson.num(o, "x99865", c.x99865());
+        ResultJson.numOrNull(o, "pp", c.pp());
+        ResultJson.numOrNull(o, "ppk", c.ppk());
+        ResultJson.numOrNull(o, "ppkLower", c.ppkLower());
+        ResultJson.numOrNull(o, "ppmBelow", c.ppmBelow());
+        ResultJson.numOrNull(o, "ppmAbove", c.ppmAbove());
+        ResultJson.num(o, "level", 1 - c.alpha());
+        ObjectNode b = o.putObject("bootstrap");
+        b.put("seed", c.seed());
+        b.put("resamples", c.resamples());
+        b.put("bound", "Ppk - z(1-alpha) * sd of the resampled Ppk");
+        return o;
+    }
+
     private static ObjectNode outliers(GroupChecks g) {
         ObjectNode o = F.objectNode();
+        o.put("testedOn", g.outliersOn());
         GrubbsResult gr = g.grubbs();
         if (gr != null) {
             ObjectNode x = o.putObject("grubbs");

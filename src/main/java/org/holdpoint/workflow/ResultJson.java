@@ -319,6 +319,15 @@ public final class ResultJson {
         }
     }
 
+    /** Adds a number to an array, or null when it is NaN or infinite. */
+    static void addNum(com.fasterxml.jackson.databind.node.ArrayNode a, double v) {
+        if (Double.isFinite(v)) {
+            a.add(v);
+        } else {
+            a.addNull();
+        }
+    }
+
     static void numOrNull(ObjectNode o, String key, Double v) {
         if (v == null) {
             o.putNull(key);

@@ -48,8 +48,12 @@ import org.holdpoint.result.StudyResult;
  * SHA-256 identifies it. The format is documented in {@code docs/study-file.md}.
  */
 public final class StudyFiles {
-    /** The schema version this code writes. */
-    public static final int SCHEMA_VERSION = 2;
+    /**
+     * The schema version this code writes. 3 adds the {@code distribution} criterion and the default rule that
+     * judges a skewed or zero-bounded characteristic's capability by a fitted distribution; a study of schema 1
+     * or 2 was computed with the normal model throughout and is read so (docs/study-file.md).
+     */
+    public static final int SCHEMA_VERSION = 3;
     private static final JsonNodeFactory F = JsonNodeFactory.instance;
     private static final ObjectMapper CANONICAL = new ObjectMapper()
             .enable(com.fasterxml.jackson.core.JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN);
@@ -390,8 +394,13 @@ public final class StudyFiles {
                     : Exclusion.Group.valueOf(group.toUpperCase(java.util.Locale.ROOT)), text(x, "cell"),
                     text(x, "reason")));
         }
+        CharacteristicSettings defaults = readCriteria(o.path("defaults"), version, name, "defaults");
+        if (version < 3) {
+            // before schema 3 every capability was the normal model's: re-computed so, it gives the same record
+            defaults = defaults.withDistribution(org.holdpoint.study.DistributionSetting.NORMAL);
+        }
         return new AnalysisSettings(o.path("alpha").asDouble(0.05), o.path("equalVariances").asBoolean(false),
-                o.path("holm").asBoolean(false), readCriteria(o.path("defaults"), version, name, "defaults"), per,
+                o.path("holm").asBoolean(false), defaults, per,
                 readCriteria(o.path("overrides"), version, name, "overrides"), ex);
     }
 

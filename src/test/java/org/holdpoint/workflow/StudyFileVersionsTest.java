@@ -59,6 +59,13 @@ class StudyFileVersionsTest {
         ChangeStudy study = StudyFiles.read(file);
         assertThat(study.data().characteristics()).hasSize(7);
         StudyResult again = reComputesToItsStoredVerdicts(study, stored);
+        // schema 2 knew only the normal model: re-computed so, its one-sided characteristics keep their normal Ppk
+        assertThat(study.settings().defaults().distribution()).isEqualTo(org.holdpoint.study.DistributionSetting.NORMAL);
+        again.characteristics().forEach(r -> {
+            if (r.checks() != null) {
+                assertThat(r.checks().after().percentile()).as(r.name()).isNull();
+            }
+        });
         VerifyResult v = new VerifyUseCase().verify(resource("signoff-v2-demo.xlsx"), null, Progress.NONE);
         assertThat(v.differences()).isEmpty();
         assertThat(v.status()).isEqualTo(VerifyResult.Status.INTACT);

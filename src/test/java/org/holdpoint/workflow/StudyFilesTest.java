@@ -98,13 +98,15 @@ class StudyFilesTest {
         per.put("Shaft length", new CharacteristicSettings("mm", new SpecLimits(9999999.0, 10000000.0, 10000001.0),
                 new MarginSpec(MarginSpec.Kind.ABSOLUTE, -0.25, 0.25), 1.3, 1.33, false));
         per.put("Flatness", new CharacteristicSettings("mm", new SpecLimits(null, null, 0.05),
-                new MarginSpec(MarginSpec.Kind.ABSOLUTE, null, 0.02), null, 1.0, null));
+                new MarginSpec(MarginSpec.Kind.ABSOLUTE, null, 0.02), null, 1.0, null,
+                org.holdpoint.study.DistributionSetting.WEIBULL));
         per.put("Bore", new CharacteristicSettings(null, new SpecLimits(11.99, null, 12.01),
                 new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, 5.0, 12.5), 1.2, null, true));
         per.put("Web", new CharacteristicSettings(null, new SpecLimits(2.0, null, 3.0),
                 new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, 10.0, 10.0), null, null, null));
         per.put("Burr", new CharacteristicSettings(null, new SpecLimits(null, null, 0.1),
-                new MarginSpec(MarginSpec.Kind.ABSOLUTE, -0.01, 0.03), null, null, null));
+                new MarginSpec(MarginSpec.Kind.ABSOLUTE, -0.01, 0.03), null, null, null,
+                org.holdpoint.study.DistributionSetting.AUTO));
         CharacteristicSettings defaults = new CharacteristicSettings(null, new SpecLimits(null, null, null),
                 new MarginSpec(MarginSpec.Kind.PERCENT_OF_TOLERANCE, 10.0, 10.0), 1.5, null, null);
         AnalysisSettings settings = new AnalysisSettings(0.05, false, false, defaults, per, null,
@@ -117,11 +119,14 @@ class StudyFilesTest {
         ChangeStudy back = StudyFiles.read(file);
         assertThat(back.settings()).isEqualTo(settings);
         com.fasterxml.jackson.databind.JsonNode tree = StudyFiles.tree(Files.readString(file));
-        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(2);
+        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(3);
         com.fasterxml.jackson.databind.JsonNode saved = tree.path("settings");
         assertThat(saved.path("perCharacteristic").path("Shaft length").path("margin").asDouble()).isEqualTo(0.25);
         assertThat(saved.path("perCharacteristic").path("Web").path("margin_percent").asDouble()).isEqualTo(10);
         assertThat(saved.path("perCharacteristic").path("Burr").path("margin_lower").asDouble()).isEqualTo(-0.01);
+        // the distribution is spelled as in a settings file
+        assertThat(saved.path("perCharacteristic").path("Flatness").path("distribution").asText()).isEqualTo("weibull");
+        assertThat(saved.path("perCharacteristic").path("Burr").path("distribution").asText()).isEqualTo("auto");
         assertThat(saved.path("exclusions").get(0).path("group").asText()).isEqualTo("after");
         // the same objects as a settings file, read by the settings reader
         com.fasterxml.jackson.databind.node.ObjectNode asSettings =

@@ -101,8 +101,8 @@ public enum VerdictLook {
                     + " above " + org.holdpoint.result.Format.num(r.sdGrowth().limit()));
         }
         if (r.capabilityFailed()) {
-            var cap = r.checks().after().capability();
-            failed.add("capability: Ppk bound " + (cap == null || cap.ppkLower() == null ? "undefined"
+            var cap = r.checks().after();
+            failed.add("capability: Ppk bound " + (cap.ppkLower() == null ? "undefined"
                     : org.holdpoint.result.Format.ratio(cap.ppkLower())) + " below "
                     + org.holdpoint.result.Format.num(r.settings().capabilityRequirement()));
         }
