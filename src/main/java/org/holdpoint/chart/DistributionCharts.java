@@ -3,6 +3,7 @@ package org.holdpoint.chart;
 import java.awt.BasicStroke;
 import java.util.Arrays;
 import org.holdpoint.stats.Descriptives;
+import org.holdpoint.stats.FittedDistribution;
 import org.holdpoint.stats.Normal;
 import org.holdpoint.stats.Quantiles;
 import org.holdpoint.stats.Sample;
@@ -56,6 +57,21 @@ public final class DistributionCharts {
      * @return the chart, whose plot is a {@link CombinedDomainXYPlot} of two subplots (before, after)
      */
     public static JFreeChart histogram(CharacteristicData data, SpecLimits limits, ChartTheme theme) {
+        return histogram(data, limits, theme, null);
+    }
+
+    /**
+     * As {@link #histogram(CharacteristicData, SpecLimits, ChartTheme)}, each panel's curve the density of the
+     * distribution fitted to that group (docs/methods.md §14) when {@code fits} is given.
+     *
+     * @param data   the characteristic
+     * @param limits the spec limits to draw
+     * @param theme  the theme
+     * @param fits   the fitted distributions of before and after, or null for the normal curve
+     * @return the chart
+     */
+    public static JFreeChart histogram(CharacteristicData data, SpecLimits limits, ChartTheme theme,
+            FittedDistribution[] fits) {
         Sample[] groups = {data.before().sample(), data.after().sample()};
         double[] all = pooled(groups);
         Arrays.sort(all);
@@ -65,7 +81,10 @@ public final class DistributionCharts {
         Descriptives[] d = new Descriptives[2];
         for (int g = 0; g < 2; g++) {
             d[g] = Descriptives.of(groups[g]);
-            if (d[g].n() > 1 && d[g].sd() > 0) {
+            if (fits != null) {
+                lo = Math.min(lo, fits[g].quantile(0.001));
+                hi = Math.max(hi, fits[g].quantile(0.999));
+            } else if (d[g].n() > 1 && d[g].sd() > 0) {
                 lo = Math.min(lo, d[g].mean() - 3.5 * d[g].sd());
                 hi = Math.max(hi, d[g].mean() + 3.5 * d[g].sd());
             }
@@ -79,7 +98,7 @@ public final class DistributionCharts {
         XYPlot[] panels = new XYPlot[2];
         double top = 1;
         for (int g = 0; g < 2; g++) {
-            panels[g] = panel(groups[g], d[g], edges, x.getRange(), g, limits, theme);
+            panels[g] = panel(groups[g], d[g], edges, x.getRange(), g, limits, theme, fits == null ? null : fits[g]);
             top = Math.max(top, panels[g].getRangeAxis().getUpperBound());
         }
         for (XYPlot p : panels) {
@@ -88,13 +107,15 @@ public final class DistributionCharts {
             plot.add(p, 1);
         }
         int decimals = Math.min(10, data.resolutionDecimals() + 2);
-        plot.setFixedLegendItems(histogramLegend(d, limits, theme, decimals));
+        plot.setFixedLegendItems(histogramLegend(d, limits, theme, decimals, fits == null ? "normal"
+                : fits[0].family().key()));
         JFreeChart chart = new JFreeChart(data.name(), theme.titleFont(), plot, false);
-        chart.addSubtitle(theme.subtitle("distribution before and after, with the fitted normal curve"));
+        String family = fits == null ? "normal" : fits[0].family().key();
+        chart.addSubtitle(theme.subtitle("distribution before and after, with the fitted " + family + " curve"));
         chart.addSubtitle(theme.note(String.format(java.util.Locale.ROOT, "Common bins of width %s (%d bins, "
                 + "Freedman\u2013Diaconis rule with at least \u221an + 2 bins, in whole measuring steps when the values lie on a "
-                + "grid); curve: "
-                + "normal density with the group's mean and sd, scaled to counts.",
+                + "grid); curve: " + (fits == null ? "normal density with the group's mean and sd"
+                        : family + " density fitted to each group by maximum likelihood") + ", scaled to counts.",
                 Numbers.fixed(edges[1] - edges[0], Math.max(decimals - 2, decimalsOf(edges[1] - edges[0]))),
                 edges.length - 1)));
         chart.addSubtitle(BoxPlotChart.legend(plot));
@@ -106,7 +127,7 @@ public final class DistributionCharts {
     }
 
     private static XYPlot panel(Sample sample, Descriptives d, double[] edges, Range xRange, int g,
-            SpecLimits limits, ChartTheme theme) {
+            SpecLimits limits, ChartTheme theme, FittedDistribution fit) {
         int[] counts = counts(sample, edges);
         XYIntervalSeries bars = new XYIntervalSeries(g == 0 ? "before" : "after", false, true);
         int max = 0;
@@ -128,12 +149,17 @@ public final class DistributionCharts {
         barRenderer.setSeriesOutlineStroke(0, new BasicStroke(0.8f));
         XYPlot p = new XYPlot(barData, null, y, barRenderer);
         double curveMax = 0;
-        if (d.n() > 1 && d.sd() > 0) {
-            XYSeries curve = new XYSeries("normal fit, " + (g == 0 ? "before" : "after"), false, false);
+        if (fit != null || d.n() > 1 && d.sd() > 0) {
+            XYSeries curve = new XYSeries((fit == null ? "normal" : fit.family().key()) + " fit, " + (g == 0 ? "before"
+                    : "after"), false, false);
             double w = edges[1] - edges[0];
             for (int i = 0; i < CURVE_POINTS; i++) {
                 double xv = xRange.getLowerBound() + xRange.getLength() * i / (CURVE_POINTS - 1);
-                double yv = d.n() * w * Normal.density((xv - d.mean()) / d.sd()) / d.sd();
+                double yv = fit != null ? d.n() * w * Math.exp(fit.logDensity(xv))
+                        : d.n() * w * Normal.density((xv - d.mean()) / d.sd()) / d.sd();
+                if (!Double.isFinite(yv)) {
+                    continue;
+                }
                 curve.add(xv, yv);
                 curveMax = Math.max(curveMax, yv);
             }
@@ -158,7 +184,7 @@ public final class DistributionCharts {
     }
 
     private static LegendItemCollection histogramLegend(Descriptives[] d, SpecLimits limits, ChartTheme theme,
-            int decimals) {
+            int decimals, String family) {
         LegendItemCollection items = new LegendItemCollection();
         for (int g = 0; g < 2; g++) {
             String text = String.format(java.util.Locale.ROOT, "%s: n = %d, mean %s, sd %s", g == 0 ? "before"
@@ -168,7 +194,7 @@ public final class DistributionCharts {
                     new java.awt.Rectangle(-6, -4, 12, 8), theme.groupFill(g), new BasicStroke(0.8f),
                     theme.groupColour(g)));
         }
-        items.add(new LegendItem("fitted normal", null, null, null, new java.awt.geom.Line2D.Double(-8, 0, 8, 0),
+        items.add(new LegendItem("fitted " + family, null, null, null, new java.awt.geom.Line2D.Double(-8, 0, 8, 0),
                 new BasicStroke(1.8f), ChartTheme.MUTED));
         if (limits != null && limits.any()) {
             items.add(new LegendItem("spec limit", null, null, null, new java.awt.geom.Line2D.Double(-8, 0, 8, 0),
@@ -190,6 +216,22 @@ public final class DistributionCharts {
      * @return the chart
      */
     public static JFreeChart normalProbability(CharacteristicData data, SpecLimits limits, ChartTheme theme) {
+        return probability(data, limits, theme, null);
+    }
+
+    /**
+     * A probability plot on the normal plot's axes: each sorted value against the standard normal quantile of its
+     * Blom position, with each group's fitted quantile function x = F⁻¹(Φ(z)) as its reference: a straight line for
+     * the normal model, a curve for a fitted family (docs/methods.md §14).
+     *
+     * @param data   the characteristic
+     * @param limits the spec limits to draw as horizontal lines
+     * @param theme  the theme
+     * @param fits   the fitted distributions of before and after, or null for the normal reference lines
+     * @return the chart
+     */
+    public static JFreeChart probability(CharacteristicData data, SpecLimits limits, ChartTheme theme,
+            FittedDistribution[] fits) {
         Sample[] groups = {data.before().sample(), data.after().sample()};
         XYSeriesCollection points = new XYSeriesCollection();
         XYSeriesCollection lines = new XYSeriesCollection();
@@ -211,8 +253,17 @@ public final class DistributionCharts {
             lo = Math.min(lo, sorted[0]);
             hi = Math.max(hi, sorted[n - 1]);
             Descriptives d = Descriptives.of(groups[g]);
-            XYSeries ref = new XYSeries("reference line, " + name, false, true);
-            if (n > 1 && d.sd() > 0) {
+            XYSeries ref = new XYSeries((fits == null ? "reference line, " : "fitted " + fits[g].family().key() + ", ")
+                    + name, false, true);
+            if (fits != null) {
+                for (int i = 0; i <= 60; i++) {
+                    double z = -zMax - 0.3 + (2 * zMax + 0.6) * i / 60;
+                    double p = Normal.cdf(z);
+                    if (p > 0 && p < 1) {
+                        ref.add(z, fits[g].quantile(p));
+                    }
+                }
+            } else if (n > 1 && d.sd() > 0) {
                 ref.add(-zMax - 0.3, d.mean() - (zMax + 0.3) * d.sd());
                 ref.add(zMax + 0.3, d.mean() + (zMax + 0.3) * d.sd());
             }
@@ -238,9 +289,18 @@ public final class DistributionCharts {
         plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
         addRangeLimits(plot, limits, theme);
         JFreeChart chart = new JFreeChart(data.name(), theme.titleFont(), plot, false);
-        chart.addSubtitle(theme.subtitle("normal probability plot: points near their line fit a normal distribution"));
-        chart.addSubtitle(theme.note("Plotting positions (i \u2212 3/8)/(n + 1/4) (Blom 1958); reference line: "
-                + "mean + sd \u00d7 z of each group. Quantiles shown elsewhere use " + Quantiles.METHOD + "."));
+        if (fits == null) {
+            chart.addSubtitle(theme.subtitle("normal probability plot: points near their line fit a normal distribution"));
+            chart.addSubtitle(theme.note("Plotting positions (i \u2212 3/8)/(n + 1/4) (Blom 1958); reference line: "
+                    + "mean + sd \u00d7 z of each group. Quantiles shown elsewhere use " + Quantiles.METHOD + "."));
+        } else {
+            String family = fits[0].family().key();
+            chart.addSubtitle(theme.subtitle("probability plot: points near their curve fit the " + family
+                    + " distribution"));
+            chart.addSubtitle(theme.note("Plotting positions (i \u2212 3/8)/(n + 1/4) (Blom 1958) on the normal scale; "
+                    + "curve: the quantiles of the " + family + " distribution fitted to each group by maximum "
+                    + "likelihood."));
+        }
         chart.addSubtitle(BoxPlotChart.legend(plot));
         theme.apply(chart);
         return chart;

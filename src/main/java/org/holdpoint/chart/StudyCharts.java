@@ -138,10 +138,20 @@ public final class StudyCharts {
                         BoxPlotChart.withCriteria(BoxPlotChart.create(d, limits, theme), result, theme), theme.width(),
                         h),
                 new NamedChart(stem + ChartKind.HISTOGRAM.fileSuffix() + ".png", ChartKind.HISTOGRAM, data.name(),
-                        DistributionCharts.histogram(d, limits, theme), theme.width(), h),
+                        DistributionCharts.histogram(d, limits, theme, fits(result)), theme.width(), h),
                 new NamedChart(stem + ChartKind.NORMAL_PROBABILITY.fileSuffix() + ".png",
-                        ChartKind.NORMAL_PROBABILITY, data.name(), DistributionCharts.normalProbability(d, limits, theme),
-                        theme.width(), h));
+                        ChartKind.NORMAL_PROBABILITY, data.name(), DistributionCharts.probability(d, limits, theme,
+                                fits(result)), theme.width(), h));
+    }
+
+    /** The fitted distributions of both groups when capability is judged by a fitted family, else null. */
+    private static org.holdpoint.stats.FittedDistribution[] fits(CharacteristicResult r) {
+        var k = r.checks();
+        if (k == null || k.before().percentile() == null || k.after().percentile() == null) {
+            return null;
+        }
+        return new org.holdpoint.stats.FittedDistribution[] {k.before().percentile().fit(),
+            k.after().percentile().fit()};
     }
 
     /**

@@ -3,6 +3,7 @@ package org.holdpoint.report;
 import java.util.ArrayList;
 import java.util.List;
 import org.holdpoint.stats.CapabilityResult;
+import org.holdpoint.stats.PercentileCapabilityResult;
 import org.holdpoint.stats.NormalityResult;
 import org.holdpoint.stats.RankEquivalence;
 import org.holdpoint.stats.RankInterval;
@@ -201,6 +202,12 @@ final class ChecksPlan {
     }
 
     private int capability(int r, String n, CharacteristicResult c, AssumptionChecks k, int d, List<String> notes) {
+        if (k.distribution() != null && k.distribution().automatic()) {
+            notes.add("Capability model: " + k.distribution().chosen().key() + " (" + k.distribution().reason() + ").");
+        }
+        if (k.before().percentile() != null || k.after().percentile() != null) {
+            return fitted(r, n, c, k, d, notes);
+        }
         CapabilityResult b = k.before().capability();
         CapabilityResult a = k.after().capability();
         if (b == null && a == null) {
@@ -303,6 +310,82 @@ final class ChecksPlan {
             s.text(r + i, col + 1, "", Style.CELL_WRAP, n + ": within estimator");
         }
         return r + 11;
+    }
+
+    /**
+     * How the parts sit in the tolerance when capability is judged by a fitted distribution (percentile method,
+     * docs/methods.md §14): the sentence that decides, the indices and the fitted quantiles before and after, the
+     * expected share outside, and the model with its parameters.
+     */
+    private int fitted(int r, String n, CharacteristicResult c, AssumptionChecks k, int d, List<String> notes) {
+        PercentileCapabilityResult b = k.before().percentile();
+        PercentileCapabilityResult a = k.after().percentile();
+        PercentileCapabilityResult any = a != null ? a : b;
+        addNotes(notes, "capability before", b == null ? List.of() : b.notes());
+        addNotes(notes, "capability after", a == null ? List.of() : a.notes());
+        String family = any.fit().family().key();
+        String lvl = Texts.percent(1 - any.alpha());
+        s.text(r, c0, "In the tolerance (" + family + " fit, percentile method)", Style.HEADER, n + ": capability header");
+        s.merge(r, r, c0, c0 + 5);
+        Double req = c.settings().capabilityRequirement();
+        String decides;
+        if (a == null || a.ppkLower() == null || !Double.isFinite(a.ppkLower())) {
+            decides = "The after group's lower bound of Ppk is undefined" + (req == null ? "; no requirement set."
+                    : ", so the requirement of " + Texts.num(req) + " is not judged.");
+        } else {
+            decides = "Decides: the after group's " + lvl + " lower bound of Ppk, " + WorkbookPlan.fixed(a.ppkLower(),
+                    3) + (req == null ? "; no requirement set." : Boolean.TRUE.equals(k.capabilityMet())
+                    ? ", meets the required " + Texts.num(req) + "." : ", does NOT meet the required " + Texts.num(req)
+                    + ".");
+        }
+        s.text(r + 1, c0, decides, Style.WRAP, n + ": capability decides");
+        s.merge(r + 1, r + 1, c0, c0 + 5);
+        s.height(r + 1, 16f);
+        s.text(r + 2, c0, "Index", Style.HEADER, n + ": capability index header");
+        s.text(r + 2, c0 + 1, "Before", Style.HEADER, n + ": capability before header");
+        s.text(r + 2, c0 + 2, "After", Style.HEADER, n + ": capability after header");
+        pcRow(r + 3, "Ppk (percentile)", b, a, PercentileCapabilityResult::ppk, 3, n + ": Ppk");
+        pcRow(r + 4, lvl + " lower bound of Ppk (bootstrap)", b, a, PercentileCapabilityResult::ppkLower, 3,
+                n + ": Ppk lower bound");
+        pcRow(r + 5, "Pp (percentile)", b, a, PercentileCapabilityResult::pp, 3, n + ": Pp");
+        int qd = d;
+        pcRow(r + 6, "X0.135 % of the fit", b, a, PercentileCapabilityResult::x00135, qd, n + ": X0.135");
+        pcRow(r + 7, "X50 % of the fit", b, a, PercentileCapabilityResult::x50, qd, n + ": X50");
+        pcRow(r + 8, "X99.865 % of the fit", b, a, PercentileCapabilityResult::x99865, qd, n + ": X99.865");
+        pcRow(r + 9, "Expected ppm below LSL", b, a, PercentileCapabilityResult::ppmBelow, 2, n + ": ppm below LSL");
+        pcRow(r + 10, "Expected ppm above USL", b, a, PercentileCapabilityResult::ppmAbove, 2, n + ": ppm above USL");
+        int col = c0 + 4;
+        s.text(r + 2, col, "Fitted " + family, Style.HEADER, n + ": fit header");
+        s.text(r + 2, col + 1, "", Style.HEADER, n + ": fit header");
+        StringBuilder params = new StringBuilder();
+        for (PercentileCapabilityResult p : new PercentileCapabilityResult[] {b, a}) {
+            if (p == null) {
+                continue;
+            }
+            params.append(params.length() == 0 ? "before: " : "; after: ");
+            StringBuilder one = new StringBuilder();
+            p.fit().parameters().forEach((key, v) -> one.append(one.length() == 0 ? "" : ", ").append(key)
+                    .append(" ").append(Texts.num(v)));
+            params.append(one);
+        }
+        params.append(". Bootstrap bound: seed ").append(any.seed()).append(", ").append(any.resamples())
+                .append(" resamples.");
+        s.text(r + 3, col, params.toString(), Style.CELL_WRAP, n + ": fit parameters");
+        s.merge(r + 3, r + 8, col, col + 1);
+        s.text(r + 3, col + 1, "", Style.CELL_WRAP, n + ": fit parameters");
+        for (int i = 4; i <= 8; i++) {
+            s.text(r + i, col, "", Style.CELL_WRAP, n + ": fit parameters");
+            s.text(r + i, col + 1, "", Style.CELL_WRAP, n + ": fit parameters");
+        }
+        if (req != null && k.capabilityMet() == null) {
+            notes.add("Capability requirement: not judged, the after group's lower bound of Ppk is undefined.");
+        }
+        return r + 12;
+    }
+
+    private void pcRow(int r, String label, PercentileCapabilityResult b, PercentileCapabilityResult a,
+            java.util.function.Function<PercentileCapabilityResult, Double> f, int d, String what) {
+        row(r, label, b == null ? null : f.apply(b), a == null ? null : f.apply(a), Style.NUMBER, d, what);
     }
 
     static String met(Boolean met, Double requirement) {

@@ -115,7 +115,7 @@ final class DetailPlan {
      */
     private int layout2(int row, int index, String n, CharacteristicResult c, List<NamedImage> charts, int count) {
         if (count > 0) {
-            s.captions.add(new ShownCell(row, c0, caption(charts, 0, n), Style.LABEL, 0, n + CAPTION));
+            s.captions.add(new ShownCell(row, c0, caption(charts, 0, n, fittedFamily(c)), Style.LABEL, 0, n + CAPTION));
             if (!charts.isEmpty()) {
                 s.images.add(new SheetContent.PlacedImage(charts.get(0), row + 1, c0, WIDE_CHART_WIDTH_POINTS));
             }
@@ -129,7 +129,7 @@ final class DetailPlan {
         for (int i = 1; i < count; i += 2) {
             for (int j = i; j < Math.min(i + 2, count); j++) {
                 int col = c0 + ((j - 1) % 2 == 0 ? 0 : 3);
-                s.captions.add(new ShownCell(row, col, caption(charts, j, n), Style.LABEL, 0, n + CAPTION));
+                s.captions.add(new ShownCell(row, col, caption(charts, j, n, fittedFamily(c)), Style.LABEL, 0, n + CAPTION));
                 if (j < charts.size()) {
                     s.images.add(new SheetContent.PlacedImage(charts.get(j), row + 1, col, CHART_WIDTH_POINTS));
                 }
@@ -151,14 +151,35 @@ final class DetailPlan {
      * @return e.g. "Box plot of Bore diameter: before and after, every value shown"
      */
     static String caption(List<NamedImage> charts, int j, String n) {
+        return caption(charts, j, n, null);
+    }
+
+    /** The family the charts draw when capability is judged by a fitted distribution, else null (normal). */
+    static String fittedFamily(CharacteristicResult c) {
+        var k = c.checks();
+        if (k == null || k.before().percentile() == null || k.after().percentile() == null) {
+            return null;
+        }
+        return k.after().percentile().fit().family().key();
+    }
+
+    /**
+     * @param charts the characteristic's charts
+     * @param j      the chart's position
+     * @param n      the characteristic's name
+     * @param family the fitted family the histogram and probability plot draw, or null for the normal model
+     * @return the caption
+     */
+    static String caption(List<NamedImage> charts, int j, String n, String family) {
         String file = j < charts.size() ? charts.get(j).name() : "";
         String what;
         if (file.endsWith("-box.png")) {
             what = "Box plot of " + n + ": before and after, every value shown, with the specification limits";
         } else if (file.endsWith("-histogram.png")) {
-            what = "Histograms on common bins, fitted normal curve";
+            what = "Histograms on common bins, fitted " + (family == null ? "normal" : family) + " curve";
         } else if (file.endsWith("-normal-plot.png")) {
-            what = "Normal probability plot";
+            what = family == null ? "Normal probability plot" : "Probability plot against the fitted " + family
+                    + " distribution";
         } else {
             what = file.isEmpty() ? "" : "Chart of " + n + " (" + file + ")";
         }

@@ -416,12 +416,11 @@ final class WorkbookPlan {
      */
     static String capability(CharacteristicResult c) {
         var k = c.checks();
-        var cap = k == null || k.after() == null ? null : k.after().capability();
-        if (cap == null) {
+        if (k == null || k.after() == null || !k.after().hasCapability()) {
             return "";
         }
         Double req = c.settings().capabilityRequirement();
-        Double lb = cap.ppkLower();
+        Double lb = k.after().ppkLower();
         if (lb == null || !Double.isFinite(lb)) {
             return "undefined (see Details)";
         }

@@ -93,6 +93,9 @@ public final class ResultDetail {
         if (k == null) {
             return null;
         }
+        if (k.before().percentile() != null || k.after().percentile() != null) {
+            return fitted(r, k);
+        }
         var b = k.before() == null ? null : k.before().capability();
         var a = k.after() == null ? null : k.after().capability();
         if (a == null && b == null) {
@@ -121,6 +124,41 @@ public final class ResultDetail {
         l.add(new Line("", "Ppk from the overall sd; expected parts per million below LSL + above USL under the "
                 + "normal model, which a skewed characteristic does not follow (see the shape checks)."));
         return new Section("In the tolerance", l);
+    }
+
+    /** The tolerance section when capability is judged by a fitted distribution (percentile method). */
+    private static Section fitted(CharacteristicResult r, org.holdpoint.result.AssumptionChecks k) {
+        var b = k.before().percentile();
+        var a = k.after().percentile();
+        var any = a != null ? a : b;
+        List<Line> l = new ArrayList<>();
+        Double req = r.settings().capabilityRequirement();
+        if (a != null && a.ppkLower() != null) {
+            l.add(new Line("Decides", "after: " + Format.percent(1 - a.alpha()) + " lower bound of Ppk " + Format.ratio(
+                    a.ppkLower()) + (req == null ? " (no requirement set)" : Boolean.TRUE.equals(k.capabilityMet())
+                    ? " meets the required " + Format.num(req) : " does NOT meet the required " + Format.num(req))));
+        }
+        l.add(new Line("Model", any.fit().family().key() + " fit, percentile method" + (k.distribution() == null ? ""
+                : " (" + k.distribution().reason() + ")")));
+        l.add(new Line("Ppk", opt(b == null ? null : b.ppk()) + "  →  " + opt(a == null ? null : a.ppk())));
+        l.add(new Line("Ppk lower bound", opt(b == null ? null : b.ppkLower()) + "  →  "
+                + opt(a == null ? null : a.ppkLower())));
+        if (any.pp() != null) {
+            l.add(new Line("Pp (both limits)", opt(b == null ? null : b.pp()) + "  →  " + opt(a == null ? null
+                    : a.pp())));
+        }
+        l.add(new Line("X0.135 / X50 / X99.865", quantiles(b) + "  →  " + quantiles(a)));
+        l.add(new Line("Outside, ppm", (b == null ? "–" : ppm(b.ppmBelow()) + " + " + ppm(b.ppmAbove())) + "  →  "
+                + (a == null ? "–" : ppm(a.ppmBelow()) + " + " + ppm(a.ppmAbove()))));
+        l.add(new Line("", "Indices from the fitted distribution's 0.135 %, 50 % and 99.865 % points (ISO 22514-2 "
+                + "percentile method); the lower bound by a parametric bootstrap (seed " + any.seed() + ", "
+                + any.resamples() + " resamples)."));
+        return new Section("In the tolerance", l);
+    }
+
+    private static String quantiles(org.holdpoint.stats.PercentileCapabilityResult c) {
+        return c == null ? "–" : Format.num(c.x00135(), 4) + " / " + Format.num(c.x50(), 4) + " / "
+                + Format.num(c.x99865(), 4);
     }
 
     private static String opt(Double v) {
