@@ -181,9 +181,11 @@ final class TextOutput {
                     eq.conclusion().words());
         }
         if (r.variance() != null) {
-            out.printf(Locale.ROOT, "  Spread: variance ratio %s, %s CI (%s, %s), F-test p = %s", Format.ratio(
-                    r.variance().ratio()), Format.percent(r.variance().confidenceLevel()),
-                    Format.ratio(r.variance().ciLower()), Format.ratio(r.variance().ciUpper()), Format.p(r.variance().p()));
+            var v = r.variance();
+            out.printf(Locale.ROOT, "  Spread: variance ratio %s, %s CI (%s, %s), %s p = %s%s", Format.ratio(
+                    v.ratio()), Format.percent(v.confidenceLevel()), Format.ratio(v.ciLower()), Format.ratio(v.ciUpper()),
+                    v.method().words(), Format.p(v.p()), v.r() == null ? "" : " (correlation of sums and differences r = "
+                            + Format.num(v.r()) + ", t = " + Format.num(v.t()) + ", df = " + Format.num(v.df1()) + ")");
             if (r.levene() != null) {
                 out.printf(Locale.ROOT, "; Brown-Forsythe F = %s, p = %s", Format.num(r.levene().f()),
                         Format.p(r.levene().p()));
@@ -191,9 +193,11 @@ final class TextOutput {
             out.println();
         }
         if (r.sdGrowth() != null) {
-            out.printf(Locale.ROOT, "  sd-growth limit %s: %s upper bound of sd(after)/sd(before) = %s -> %s%n",
+            out.printf(Locale.ROOT, "  sd-growth limit %s: %s upper bound of sd(after)/sd(before) = %s%s -> %s%n",
                     Format.num(r.sdGrowth().limit()), Format.percent(r.sdGrowth().level()),
-                    Format.ratio(r.sdGrowth().upperBound()), r.sdGrowth().met() ? "met" : "NOT met");
+                    Format.ratio(r.sdGrowth().upperBound()), r.sdGrowth().method()
+                            == org.holdpoint.stats.VarianceRatioResult.SpreadMethod.PITMAN_MORGAN
+                            ? " (paired: from the Pitman-Morgan test)" : "", r.sdGrowth().met() ? "met" : "NOT met");
         }
         if (r.checks() != null) {
             printChecks(r.name(), r.checks());

@@ -341,7 +341,8 @@ final class DetailPlan {
         var v = c.variance();
         pair(r + 1, c0, "Variance ratio (after / before)", v == null ? null : v.ratio(), Style.NUMBER, 4,
                 n + ": variance ratio");
-        pair(r + 2, c0, "F-test p (two-sided)", v == null ? null : v.p(), Style.P_VALUE, 0, n + ": F-test p");
+        pair(r + 2, c0, (v == null ? "F-test" : v.method().words()) + " p (two-sided)", v == null ? null : v.p(),
+                Style.P_VALUE, 0, n + ": F-test p");
         String lvl = Texts.percent(1 - plan.alpha);
         pair(r + 3, c0, lvl + " CI of the ratio, lower", v == null ? null : v.ciLower(), Style.NUMBER, 4,
                 n + ": variance ratio CI lower");

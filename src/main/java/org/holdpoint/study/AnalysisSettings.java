@@ -14,10 +14,41 @@ import java.util.Map;
  * @param perCharacteristic criteria per characteristic name
  * @param overrides         criteria that win over everything (command-line options)
  * @param exclusions        values excluded by the user, with reasons
+ * @param methods           the generation of methods the study is computed with: {@link #METHODS} for a new
+ *                          study; 2 for a record written before capability by fitted distributions and the
+ *                          paired spread test existed (it is re-computed as it was, docs/study-file.md)
  */
 public record AnalysisSettings(double alpha, boolean equalVariances, boolean holm, CharacteristicSettings defaults,
         Map<String, CharacteristicSettings> perCharacteristic, CharacteristicSettings overrides,
-        List<Exclusion> exclusions) {
+        List<Exclusion> exclusions, int methods) {
+
+    /**
+     * The current generation of methods: 3 judges capability by a fitted distribution where the default rule or
+     * the criteria say so, and compares the spreads of a paired design by the Pitman–Morgan test.
+     */
+    public static final int METHODS = 3;
+
+    /**
+     * Settings computed with the current methods.
+     *
+     * @param alpha             the significance level
+     * @param equalVariances    whether equal variances are asserted
+     * @param holm              whether p-values get a Holm adjustment
+     * @param defaults          criteria for every characteristic
+     * @param perCharacteristic criteria per characteristic
+     * @param overrides         criteria that win over everything
+     * @param exclusions        excluded values
+     */
+    public AnalysisSettings(double alpha, boolean equalVariances, boolean holm, CharacteristicSettings defaults,
+            Map<String, CharacteristicSettings> perCharacteristic, CharacteristicSettings overrides,
+            List<Exclusion> exclusions) {
+        this(alpha, equalVariances, holm, defaults, perCharacteristic, overrides, exclusions, METHODS);
+    }
+
+    /** @return whether the current methods apply (else a record of methods 2 is re-computed as it was) */
+    public boolean currentMethods() {
+        return methods >= METHODS;
+    }
 
     /** Validates and copies. */
     public AnalysisSettings {
@@ -29,6 +60,9 @@ public record AnalysisSettings(double alpha, boolean equalVariances, boolean hol
         perCharacteristic = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(
                 perCharacteristic == null ? Map.of() : perCharacteristic));
         exclusions = exclusions == null ? List.of() : List.copyOf(exclusions);
+        if (methods < 2 || methods > METHODS) {
+            throw new org.holdpoint.stats.StatsException("method generation %d is not known (2 to %d)", methods, METHODS);
+        }
     }
 
     /** @return α = 0.05, Welch, no Holm, nothing else set */

@@ -61,10 +61,12 @@ final class CharacteristicChecks {
     }
 
     static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Margin margin, double alpha,
-            boolean paired, boolean equalVariances, List<String> notes) {
+            boolean paired, boolean equalVariances, boolean currentMethods, List<String> notes) {
         NormalityResult nb = NormalityResult.of(c.before().sample());
         NormalityResult na = NormalityResult.of(c.after().sample());
-        FamilySelection distribution = s.spec().any() ? selectFamily(c, s, nb, na, notes) : null;
+        FamilySelection distribution = !s.spec().any() ? null : currentMethods ? selectFamily(c, s, nb, na, notes)
+                : FamilySelection.given(DistributionFamily.NORMAL, "the record was computed with the methods of "
+                        + "its time (normal model)");
         DistributionFamily family = distribution == null ? DistributionFamily.NORMAL : distribution.chosen();
         GroupChecks before = group("before", c.before(), nb, s, family, alpha, notes);
         GroupChecks after = group("after", c.after(), na, s, family, alpha, notes);

@@ -286,6 +286,11 @@ public final class ResultJson {
         num(o, "ciLower", v.ciLower());
         num(o, "ciUpper", v.ciUpper());
         num(o, "confidenceLevel", v.confidenceLevel());
+        o.put("method", v.method().words());
+        if (v.r() != null) {
+            num(o, "sumDifferenceCorrelation", v.r());
+            num(o, "t", v.t());
+        }
         return o;
     }
 
@@ -307,6 +312,7 @@ public final class ResultJson {
         num(o, "p", g.p());
         num(o, "level", g.level());
         o.put("met", g.met());
+        o.put("method", g.method().words());
         return o;
     }
 

@@ -163,9 +163,24 @@ public final class StudyAnalyzer {
         LeveneResult levene = null;
         SdGrowthResult growth = null;
         if (db.variance() > 0 && da.variance() > 0) {
-            variance = SpreadTests.fTest(db.summary(), da.summary(), alpha);
-            if (s.sdGrowthLimit() != null) {
-                growth = SpreadTests.sdGrowth(db.summary(), da.summary(), s.sdGrowthLimit(), alpha);
+            if (paired && study.currentMethods()) {
+                // pairs are correlated: the F-test's independence does not hold, the Pitman–Morgan test uses it
+                try {
+                    variance = SpreadTests.pitmanMorgan(before, after, alpha);
+                    if (s.sdGrowthLimit() != null) {
+                        growth = SpreadTests.sdGrowthPaired(before, after, s.sdGrowthLimit(), alpha);
+                    }
+                } catch (org.holdpoint.stats.StatsException e) {
+                    if (s.sdGrowthLimit() != null) {
+                        throw new CharacteristicProblem("the sd-growth limit cannot be checked: %s", e.getMessage());
+                    }
+                    notes.add("the paired spread test was not computed: " + e.getMessage());
+                }
+            } else {
+                variance = SpreadTests.fTest(db.summary(), da.summary(), alpha);
+                if (s.sdGrowthLimit() != null) {
+                    growth = SpreadTests.sdGrowth(db.summary(), da.summary(), s.sdGrowthLimit(), alpha);
+                }
             }
         } else {
             String which = db.variance() > 0 ? "after" : "before";
@@ -181,7 +196,8 @@ public final class StudyAnalyzer {
             notes.add("Brown-Forsythe is undefined: every value equals its group median's neighbours "
                     + "(zero within-group deviation)");
         }
-        AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin, alpha, paired, study.equalVariances(), notes);
+        AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin, alpha, paired, study.equalVariances(),
+                study.currentMethods(), notes);
         String unit = s.unit() != null ? s.unit() : c.unit();
         CharacteristicResult draft = CharacteristicResult.builder(c.name(), unit, s, paired, method).margin(margin)
                 .descriptives(db, da)

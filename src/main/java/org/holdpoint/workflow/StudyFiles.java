@@ -49,9 +49,9 @@ import org.holdpoint.result.StudyResult;
  */
 public final class StudyFiles {
     /**
-     * The schema version this code writes. 3 adds the {@code distribution} criterion and the default rule that
-     * judges a skewed or zero-bounded characteristic's capability by a fitted distribution; a study of schema 1
-     * or 2 was computed with the normal model throughout and is read so (docs/study-file.md).
+     * The schema version this code writes. 3 adds the {@code distribution} criterion (capability by a fitted
+     * distribution) and the paired spread test; a study of schema 1 or 2 was computed with the methods of its
+     * time and is read with {@code methods} 2, so that it re-computes as it was (docs/study-file.md).
      */
     public static final int SCHEMA_VERSION = 3;
     private static final JsonNodeFactory F = JsonNodeFactory.instance;
@@ -368,6 +368,9 @@ public final class StudyFiles {
         o.put("alpha", s.alpha());
         o.put("equalVariances", s.equalVariances());
         o.put("holm", s.holm());
+        if (!s.currentMethods()) {
+            o.put("methods", s.methods());
+        }
         o.set("defaults", criteria(s.defaults()));
         ObjectNode per = o.putObject("perCharacteristic");
         s.perCharacteristic().forEach((k, v) -> per.set(k, criteria(v)));
@@ -394,14 +397,16 @@ public final class StudyFiles {
                     : Exclusion.Group.valueOf(group.toUpperCase(java.util.Locale.ROOT)), text(x, "cell"),
                     text(x, "reason")));
         }
-        CharacteristicSettings defaults = readCriteria(o.path("defaults"), version, name, "defaults");
-        if (version < 3) {
-            // before schema 3 every capability was the normal model's: re-computed so, it gives the same record
-            defaults = defaults.withDistribution(org.holdpoint.study.DistributionSetting.NORMAL);
+        // a record of schema 1 or 2 was computed with the methods of its time (the normal model for capability, the
+        // F-test for a paired design's spread) and is re-computed so; schema 3 names older methods when it keeps them
+        int methods = version < 3 ? 2 : o.path("methods").asInt(AnalysisSettings.METHODS);
+        if (methods < 2 || methods > AnalysisSettings.METHODS) {
+            throw new StudyFileException("%s: the settings name method generation %d, which this version does not know "
+                    + "(2 to %d)", name, methods, AnalysisSettings.METHODS);
         }
         return new AnalysisSettings(o.path("alpha").asDouble(0.05), o.path("equalVariances").asBoolean(false),
-                o.path("holm").asBoolean(false), defaults, per,
-                readCriteria(o.path("overrides"), version, name, "overrides"), ex);
+                o.path("holm").asBoolean(false), readCriteria(o.path("defaults"), version, name, "defaults"), per,
+                readCriteria(o.path("overrides"), version, name, "overrides"), ex, methods);
     }
 
     /** The criteria in a settings file's spelling (one spelling everywhere, docs/settings-file.md). */

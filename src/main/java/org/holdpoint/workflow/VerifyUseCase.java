@@ -251,6 +251,37 @@ public final class VerifyUseCase {
         return new StudyResult(out, result.changeVerified(), result.summary(), result.failing());
     }
 
+    /**
+     * Whether every value the stored tree holds is found, equal, at the same place in the fresh one (fields the
+     * fresh tree adds are ignored; arrays must have the same length).
+     */
+    static boolean keeps(JsonNode fresh, JsonNode stored) {
+        if (stored.isObject()) {
+            if (!fresh.isObject()) {
+                return false;
+            }
+            for (var it = stored.fields(); it.hasNext();) {
+                var e = it.next();
+                if (!fresh.has(e.getKey()) || !keeps(fresh.get(e.getKey()), e.getValue())) {
+                    return false;
+                }
+            }
+            return true;
+        }
+        if (stored.isArray()) {
+            if (!fresh.isArray() || fresh.size() != stored.size()) {
+                return false;
+            }
+            for (int i = 0; i < stored.size(); i++) {
+                if (!keeps(fresh.get(i), stored.get(i))) {
+                    return false;
+                }
+            }
+            return true;
+        }
+        return stored.equals(fresh);
+    }
+
     private static void compareStoredResults(String json, StudyResult result, List<String> notes) {
         JsonNode stored = StudyFiles.tree(json).path("results").path("characteristics");
         if (!stored.isArray()) {
@@ -264,7 +295,8 @@ public final class VerifyUseCase {
         // the reasons are words, not results: a version that words them otherwise computes the same results
         stored = withoutReasons(stored);
         reread = withoutReasons(reread);
-        if (!reread.equals(stored)) {
+        // a later version may report more (new fields); what the record kept must come out the same
+        if (!keeps(reread, stored)) {
             String written = StudyFiles.tree(json).path("tool").path("version").asText("");
             if (written.equals(Version.get())) {
                 notes.add("the results stored in the record differ from those this same version (" + written

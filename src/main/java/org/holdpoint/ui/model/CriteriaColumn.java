@@ -25,7 +25,10 @@ public enum CriteriaColumn {
     /** The minimum capability index required. */
     CAPABILITY("Min Ppk bound", null),
     /** Paired design: from the data, yes or no. */
-    PAIRED("Paired", List.of(CriteriaTable.FROM_DATA, "yes", "no"));
+    PAIRED("Paired", List.of(CriteriaTable.FROM_DATA, "yes", "no")),
+    /** The distribution capability is judged by: by the default rule, auto, or one family. */
+    DISTRIBUTION("Capability model", List.of(CriteriaTable.BY_RULE, "auto", "normal", "lognormal", "weibull", "gamma",
+            "rayleigh"));
 
     private final String label;
     private final List<String> choices;

@@ -24,6 +24,8 @@ public final class CriteriaTable {
     public static final String IN_PERCENT_USL = "% of USL";
     /** Choice of {@link CriteriaColumn#PAIRED}: take the design from the data layout. */
     public static final String FROM_DATA = "from data";
+    /** Choice of {@link CriteriaColumn#DISTRIBUTION}: the default rule decides (docs/methods.md §14). */
+    public static final String BY_RULE = "by rule";
 
     /** The bound properties. */
     public enum Property {
@@ -266,6 +268,7 @@ public final class CriteriaTable {
         r[CriteriaColumn.CHARACTERISTIC.ordinal()] = name;
         r[CriteriaColumn.MARGIN_IN.ordinal()] = IN_UNITS;
         r[CriteriaColumn.PAIRED.ordinal()] = FROM_DATA;
+        r[CriteriaColumn.DISTRIBUTION.ordinal()] = BY_RULE;
         r[CriteriaColumn.ANALYSE.ordinal()] = "yes";
         String unit = s != null && s.unit() != null ? s.unit() : dataUnit;
         r[CriteriaColumn.UNIT.ordinal()] = unit == null ? "" : unit;
@@ -285,6 +288,7 @@ public final class CriteriaTable {
         r[CriteriaColumn.SD_GROWTH.ordinal()] = CriteriaRules.text(s.sdGrowthLimit());
         r[CriteriaColumn.CAPABILITY.ordinal()] = CriteriaRules.text(s.capabilityRequirement());
         r[CriteriaColumn.PAIRED.ordinal()] = s.paired() == null ? FROM_DATA : s.paired() ? "yes" : "no";
+        r[CriteriaColumn.DISTRIBUTION.ordinal()] = s.distribution() == null ? BY_RULE : s.distribution().key();
         return r;
     }
 

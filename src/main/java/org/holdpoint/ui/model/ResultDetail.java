@@ -220,8 +220,8 @@ public final class ResultDetail {
     private static Section spread(CharacteristicResult r) {
         List<Line> l = new ArrayList<>();
         if (r.variance() != null) {
-            l.add(new Line("Variance ratio after/before", Format.ratio(r.variance().ratio()) + "  (F-test p "
-                    + Format.p(r.variance().p()) + ")"));
+            l.add(new Line("Variance ratio after/before", Format.ratio(r.variance().ratio()) + "  ("
+                    + r.variance().method().words() + " p " + Format.p(r.variance().p()) + ")"));
         }
         if (r.levene() != null) {
             l.add(new Line("Brown–Forsythe", "F " + Format.num(r.levene().f()) + ", p " + Format.p(r.levene().p())));

@@ -70,6 +70,8 @@ public final class StudySession {
     private Path criteriaFile;
     private boolean equalVariances;
     private boolean holm;
+    /** The method generation of the opened study (an older record is re-analysed as it was), else the current. */
+    private int methods = AnalysisSettings.METHODS;
     private List<Exclusion> exclusions = List.of();
     private boolean dirty;
     private Path studyFile;
@@ -587,6 +589,7 @@ public final class StudySession {
             criteria.load(s.data().characteristics(), resolved, s.settings().alpha());
             equalVariances = s.settings().equalVariances();
             holm = s.settings().holm();
+            methods = s.settings().methods();
             exclusions = s.settings().exclusions();
             signOff.load(s.signatures());
             provenance = s.provenance();
@@ -680,7 +683,7 @@ public final class StudySession {
             throw new IllegalStateException(ap);
         }
         return new AnalysisSettings(Double.parseDouble(criteria.alpha()), equalVariances, holm, null, per, null,
-                exclusions);
+                exclusions, methods);
     }
 
     /**
@@ -735,6 +738,7 @@ public final class StudySession {
     }
 
     private void apply(Loaded l) {
+        methods = AnalysisSettings.METHODS;
         dataForm.show(l.sources());
         criteriaFile = l.imported().criteriaFile();
         exclusions = List.of();
