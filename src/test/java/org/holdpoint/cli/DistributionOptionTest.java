@@ -33,6 +33,32 @@ class DistributionOptionTest {
         assertThat(r.out()).contains("Capability model: weibull (set in the criteria)");
     }
 
+    /** A workbook of a study judged by a fitted family verifies intact: every shown cell is re-computed alike. */
+    @Test
+    void theWorkbookOfAFittedStudyVerifiesIntact(@TempDir Path dir) throws Exception {
+        Path book = dir.resolve("burr.xlsx");
+        AnalyzeCommandTest.Run r = AnalyzeCommandTest.run("analyze", data(dir).toString(), "--usl", "0.12",
+                "--distribution", "lognormal", "--report", book.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        AnalyzeCommandTest.Run v = AnalyzeCommandTest.run("verify", book.toString());
+        assertThat(v.code()).as(v.out() + v.err()).isZero();
+        assertThat(v.out()).contains("INTACT");
+        try (var wb = new org.apache.poi.xssf.usermodel.XSSFWorkbook(book.toFile())) {
+            var fmt = new org.apache.poi.ss.usermodel.DataFormatter();
+            StringBuilder all = new StringBuilder();
+            for (var sheet : wb) {
+                for (var row : sheet) {
+                    for (var cell : row) {
+                        all.append(fmt.formatCellValue(cell)).append('\n');
+                    }
+                }
+            }
+            assertThat(all).contains("In the tolerance (lognormal fit, percentile method)")
+                    .contains("95 % lower bound of Ppk (bootstrap)").contains("X99.865 % of the fit")
+                    .contains("Probability plot against the fitted lognormal distribution");
+        }
+    }
+
     @Test
     void anUnknownFamilyIsRefusedWithTheWordsThatWork(@TempDir Path dir) throws Exception {
         AnalyzeCommandTest.Run r = AnalyzeCommandTest.run("analyze", data(dir).toString(), "--usl", "0.12",

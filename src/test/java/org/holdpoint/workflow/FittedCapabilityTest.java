@@ -125,6 +125,19 @@ class FittedCapabilityTest {
     }
 
     @Test
+    void theWindowsDetailNamesTheModelAndItsQuantiles() {
+        CharacteristicResult r = analyse("gamma-25", "lnorm-30", new CharacteristicSettings("mm",
+                new SpecLimits(null, null, 0.05), null, null, 1.0, null));
+        var tol = org.holdpoint.ui.model.ResultDetail.of(r).stream().filter(x -> x.title().equals("In the tolerance"))
+                .findFirst().orElseThrow();
+        assertThat(tol.lines()).extracting(org.holdpoint.ui.model.ResultDetail.Line::label)
+                .contains("Decides", "Model", "Ppk", "Ppk lower bound", "X0.135 / X50 / X99.865", "Outside, ppm");
+        String model = tol.lines().stream().filter(l -> l.label().equals("Model")).findFirst().orElseThrow().value();
+        assertThat(model).startsWith(r.checks().distribution().chosen().key() + " fit, percentile method")
+                .contains("lowest AIC");
+    }
+
+    @Test
     void aFamilySetInTheCriteriaIsUsedAsSet() {
         CharacteristicResult r = analyse("rayl-50", "rayl-50", new CharacteristicSettings("mm",
                 new SpecLimits(null, null, 0.07), null, null, null, null, DistributionSetting.WEIBULL));

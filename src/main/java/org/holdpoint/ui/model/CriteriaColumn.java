@@ -27,7 +27,7 @@ public enum CriteriaColumn {
     /** Paired design: from the data, yes or no. */
     PAIRED("Paired", List.of(CriteriaTable.FROM_DATA, "yes", "no")),
     /** The distribution capability is judged by: by the default rule, auto, or one family. */
-    DISTRIBUTION("Capability model", List.of(CriteriaTable.BY_RULE, "auto", "normal", "lognormal", "weibull", "gamma",
+    DISTRIBUTION("Distribution", List.of(CriteriaTable.BY_RULE, "auto", "normal", "lognormal", "weibull", "gamma",
             "rayleigh"));
 
     private final String label;

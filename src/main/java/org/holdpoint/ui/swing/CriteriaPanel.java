@@ -78,7 +78,7 @@ final class CriteriaPanel extends JPanel {
             }
         }
         // shares of the width at 1280 pixels; the whole reason of a problem is above the table and in the tip
-        int[] widths = {150, 45, 45, 60, 65, 60, 105, 90, 85, 85, 75, 180};
+        int[] widths = {175, 38, 38, 62, 68, 62, 100, 95, 82, 82, 78, 80, 55};
         for (int i = 0; i < widths.length; i++) {
             grid.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }

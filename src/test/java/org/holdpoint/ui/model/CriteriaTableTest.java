@@ -42,6 +42,21 @@ class CriteriaTableTest {
     }
 
     @Test
+    void theDistributionOfTheCriteriaSurvivesTheTable() {
+        t = new CriteriaTable();
+        t.showData(List.of(c("A"), c("B")), Map.of("A", new CharacteristicSettings("mm", new SpecLimits(null, null,
+                0.05), null, null, null, null, org.holdpoint.study.DistributionSetting.WEIBULL)));
+        assertThat(t.get(0, CriteriaColumn.DISTRIBUTION)).isEqualTo("weibull");
+        assertThat(t.get(1, CriteriaColumn.DISTRIBUTION)).isEqualTo(CriteriaTable.BY_RULE);
+        assertThat(t.toSettings().get("A").distribution()).isEqualTo(org.holdpoint.study.DistributionSetting.WEIBULL);
+        assertThat(t.toSettings().get("B").distribution()).isNull();
+        t.set(1, CriteriaColumn.DISTRIBUTION, "triangular");
+        assertThat(t.rowsWithProblems()).isEqualTo(1);
+        t.set(1, CriteriaColumn.DISTRIBUTION, "auto");
+        assertThat(t.toSettings().get("B").distribution()).isEqualTo(org.holdpoint.study.DistributionSetting.AUTO);
+    }
+
+    @Test
     void aBadCellKeepsWhatWasTypedAndSaysWhyBesideIt() {
         t.set(0, CriteriaColumn.LSL, "25,01");
         assertThat(t.get(0, CriteriaColumn.LSL)).isEqualTo("25,01");
