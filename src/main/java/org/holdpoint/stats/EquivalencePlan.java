@@ -64,6 +64,10 @@ public final class EquivalencePlan {
         if (newMargin == null) {
             throw new StatsException("planning needs a margin: (L, U), or one bound for a one-sided claim");
         }
+        if (newMargin.ratio()) {
+            throw new StatsException("planning with a ratio margin is not available yet; plan with the margin in units "
+                    + "it corresponds to at the baseline mean");
+        }
         return new EquivalencePlan(newMargin, alpha, design, ratio, targetPower, cap, tablePoints);
     }
 

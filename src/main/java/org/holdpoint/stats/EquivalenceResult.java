@@ -20,10 +20,50 @@ package org.holdpoint.stats;
  * @param level       1 − 2α
  * @param alpha       the α of each one-sided test
  * @param conclusion  the three-way conclusion
+ * @param ratio       whether this is the ratio after/before: estimate, interval and margins are then ratios (the
+ *                    exponentials of the test on the logarithms), se, df, t and p those of that test
  */
 public record EquivalenceResult(LocationMethod method, Double lowerMargin, Double upperMargin, double estimate,
         double se, double df, Double tLower, Double tUpper, Double pLower, Double pUpper, double p, double ciLower,
-        double ciUpper, double level, double alpha, Conclusion conclusion) {
+        double ciUpper, double level, double alpha, Conclusion conclusion, boolean ratio) {
+
+    /**
+     * A result for the difference after − before.
+     *
+     * @param method      design
+     * @param lowerMargin L
+     * @param upperMargin U
+     * @param estimate    the difference
+     * @param se          its standard error
+     * @param df          degrees of freedom
+     * @param tLower      t of the lower test
+     * @param tUpper      t of the upper test
+     * @param pLower      p of the lower test
+     * @param pUpper      p of the upper test
+     * @param p           the larger p
+     * @param ciLower     interval lower end
+     * @param ciUpper     interval upper end
+     * @param level       1 − 2α
+     * @param alpha       α
+     * @param conclusion  the conclusion
+     */
+    public EquivalenceResult(LocationMethod method, Double lowerMargin, Double upperMargin, double estimate,
+            double se, double df, Double tLower, Double tUpper, Double pLower, Double pUpper, double p, double ciLower,
+            double ciUpper, double level, double alpha, Conclusion conclusion) {
+        this(method, lowerMargin, upperMargin, estimate, se, df, tLower, tUpper, pLower, pUpper, p, ciLower, ciUpper,
+                level, alpha, conclusion, false);
+    }
+
+    /**
+     * This result of the test on the logarithms, shown on the ratio scale.
+     *
+     * @param margin the ratio margin
+     * @return estimate, interval and margins as ratios after/before
+     */
+    EquivalenceResult onRatioScale(Margin margin) {
+        return new EquivalenceResult(method, margin.lower(), margin.upper(), Math.exp(estimate), se, df, tLower,
+                tUpper, pLower, pUpper, p, Math.exp(ciLower), Math.exp(ciUpper), level, alpha, conclusion, true);
+    }
 
     /** Validates the record. */
     public EquivalenceResult {

@@ -79,6 +79,46 @@ public final class EquivalenceTest {
     }
 
     /**
+     * TOST of the ratio after/before against a ratio margin: the two one-sided tests on the logarithms of the
+     * values against (ln L, ln U) — Welch or pooled for independent groups, paired t for pairs — shown on the
+     * ratio scale: the estimate is the ratio of the geometric means (the median ratio for lognormal data) and
+     * the interval its exponential (docs/methods.md §3).
+     *
+     * @param before the before values (all above 0)
+     * @param after  the after values (all above 0)
+     * @param paired whether the values are pairs, in the same order
+     * @return the result with {@link EquivalenceResult#ratio()} set
+     * @throws StatsException when no ratio margin was set or a value is not above 0
+     */
+    public EquivalenceResult testRatio(Sample before, Sample after, boolean paired) {
+        if (margin == null || !margin.ratio()) {
+            throw new StatsException("no ratio margin was set");
+        }
+        Sample lb = logs(before, "before");
+        Sample la = logs(after, "after");
+        EquivalenceTest onLogs = withMargin(margin.logScale());
+        EquivalenceResult r = paired ? onLogs.testPaired(lb, la) : onLogs.test(lb, la);
+        return r.onRatioScale(margin);
+    }
+
+    private static Sample logs(Sample s, String group) {
+        double[] l = new double[s.size()];
+        int bad = 0;
+        for (int i = 0; i < l.length; i++) {
+            double v = s.value(i);
+            if (!(v > 0)) {
+                bad++;
+            }
+            l[i] = Math.log(v);
+        }
+        if (bad > 0) {
+            throw new StatsException("a ratio margin needs values above 0; %d value(s) of the %s group are not", bad,
+                    group);
+        }
+        return Sample.of(l);
+    }
+
+    /**
      * Two-sample TOST on summary statistics.
      *
      * @param before n, mean, variance of the before group
@@ -120,6 +160,9 @@ public final class EquivalenceTest {
     public EquivalenceResult test(Difference d) {
         if (margin == null) {
             throw new StatsException("no equivalence margin was set");
+        }
+        if (margin.ratio()) {
+            throw new StatsException("a ratio margin is tested on the logarithms of the values (testRatio)");
         }
         double est = d.estimate();
         double se = d.se();

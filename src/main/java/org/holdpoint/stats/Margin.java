@@ -1,27 +1,70 @@
 package org.holdpoint.stats;
 
 /**
- * An equivalence margin (L, U) for the difference after − before, in the characteristic's unit.
+ * An equivalence margin (L, U) for the difference after − before, in the characteristic's unit, or — a ratio
+ * margin — for the ratio after/before (0 &lt; L &lt; 1 &lt; U), judged on the log scale (docs/methods.md §3).
  * Either bound may be absent: only L is a non-inferiority margin ("may drop by at most |L|"), only U
- * its mirror ("may rise by at most U"). A present L must be &lt; 0 and a present U &gt; 0.
+ * its mirror ("may rise by at most U"). A present L must be &lt; 0 and a present U &gt; 0 (ratio: L &lt; 1, U &gt; 1).
  *
  * @param lower L, or null when only an upper margin is set
  * @param upper U, or null when only a lower margin is set
+ * @param ratio whether the bounds are ratios after/before
  */
-public record Margin(Double lower, Double upper) {
+public record Margin(Double lower, Double upper, boolean ratio) {
+
+    /**
+     * A margin for the difference.
+     *
+     * @param lower L &lt; 0, or null
+     * @param upper U &gt; 0, or null
+     */
+    public Margin(Double lower, Double upper) {
+        this(lower, upper, false);
+    }
+
+    /**
+     * A margin for the ratio after/before of the (geometric) means, e.g. (0.9, 1.1) or "may grow by at most 20 %"
+     * (upper 1.2 alone).
+     *
+     * @param lower 0 &lt; L &lt; 1, or null
+     * @param upper U &gt; 1, or null
+     * @return the margin
+     */
+    public static Margin ratio(Double lower, Double upper) {
+        return new Margin(lower, upper, true);
+    }
+
+    /** @return the margin of the difference of the logarithms (ln L, ln U); for a ratio margin only */
+    public Margin logScale() {
+        if (!ratio) {
+            throw new StatsException("only a ratio margin has a log scale");
+        }
+        return new Margin(lower == null ? null : Math.log(lower), upper == null ? null : Math.log(upper), false);
+    }
 
     /** Validates the margin. */
     public Margin {
         if (lower == null && upper == null) {
             throw new StatsException("a margin needs a lower bound, an upper bound or both");
         }
-        if (lower != null && !(lower < 0 && Double.isFinite(lower))) {
-            throw new StatsException("the lower margin must be negative and finite (the margin must contain 0), got %s",
-                    lower);
-        }
-        if (upper != null && !(upper > 0 && Double.isFinite(upper))) {
-            throw new StatsException("the upper margin must be positive and finite (the margin must contain 0), got %s",
-                    upper);
+        if (ratio) {
+            if (lower != null && !(lower > 0 && lower < 1)) {
+                throw new StatsException("the lower ratio margin must lie between 0 and 1 (after/before may drop to "
+                        + "it), got %s", lower);
+            }
+            if (upper != null && !(upper > 1 && Double.isFinite(upper))) {
+                throw new StatsException("the upper ratio margin must be above 1 (after/before may grow to it), got %s",
+                        upper);
+            }
+        } else {
+            if (lower != null && !(lower < 0 && Double.isFinite(lower))) {
+                throw new StatsException("the lower margin must be negative and finite (the margin must contain 0), "
+                        + "got %s", lower);
+            }
+            if (upper != null && !(upper > 0 && Double.isFinite(upper))) {
+                throw new StatsException("the upper margin must be positive and finite (the margin must contain 0), "
+                        + "got %s", upper);
+            }
         }
     }
 

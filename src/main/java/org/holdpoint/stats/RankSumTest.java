@@ -54,6 +54,9 @@ public final class RankSumTest {
      * @return a test that also judges equivalence against that margin
      */
     public RankSumTest withMargin(Margin newMargin) {
+        if (newMargin != null && newMargin.ratio()) {
+            throw new StatsException("the rank-based equivalence takes a margin in units, not a ratio margin");
+        }
         return new RankSumTest(alpha, newMargin, rule);
     }
 
