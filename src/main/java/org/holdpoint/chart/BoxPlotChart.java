@@ -131,13 +131,17 @@ public final class BoxPlotChart {
         var margin = result.margin();
         if (margin != null && result.before() != null) {
             double centre = result.before().mean();
-            double lo = margin.lower() == null ? plot.getRangeAxis().getLowerBound() : centre + margin.lower();
-            double hi = margin.upper() == null ? plot.getRangeAxis().getUpperBound() : centre + margin.upper();
+            // a ratio margin is drawn as the before mean times its bounds (the test itself is on the logarithms)
+            double lo = margin.lower() == null ? plot.getRangeAxis().getLowerBound()
+                    : margin.ratio() ? centre * margin.lower() : centre + margin.lower();
+            double hi = margin.upper() == null ? plot.getRangeAxis().getUpperBound()
+                    : margin.ratio() ? centre * margin.upper() : centre + margin.upper();
             org.jfree.chart.plot.IntervalMarker band = new org.jfree.chart.plot.IntervalMarker(lo, hi,
                     new Color(ChartTheme.BAND.getRed(), ChartTheme.BAND.getGreen(), ChartTheme.BAND.getBlue(), 110));
             // named in the legend, not on the plot, where a label would sit on the values
             if (plot.getFixedLegendItems() != null) {
-                plot.getFixedLegendItems().add(new org.jfree.chart.LegendItem("margin around the before mean", null,
+                plot.getFixedLegendItems().add(new org.jfree.chart.LegendItem(margin.ratio()
+                        ? "ratio margin times the before mean" : "margin around the before mean", null,
                         null, null, new java.awt.Rectangle(-7, -4, 14, 8), band.getPaint()));
             }
             plot.addRangeMarker(band, org.jfree.chart.ui.Layer.BACKGROUND);

@@ -61,11 +61,15 @@ public final class EquivalenceChart {
      * A difference in units scaled to the margin: d/|L| for d &lt; 0 and d/U for d ≥ 0; with a one-sided margin the
      * one bound present scales both sides.
      *
-     * @param d      a difference after − before, in units
+     * @param d      a difference after − before, in units (a ratio after/before for a ratio margin)
      * @param margin the characteristic's margin
      * @return the scaled difference; −1 is L and +1 is U
      */
     public static double scaled(double d, Margin margin) {
+        if (margin.ratio()) {
+            // a ratio after/before against a ratio margin: on the log scale, where the test was made (ratio 1 is 0)
+            return scaled(Math.log(d), margin.logScale());
+        }
         double lower = margin.lower() != null ? -margin.lower() : margin.upper();
         double upper = margin.upper() != null ? margin.upper() : -margin.lower();
         return d < 0 ? d / lower : d / upper;
@@ -133,7 +137,10 @@ public final class EquivalenceChart {
                 + "one above 0 by U, so the band is the margin (L, U) = (\u22121, +1) and 0 is no change; the margins "
                 + "in units are in the row labels. Equivalent: the interval lies inside the band; not equivalent: "
                 + "wholly outside; inconclusive: it reaches a bound (more data needed). Values beyond \u00b1"
-                + Numbers.format(CLAMP) + " are cut at the edge and written there."));
+                + Numbers.format(CLAMP) + " are cut at the edge and written there."
+                + (results.stream().anyMatch(r -> r.margin() != null && r.margin().ratio()) ? " A row with a ratio "
+                        + "margin is scaled on the log scale, ln(after/before) against ln L and ln U, where it was "
+                        + "tested." : "")));
         chart.addSubtitle(BoxPlotChart.legend(plot));
         theme.apply(chart);
         plot.getRangeAxis(0).setTickLabelFont(font);
@@ -270,6 +277,12 @@ public final class EquivalenceChart {
         }
         String unit = r.unit() == null || r.unit().isBlank() ? "" : " " + r.unit();
         String margin;
+        if (m.ratio()) {
+            margin = "ratio " + (m.lower() == null ? "\u2264 " + Numbers.format(m.upper()) : m.upper() == null
+                    ? "\u2265 " + Numbers.format(m.lower()) : Numbers.format(m.lower()) + "\u2013"
+                    + Numbers.format(m.upper()));
+            return name + "  (" + margin + ")";
+        }
         if (m.lower() != null && m.upper() != null) {
             margin = -m.lower() == m.upper() ? "\u00b1" + Numbers.format(m.upper())
                     : Numbers.format(m.lower()) + "/+" + Numbers.format(m.upper());

@@ -140,6 +140,16 @@ final class AnalyzeCommand implements Callable<Integer> {
                 + "for a characteristic with an upper limit only (e.g. flatness may grow by at most P %% of its "
                 + "USL).")
         Double marginPercentOfUsl;
+        @Option(names = "--margin-ratio", paramLabel = "R", description = "Margin for the ratio after/before of the "
+                + "(geometric) means, 1/R to R (R > 1, e.g. 1.25 for 0.8 to 1.25), tested on the logarithms; for "
+                + "positive characteristics.")
+        Double marginRatio;
+        @Option(names = "--margin-ratio-lower", paramLabel = "L", description = "Lower bound of the ratio after/before "
+                + "(0 < L < 1; alone: may drop to L at most).")
+        Double marginRatioLower;
+        @Option(names = "--margin-ratio-upper", paramLabel = "U", description = "Upper bound of the ratio after/before "
+                + "(U > 1; alone: may grow by at most (U - 1) x 100 %%, e.g. 1.2).")
+        Double marginRatioUpper;
         @Option(names = "--lsl", paramLabel = "X", description = "Lower specification limit.")
         Double lsl;
         @Option(names = "--nominal", paramLabel = "X", description = "Nominal value.")
@@ -371,7 +381,9 @@ final class AnalyzeCommand implements Callable<Integer> {
                 case LSL -> "--lsl";
                 case NOMINAL -> "--nominal";
                 case USL -> "--usl";
-                case MARGIN -> c.marginPercentOfUsl != null ? "--margin-percent-of-usl" : c.margin != null ? "--margin"
+                case MARGIN -> c.marginRatioLower != null || c.marginRatioUpper != null
+                        ? (c.marginRatioLower != null ? "--margin-ratio-lower" : "--margin-ratio-upper")
+                        : c.marginPercentOfUsl != null ? "--margin-percent-of-usl" : c.margin != null ? "--margin"
                         : c.marginPercent != null ? "--margin-percent" : c.marginLower != null ? "--margin-lower"
                         : "--margin-upper";
                 case SD_GROWTH_LIMIT -> "--sd-growth-limit";
@@ -408,10 +420,22 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     private MarginSpec marginSpec(CriteriaOptions c) {
         int given = (c.margin != null ? 1 : 0) + (c.marginLower != null || c.marginUpper != null ? 1 : 0)
-                + (c.marginPercent != null ? 1 : 0) + (c.marginPercentOfUsl != null ? 1 : 0);
+                + (c.marginPercent != null ? 1 : 0) + (c.marginPercentOfUsl != null ? 1 : 0)
+                + (c.marginRatio != null ? 1 : 0) + (c.marginRatioLower != null || c.marginRatioUpper != null ? 1 : 0);
         if (given > 1) {
             throw new CommandLine.ParameterException(spec.commandLine(), "give one kind of margin: --margin, or "
-                    + "--margin-lower/--margin-upper, or --margin-percent, or --margin-percent-of-usl");
+                    + "--margin-lower/--margin-upper, or --margin-percent, or --margin-percent-of-usl, or "
+                    + "--margin-ratio, or --margin-ratio-lower/--margin-ratio-upper");
+        }
+        if (c.marginRatio != null) {
+            if (!(c.marginRatio > 1) || !Double.isFinite(c.marginRatio)) {
+                throw new CommandLine.ParameterException(spec.commandLine(), "--margin-ratio must be a number R above 1 "
+                        + "(after/before may lie between 1/R and R), got " + c.marginRatio);
+            }
+            return new MarginSpec(MarginSpec.Kind.RATIO, 1 / c.marginRatio, c.marginRatio);
+        }
+        if (c.marginRatioLower != null || c.marginRatioUpper != null) {
+            return new MarginSpec(MarginSpec.Kind.RATIO, c.marginRatioLower, c.marginRatioUpper);
         }
         if (c.marginPercentOfUsl != null) {
             return new MarginSpec(MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT, null, c.marginPercentOfUsl);

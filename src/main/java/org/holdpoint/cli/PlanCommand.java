@@ -384,6 +384,9 @@ public final class PlanCommand implements Callable<Integer> {
             row.put("sd", Double.isFinite(p.sd()) ? p.sd() : null);
             row.put("marginLower", p.margin() == null ? null : p.margin().lower());
             row.put("marginUpper", p.margin() == null ? null : p.margin().upper());
+            if (p.margin() != null && p.margin().ratio()) {
+                row.put("marginScale", "ratio");
+            }
             row.put("nPerGroup", p.plan() == null ? null : p.plan().n());
             row.put("achievedPower", p.plan() == null ? null : p.plan().achievedPower());
             row.put("note", p.note());
@@ -413,7 +416,8 @@ public final class PlanCommand implements Callable<Integer> {
             String spreadP = p.spread() == null ? "-" : String.format(java.util.Locale.ROOT, "%.4f",
                     p.spread().achievedPower());
             out.printf(java.util.Locale.ROOT, "  %-28s %12s %24s %8s %8s %8s %8s %8s %8s  %s%n", p.name(),
-                    org.holdpoint.result.Format.num(p.sd(), 4), p.margin() == null ? "-" : "("
+                    org.holdpoint.result.Format.num(p.sd(), 4), p.margin() == null ? "-" : (p.margin().ratio() ? "ratio "
+                            : "") + "("
                             + (p.margin().lower() == null ? "none" : org.holdpoint.result.Format.num(
                                     p.margin().lower(), 4)) + ", "
                             + (p.margin().upper() == null ? "none" : org.holdpoint.result.Format.num(

@@ -126,13 +126,16 @@ final class TextOutput {
         for (CharacteristicResult r : results) {
             EquivalenceResult eq = r.decidingTost();
             TTestResult t = r.decidingTest();
-            String interval = eq == null ? "-" : "(" + u(r.name(), eq.ciLower()) + ", "
+            String interval = eq == null ? "-" : eq.ratio() ? "ratio (" + Format.ratioBound(eq.ciLower()) + ", "
+                    + Format.ratioBound(eq.ciUpper()) + ")" : "(" + u(r.name(), eq.ciLower()) + ", "
                     + u(r.name(), eq.ciUpper()) + ")";
             String margin = eq == null ? "none set" : marginText(r.name(), eq);
             boolean unassessable = r.verdict().status() == Verdict.Status.NOT_ASSESSABLE;
             String conclusion = unassessable ? "not assessable (see below)" : eq == null ? "not assessed"
                     : eq.conclusion().words();
-            if (unassessable && r.margin() != null) {
+            if (unassessable && r.margin() != null && r.margin().ratio()) {
+                margin = "ratio " + r.margin().lower() + " to " + r.margin().upper();
+            } else if (unassessable && r.margin() != null) {
                 margin = r.margin().lower() != null && r.margin().upper() != null ? "(" + u(r.name(), r.margin()
                         .lower()) + ", " + u(r.name(), r.margin().upper()) + ")" : "one-sided";
             }
@@ -148,6 +151,11 @@ final class TextOutput {
     }
 
     private String marginText(String name, EquivalenceResult eq) {
+        if (eq.ratio()) {
+            return eq.lowerMargin() != null && eq.upperMargin() != null ? "ratio (" + Format.ratioBound(eq.lowerMargin())
+                    + ", " + Format.ratioBound(eq.upperMargin()) + ")" : eq.lowerMargin() != null ? "ratio > "
+                    + Format.ratioBound(eq.lowerMargin()) : "ratio < " + Format.ratioBound(eq.upperMargin());
+        }
         if (eq.lowerMargin() != null && eq.upperMargin() != null) {
             return "(" + u(name, eq.lowerMargin()) + ", " + u(name, eq.upperMargin()) + ")";
         }
@@ -173,12 +181,14 @@ final class TextOutput {
         }
         EquivalenceResult eq = r.decidingTost();
         if (eq != null) {
-            out.printf(Locale.ROOT, "  Equivalence, two one-sided tests (%s): %s; p lower = %s, p upper = %s; "
-                    + "%s interval (%s, %s) -> %s%n", eq.method().description(),
-                    Format.margin(eq, decimals.getOrDefault(r.name(), -1)),
+            out.printf(Locale.ROOT, "  Equivalence, two one-sided tests (%s%s): %s; p lower = %s, p upper = %s; "
+                    + "%s interval%s (%s, %s) -> %s%n", eq.method().description(), eq.ratio() ? ", on the logarithms"
+                            : "", Format.margin(eq, decimals.getOrDefault(r.name(), -1)),
                     eq.pLower() == null ? "-" : Format.p(eq.pLower()), eq.pUpper() == null ? "-" : Format.p(eq.pUpper()),
-                    Format.percent(eq.level()), u(r.name(), eq.ciLower()), u(r.name(), eq.ciUpper()),
-                    eq.conclusion().words());
+                    Format.percent(eq.level()), eq.ratio() ? " of the ratio after/before (geometric means " + Format
+                            .ratioBound(eq.estimate()) + ")" : "", eq.ratio() ? Format.ratioBound(eq.ciLower())
+                            : u(r.name(), eq.ciLower()), eq.ratio() ? Format.ratioBound(eq.ciUpper())
+                            : u(r.name(), eq.ciUpper()), eq.conclusion().words());
         }
         if (r.variance() != null) {
             var v = r.variance();

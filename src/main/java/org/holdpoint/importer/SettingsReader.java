@@ -41,7 +41,7 @@ public final class SettingsReader {
     /** The columns (CSV) or keys (JSON) a settings file may use. */
     public static final List<String> COLUMNS = List.of("characteristic", "unit", "lsl", "nominal", "usl", "margin",
             "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower", "margin_percent_upper",
-            "margin_percent_of_usl",
+            "margin_percent_of_usl", "margin_ratio", "margin_ratio_lower", "margin_ratio_upper",
             "sd_growth_limit", "capability_min", "paired", "distribution");
 
     /** Creates a reader. */
@@ -208,6 +208,10 @@ public final class SettingsReader {
         MarginSpec m = s.margin();
         if (m != null && m.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT) {
             o.put("margin_percent_of_usl", m.upper());
+        } else if (m != null && m.kind() == MarginSpec.Kind.RATIO) {
+            // the ratio bounds as entered (a symmetric 1/R to R is written as its two bounds)
+            putIf(o, "margin_ratio_lower", m.lower());
+            putIf(o, "margin_ratio_upper", m.upper());
         } else if (m != null) {
             boolean abs = m.kind() == MarginSpec.Kind.ABSOLUTE;
             boolean symmetric = m.lower() != null && m.upper() != null
@@ -343,8 +347,29 @@ public final class SettingsReader {
         Double pctLo = number(v, "margin_percent_lower", w, dec);
         Double pctHi = number(v, "margin_percent_upper", w, dec);
         Double pctUsl = number(v, "margin_percent_of_usl", w, dec);
+        Double ratio = number(v, "margin_ratio", w, dec);
+        Double ratioLo = number(v, "margin_ratio_lower", w, dec);
+        Double ratioHi = number(v, "margin_ratio_upper", w, dec);
         boolean abs = sym != null || lo != null || hi != null;
         boolean rel = pct != null || pctLo != null || pctHi != null;
+        if (ratio != null || ratioLo != null || ratioHi != null) {
+            String col = ratio != null ? "margin_ratio" : ratioLo != null ? "margin_ratio_lower" : "margin_ratio_upper";
+            if (abs || rel || pctUsl != null) {
+                throw w.bad(col, v.get(col), "cannot be combined with another margin; give the margin one way");
+            }
+            if (ratio != null && (ratioLo != null || ratioHi != null)) {
+                throw w.bad("margin_ratio", v.get("margin_ratio"), "is symmetric (1/R to R); give either it or the "
+                        + "lower/upper ratio margins, not both");
+            }
+            if (ratio != null) {
+                if (!(ratio > 1)) {
+                    throw w.bad("margin_ratio", v.get("margin_ratio"), "must be above 1: after/before may lie between "
+                            + "1/R and R, e.g. 1.25 for 0.8 to 1.25");
+                }
+                return new MarginSpec(MarginSpec.Kind.RATIO, 1 / ratio, ratio);
+            }
+            return new MarginSpec(MarginSpec.Kind.RATIO, ratioLo, ratioHi);
+        }
         if (pctUsl != null) {
             if (abs || rel) {
                 throw w.bad("margin_percent_of_usl", v.get("margin_percent_of_usl"), "cannot be combined with another "
@@ -383,7 +408,8 @@ public final class SettingsReader {
     /** The margin column the row uses (for messages). */
     private static String marginColumn(Map<String, String> v) {
         for (String c : List.of("margin", "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower",
-                "margin_percent_upper", "margin_percent_of_usl")) {
+                "margin_percent_upper", "margin_percent_of_usl", "margin_ratio", "margin_ratio_lower",
+                "margin_ratio_upper")) {
             if (v.get(c) != null) {
                 return c;
             }

@@ -276,10 +276,11 @@ final class DetailPlan {
         s.text(r + 5, col + 1, set.margin() == null ? "not set" : set.margin().describe(), Style.CELL_WRAP,
                 n + ": margin as set");
         s.height(r + 5, 24f);
-        pair(r + 6, col, "Margin L (in units)", c.margin() == null ? null : c.margin().lower(), Style.NUMBER, d,
-                n + ": margin L");
-        pair(r + 7, col, "Margin U (in units)", c.margin() == null ? null : c.margin().upper(), Style.NUMBER, d,
-                n + ": margin U");
+        boolean ratio = c.margin() != null && c.margin().ratio();
+        pair(r + 6, col, ratio ? "Margin L (ratio after/before)" : "Margin L (in units)", c.margin() == null ? null
+                : c.margin().lower(), Style.NUMBER, ratio ? 4 : d, n + ": margin L");
+        pair(r + 7, col, ratio ? "Margin U (ratio after/before)" : "Margin U (in units)", c.margin() == null ? null
+                : c.margin().upper(), Style.NUMBER, ratio ? 4 : d, n + ": margin U");
         pair(r + 8, col, "Sd growth limit (sd after / sd before)", set.sdGrowthLimit(), Style.NUMBER, 3,
                 n + ": sd growth limit");
     }
@@ -319,10 +320,10 @@ final class DetailPlan {
         pair(r + 2, col, "p of H0: \u03b4 \u2264 L", e.pLower(), Style.P_VALUE, 0, n + ": TOST lower p");
         pair(r + 3, col, "p of H0: \u03b4 \u2265 U", e.pUpper(), Style.P_VALUE, 0, n + ": TOST upper p");
         pair(r + 4, col, "TOST p (the larger)", e.p(), Style.P_VALUE, 0, n + ": TOST p");
-        String lvl = Texts.percent(e.level());
-        pair(r + 5, col, lvl + " CI lower", WorkbookPlan.finite(e.ciLower()), Style.NUMBER, d,
+        String lvl = Texts.percent(e.level()) + (e.ratio() ? " CI of the ratio" : " CI");
+        pair(r + 5, col, lvl + " lower", WorkbookPlan.finite(e.ciLower()), Style.NUMBER, e.ratio() ? 4 : d,
                 n + ": equivalence CI lower");
-        pair(r + 6, col, lvl + " CI upper", WorkbookPlan.finite(e.ciUpper()), Style.NUMBER, d,
+        pair(r + 6, col, lvl + " upper", WorkbookPlan.finite(e.ciUpper()), Style.NUMBER, e.ratio() ? 4 : d,
                 n + ": equivalence CI upper");
         pair(r + 7, col, "Degrees of freedom", WorkbookPlan.finite(e.df()), Style.NUMBER, 2, n + ": TOST df");
         EquivalenceResult pooled = c.tostPooled();

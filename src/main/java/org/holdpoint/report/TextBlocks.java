@@ -136,7 +136,8 @@ final class TextBlocks {
         String source = set.overrides().margin() != null ? "given on the command line for every characteristic"
                 : set.perCharacteristic().get(c.name()) != null && set.perCharacteristic().get(c.name()).margin()
                         != null ? "from the per-characteristic settings file" : "study default";
-        String units = c.margin() == null ? "" : " = (" + (c.margin().lower() == null ? "none" : Texts.num(
+        String units = c.margin() == null ? "" : c.margin().ratio() ? "; tested on the logarithms of the values (the "
+                + "ratio of the geometric means)" : " = (" + (c.margin().lower() == null ? "none" : Texts.num(
                 c.margin().lower())) + ", " + (c.margin().upper() == null ? "none" : Texts.num(c.margin().upper()))
                 + ")" + (c.unit() == null ? "" : " " + c.unit());
         return s.margin().describe() + units + "; " + source + "; fixed before the data were seen, as the "

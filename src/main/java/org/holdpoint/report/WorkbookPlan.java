@@ -207,11 +207,9 @@ final class WorkbookPlan {
         var t = leadingCells(s, row, c0, index, c, d);
         s.text(row, c0 + 7, t == null ? "" : interval(t.ciLower(), t.ciUpper(), d), Style.CELL,
                 n + ": CI of the difference");
-        s.text(row, c0 + 8, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
-                Style.CELL, n + ": margin");
+        s.text(row, c0 + 8, c.margin() == null ? "not set" : margin(c.margin(), d), Style.CELL, n + ": margin");
         EquivalenceResult eq = c.decidingTost();
-        s.text(row, c0 + 9, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL,
-                n + ": equivalence CI");
+        s.text(row, c0 + 9, eq == null ? "" : equivalenceInterval(eq, d), Style.CELL, n + ": equivalence CI");
         s.text(row, c0 + 10, c.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE
                 ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL,
                 n + ": equivalence conclusion");
@@ -325,11 +323,9 @@ final class WorkbookPlan {
         int d = statDecimals(data(c.name()));
         String n = c.name();
         var t = leadingCells(s, row, c0, index, c, d);
-        s.text(row, c0 + 7, c.margin() == null ? "not set" : interval(c.margin().lower(), c.margin().upper(), d),
-                Style.CELL_WRAP, n + ": margin");
+        s.text(row, c0 + 7, c.margin() == null ? "not set" : margin(c.margin(), d), Style.CELL_WRAP, n + ": margin");
         EquivalenceResult eq = c.decidingTost();
-        s.text(row, c0 + 8, eq == null ? "" : interval(eq.ciLower(), eq.ciUpper(), d), Style.CELL_WRAP,
-                n + ": equivalence CI");
+        s.text(row, c0 + 8, eq == null ? "" : equivalenceInterval(eq, d), Style.CELL_WRAP, n + ": equivalence CI");
         s.text(row, c0 + 9, c.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE
                 ? "not assessable" : eq == null ? "not assessed" : eq.conclusion().words(), Style.CELL_WRAP,
                 n + ": equivalence conclusion");
@@ -374,6 +370,17 @@ final class WorkbookPlan {
      */
     static String interval(Double lower, Double upper, int decimals) {
         return "(" + fixed(lower, decimals) + ", " + fixed(upper, decimals) + ")";
+    }
+
+    /** A margin's bounds: in units with the characteristic's decimals, a ratio margin as "ratio (0.8, 1.25)". */
+    static String margin(org.holdpoint.stats.Margin m, int decimals) {
+        return m.ratio() ? "ratio " + interval(m.lower(), m.upper(), 4) : interval(m.lower(), m.upper(), decimals);
+    }
+
+    /** An equivalence interval: in units, or as a ratio after/before with four decimals. */
+    static String equivalenceInterval(EquivalenceResult eq, int decimals) {
+        return eq.ratio() ? "ratio " + interval(eq.ciLower(), eq.ciUpper(), 4)
+                : interval(eq.ciLower(), eq.ciUpper(), decimals);
     }
 
     static String fixed(Double v, int decimals) {

@@ -56,6 +56,38 @@ public final class Format {
     }
 
     /**
+     * A ratio after/before of an equivalence result (estimate, interval bound, margin): four decimals.
+     *
+     * @param v the ratio
+     * @return e.g. "0.9573"
+     */
+    public static String ratioBound(double v) {
+        return fixed(v, 4);
+    }
+
+    /**
+     * What an equivalence result's estimate is, in words.
+     *
+     * @param eq the result
+     * @return "ratio after/before (geometric means)" or "difference"
+     */
+    public static String quantity(EquivalenceResult eq) {
+        return eq.ratio() ? "ratio after/before (geometric means)" : "difference";
+    }
+
+    /**
+     * An estimate or interval bound of an equivalence result: as a ratio, or in the unit's decimals.
+     *
+     * @param eq       the result
+     * @param v        the value
+     * @param decimals decimals for a difference
+     * @return the text
+     */
+    public static String equivalenceValue(EquivalenceResult eq, double v, int decimals) {
+        return eq.ratio() ? ratioBound(v) : fixed(v, decimals);
+    }
+
+    /**
      * A ratio or index read against a limit (sd ratio, Ppk and their bounds): three decimals, the precision
      * at which such limits are written (1.33, 1.300).
      *
@@ -128,6 +160,13 @@ public final class Format {
      * @return e.g. "(margin -0.0100 to 0.0100)"
      */
     public static String margin(EquivalenceResult eq, java.util.function.DoubleFunction<String> num) {
+        if (eq.ratio()) {
+            if (eq.lowerMargin() != null && eq.upperMargin() != null) {
+                return "(ratio margin " + ratioBound(eq.lowerMargin()) + " to " + ratioBound(eq.upperMargin()) + ")";
+            }
+            return eq.lowerMargin() != null ? "(lower ratio margin " + ratioBound(eq.lowerMargin()) + ")"
+                    : "(upper ratio margin " + ratioBound(eq.upperMargin()) + ")";
+        }
         if (eq.lowerMargin() != null && eq.upperMargin() != null) {
             return "(margin " + num.apply(eq.lowerMargin()) + " to " + num.apply(eq.upperMargin()) + ")";
         }

@@ -34,9 +34,10 @@ public final class Verdicts {
                     + "not evidence of sameness");
         } else {
             Conclusion c = eq.conclusion();
-            String interval = String.format(Locale.ROOT, "the %s interval of the difference (%s, %s) %s",
-                    Format.percent(eq.level()), Format.fixed(eq.ciLower(), decimals), Format.fixed(eq.ciUpper(), decimals),
-                    describeAgainstMargin(c));
+            String interval = String.format(Locale.ROOT, "the %s interval of the %s (%s, %s) %s",
+                    Format.percent(eq.level()), eq.ratio() ? "ratio after/before" : "difference",
+                    Format.equivalenceValue(eq, eq.ciLower(), decimals),
+                    Format.equivalenceValue(eq, eq.ciUpper(), decimals), describeAgainstMargin(c));
             status = switch (c) {
                 case EQUIVALENT, NON_INFERIOR, NON_SUPERIOR -> Status.PASSED;
                 case NOT_EQUIVALENT, INFERIOR, SUPERIOR -> Status.FAILED;

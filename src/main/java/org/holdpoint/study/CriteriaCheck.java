@@ -116,6 +116,17 @@ public final class CriteriaCheck {
             }
             return null;
         }
+        if (margin.kind() == MarginSpec.Kind.RATIO) {
+            if (lo != null && !(lo > 0 && lo < 1)) {
+                return "the lower ratio margin (" + text(lo) + ") must lie between 0 and 1: after/before may drop to "
+                        + "it, e.g. 0.9";
+            }
+            if (hi != null && !(hi > 1)) {
+                return "the upper ratio margin (" + text(hi) + ") must be above 1: after/before may grow to it, e.g. "
+                        + "1.1 (at most 10 % more)";
+            }
+            return null;
+        }
         if (margin.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT && lo != null) {
             return "a margin in % of the USL bounds the rise only; leave the lower side empty";
         }

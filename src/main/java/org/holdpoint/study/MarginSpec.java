@@ -3,8 +3,9 @@ package org.holdpoint.study;
 import org.holdpoint.stats.Margin;
 
 /**
- * An equivalence margin as the user entered it: in the characteristic's unit, or as percentages of
- * the tolerance width USL − LSL. Either side may be absent (a one-sided margin).
+ * An equivalence margin as the user entered it: in the characteristic's unit, as percentages of
+ * the tolerance width USL − LSL or of the USL, or as bounds of the ratio after/before. Either side may be absent
+ * (a one-sided margin).
  *
  * @param kind  how the numbers are meant
  * @param lower L (negative, in units) or the lower percentage (positive), or null
@@ -19,7 +20,9 @@ public record MarginSpec(Kind kind, Double lower, Double upper) {
         /** As a percentage of the tolerance width USL − LSL. */
         PERCENT_OF_TOLERANCE,
         /** An upper margin as a percentage of the USL, for a characteristic with an upper limit only. */
-        PERCENT_OF_UPPER_LIMIT
+        PERCENT_OF_UPPER_LIMIT,
+        /** Bounds of the ratio after/before (0 &lt; lower &lt; 1 &lt; upper), tested on the log scale. */
+        RATIO
     }
 
     /** Validates the spec. */
@@ -43,6 +46,9 @@ public record MarginSpec(Kind kind, Double lower, Double upper) {
         if (kind == Kind.ABSOLUTE) {
             return new Margin(lower, upper);
         }
+        if (kind == Kind.RATIO) {
+            return Margin.ratio(lower, upper);
+        }
         if (kind == Kind.PERCENT_OF_UPPER_LIMIT) {
             if (spec == null || spec.usl() == null || spec.lsl() != null || lower != null) {
                 throw new org.holdpoint.stats.StatsException("a margin in percent of the USL is for a characteristic "
@@ -61,6 +67,11 @@ public record MarginSpec(Kind kind, Double lower, Double upper) {
 
     /** @return how the margin was set, in words, e.g. "±10 % of tolerance" */
     public String describe() {
+        if (kind == Kind.RATIO) {
+            return lower != null && upper != null ? "ratio after/before " + fmt(lower) + " to " + fmt(upper)
+                    : lower != null ? "ratio after/before at least " + fmt(lower)
+                    : "ratio after/before at most " + fmt(upper);
+        }
         String unit = kind == Kind.ABSOLUTE ? "" : kind == Kind.PERCENT_OF_UPPER_LIMIT ? " % of the USL"
                 : " % of tolerance";
         if (lower != null && upper != null) {

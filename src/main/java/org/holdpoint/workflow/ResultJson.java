@@ -210,6 +210,7 @@ public final class ResultJson {
                 case ABSOLUTE -> "units";
                 case PERCENT_OF_TOLERANCE -> "percent of tolerance";
                 case PERCENT_OF_UPPER_LIMIT -> "percent of the USL";
+                case RATIO -> "ratio after/before";
             });
             m.put("description", s.margin().describe());
             numOrNull(m, "lower", r.margin().lower());
@@ -242,6 +243,10 @@ public final class ResultJson {
             return;
         }
         ObjectNode o = n.putObject(key);
+        if (e.ratio()) {
+            // estimate, interval and margins are ratios after/before; df and p those of the test on the logarithms
+            o.put("scale", "ratio");
+        }
         numOrNull(o, "lowerMargin", e.lowerMargin());
         numOrNull(o, "upperMargin", e.upperMargin());
         num(o, "estimate", e.estimate());

@@ -145,7 +145,8 @@ public final class StudyAnalyzer {
             method = LocationMethod.PAIRED;
             pairedTest = t.testPaired(before, after);
             if (margin != null) {
-                tost = EquivalenceTest.withDefaults().withMargin(margin).withAlpha(alpha).testPaired(before, after);
+                EquivalenceTest eq = EquivalenceTest.withDefaults().withMargin(margin).withAlpha(alpha);
+                tost = margin.ratio() ? ratio(eq, before, after, true) : eq.testPaired(before, after);
             }
         } else {
             method = study.equalVariances() ? LocationMethod.POOLED : LocationMethod.WELCH;
@@ -153,8 +154,9 @@ public final class StudyAnalyzer {
             pooled = t.with(VarianceAssumption.EQUAL).test(before, after);
             if (margin != null) {
                 EquivalenceTest eq = EquivalenceTest.withDefaults().withMargin(margin).withAlpha(alpha);
-                tost = eq.test(before, after);
-                tostPooled = eq.with(VarianceAssumption.EQUAL).test(before, after);
+                EquivalenceTest eqPooled = eq.with(VarianceAssumption.EQUAL);
+                tost = margin.ratio() ? ratio(eq, before, after, false) : eq.test(before, after);
+                tostPooled = margin.ratio() ? ratio(eqPooled, before, after, false) : eqPooled.test(before, after);
             }
         }
         Descriptives db = pair.before();
@@ -196,7 +198,13 @@ public final class StudyAnalyzer {
             notes.add("Brown-Forsythe is undefined: every value equals its group median's neighbours "
                     + "(zero within-group deviation)");
         }
-        AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin, alpha, paired, study.equalVariances(),
+        // the rank-based equivalence takes a margin in units: with a ratio margin it is left out
+        if (margin != null && margin.ratio()) {
+            notes.add("the margin is a ratio after/before: equivalence is tested on the logarithms (the ratio of the "
+                    + "geometric means); the rank-based equivalence is not computed for a ratio margin");
+        }
+        AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin != null && margin.ratio() ? null : margin,
+                alpha, paired, study.equalVariances(),
                 study.currentMethods(), notes);
         String unit = s.unit() != null ? s.unit() : c.unit();
         CharacteristicResult draft = CharacteristicResult.builder(c.name(), unit, s, paired, method).margin(margin)
@@ -297,6 +305,15 @@ public final class StudyAnalyzer {
                 .verdict(new org.holdpoint.result.Verdict(org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE,
                         List.of(reason)))
                 .notes(notes).build();
+    }
+
+    /** The TOST of the ratio after/before on the logarithms; a value at or below 0 is this characteristic's problem. */
+    private static EquivalenceResult ratio(EquivalenceTest eq, Sample before, Sample after, boolean paired) {
+        try {
+            return eq.testRatio(before, after, paired);
+        } catch (org.holdpoint.stats.StatsException e) {
+            throw new CharacteristicProblem("%s; give the margin in units instead", e.getMessage());
+        }
     }
 
     private static void checkSizes(Sample before, Sample after) {

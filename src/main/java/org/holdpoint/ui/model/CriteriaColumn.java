@@ -19,7 +19,8 @@ public enum CriteriaColumn {
     /** Equivalence margin: one number d for (−d, d), or "L / U" (either side may be left empty). */
     MARGIN("Margin", null),
     /** Whether the margin is in units or in percent of the tolerance width. */
-    MARGIN_IN("Margin in", List.of(CriteriaTable.IN_UNITS, CriteriaTable.IN_PERCENT, CriteriaTable.IN_PERCENT_USL)),
+    MARGIN_IN("Margin in", List.of(CriteriaTable.IN_UNITS, CriteriaTable.IN_PERCENT, CriteriaTable.IN_PERCENT_USL,
+            CriteriaTable.IN_RATIO)),
     /** The largest acceptable sd(after)/sd(before). */
     SD_GROWTH("Max sd ratio", null),
     /** The minimum capability index required. */

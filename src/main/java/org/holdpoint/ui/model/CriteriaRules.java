@@ -76,7 +76,8 @@ final class CriteriaRules {
         } catch (IllegalArgumentException e) {
             return e.getMessage();
         }
-        return kind == MarginSpec.Kind.ABSOLUTE ? null : org.holdpoint.study.CriteriaCheck.resolvable(new MarginSpec(kind,
+        return kind == MarginSpec.Kind.ABSOLUTE || kind == MarginSpec.Kind.RATIO ? null
+                : org.holdpoint.study.CriteriaCheck.resolvable(new MarginSpec(kind,
                 b.lower(), b.upper()), specOrNone(number(r[CriteriaColumn.LSL.ordinal()]),
                         number(r[CriteriaColumn.USL.ordinal()])));
     }
@@ -85,6 +86,7 @@ final class CriteriaRules {
     static MarginSpec.Kind kindOf(String marginIn) {
         return CriteriaTable.IN_PERCENT.equals(marginIn) ? MarginSpec.Kind.PERCENT_OF_TOLERANCE
                 : CriteriaTable.IN_PERCENT_USL.equals(marginIn) ? MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT
+                : CriteriaTable.IN_RATIO.equals(marginIn) ? MarginSpec.Kind.RATIO
                 : MarginSpec.Kind.ABSOLUTE;
     }
 
@@ -114,6 +116,9 @@ final class CriteriaRules {
         String t = text.replace("±", "").replace("+/-", "").trim();
         if (t.isEmpty()) {
             return null;
+        }
+        if (kind == MarginSpec.Kind.RATIO) {
+            return ratioMargin(t);
         }
         if (kind == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT) {
             Double d = parse(t.replace("/", "").trim());
@@ -153,6 +158,31 @@ final class CriteriaRules {
         return new Bounds(lo, hi);
     }
 
+    /** A ratio margin: one number R for 1/R to R, or "L / U" with either side empty. */
+    private static Bounds ratioMargin(String t) {
+        if (!t.contains("/")) {
+            Double r = parse(t);
+            if (r == null || !(r > 1)) {
+                throw new IllegalArgumentException("give a ratio R above 1 for after/before between 1/R and R (e.g. "
+                        + "1.25), or L / U such as 0.9 / 1.1");
+            }
+            return new Bounds(1 / r, r);
+        }
+        String[] parts = t.split("/", -1);
+        Double lo = parts.length == 2 && !parts[0].isBlank() ? parse(parts[0].trim()) : null;
+        Double hi = parts.length == 2 && !parts[1].isBlank() ? parse(parts[1].trim()) : null;
+        if (parts.length != 2 || !parts[0].isBlank() && lo == null || !parts[1].isBlank() && hi == null
+                || lo == null && hi == null) {
+            throw new IllegalArgumentException("write the ratio margin as L / U, e.g. 0.9 / 1.1 (either side may be "
+                    + "empty)");
+        }
+        String problem = org.holdpoint.study.CriteriaCheck.margin(new MarginSpec(MarginSpec.Kind.RATIO, lo, hi));
+        if (problem != null) {
+            throw new IllegalArgumentException(problem);
+        }
+        return new Bounds(lo, hi);
+    }
+
     static CharacteristicSettings settings(String[] r) {
         String unit = r[CriteriaColumn.UNIT.ordinal()];
         SpecLimits spec = new SpecLimits(number(r[CriteriaColumn.LSL.ordinal()]),
@@ -171,6 +201,12 @@ final class CriteriaRules {
     static String marginText(MarginSpec m) {
         if (m.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT) {
             return text(m.upper());
+        }
+        if (m.kind() == MarginSpec.Kind.RATIO) {
+            if (m.lower() != null && m.upper() != null && m.lower() == 1 / m.upper()) {
+                return text(m.upper());
+            }
+            return text(m.lower()) + " / " + text(m.upper());
         }
         boolean percent = m.kind() == MarginSpec.Kind.PERCENT_OF_TOLERANCE;
         if (m.lower() != null && m.upper() != null) {

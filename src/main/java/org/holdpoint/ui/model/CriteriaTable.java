@@ -22,6 +22,8 @@ public final class CriteriaTable {
     public static final String IN_PERCENT = "% of tolerance";
     /** Choice of {@link CriteriaColumn#MARGIN_IN}: an upper margin in percent of the USL (upper limit only). */
     public static final String IN_PERCENT_USL = "% of USL";
+    /** Choice of {@link CriteriaColumn#MARGIN_IN}: bounds of the ratio after/before (tested on the logarithms). */
+    public static final String IN_RATIO = "ratio";
     /** Choice of {@link CriteriaColumn#PAIRED}: take the design from the data layout. */
     public static final String FROM_DATA = "from data";
     /** Choice of {@link CriteriaColumn#DISTRIBUTION}: the default rule decides (docs/methods.md §14). */
@@ -283,7 +285,8 @@ public final class CriteriaTable {
         if (m != null) {
             r[CriteriaColumn.MARGIN.ordinal()] = CriteriaRules.marginText(m);
             r[CriteriaColumn.MARGIN_IN.ordinal()] = m.kind() == MarginSpec.Kind.ABSOLUTE ? IN_UNITS
-                    : m.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT ? IN_PERCENT_USL : IN_PERCENT;
+                    : m.kind() == MarginSpec.Kind.PERCENT_OF_UPPER_LIMIT ? IN_PERCENT_USL
+                    : m.kind() == MarginSpec.Kind.RATIO ? IN_RATIO : IN_PERCENT;
         }
         r[CriteriaColumn.SD_GROWTH.ordinal()] = CriteriaRules.text(s.sdGrowthLimit());
         r[CriteriaColumn.CAPABILITY.ordinal()] = CriteriaRules.text(s.capabilityRequirement());

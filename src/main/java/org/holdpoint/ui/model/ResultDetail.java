@@ -205,8 +205,15 @@ public final class ResultDetail {
     private static Section equivalence(EquivalenceResult eq, java.util.function.DoubleFunction<String> f) {
         List<Line> l = new ArrayList<>();
         l.add(new Line("Margin", Format.margin(eq, f)));
-        l.add(new Line(Format.percent(eq.level()) + " interval", "(" + f.apply(eq.ciLower()) + ", "
-                + f.apply(eq.ciUpper()) + ")"));
+        if (eq.ratio()) {
+            l.add(new Line("Ratio after/before", Format.ratioBound(eq.estimate()) + " (of the geometric means; "
+                    + "tested on the logarithms)"));
+            l.add(new Line(Format.percent(eq.level()) + " interval", "(" + Format.ratioBound(eq.ciLower()) + ", "
+                    + Format.ratioBound(eq.ciUpper()) + ")"));
+        } else {
+            l.add(new Line(Format.percent(eq.level()) + " interval", "(" + f.apply(eq.ciLower()) + ", "
+                    + f.apply(eq.ciUpper()) + ")"));
+        }
         if (eq.pLower() != null) {
             l.add(new Line("p (lower test)", Format.p(eq.pLower())));
         }

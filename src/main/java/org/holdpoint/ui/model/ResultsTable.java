@@ -221,8 +221,9 @@ public final class ResultsTable {
             case CONCLUSION -> VerdictLook.finding(r);
             case UNIT -> r.unit() == null ? "" : r.unit();
             case DIFFERENCE -> r.decidingTest() == null ? null : r.decidingTest().estimate();
-            case INTERVAL -> eq == null ? "" : "(" + unit(r.name(), eq.ciLower()) + ", " + unit(r.name(), eq.ciUpper())
-                    + ")";
+            case INTERVAL -> eq == null ? "" : eq.ratio() ? "ratio (" + Format.ratioBound(eq.ciLower()) + ", "
+                    + Format.ratioBound(eq.ciUpper()) + ")" : "(" + unit(r.name(), eq.ciLower()) + ", "
+                    + unit(r.name(), eq.ciUpper()) + ")";
             case MARGIN -> margin(r.name(), r.margin());
             case SD_RATIO -> r.variance() == null ? null : Math.sqrt(r.variance().ratio());
         };
@@ -283,6 +284,10 @@ public final class ResultsTable {
     private String margin(String name, Margin m) {
         if (m == null) {
             return "";
+        }
+        if (m.ratio()) {
+            return "ratio " + (m.lower() == null ? "≤ " + Format.num(m.upper()) : m.upper() == null ? "≥ "
+                    + Format.num(m.lower()) : Format.num(m.lower()) + "–" + Format.num(m.upper()));
         }
         // as entered (shortest form): the column stays narrow and shows the numbers the user typed
         if (m.lower() != null && m.upper() != null && m.lower() == -m.upper()) {

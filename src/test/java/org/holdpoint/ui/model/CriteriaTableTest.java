@@ -57,6 +57,21 @@ class CriteriaTableTest {
     }
 
     @Test
+    void aRatioMarginIsTypedAsROrAsLowerSlashUpper() {
+        t.set(0, CriteriaColumn.MARGIN_IN, CriteriaTable.IN_RATIO);
+        t.set(0, CriteriaColumn.MARGIN, "1.25");
+        MarginSpec m = t.toSettings().get("A").margin();
+        assertThat(m.kind()).isEqualTo(MarginSpec.Kind.RATIO);
+        assertThat(m.lower()).isEqualTo(0.8);
+        assertThat(m.upper()).isEqualTo(1.25);
+        t.set(0, CriteriaColumn.MARGIN, " / 1.2");
+        assertThat(t.toSettings().get("A").margin().lower()).isNull();
+        t.set(0, CriteriaColumn.MARGIN, "1.1 / 1.2");
+        assertThat(t.rowsWithProblems()).isEqualTo(1);
+        assertThat(t.problem(0, CriteriaColumn.MARGIN)).contains("must lie between 0 and 1");
+    }
+
+    @Test
     void aBadCellKeepsWhatWasTypedAndSaysWhyBesideIt() {
         t.set(0, CriteriaColumn.LSL, "25,01");
         assertThat(t.get(0, CriteriaColumn.LSL)).isEqualTo("25,01");
