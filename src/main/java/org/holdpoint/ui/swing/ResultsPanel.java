@@ -107,7 +107,7 @@ final class ResultsPanel extends JPanel {
         results.addListener(ResultsTable.Property.RESULT, e -> refreshRows());
         results.addListener(ResultsTable.Property.SELECTED, e -> refreshDetail());
         detail.setName("detail");
-        String[] titles = {"Box plot", "Histograms", "Normal probability"};
+        String[] titles = {"Box plot", "Histograms", "Probability plot"};
         for (int i = 0; i < charts.length; i++) {
             chartTabs.addTab(titles[i], charts[i]);
         }
