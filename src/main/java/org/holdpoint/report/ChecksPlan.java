@@ -269,25 +269,9 @@ final class ChecksPlan {
         s.text(r, c0, "In the tolerance (normal model)", Style.HEADER, n + ": capability header");
         s.merge(r, r, c0, c0 + 5);
         Double req = c.settings().capabilityRequirement();
-        String decides;
-        if (a == null || a.ppkLower() == null || !Double.isFinite(a.ppkLower())) {
-            decides = "The after group's lower bound of Ppk is undefined" + (req == null ? "; no requirement set."
-                    : ", so the requirement of " + Texts.num(req) + " is not judged.");
-            if (req != null) {
-                notes.add("Capability requirement: not judged, the after group's lower bound of Ppk is undefined.");
-            }
-        } else {
-            decides = "Decides: the after group's " + lvl + " lower bound of Ppk, " + WorkbookPlan.fixed(a.ppkLower(),
-                    3) + (req == null ? "; no requirement set." : Boolean.TRUE.equals(k.capabilityMet())
-                    ? ", meets the required " + Texts.num(req) + "." : ", does NOT meet the required " + Texts.num(req)
-                    + ".");
+        if (decides(r, n, a == null ? null : a.ppkLower(), req, k.capabilityMet(), lvl) && req != null) {
+            notes.add("Capability requirement: not judged, the after group's lower bound of Ppk is undefined.");
         }
-        s.text(r + 1, c0, decides, Style.WRAP, n + ": capability decides");
-        s.merge(r + 1, r + 1, c0, c0 + 5);
-        s.height(r + 1, 16f);
-        s.text(r + 2, c0, "Index", Style.HEADER, n + ": capability index header");
-        s.text(r + 2, c0 + 1, "Before", Style.HEADER, n + ": capability before header");
-        s.text(r + 2, c0 + 2, "After", Style.HEADER, n + ": capability after header");
         capRow(r + 3, "Ppk (overall sd)", b, a, CapabilityResult::ppk, n + ": Ppk");
         capRow(r + 4, lvl + " lower bound of Ppk (Bissell)", b, a, CapabilityResult::ppkLower, n + ": Ppk lower bound");
         capRow(r + 5, "Pp (overall sd)", b, a, CapabilityResult::pp, n + ": Pp");
@@ -328,22 +312,7 @@ final class ChecksPlan {
         s.text(r, c0, "In the tolerance (" + family + " fit, percentile method)", Style.HEADER, n + ": capability header");
         s.merge(r, r, c0, c0 + 5);
         Double req = c.settings().capabilityRequirement();
-        String decides;
-        if (a == null || a.ppkLower() == null || !Double.isFinite(a.ppkLower())) {
-            decides = "The after group's lower bound of Ppk is undefined" + (req == null ? "; no requirement set."
-                    : ", so the requirement of " + Texts.num(req) + " is not judged.");
-        } else {
-            decides = "Decides: the after group's " + lvl + " lower bound of Ppk, " + WorkbookPlan.fixed(a.ppkLower(),
-                    3) + (req == null ? "; no requirement set." : Boolean.TRUE.equals(k.capabilityMet())
-                    ? ", meets the required " + Texts.num(req) + "." : ", does NOT meet the required " + Texts.num(req)
-                    + ".");
-        }
-        s.text(r + 1, c0, decides, Style.WRAP, n + ": capability decides");
-        s.merge(r + 1, r + 1, c0, c0 + 5);
-        s.height(r + 1, 16f);
-        s.text(r + 2, c0, "Index", Style.HEADER, n + ": capability index header");
-        s.text(r + 2, c0 + 1, "Before", Style.HEADER, n + ": capability before header");
-        s.text(r + 2, c0 + 2, "After", Style.HEADER, n + ": capability after header");
+        decides(r, n, a == null ? null : a.ppkLower(), req, k.capabilityMet(), lvl);
         pcRow(r + 3, "Ppk (percentile)", b, a, PercentileCapabilityResult::ppk, 3, n + ": Ppk");
         pcRow(r + 4, lvl + " lower bound of Ppk (bootstrap)", b, a, PercentileCapabilityResult::ppkLower, 3,
                 n + ": Ppk lower bound");
@@ -381,6 +350,27 @@ final class ChecksPlan {
             notes.add("Capability requirement: not judged, the after group's lower bound of Ppk is undefined.");
         }
         return r + 12;
+    }
+
+    /**
+     * The sentence that decides (row r + 1) and the index table's header (row r + 2).
+     *
+     * @return whether the after group's bound is undefined
+     */
+    private boolean decides(int r, String n, Double bound, Double req, Boolean met, String lvl) {
+        boolean undefined = bound == null || !Double.isFinite(bound);
+        String decides = undefined ? "The after group's lower bound of Ppk is undefined" + (req == null
+                ? "; no requirement set." : ", so the requirement of " + Texts.num(req) + " is not judged.")
+                : "Decides: the after group's " + lvl + " lower bound of Ppk, " + WorkbookPlan.fixed(bound, 3)
+                        + (req == null ? "; no requirement set." : Boolean.TRUE.equals(met) ? ", meets the required "
+                        + Texts.num(req) + "." : ", does NOT meet the required " + Texts.num(req) + ".");
+        s.text(r + 1, c0, decides, Style.WRAP, n + ": capability decides");
+        s.merge(r + 1, r + 1, c0, c0 + 5);
+        s.height(r + 1, 16f);
+        s.text(r + 2, c0, "Index", Style.HEADER, n + ": capability index header");
+        s.text(r + 2, c0 + 1, "Before", Style.HEADER, n + ": capability before header");
+        s.text(r + 2, c0 + 2, "After", Style.HEADER, n + ": capability after header");
+        return undefined;
     }
 
     private void pcRow(int r, String label, PercentileCapabilityResult b, PercentileCapabilityResult a,

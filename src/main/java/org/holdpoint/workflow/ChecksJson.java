@@ -147,12 +147,7 @@ final class ChecksJson {
         ResultJson.num(p, "mean", c.mean());
         ResultJson.num(p, "sd", c.sd());
         // the normal model's indices rest on x̄ ± 3s: those are its "quantiles"
-        ResultJson.num(o, "x00135", c.mean() - 3 * c.sd());
-        ResultJson.num(o, "x50", c.mean());
-        ResultJson.num(o, "x99865", c.mean() + 3 * c.sd());
-        ResultJson.numOrNull(o, "pp", c.pp());
-        ResultJson.numOrNull(o, "ppk", c.ppk());
-        ResultJson.numOrNull(o, "ppkLower", c.ppkLower());
+        quantilesAndIndices(o, c.mean() - 3 * c.sd(), c.mean(), c.mean() + 3 * c.sd(), c.pp(), c.ppk(), c.ppkLower());
         ResultJson.numOrNull(o, "ppLower", c.ppLower());
         ResultJson.numOrNull(o, "cp", c.cp());
         ResultJson.numOrNull(o, "cpk", c.cpk());
@@ -164,18 +159,24 @@ final class ChecksJson {
         return o;
     }
 
+    /** The three points the indices rest on and the overall indices, in the order of the JSON contract. */
+    private static void quantilesAndIndices(ObjectNode o, double x00135, double x50, double x99865, Double pp, Double ppk,
+            Double ppkLower) {
+        ResultJson.num(o, "x00135", x00135);
+        ResultJson.num(o, "x50", x50);
+        ResultJson.num(o, "x99865", x99865);
+        ResultJson.numOrNull(o, "pp", pp);
+        ResultJson.numOrNull(o, "ppk", ppk);
+        ResultJson.numOrNull(o, "ppkLower", ppkLower);
+    }
+
     private static ObjectNode percentile(PercentileCapabilityResult c) {
         ObjectNode o = F.objectNode();
         o.put("method", "percentile");
         o.put("distribution", c.fit().family().key());
         ObjectNode p = o.putObject("parameters");
         c.fit().parameters().forEach((k, v) -> ResultJson.num(p, k, v));
-        ResultJson.num(o, "x00135", c.x00135());
-        ResultJson.num(o, "x50", c.x50());
-        ResultJson.num(o, "x99865", c.x99865());
-        ResultJson.numOrNull(o, "pp", c.pp());
-        ResultJson.numOrNull(o, "ppk", c.ppk());
-        ResultJson.numOrNull(o, "ppkLower", c.ppkLower());
+        quantilesAndIndices(o, c.x00135(), c.x50(), c.x99865(), c.pp(), c.ppk(), c.ppkLower());
         ResultJson.numOrNull(o, "ppmBelow", c.ppmBelow());
         ResultJson.numOrNull(o, "ppmAbove", c.ppmAbove());
         ResultJson.num(o, "level", 1 - c.alpha());

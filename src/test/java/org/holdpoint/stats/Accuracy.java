@@ -12,7 +12,7 @@ import java.util.List;
 import java.util.Map;
 
 /** Test helpers: the log relative error of McCullough 1998 and relative-tolerance assertions. */
-final class Accuracy {
+public final class Accuracy {
     private Accuracy() {
     }
 
@@ -62,7 +62,11 @@ final class Accuracy {
      * Reads a simple comma-separated resource (no quoting; lines starting with '#' are comments; the
      * first other line is the header) as one map per row, keyed by column name.
      */
-    static List<Map<String, String>> csv(String name) {
+    /**
+     * @param name a resource path relative to this package, e.g. "fits/fit-values.csv"
+     * @return one map per row, keyed by column name
+     */
+    public static List<Map<String, String>> csv(String name) {
         List<Map<String, String>> rows = new ArrayList<>();
         String[] header = null;
         for (String line : resourceLines(name)) {

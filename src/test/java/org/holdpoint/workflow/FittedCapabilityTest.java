@@ -3,8 +3,6 @@ package org.holdpoint.workflow;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.holdpoint.result.CharacteristicResult;
@@ -30,31 +28,8 @@ import org.junit.jupiter.api.Test;
  * family, against R's values in {@code fit-values.csv}.
  */
 class FittedCapabilityTest {
-    private static final String FITS = "/org/holdpoint/stats/fits/";
-
     private static List<Map<String, String>> csv(String name) {
-        List<Map<String, String>> rows = new ArrayList<>();
-        String[] header = null;
-        try (var in = FittedCapabilityTest.class.getResourceAsStream(FITS + name)) {
-            for (String line : new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8).split("\n")) {
-                if (line.startsWith("#") || line.isBlank()) {
-                    continue;
-                }
-                String[] cells = line.split(",", -1);
-                if (header == null) {
-                    header = cells;
-                    continue;
-                }
-                Map<String, String> row = new LinkedHashMap<>();
-                for (int i = 0; i < cells.length; i++) {
-                    row.put(header[i], cells[i]);
-                }
-                rows.add(row);
-            }
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException(e);
-        }
-        return rows;
+        return org.holdpoint.stats.Accuracy.csv("fits/" + name);
     }
 
     private static double[] sample(String id) {
