@@ -240,9 +240,34 @@ public final class PlanFromDataUseCase {
                 plans.add(new CharacteristicPlan(c.name(), unit, sd, m, null, "the baseline has zero spread"));
                 continue;
             }
+            String note = null;
+            double planSd = sd;
+            if (m.ratio()) {
+                // a ratio margin is tested on the logarithms: plan there, with the sd of ln x and a true ratio of 1
+                double[] logs = c.before().sample().values().clone();
+                boolean positive = true;
+                for (int i = 0; i < logs.length; i++) {
+                    positive &= logs[i] > 0;
+                    logs[i] = Math.log(logs[i]);
+                }
+                if (!positive) {
+                    plans.add(new CharacteristicPlan(c.name(), unit, sd, m, null, "a ratio margin needs baseline values "
+                            + "above 0"));
+                    continue;
+                }
+                planSd = Descriptives.of(org.holdpoint.stats.Sample.of(logs)).sd();
+                note = "planned on the logarithms (sd of ln x " + org.holdpoint.result.Format.num(planSd, 4)
+                        + ", true ratio 1" + (difference != 0 ? "; the expected difference applies to margins in units"
+                        : "") + ")";
+                if (!(planSd > 0)) {
+                    plans.add(new CharacteristicPlan(c.name(), unit, sd, m, null, "the baseline has zero spread"));
+                    continue;
+                }
+            }
             try {
-                PlanResult r = plan.withMargin(m).sampleSize(difference, sd);
-                CharacteristicPlan p = new CharacteristicPlan(c.name(), unit, sd, m, r, null);
+                PlanResult r = m.ratio() ? plan.withMargin(m.logScale()).sampleSize(0, planSd)
+                        : plan.withMargin(m).sampleSize(difference, sd);
+                CharacteristicPlan p = new CharacteristicPlan(c.name(), unit, sd, m, r, note);
                 plans.add(p);
                 if (driving == null || r.n() > driving.plan().n()) {
                     driving = p;

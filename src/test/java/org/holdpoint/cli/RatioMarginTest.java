@@ -50,6 +50,32 @@ class RatioMarginTest {
         assertThat(v.code()).as(v.out() + v.err()).isZero();
     }
 
+    /**
+     * A plan from the baseline with a ratio margin is made on the logarithms: the sd of ln x and (ln L, ln U)
+     * with a true ratio of 1 (the exact TOST sample size itself is checked against published tables in
+     * EquivalencePlanReferenceTest).
+     */
+    @Test
+    void aPlanWithARatioMarginIsMadeOnTheLogarithms(@TempDir Path dir) throws Exception {
+        Path f = data(dir);
+        Files.writeString(dir.resolve("leak.settings.csv"), "characteristic,margin_ratio\nLeak rate,1.1\n");
+        Path json = dir.resolve("plan.json");
+        AnalyzeCommandTest.Run r = AnalyzeCommandTest.run("plan", "--from", f.toString(), "--power", "0.9", "--json",
+                json.toString());
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("planned on the logarithms (sd of ln x");
+        var rows = new com.fasterxml.jackson.databind.ObjectMapper().readTree(json.toFile()).path("characteristics");
+        var leak = rows.get(0);
+        assertThat(leak.path("name").asText()).isEqualTo("Leak rate");
+        double[] before = {1.21, 1.34, 1.18, 1.52, 1.27, 1.41, 1.19, 1.66, 1.31, 1.24, 1.29, 1.45, 1.33, 1.22};
+        double sdLog = org.holdpoint.stats.Descriptives.of(org.holdpoint.stats.Sample.of(java.util.Arrays.stream(
+                before).map(Math::log).toArray())).sd();
+        int expected = org.holdpoint.stats.EquivalencePlan.withDefaults().withTargetPower(0.9)
+                .withMargin(org.holdpoint.stats.Margin.of(Math.log(1 / 1.1), Math.log(1.1))).sampleSize(0, sdLog).n();
+        assertThat(leak.path("nPerGroup").asInt()).isEqualTo(expected);
+        assertThat(leak.path("marginScale").asText()).isEqualTo("ratio");
+    }
+
     @Test
     void theOptionsGiveOneKindOfMarginAndRatiosInRange(@TempDir Path dir) throws Exception {
         Path f = data(dir);

@@ -353,6 +353,13 @@ public final class PlanForm {
                                 "Choose another characteristic, or type σ."));
                         return;
                     }
+                    if (c.margin() != null && c.margin().ratio()) {
+                        session.problem(new UserMessage("A ratio margin", "\"" + name + "\" has a margin for the "
+                                + "ratio after/before; this form plans a margin in units.", "Press \"Plan every "
+                                + "characteristic\", which plans a ratio margin on the logarithms, or type a margin "
+                                + "in units here."));
+                        return;
+                    }
                     fill(c.sd(), c.margin(), c.unit(), name);
                     if (firstProblem() == null) {
                         plan();
