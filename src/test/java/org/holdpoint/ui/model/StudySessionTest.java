@@ -282,6 +282,51 @@ class StudySessionTest {
     }
 
     @Test
+    void aFittedModelAndARatioMarginSurviveSavingAndOpening() {
+        // Bore roundness (row 2): a Weibull model and a ratio margin typed in the window
+        s.criteria().set(2, CriteriaColumn.DISTRIBUTION, "weibull");
+        s.criteria().set(2, CriteriaColumn.MARGIN_IN, CriteriaTable.IN_RATIO);
+        s.criteria().set(2, CriteriaColumn.MARGIN, "1.3");
+        s.analyse();
+        var r = s.results().row(2);
+        assertThat(r.checks().distribution().chosen().key()).isEqualTo("weibull");
+        assertThat(r.decidingTost().ratio()).isTrue();
+        Path file = dir.resolve("fitted.holdpoint.json");
+        s.save(file, () -> { });
+        StudySession other = new StudySession(new StudyService(org.holdpoint.workflow.ArchiveAccess.none()),
+                TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()), Clock.systemUTC());
+        other.openStudy(file);
+        assertThat(other.criteria().get(2, CriteriaColumn.DISTRIBUTION)).isEqualTo("weibull");
+        assertThat(other.criteria().get(2, CriteriaColumn.MARGIN_IN)).isEqualTo(CriteriaTable.IN_RATIO);
+        assertThat(other.criteria().get(2, CriteriaColumn.MARGIN)).isEqualTo("1.3");
+        assertThat(other.results().row(2).checks().after().percentile().ppk())
+                .isEqualTo(r.checks().after().percentile().ppk());
+        assertThat(other.results().row(2).decidingTost().ciUpper()).isEqualTo(r.decidingTost().ciUpper());
+    }
+
+    @Test
+    void aStudyOfTheEarlierMethodsIsAnalysedAgainAsItWas() throws Exception {
+        Path old = Path.of(getClass().getResource("/org/holdpoint/workflow/study-v2-demo.json").toURI());
+        StudySession other = new StudySession(new StudyService(org.holdpoint.workflow.ArchiveAccess.none()),
+                TaskRunner.DIRECT, new RecentFiles(PreferenceStore.inMemory()), Clock.systemUTC());
+        other.openStudy(old);
+        other.analyse();
+        assertThat(other.study().settings().methods()).isEqualTo(2);
+        for (int i = 0; i < other.results().rowCount(); i++) {
+            var c = other.results().row(i);
+            if (c.checks() != null) {
+                assertThat(c.checks().after().percentile()).as(c.name()).isNull();
+            }
+        }
+        // saved again (schema 3), it says which methods it keeps, so that it opens the same way next time
+        Path again = dir.resolve("old-methods.holdpoint.json");
+        other.save(again, () -> { });
+        var tree = org.holdpoint.workflow.StudyFiles.tree(java.nio.file.Files.readString(again));
+        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(3);
+        assertThat(tree.path("settings").path("methods").asInt()).isEqualTo(2);
+    }
+
+    @Test
     void aValueIsExcludedOnlyWithAReasonAndTheRecordKeepsIt() {
         String name = s.criteria().name(0);
         String cell = s.characteristic(name).before().origin(0).cell();
