@@ -62,11 +62,7 @@ public final class DistributionFits {
         switch (family) {
             case NORMAL -> {
                 a = mean(x);
-                Sum ss = new Sum();
-                for (double v : x) {
-                    ss.add((v - a) * (v - a));
-                }
-                b = Math.sqrt(ss.value() / n);
+                b = mlSd(x, a);
             }
             case LOGNORMAL -> {
                 double[] l = new double[n];
@@ -74,11 +70,7 @@ public final class DistributionFits {
                     l[i] = Math.log(x[i]);
                 }
                 a = mean(l);
-                Sum ss = new Sum();
-                for (double v : l) {
-                    ss.add((v - a) * (v - a));
-                }
-                b = Math.sqrt(ss.value() / n);
+                b = mlSd(l, a);
             }
             case WEIBULL -> {
                 a = weibullShape(x, max, shapeStart);
@@ -240,6 +232,15 @@ public final class DistributionFits {
         double r = 1 / (x * x);
         return 1 / (2 * x) + r * (1.0 / 12 - r * (1.0 / 120 - r * (1.0 / 252 - r * (1.0 / 240 - r * (1.0 / 132
                 - r * 691.0 / 32760)))));
+    }
+
+    /** The maximum-likelihood sd (divisor n) about a given mean. */
+    private static double mlSd(double[] x, double mean) {
+        Sum ss = new Sum();
+        for (double v : x) {
+            ss.add((v - mean) * (v - mean));
+        }
+        return Math.sqrt(ss.value() / x.length);
     }
 
     private static double mean(double[] x) {
