@@ -267,6 +267,16 @@ final class TextOutput {
                                 + cap.estimator().description() + ")", opt(cap.ppmBelow()), opt(cap.ppmAbove()));
             }
         }
+        if (c.stability() != null) {
+            var st = c.stability();
+            var l = st.before().own();
+            out.printf(Locale.ROOT, "  Stability (individuals chart in run order from %s, limits from the before phase): centre %s, "
+                    + "limits (%s, %s), moving range %s (limit %s); before: %s; after: %s%n", st.runOrder(),
+                    u(name, l.center()), u(name, l.lcl()), u(name, l.ucl()), u(name, l.mrBar()), u(name, l.mrUcl()),
+                    st.finding(false) == null ? "no signal" : st.before().signals().size() + " signal(s)",
+                    st.finding(true) == null ? "no signal against the before limits"
+                            : st.after().signals().size() + " signal(s) against the before limits");
+        }
         out.println("  Recommended reading: " + c.recommendation());
     }
 

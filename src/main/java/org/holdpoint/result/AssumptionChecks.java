@@ -14,7 +14,9 @@ import org.holdpoint.stats.SignedRankResult;
  * @param capabilityMet     whether the after group's lower Ppk bound exceeds the requirement, or null
  * @param recommendation    which comparison the data support, with the reason in plain words
  * @param distribution      the family capability is judged by and why, or null without limits
+ * @param stability         control charts in run order, or null when no run order is known
  */
 public record AssumptionChecks(GroupChecks before, GroupChecks after, RankSumResult rankSum,
-        SignedRankResult signedRank, Boolean capabilityMet, String recommendation, FamilySelection distribution) {
+        SignedRankResult signedRank, Boolean capabilityMet, String recommendation, FamilySelection distribution,
+        Stability stability) {
 }

@@ -62,6 +62,16 @@ public final class Verdicts {
                 status = Status.FAILED;
             }
         }
+        Stability st = r.checks() == null ? null : r.checks().stability();
+        if (st != null) {
+            // a finding, not a failure: the verdict's status is unchanged (docs/methods.md §16)
+            for (boolean after : new boolean[] {false, true}) {
+                String f = st.finding(after);
+                if (f != null) {
+                    reasons.add("stability: " + f);
+                }
+            }
+        }
         return r.with(r.holmP(), new Verdict(status, reasons), r.notes());
     }
 
@@ -96,6 +106,17 @@ public final class Verdicts {
                                 : String.format(Locale.ROOT, "; %d could not be assessed from the data, and the change "
                                         + "cannot be verified until %s", unassessable, unassessable == 1 ? "it is"
                                                 : "they are"));
+        List<String> unstable = new ArrayList<>();
+        for (CharacteristicResult r : results) {
+            Stability st = r.checks() == null ? null : r.checks().stability();
+            if (st != null && (st.finding(false) != null || st.finding(true) != null)) {
+                unstable.add(r.name());
+            }
+        }
+        if (!unstable.isEmpty()) {
+            summary += String.format(Locale.ROOT, " Not in control in run order: %s (control chart signals; the "
+                    + "results assume stable processes).", String.join(", ", unstable));
+        }
         return new StudyResult(results, verified, summary, failing);
     }
 }

@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.holdpoint.stats.Capability;
+import org.holdpoint.stats.ControlChart;
 import org.holdpoint.stats.CapabilityResult;
 import org.holdpoint.stats.DistributionFamily;
 import org.holdpoint.stats.DistributionFits;
@@ -31,6 +32,7 @@ import org.holdpoint.stats.SignedRankTest;
 import org.holdpoint.stats.StatsException;
 import org.holdpoint.stats.WithinEstimator;
 import org.holdpoint.result.AssumptionChecks;
+import org.holdpoint.result.Stability;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.DistributionSetting;
@@ -96,7 +98,47 @@ final class CharacteristicChecks {
             }
         }
         String recommendation = recommend(before, after, c, paired, equalVariances);
-        return new AssumptionChecks(before, after, rankSum, signedRank, capabilityMet, recommendation, distribution);
+        Stability stability = currentMethods ? stability(c, notes) : null;
+        return new AssumptionChecks(before, after, rankSum, signedRank, capabilityMet, recommendation, distribution,
+                stability);
+    }
+
+    /**
+     * Individuals charts of both phases in the order of their sequence columns (docs/methods.md §16), or null
+     * when a phase has no sequence column.
+     */
+    private static Stability stability(CharacteristicData c, List<String> notes) {
+        if (!c.before().hasSequence() || !c.after().hasSequence()) {
+            return null;
+        }
+        Integer[] ob = runOrder(c.before());
+        Integer[] oa = runOrder(c.after());
+        try {
+            ControlChart.Limits limits = ControlChart.limits(values(c.before(), ob));
+            // the signals are findings of the verdict (Verdicts), not notes
+            return new Stability(ControlChart.judge(values(c.before(), ob), limits),
+                    ControlChart.judge(values(c.after(), oa), limits), origins(c.before(), ob), origins(c.after(), oa),
+                    "the sequence column");
+        } catch (StatsException e) {
+            notes.add("no control chart: " + e.getMessage());
+            return null;
+        }
+    }
+
+    private static double[] values(GroupData g, Integer[] order) {
+        double[] v = new double[order.length];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = g.sample().value(order[i]);
+        }
+        return v;
+    }
+
+    private static List<org.holdpoint.study.Origin> origins(GroupData g, Integer[] order) {
+        List<org.holdpoint.study.Origin> o = new ArrayList<>();
+        for (Integer i : order) {
+            o.add(g.origin(i));
+        }
+        return o;
     }
 
     /**
@@ -252,6 +294,11 @@ final class CharacteristicChecks {
 
     /** The group in the order of its sequence column (numeric when every entry is a number, else as text). */
     private static GroupData inSequence(GroupData g) {
+        return GroupData.typed(org.holdpoint.stats.Sample.of(values(g, runOrder(g))), g.file());
+    }
+
+    /** The indices of a group's values in the order of its sequence column (stable for equal entries). */
+    private static Integer[] runOrder(GroupData g) {
         Integer[] idx = new Integer[g.size()];
         boolean numeric = true;
         for (int i = 0; i < idx.length; i++) {
@@ -266,11 +313,7 @@ final class CharacteristicChecks {
         java.util.Arrays.sort(idx, (a, b) -> asNumbers
                 ? Double.compare(Double.parseDouble(g.sequence(a)), Double.parseDouble(g.sequence(b)))
                 : String.valueOf(g.sequence(a)).compareTo(String.valueOf(g.sequence(b))));
-        double[] v = new double[idx.length];
-        for (int i = 0; i < idx.length; i++) {
-            v[i] = g.sample().value(idx[i]);
-        }
-        return GroupData.typed(org.holdpoint.stats.Sample.of(v), g.file());
+        return idx;
     }
 
     private static int[] subgroupCodes(GroupData g) {

@@ -1,5 +1,6 @@
 package org.holdpoint.workflow;
 
+import java.util.List;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -57,6 +58,40 @@ final class ChecksJson {
             order.set("after", order(c.after()));
         }
         n.put("recommendation", c.recommendation());
+        if (c.stability() != null) {
+            ObjectNode st = n.putObject("stability");
+            st.put("runOrder", c.stability().runOrder());
+            st.set("before", phase(c.stability().before(), c.stability().beforeOrigins(), false));
+            st.set("after", phase(c.stability().after(), c.stability().afterOrigins(), true));
+        }
+    }
+
+    private static ObjectNode phase(org.holdpoint.stats.ControlChart.Phase p, List<org.holdpoint.study.Origin> origins,
+            boolean after) {
+        ObjectNode o = F.objectNode();
+        // the limits the phase is judged against: the before phase's own for both phases
+        limits(o, after ? p.limits() : p.own());
+        o.put("method", "individuals and moving range (ISO 7870-2), limits from the before phase");
+        if (after) {
+            limits(o.putObject("own"), p.own());
+        }
+        ArrayNode signals = o.putArray("signals");
+        for (org.holdpoint.stats.ControlChart.Signal sig : p.signals()) {
+            ObjectNode x = signals.addObject();
+            x.put("test", sig.test());
+            x.put("index", sig.index());
+            x.put("origin", origins.get(sig.index() - 1).describe());
+        }
+        return o;
+    }
+
+    private static void limits(ObjectNode o, org.holdpoint.stats.ControlChart.Limits l) {
+        ResultJson.num(o, "center", l.center());
+        ResultJson.num(o, "sigma", l.sigma());
+        ResultJson.num(o, "lcl", l.lcl());
+        ResultJson.num(o, "ucl", l.ucl());
+        ResultJson.num(o, "mrBar", l.mrBar());
+        ResultJson.num(o, "mrUcl", l.mrUcl());
     }
 
     private static ObjectNode rankSum(RankSumResult r) {
