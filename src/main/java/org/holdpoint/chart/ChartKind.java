@@ -8,6 +8,8 @@ public enum ChartKind {
     HISTOGRAM("histogram"),
     /** Normal probability plot of one characteristic's groups. */
     NORMAL_PROBABILITY("normal-plot"),
+    /** Individuals chart of one characteristic in run order, before and after (when a run order is known). */
+    RUN_CHART("control"),
     /** Equivalence picture of all characteristics (one page of rows). */
     EQUIVALENCE("equivalence"),
     /** Power curve of a planned trial. */

@@ -133,7 +133,7 @@ public final class StudyCharts {
         String stem = String.format(Locale.ROOT, "%0" + Math.max(3, Integer.toString(count).length()) + "d-%s-",
                 position, safeName(data.name()));
         double h = theme.standardHeight();
-        return List.of(
+        List<NamedChart> out = new ArrayList<>(List.of(
                 new NamedChart(stem + ChartKind.BOX_PLOT.fileSuffix() + ".png", ChartKind.BOX_PLOT, data.name(),
                         BoxPlotChart.withCriteria(BoxPlotChart.create(d, limits, theme), result, theme), theme.width(),
                         h),
@@ -141,7 +141,12 @@ public final class StudyCharts {
                         DistributionCharts.histogram(d, limits, theme, fits(result)), theme.width(), h),
                 new NamedChart(stem + ChartKind.NORMAL_PROBABILITY.fileSuffix() + ".png",
                         ChartKind.NORMAL_PROBABILITY, data.name(), DistributionCharts.probability(d, limits, theme,
-                                fits(result)), theme.width(), h));
+                                fits(result)), theme.width(), h)));
+        if (result.checks() != null && result.checks().stability() != null) {
+            out.add(new NamedChart(stem + ChartKind.RUN_CHART.fileSuffix() + ".png", ChartKind.RUN_CHART, data.name(),
+                    RunChart.create(result, theme), theme.width(), h));
+        }
+        return out;
     }
 
     /** The fitted distributions of both groups when capability is judged by a fitted family, else null. */

@@ -177,6 +177,8 @@ final class DetailPlan {
             what = "Box plot of " + n + ": before and after, every value shown, with the specification limits";
         } else if (file.endsWith("-histogram.png")) {
             what = "Histograms on common bins, fitted " + (family == null ? "normal" : family) + " curve";
+        } else if (file.endsWith("-control.png")) {
+            what = "Individuals chart of " + n + " in run order, with the limits of the before phase";
         } else if (file.endsWith("-normal-plot.png")) {
             what = family == null ? "Normal probability plot" : "Probability plot against the fitted " + family
                     + " distribution";

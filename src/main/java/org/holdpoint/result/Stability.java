@@ -14,14 +14,18 @@ import org.holdpoint.study.Origin;
  * @param beforeOrigins the origin of each before point, in run order
  * @param afterOrigins  the origin of each after point, in run order
  * @param runOrder      how the run order was known, e.g. "the sequence column"
+ * @param beforeRun     the before values in run order
+ * @param afterRun      the after values in run order
  */
 public record Stability(ControlChart.Phase before, ControlChart.Phase after, List<Origin> beforeOrigins,
-        List<Origin> afterOrigins, String runOrder) {
+        List<Origin> afterOrigins, String runOrder, List<Double> beforeRun, List<Double> afterRun) {
 
     /** Copies the lists. */
     public Stability {
         beforeOrigins = List.copyOf(beforeOrigins);
         afterOrigins = List.copyOf(afterOrigins);
+        beforeRun = List.copyOf(beforeRun);
+        afterRun = List.copyOf(afterRun);
     }
 
     /**

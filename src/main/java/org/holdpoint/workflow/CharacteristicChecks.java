@@ -114,11 +114,13 @@ final class CharacteristicChecks {
         Integer[] ob = runOrder(c.before());
         Integer[] oa = runOrder(c.after());
         try {
-            ControlChart.Limits limits = ControlChart.limits(values(c.before(), ob));
+            double[] b = values(c.before(), ob);
+            double[] a = values(c.after(), oa);
+            ControlChart.Limits limits = ControlChart.limits(b);
             // the signals are findings of the verdict (Verdicts), not notes
-            return new Stability(ControlChart.judge(values(c.before(), ob), limits),
-                    ControlChart.judge(values(c.after(), oa), limits), origins(c.before(), ob), origins(c.after(), oa),
-                    "the sequence column");
+            return new Stability(ControlChart.judge(b, limits), ControlChart.judge(a, limits), origins(c.before(), ob),
+                    origins(c.after(), oa), "the sequence column", java.util.Arrays.stream(b).boxed().toList(),
+                    java.util.Arrays.stream(a).boxed().toList());
         } catch (StatsException e) {
             notes.add("no control chart: " + e.getMessage());
             return null;

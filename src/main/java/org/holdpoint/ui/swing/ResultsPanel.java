@@ -48,7 +48,8 @@ final class ResultsPanel extends JPanel {
                 t.setDaemon(true);
                 return t;
             });
-    private final ChartView[] charts = {new ChartView(renderer), new ChartView(renderer), new ChartView(renderer)};
+    private final ChartView[] charts = {new ChartView(renderer), new ChartView(renderer), new ChartView(renderer),
+        new ChartView(renderer)};
     private final JLabel chartNote = new JLabel(" ", JLabel.CENTER);
     private JSplitPane split;
 
@@ -107,13 +108,14 @@ final class ResultsPanel extends JPanel {
         results.addListener(ResultsTable.Property.RESULT, e -> refreshRows());
         results.addListener(ResultsTable.Property.SELECTED, e -> refreshDetail());
         detail.setName("detail");
-        String[] titles = {"Box plot", "Histograms", "Probability plot"};
+        String[] titles = {"Box plot", "Histograms", "Probability plot", "Run chart"};
         for (int i = 0; i < charts.length; i++) {
             chartTabs.addTab(titles[i], charts[i]);
         }
         chartTabs.setMnemonicAt(0, 'B');
         chartTabs.setMnemonicAt(1, 'G');
-        chartTabs.setMnemonicAt(2, 'N');
+        chartTabs.setMnemonicAt(2, 'Y');
+        chartTabs.setMnemonicAt(3, 'U');
         chartTabs.setName("charts");
     }
 
@@ -260,9 +262,15 @@ final class ResultsPanel extends JPanel {
         }
         chartNote.setText(" ");
         java.util.concurrent.atomic.AtomicReference<List<NamedChart>> built = new java.util.concurrent.atomic.AtomicReference<>();
+        boolean runOrder = r.checks() != null && r.checks().stability() != null;
         for (int i = 0; i < charts.length; i++) {
             int k = i;
-            // Runs on the render thread, in order: the first view builds all three charts once.
+            if (k == 3 && !runOrder) {
+                charts[k].clear("No run order is known for this characteristic: with a sequence column in the data "
+                        + "(e.g. \"run order\") the control chart of both phases is drawn here.");
+                continue;
+            }
+            // Runs on the render thread, in order: the first view builds all the charts once.
             charts[i].show(() -> {
                 if (built.get() == null) {
                     built.set(StudyCharts.withDefaults().characteristicCharts(1, 1, r, data));
