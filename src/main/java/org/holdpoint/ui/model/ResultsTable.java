@@ -241,8 +241,11 @@ public final class ResultsTable {
         if (staleBecause != null) {
             return "Out of date: " + staleBecause + "; analyse again (F5)";
         }
-        return result.summary().replace("CHANGE NOT VERIFIED", "Change not verified")
-                .replace("CHANGE VERIFIED", "Change verified");
+        String summary = result.summary();
+        int stability = summary.indexOf(" Not in control in run order:");
+        // the banner keeps to the verdict; the stability finding goes to the counts line below it
+        return (stability < 0 ? summary : summary.substring(0, stability)).replace("CHANGE NOT VERIFIED",
+                "Change not verified").replace("CHANGE VERIFIED", "Change verified");
     }
 
     /** @return the overall look: passed when verified, else the most urgent characteristic's look */
@@ -269,6 +272,12 @@ public final class ResultsTable {
             if (n > 0) {
                 sb.append(sb.length() == 0 ? "" : ", ").append(n).append(' ').append(l.words());
             }
+        }
+        long unstable = result.characteristics().stream().filter(c -> c.checks() != null
+                && c.checks().stability() != null && (c.checks().stability().finding(false) != null
+                        || c.checks().stability().finding(true) != null)).count();
+        if (unstable > 0) {
+            sb.append("; ").append(unstable).append(" not in control in run order (see the Run chart)");
         }
         return sb.toString();
     }
