@@ -31,12 +31,13 @@ public final class RunChart {
     }
 
     /**
-     * @param r     the characteristic's result, with a stability block
-     * @param theme the theme
+     * @param r        the characteristic's result, with a stability block
+     * @param decimals decimals for the limits' labels (the characteristic's resolution plus two)
+     * @param theme    the theme
      * @return the chart
      * @throws ChartException when the result has no stability block
      */
-    public static JFreeChart create(CharacteristicResult r, ChartTheme theme) {
+    public static JFreeChart create(CharacteristicResult r, int decimals, ChartTheme theme) {
         Stability st = r.checks() == null ? null : r.checks().stability();
         if (st == null) {
             throw new ChartException("no run order is known for " + r.name() + ", so there is no control chart");
@@ -73,7 +74,7 @@ public final class RunChart {
         lo = Math.min(lo, own.lcl());
         hi = Math.max(hi, own.ucl());
         y.setRange(ChartRanges.padded(new double[] {lo, hi}, 0.08));
-        int d = Math.min(10, Math.max(0, decimals(st)));
+        int d = Math.min(10, Math.max(0, decimals));
         plot.addRangeMarker(line(l.ucl(), "UCL " + Numbers.fixed(l.ucl(), d), theme, true));
         plot.addRangeMarker(line(l.center(), "centre " + Numbers.fixed(l.center(), d), theme, false));
         plot.addRangeMarker(line(l.lcl(), "LCL " + Numbers.fixed(l.lcl(), d), theme, true));
@@ -158,15 +159,5 @@ public final class RunChart {
         m.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
         m.setLabelOffset(new RectangleInsets(2, 4, 2, 4));
         return m;
-    }
-
-    private static int decimals(Stability st) {
-        int d = 0;
-        for (double v : st.beforeRun()) {
-            String s = java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
-            int dot = s.indexOf('.');
-            d = Math.max(d, dot < 0 ? 0 : s.length() - dot - 1);
-        }
-        return Math.min(8, d) + 2;
     }
 }

@@ -144,7 +144,7 @@ public final class StudyCharts {
                                 fits(result)), theme.width(), h)));
         if (result.checks() != null && result.checks().stability() != null) {
             out.add(new NamedChart(stem + ChartKind.RUN_CHART.fileSuffix() + ".png", ChartKind.RUN_CHART, data.name(),
-                    RunChart.create(result, theme), theme.width(), h));
+                    RunChart.create(result, d.resolutionDecimals() + 2, theme), theme.width(), h));
         }
         return out;
     }

@@ -21,4 +21,28 @@ public record StudyResult(List<CharacteristicResult> characteristics, boolean ch
         characteristics = List.copyOf(characteristics);
         failing = List.copyOf(failing);
     }
+
+    /** @return the characteristics whose control charts show a signal in either phase */
+    public List<String> notInControl() {
+        return characteristics.stream().filter(r -> r.checks() != null && r.checks().stability() != null
+                && (r.checks().stability().finding(false) != null || r.checks().stability().finding(true) != null))
+                .map(CharacteristicResult::name).toList();
+    }
+
+    /**
+     * The sentence the summary ends with when control charts show signals.
+     *
+     * @param names the characteristics not in control
+     * @return the sentence with its leading space, or "" for none
+     */
+    static String stabilityNote(List<String> names) {
+        return names.isEmpty() ? "" : " Not in control in run order: " + String.join(", ", names)
+                + " (control chart signals; the results assume stable processes).";
+    }
+
+    /** @return the summary without its stability sentence: the verdict alone */
+    public String verdictSummary() {
+        String note = stabilityNote(notInControl());
+        return summary.endsWith(note) ? summary.substring(0, summary.length() - note.length()) : summary;
+    }
 }

@@ -106,17 +106,7 @@ public final class Verdicts {
                                 : String.format(Locale.ROOT, "; %d could not be assessed from the data, and the change "
                                         + "cannot be verified until %s", unassessable, unassessable == 1 ? "it is"
                                                 : "they are"));
-        List<String> unstable = new ArrayList<>();
-        for (CharacteristicResult r : results) {
-            Stability st = r.checks() == null ? null : r.checks().stability();
-            if (st != null && (st.finding(false) != null || st.finding(true) != null)) {
-                unstable.add(r.name());
-            }
-        }
-        if (!unstable.isEmpty()) {
-            summary += String.format(Locale.ROOT, " Not in control in run order: %s (control chart signals; the "
-                    + "results assume stable processes).", String.join(", ", unstable));
-        }
-        return new StudyResult(results, verified, summary, failing);
+        StudyResult draft = new StudyResult(results, verified, summary, failing);
+        return new StudyResult(results, verified, summary + StudyResult.stabilityNote(draft.notInControl()), failing);
     }
 }

@@ -72,15 +72,11 @@ public final class ControlChart {
         if (x.length < 2) {
             throw new StatsException("an individuals chart needs at least 2 values in run order, got %d", x.length);
         }
-        DistributionFits.Sum sum = new DistributionFits.Sum();
-        DistributionFits.Sum mr = new DistributionFits.Sum();
-        for (int i = 0; i < x.length; i++) {
-            sum.add(x[i]);
-            if (i > 0) {
-                mr.add(Math.abs(x[i] - x[i - 1]));
-            }
+        CompensatedSum mr = new CompensatedSum();
+        for (int i = 1; i < x.length; i++) {
+            mr.add(Math.abs(x[i] - x[i - 1]));
         }
-        double center = sum.value() / x.length;
+        double center = Descriptives.of(Sample.of(x)).mean();
         double mrBar = mr.value() / (x.length - 1);
         if (!(mrBar > 0)) {
             throw new StatsException("neighbouring values never differ, so the moving range is 0 and no limits exist; "

@@ -74,7 +74,7 @@ public final class DistributionFits {
             }
             case WEIBULL -> {
                 a = weibullShape(x, max, shapeStart);
-                Sum s0 = new Sum();
+                CompensatedSum s0 = new CompensatedSum();
                 for (double v : x) {
                     s0.add(Math.pow(v / max, a));
                 }
@@ -82,7 +82,7 @@ public final class DistributionFits {
             }
             case GAMMA -> {
                 double mean = mean(x);
-                Sum s = new Sum();
+                CompensatedSum s = new CompensatedSum();
                 for (double v : x) {
                     s.add(-Math.log(v / mean));
                 }
@@ -90,7 +90,7 @@ public final class DistributionFits {
                 b = a / mean;
             }
             case RAYLEIGH -> {
-                Sum s = new Sum();
+                CompensatedSum s = new CompensatedSum();
                 for (double v : x) {
                     s.add(v * v);
                 }
@@ -99,7 +99,7 @@ public final class DistributionFits {
             }
             default -> throw new IllegalStateException("unknown family " + family);
         }
-        Sum ll = new Sum();
+        CompensatedSum ll = new CompensatedSum();
         for (double v : x) {
             ll.add(FittedDistribution.logDensity(family, a, b, v));
         }
@@ -123,7 +123,7 @@ public final class DistributionFits {
             k = start;
         } else {
             // start from the moments of ln x: sd(ln x) = π/(k√6) for a Weibull variable
-            Sum ss = new Sum();
+            CompensatedSum ss = new CompensatedSum();
             for (double v : ly) {
                 ss.add((v - meanLy) * (v - meanLy));
             }
@@ -133,9 +133,9 @@ public final class DistributionFits {
         double lo = 0;
         double hi = Double.POSITIVE_INFINITY;
         for (int step = 0; step < MAX_STEPS; step++) {
-            Sum a0 = new Sum();
-            Sum a1 = new Sum();
-            Sum a2 = new Sum();
+            CompensatedSum a0 = new CompensatedSum();
+            CompensatedSum a1 = new CompensatedSum();
+            CompensatedSum a2 = new CompensatedSum();
             for (double l : ly) {
                 double w = Math.exp(k * l);
                 a0.add(w);
@@ -218,7 +218,7 @@ public final class DistributionFits {
         }
         int m = (int) Math.ceil(20 - a);
         double shifted = a + m;
-        Sum s = new Sum();
+        CompensatedSum s = new CompensatedSum();
         s.add(Math.log(a / shifted));
         s.add(series(shifted));
         for (int j = 0; j < m; j++) {
@@ -236,7 +236,7 @@ public final class DistributionFits {
 
     /** The maximum-likelihood sd (divisor n) about a given mean. */
     private static double mlSd(double[] x, double mean) {
-        Sum ss = new Sum();
+        CompensatedSum ss = new CompensatedSum();
         for (double v : x) {
             ss.add((v - mean) * (v - mean));
         }
@@ -244,32 +244,16 @@ public final class DistributionFits {
     }
 
     private static double mean(double[] x) {
-        Sum s = new Sum();
+        CompensatedSum s = new CompensatedSum();
         for (double v : x) {
             s.add(v);
         }
         double m = s.value() / x.length;
         // one correction pass: the mean of the residuals
-        Sum r = new Sum();
+        CompensatedSum r = new CompensatedSum();
         for (double v : x) {
             r.add(v - m);
         }
         return m + r.value() / x.length;
-    }
-
-    /** Neumaier's compensated sum (Neumaier 1974). */
-    static final class Sum {
-        private double sum;
-        private double c;
-
-        void add(double v) {
-            double t = sum + v;
-            c += Math.abs(sum) >= Math.abs(v) ? (sum - t) + v : (v - t) + sum;
-            sum = t;
-        }
-
-        double value() {
-            return sum + c;
-        }
     }
 }

@@ -81,6 +81,24 @@ public record FittedDistribution(DistributionFamily family, double first, double
     }
 
     /**
+     * The values mapped to the normal scale through this fit, z = Φ⁻¹(F(x)), each from its nearer tail so that a far
+     * value keeps its distance (the scale on which the outlier tests run, docs/methods.md §14).
+     *
+     * @param x the values
+     * @return their normal scores, in the same order
+     */
+    public Sample normalScores(Sample x) {
+        double[] z = new double[x.size()];
+        for (int i = 0; i < z.length; i++) {
+            double lo = lowerTail(x.value(i));
+            double up = upperTail(x.value(i));
+            z[i] = lo <= up ? Normal.quantile(Math.max(lo, Double.MIN_NORMAL))
+                    : -Normal.quantile(Math.max(up, Double.MIN_NORMAL));
+        }
+        return Sample.of(z);
+    }
+
+    /**
      * @param x a value
      * @return ln f(x), −∞ outside the support
      */

@@ -161,17 +161,6 @@ final class Moments {
 
     /** Neumaier's improved Kahan summation (Neumaier 1974, ZAMM 54:39–51). */
     static double neumaierSum(double[] x) {
-        double s = 0;
-        double c = 0;
-        for (double v : x) {
-            double t = s + v;
-            if (Math.abs(s) >= Math.abs(v)) {
-                c += (s - t) + v;
-            } else {
-                c += (v - t) + s;
-            }
-            s = t;
-        }
-        return s + c;
+        return CompensatedSum.of(x);
     }
 }

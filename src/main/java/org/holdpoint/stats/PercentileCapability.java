@@ -92,7 +92,7 @@ public final class PercentileCapability {
             if (boot.length >= resamples / 2) {
                 // Ppk − z₁₋α·sd(Ppk*): the percentile bound q_α(Ppk*) covers far less than 1 − α at the sizes
                 // of a change study (docs/methods.md §14)
-                ppkLower = idx[3] - Normal.upperQuantile(alpha) * sd(boot);
+                ppkLower = idx[3] - Normal.upperQuantile(alpha) * Descriptives.of(Sample.of(boot)).sd();
             } else {
                 notes.add("no lower bound for Ppk: too few resamples could be refitted");
             }
@@ -201,19 +201,6 @@ public final class PercentileCapability {
         double up = usl == null ? Double.NaN : (usl - mid) / (f.quantile(P_HIGH) - mid);
         double lo = lsl == null ? Double.NaN : (mid - lsl) / (mid - f.quantile(P_LOW));
         return usl == null ? lo : lsl == null ? up : Math.min(up, lo);
-    }
-
-    private static double sd(double[] v) {
-        DistributionFits.Sum s = new DistributionFits.Sum();
-        for (double x : v) {
-            s.add(x);
-        }
-        double m = s.value() / v.length;
-        DistributionFits.Sum ss = new DistributionFits.Sum();
-        for (double x : v) {
-            ss.add((x - m) * (x - m));
-        }
-        return Math.sqrt(ss.value() / (v.length - 1));
     }
 
     private static double draw(FittedDistribution fit, RandomGenerator rng) {

@@ -99,6 +99,11 @@ final class CharacteristicChecks {
         }
         String recommendation = recommend(before, after, c, paired, equalVariances);
         Stability stability = currentMethods ? stability(c, notes) : null;
+        if (stability != null && family != DistributionFamily.NORMAL) {
+            notes.add("the control limits are the normal model's (centre plus or minus 3 sigma); this characteristic "
+                    + "follows a " + family.key() + " distribution, so a point beyond a limit in its long tail may be the "
+                    + "distribution rather than instability");
+        }
         return new AssumptionChecks(before, after, rankSum, signedRank, capabilityMet, recommendation, distribution,
                 stability);
     }
@@ -160,7 +165,8 @@ final class CharacteristicChecks {
             why = "auto set in the criteria";
         } else {
             boolean zeroBounded = s.spec().usl() != null && (s.spec().lsl() == null || s.spec().lsl() == 0)
-                    && min(c.before().sample().values()) >= 0 && min(c.after().sample().values()) >= 0;
+                    && org.holdpoint.stats.Descriptives.of(c.before().sample()).min() >= 0
+                    && org.holdpoint.stats.Descriptives.of(c.after().sample()).min() >= 0;
             boolean skewed = strong(nb) || strong(na);
             if (!zeroBounded && !skewed) {
                 return FamilySelection.given(DistributionFamily.NORMAL, "default rule: limits not at a natural zero "
@@ -202,7 +208,7 @@ final class CharacteristicChecks {
         try {
             // on a skewed family the long tail is the process, not an outlier: test the values mapped to the
             // normal scale through the fit, z = Φ⁻¹(F(x)) (docs/methods.md §14)
-            org.holdpoint.stats.Sample tested = fit == null ? g.sample() : normalScores(fit, g.sample());
+            org.holdpoint.stats.Sample tested = fit == null ? g.sample() : fit.normalScores(g.sample());
             grubbs = Grubbs.withDefaults().withAlpha(alpha).test(tested);
             if (fit != null) {
                 // report the suspect as measured, not as its normal score
@@ -274,25 +280,7 @@ final class CharacteristicChecks {
         return new GroupChecks(normality, grubbs, esd, flagged, lag1, runs, lots, capability, percentile, outliersOn);
     }
 
-    private static double min(double[] v) {
-        double m = Double.POSITIVE_INFINITY;
-        for (double x : v) {
-            m = Math.min(m, x);
-        }
-        return m;
-    }
 
-    private static org.holdpoint.stats.Sample normalScores(FittedDistribution fit, org.holdpoint.stats.Sample x) {
-        double[] z = new double[x.size()];
-        for (int i = 0; i < z.length; i++) {
-            double lo = fit.lowerTail(x.value(i));
-            double up = fit.upperTail(x.value(i));
-            // each side from its own tail, so a far value keeps its distance
-            z[i] = lo <= up ? org.holdpoint.stats.Normal.quantile(Math.max(lo, Double.MIN_NORMAL))
-                    : -org.holdpoint.stats.Normal.quantile(Math.max(up, Double.MIN_NORMAL));
-        }
-        return org.holdpoint.stats.Sample.of(z);
-    }
 
     /** The group in the order of its sequence column (numeric when every entry is a number, else as text). */
     private static GroupData inSequence(GroupData g) {

@@ -31,7 +31,7 @@ class RunChartTest {
         double[] b = {10.02, 9.98, 10.01, 9.99, 10.03, 9.97, 10.00, 10.02, 9.98, 10.01};
         double[] a = {10.00, 10.01, 10.02, 10.03, 10.04, 10.05, 10.20, 10.01};
         CharacteristicResult r = withStability(b, a);
-        JFreeChart chart = RunChart.create(r, ChartTheme.withDefaults());
+        JFreeChart chart = RunChart.create(r, 4, ChartTheme.withDefaults());
         XYPlot p = chart.getXYPlot();
         assertThat(p.getDataset(0).getItemCount(0)).isEqualTo(b.length);
         assertThat(p.getDataset(0).getItemCount(1)).isEqualTo(a.length);
@@ -49,7 +49,7 @@ class RunChartTest {
         CharacteristicResult r = CharacteristicResult.builder("Shaft OD", "mm",
                 org.holdpoint.study.CharacteristicSettings.EMPTY, false, LocationMethod.WELCH)
                 .verdict(new Verdict(Verdict.Status.PASSED, List.of())).build();
-        assertThatThrownBy(() -> RunChart.create(r, ChartTheme.withDefaults())).isInstanceOf(ChartException.class)
+        assertThatThrownBy(() -> RunChart.create(r, 4, ChartTheme.withDefaults())).isInstanceOf(ChartException.class)
                 .hasMessageContaining("no run order");
     }
 }

@@ -241,11 +241,9 @@ public final class ResultsTable {
         if (staleBecause != null) {
             return "Out of date: " + staleBecause + "; analyse again (F5)";
         }
-        String summary = result.summary();
-        int stability = summary.indexOf(" Not in control in run order:");
         // the banner keeps to the verdict; the stability finding goes to the counts line below it
-        return (stability < 0 ? summary : summary.substring(0, stability)).replace("CHANGE NOT VERIFIED",
-                "Change not verified").replace("CHANGE VERIFIED", "Change verified");
+        return result.verdictSummary().replace("CHANGE NOT VERIFIED", "Change not verified")
+                .replace("CHANGE VERIFIED", "Change verified");
     }
 
     /** @return the overall look: passed when verified, else the most urgent characteristic's look */
@@ -273,11 +271,9 @@ public final class ResultsTable {
                 sb.append(sb.length() == 0 ? "" : ", ").append(n).append(' ').append(l.words());
             }
         }
-        long unstable = result.characteristics().stream().filter(c -> c.checks() != null
-                && c.checks().stability() != null && (c.checks().stability().finding(false) != null
-                        || c.checks().stability().finding(true) != null)).count();
+        int unstable = result.notInControl().size();
         if (unstable > 0) {
-            sb.append("; ").append(unstable).append(" not in control in run order (see the Run chart)");
+            sb.append("; ").append(unstable).append(" not in control in run order (see the Control chart tab)");
         }
         return sb.toString();
     }

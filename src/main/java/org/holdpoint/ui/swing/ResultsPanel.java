@@ -108,14 +108,14 @@ final class ResultsPanel extends JPanel {
         results.addListener(ResultsTable.Property.RESULT, e -> refreshRows());
         results.addListener(ResultsTable.Property.SELECTED, e -> refreshDetail());
         detail.setName("detail");
-        String[] titles = {"Box plot", "Histograms", "Probability plot", "Run chart"};
+        String[] titles = {"Box plot", "Histograms", "Probability plot", "Control chart"};
         for (int i = 0; i < charts.length; i++) {
             chartTabs.addTab(titles[i], charts[i]);
         }
         chartTabs.setMnemonicAt(0, 'B');
         chartTabs.setMnemonicAt(1, 'G');
         chartTabs.setMnemonicAt(2, 'Y');
-        chartTabs.setMnemonicAt(3, 'U');
+        chartTabs.setMnemonicAt(3, 'O');
         chartTabs.setName("charts");
     }
 
