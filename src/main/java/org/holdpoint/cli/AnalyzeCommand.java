@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.StabilityOptions;
 import org.holdpoint.study.ChangeDescription;
 import org.holdpoint.study.ChangeKind;
 import org.holdpoint.study.ChangeStudy;
@@ -166,6 +167,9 @@ final class AnalyzeCommand implements Callable<Integer> {
                 + "family with the lowest AIC). Default: auto for a characteristic bounded at zero with an upper "
                 + "limit, or one that departs strongly from a normal shape; normal otherwise.")
         String distribution;
+        @Option(names = "--require-stability", description = "Fail a characteristic whose after phase signals on "
+                + "its control chart against the before limits (default: a signal is a finding only).")
+        boolean requireStability;
     }
 
     static final class MethodOptions {
@@ -182,6 +186,12 @@ final class AnalyzeCommand implements Callable<Integer> {
                 + "the value at one cell of one file (e.g. C12, Data!C12, after:J31) for the stated reason; "
                 + "repeatable. before:/after: is needed when both files have the cell. The reason is recorded.")
         List<String> exclude = new ArrayList<>();
+        @Option(names = "--row-order-is-run-order", description = "The rows of each file are in the order the parts "
+                + "were made: draw control charts in that order where no sequence or date column exists.")
+        boolean rowOrderIsRunOrder;
+        @Option(names = "--control-tests", paramLabel = "LIST", description = "The ISO 7870-2 tests applied to the "
+                + "control charts, e.g. 1,2,3,5 or 1-8 or all (default: 1,2,3).")
+        String controlTests;
     }
 
     @Option(names = "--analyst", paramLabel = "NAME", description = "Who ran the analysis, as the record keeps it "
@@ -405,7 +415,8 @@ final class AnalyzeCommand implements Callable<Integer> {
             }
         }
         CharacteristicSettings overrides = new CharacteristicSettings(c.unit, new SpecLimits(c.lsl, c.nominal, c.usl),
-                margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null, distribution);
+                margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null, distribution,
+                c.requireStability ? Boolean.TRUE : null);
         List<Exclusion> exclusions = new ArrayList<>();
         for (String e : method.exclude) {
             try {
@@ -414,8 +425,15 @@ final class AnalyzeCommand implements Callable<Integer> {
                 throw new CommandLine.ParameterException(spec.commandLine(), "--exclude: " + bad.getMessage());
             }
         }
+        java.util.SortedSet<Integer> tests;
+        try {
+            tests = method.controlTests == null ? org.holdpoint.stats.ControlChart.DEFAULT_TESTS
+                    : StabilityOptions.parseTests(method.controlTests);
+        } catch (IllegalArgumentException bad) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--control-tests: " + bad.getMessage());
+        }
         return new AnalysisSettings(method.alpha, method.equalVariances, method.holm, null, null, overrides,
-                exclusions);
+                exclusions).withStability(new StabilityOptions(method.rowOrderIsRunOrder, tests));
     }
 
     private MarginSpec marginSpec(CriteriaOptions c) {

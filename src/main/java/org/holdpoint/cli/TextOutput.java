@@ -270,9 +270,14 @@ final class TextOutput {
         if (c.stability() != null) {
             var st = c.stability();
             var l = st.before().own();
-            out.printf(Locale.ROOT, "  Stability (individuals chart in run order from %s, limits from the before phase): centre %s, "
-                    + "limits (%s, %s), moving range %s (limit %s); before: %s; after: %s%n", st.runOrder(),
-                    u(name, l.center()), u(name, l.lcl()), u(name, l.ucl()), u(name, l.mrBar()), u(name, l.mrUcl()),
+            boolean means = st.kind() == org.holdpoint.stats.ControlChart.Kind.MEANS;
+            String spread = means ? String.format(Locale.ROOT, "sd chart centre %s (limits %s, %s)",
+                    u(name, l.spreadCenter()), u(name, l.spreadLcl()), u(name, l.spreadUcl()))
+                    : String.format(Locale.ROOT, "moving range %s (limit %s)", u(name, l.mrBar()), u(name, l.mrUcl()));
+            out.printf(Locale.ROOT, "  Stability (%s charts in run order from %s, limits from the before phase, "
+                    + "ISO 7870-2 tests %s): centre %s, limits%s (%s, %s), %s; before: %s; after: %s%n",
+                    st.kind().words(), st.runOrder(), st.testWords(), u(name, l.center()),
+                    means ? " for subgroups of " + l.size() : "", u(name, l.lcl()), u(name, l.ucl()), spread,
                     st.finding(false) == null ? "no signal" : st.before().signals().size() + " signal(s)",
                     st.finding(true) == null ? "no signal against the before limits"
                             : st.after().signals().size() + " signal(s) against the before limits");

@@ -42,7 +42,7 @@ public final class SettingsReader {
     public static final List<String> COLUMNS = List.of("characteristic", "unit", "lsl", "nominal", "usl", "margin",
             "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower", "margin_percent_upper",
             "margin_percent_of_usl", "margin_ratio", "margin_ratio_lower", "margin_ratio_upper",
-            "sd_growth_limit", "capability_min", "paired", "distribution");
+            "sd_growth_limit", "capability_min", "paired", "distribution", "require_stability");
 
     /** Creates a reader. */
     public SettingsReader() {
@@ -231,6 +231,9 @@ public final class SettingsReader {
         if (s.distribution() != null) {
             o.put("distribution", s.distribution().key());
         }
+        if (s.requireStability() != null) {
+            o.put("require_stability", s.requireStability());
+        }
         return o;
     }
 
@@ -331,9 +334,10 @@ public final class SettingsReader {
                         + ", or leave it empty for the default rule");
             }
         }
+        Boolean requireStability = bool(v, "require_stability", w);
         try {
             out.put(name, new CharacteristicSettings(v.get("unit"), new SpecLimits(lsl, nominal, usl), margin, sdGrowth,
-                    capMin, paired, distribution));
+                    capMin, paired, distribution, requireStability));
         } catch (IllegalArgumentException e) {
             throw new ImportException(e, "settings file %s, %s: %s", w.file(), w.place(), e.getMessage());
         }

@@ -79,7 +79,7 @@ final class TextBlocks {
         put.accept("Spread", "F-test of the variance ratio with its " + ci + " interval; Brown\u2013Forsythe test "
                 + "(Levene's test on absolute deviations from the group medians, Brown & Forsythe 1974); "
                 + "sd growth: the upper one-sided " + ci + " confidence bound of \u03c3 after / \u03c3 before must "
-                + "lie below the limit." + (set.currentMethods() ? " Paired designs: the Pitman\u2013Morgan test (the "
+                + "lie below the limit." + (set.since(3) ? " Paired designs: the Pitman\u2013Morgan test (the "
                 + "correlation of sums and differences, Pitman 1939, Morgan 1939) and the interval and bound that "
                 + "invert it, since paired values are not independent." : ""));
         put.accept("Overall verdict", "CHANGE VERIFIED only when every characteristic passes (intersection\u2013union "
@@ -103,7 +103,7 @@ final class TextBlocks {
                 + "bound of Ppk (Bissell 1990); Cp and Cpk from the within-subgroup sd only with a subgroup column "
                 + "(the estimator is named); expected parts per million outside each limit under a normal model. A "
                 + "capability requirement is judged on the after group's lower bound of Ppk, not on the estimate."
-                + (set.currentMethods() ? " A characteristic bounded at zero with an upper limit, one whose shape "
+                + (set.since(3) ? " A characteristic bounded at zero with an upper limit, one whose shape "
                 + "departs strongly from normal, or one whose criteria name a family is judged by a fitted "
                 + "distribution instead (lognormal, Weibull, gamma or Rayleigh by maximum likelihood, chosen by AIC "
                 + "unless named; the normal model is kept within 2 of the lowest AIC): Pp and Ppk from its 0.135 %, "

@@ -63,14 +63,24 @@ public final class Verdicts {
             }
         }
         Stability st = r.checks() == null ? null : r.checks().stability();
+        boolean required = Boolean.TRUE.equals(r.settings().requireStability());
         if (st != null) {
-            // a finding, not a failure: the verdict's status is unchanged (docs/methods.md §16)
+            // a finding, not a failure, unless the criteria require stability: then a signal of the after phase
+            // fails the characteristic (docs/methods.md §16)
             for (boolean after : new boolean[] {false, true}) {
                 String f = st.finding(after);
                 if (f != null) {
-                    reasons.add("stability: " + f);
+                    reasons.add((after && required ? "stability required: " : "stability: ") + f);
                 }
             }
+            if (required && st.finding(true) != null && (status == Status.PASSED || status == Status.INCONCLUSIVE)) {
+                status = Status.FAILED;
+            }
+        } else if (required && status == Status.PASSED) {
+            // the requirement cannot be judged: the change is not shown to be stable
+            reasons.add("stability required, but no control chart could be drawn (see the notes: the run order "
+                    + "is not known or the limits could not be set), so stability is not shown");
+            status = Status.INCONCLUSIVE;
         }
         return r.with(r.holmP(), new Verdict(status, reasons), r.notes());
     }

@@ -13,12 +13,30 @@ import java.util.List;
  * @param capabilityRequirement the minimum acceptable capability index (judged on the lower bound), or null
  * @param paired                whether the same units were measured before and after, or null (from layout)
  * @param distribution          the distribution capability is judged by, or null (the default rule)
+ * @param requireStability      whether a control-chart signal in the after phase fails the characteristic, or null
+ *                              (no: a finding only)
  */
 public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
-        Double capabilityRequirement, Boolean paired, DistributionSetting distribution) {
+        Double capabilityRequirement, Boolean paired, DistributionSetting distribution, Boolean requireStability) {
     /** Nothing set. */
     public static final CharacteristicSettings EMPTY = new CharacteristicSettings(null, SpecLimits.NONE, null, null,
-            null, null, null);
+            null, null, null, null);
+
+    /**
+     * Criteria without a stability requirement.
+     *
+     * @param unit                  unit of measure
+     * @param spec                  specification limits
+     * @param margin                the equivalence margin as entered
+     * @param sdGrowthLimit         the largest acceptable σ_after/σ_before, or null
+     * @param capabilityRequirement the minimum acceptable capability index, or null
+     * @param paired                whether the design is paired, or null
+     * @param distribution          the distribution setting, or null
+     */
+    public CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
+            Double capabilityRequirement, Boolean paired, DistributionSetting distribution) {
+        this(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, distribution, null);
+    }
 
     /**
      * Criteria without a distribution setting.
@@ -40,7 +58,17 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
      * @return these criteria with it
      */
     public CharacteristicSettings withDistribution(DistributionSetting d) {
-        return new CharacteristicSettings(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, d);
+        return new CharacteristicSettings(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, d,
+                requireStability);
+    }
+
+    /**
+     * @param required whether a signal in the after phase fails the characteristic, or null
+     * @return these criteria with it
+     */
+    public CharacteristicSettings withRequireStability(Boolean required) {
+        return new CharacteristicSettings(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired,
+                distribution, required);
     }
 
     /** Normalises a null spec to {@link SpecLimits#NONE}. */
@@ -67,7 +95,8 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
                 pick(other.spec.usl(), spec.usl()));
         return new CharacteristicSettings(pick(other.unit, unit), s, pick(other.margin, margin),
                 pick(other.sdGrowthLimit, sdGrowthLimit), pick(other.capabilityRequirement, capabilityRequirement),
-                pick(other.paired, paired), pick(other.distribution, distribution));
+                pick(other.paired, paired), pick(other.distribution, distribution),
+                pick(other.requireStability, requireStability));
     }
 
     private static <T> T pick(T preferred, T fallback) {

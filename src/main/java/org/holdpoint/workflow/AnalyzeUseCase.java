@@ -103,8 +103,7 @@ public final class AnalyzeUseCase {
             }
             CharacteristicSettings fileDefaults = per.remove(SettingsReader.DEFAULTS);
             CharacteristicSettings defaults = settings.defaults().overriddenBy(fileDefaults);
-            merged = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(), defaults, per,
-                    settings.overrides(), settings.exclusions());
+            merged = settings.withCriteria(defaults, per, settings.overrides());
             if (!per.isEmpty() && request.choice().only().isEmpty()) {
                 // the criteria list the characteristics: only those are analysed, and a row that matches no
                 // column is refused (with the closest names) instead of leaving a characteristic unjudged

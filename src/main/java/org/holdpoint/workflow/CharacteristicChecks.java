@@ -33,7 +33,9 @@ import org.holdpoint.stats.StatsException;
 import org.holdpoint.stats.WithinEstimator;
 import org.holdpoint.result.AssumptionChecks;
 import org.holdpoint.result.Stability;
+import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicData;
+import org.holdpoint.study.StabilityOptions;
 import org.holdpoint.study.CharacteristicSettings;
 import org.holdpoint.study.DistributionSetting;
 import org.holdpoint.result.FlaggedValue;
@@ -63,7 +65,9 @@ final class CharacteristicChecks {
     }
 
     static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Margin margin, double alpha,
-            boolean paired, boolean equalVariances, boolean currentMethods, List<String> notes) {
+            boolean paired, AnalysisSettings study, List<String> notes) {
+        boolean currentMethods = study.since(3);
+        boolean equalVariances = study.equalVariances();
         NormalityResult nb = NormalityResult.of(c.before().sample());
         NormalityResult na = NormalityResult.of(c.after().sample());
         FamilySelection distribution = !s.spec().any() ? null : currentMethods ? selectFamily(c, s, nb, na, notes)
@@ -98,7 +102,8 @@ final class CharacteristicChecks {
             }
         }
         String recommendation = recommend(before, after, c, paired, equalVariances);
-        Stability stability = currentMethods ? stability(c, notes) : null;
+        Stability stability = !currentMethods ? null : study.since(4) ? stability(c, study.stability(), notes)
+                : individualsInSequence(c, notes);
         if (stability != null && family != DistributionFamily.NORMAL) {
             notes.add("the control limits are the normal model's (centre plus or minus 3 sigma); this characteristic "
                     + "follows a " + family.key() + " distribution, so a point beyond a limit in its long tail may be the "
@@ -109,10 +114,10 @@ final class CharacteristicChecks {
     }
 
     /**
-     * Individuals charts of both phases in the order of their sequence columns (docs/methods.md §16), or null
-     * when a phase has no sequence column.
+     * Method generation 3 (records written with it are re-computed so): individuals charts of both phases in the
+     * order of their sequence columns (numbers, else texts as written), or null when a phase has none.
      */
-    private static Stability stability(CharacteristicData c, List<String> notes) {
+    private static Stability individualsInSequence(CharacteristicData c, List<String> notes) {
         if (!c.before().hasSequence() || !c.after().hasSequence()) {
             return null;
         }
@@ -123,13 +128,176 @@ final class CharacteristicChecks {
             double[] a = values(c.after(), oa);
             ControlChart.Limits limits = ControlChart.limits(b);
             // the signals are findings of the verdict (Verdicts), not notes
-            return new Stability(ControlChart.judge(b, limits), ControlChart.judge(a, limits), origins(c.before(), ob),
-                    origins(c.after(), oa), "the sequence column", java.util.Arrays.stream(b).boxed().toList(),
-                    java.util.Arrays.stream(a).boxed().toList());
+            return new Stability(ControlChart.judge(b, limits), ControlChart.judge(a, limits),
+                    describe(c.before(), ob), describe(c.after(), oa), "the sequence column", ControlChart.DEFAULT_TESTS);
         } catch (StatsException e) {
             notes.add("no control chart: " + e.getMessage());
             return null;
         }
+    }
+
+    /**
+     * Control charts of both phases in run order (docs/methods.md §16): charts of subgroup means and sds when both
+     * phases have a subgroup column with subgroups of two or more, else individuals charts; null, with a note, when
+     * no run order is known or the charts cannot be drawn.
+     */
+    private static Stability stability(CharacteristicData c, StabilityOptions options, List<String> notes) {
+        try {
+            RunOrder ob = RunOrder.of(c.before(), options.rowOrderIsRunOrder());
+            RunOrder oa = RunOrder.of(c.after(), options.rowOrderIsRunOrder());
+            boolean subgroups = c.before().hasSubgroups() && c.after().hasSubgroups();
+            if (subgroups && (ob == null || oa == null)) {
+                // no order of the values: the subgroups' labels may still order them (numbers or dates)
+                Stability st = bySubgroupLabels(c, options, notes);
+                if (st != null) {
+                    return st;
+                }
+            }
+            if (ob == null || oa == null) {
+                notes.add("no control chart: the run order of the " + (ob == null ? "before" : "after")
+                        + " values is not known (give a sequence or date/time column, or say that the rows are in "
+                        + "run order with --row-order-is-run-order)");
+                return null;
+            }
+            if (subgroups) {
+                List<Integer> sb = subgroupsInOrder(c.before(), ob.order());
+                List<Integer> sa = subgroupsInOrder(c.after(), oa.order());
+                if (sb != null && sa != null) {
+                    return subgroupCharts(c, sb, sa, ob.source() + ", subgroups in the order of their first value",
+                            options, notes);
+                }
+            }
+            double[] b = values(c.before(), ob.order());
+            double[] a = values(c.after(), oa.order());
+            ControlChart.Limits limits = ControlChart.limits(b);
+            smallBase(b.length, "values", notes);
+            return new Stability(ControlChart.judge(b, limits, options.tests()),
+                    ControlChart.judge(a, limits, options.tests()), describe(c.before(), ob.order()),
+                    describe(c.after(), oa.order()), ob.source().equals(oa.source()) ? ob.source()
+                            : "before: " + ob.source() + "; after: " + oa.source(), options.tests());
+        } catch (RunOrder.Unknown e) {
+            notes.add("no control chart: " + e.getMessage());
+            return null;
+        } catch (StatsException e) {
+            notes.add("no control chart: " + e.getMessage());
+            return null;
+        }
+    }
+
+    /** ISO 7870-2 asks for 20 to 25 subgroups (or points) to set limits; fewer give rough limits. */
+    private static void smallBase(int k, String what, List<String> notes) {
+        if (k < 20) {
+            notes.add("the control limits rest on " + k + " before " + what + "; 20 to 25 are usual for setting "
+                    + "limits (ISO 7870-2), so read the signals with care");
+        }
+    }
+
+    private static Stability bySubgroupLabels(CharacteristicData c, StabilityOptions options, List<String> notes)
+            throws RunOrder.Unknown {
+        List<List<Integer>> lb = subgroupMembers(c.before());
+        List<List<Integer>> la = subgroupMembers(c.after());
+        RunOrder ob = RunOrder.ofLabels(lb.stream().map(m -> c.before().subgroup(m.get(0))).toList());
+        RunOrder oa = RunOrder.ofLabels(la.stream().map(m -> c.after().subgroup(m.get(0))).toList());
+        if (ob == null || oa == null) {
+            return null;
+        }
+        List<Integer> sb = new ArrayList<>();
+        for (int k : ob.order()) {
+            sb.add(k);
+        }
+        List<Integer> sa = new ArrayList<>();
+        for (int k : oa.order()) {
+            sa.add(k);
+        }
+        return subgroupCharts(c, sb, sa, ob.source(), options, notes);
+    }
+
+    /** The subgroups of a group (by label, in the order of first appearance), each a list of value indices. */
+    private static List<List<Integer>> subgroupMembers(GroupData g) {
+        Map<String, List<Integer>> m = new java.util.LinkedHashMap<>();
+        for (int i = 0; i < g.size(); i++) {
+            m.computeIfAbsent(String.valueOf(g.subgroup(i)), k -> new ArrayList<>()).add(i);
+        }
+        return new ArrayList<>(m.values());
+    }
+
+    /**
+     * The subgroups (indices into {@link #subgroupMembers}) in the order of their first value in run order, or null
+     * when no subgroup has two values (then the values are charted one by one).
+     */
+    private static List<Integer> subgroupsInOrder(GroupData g, int[] order) {
+        List<List<Integer>> members = subgroupMembers(g);
+        Map<String, Integer> index = new HashMap<>();
+        for (int k = 0; k < members.size(); k++) {
+            index.put(String.valueOf(g.subgroup(members.get(k).get(0))), k);
+        }
+        if (members.stream().noneMatch(m -> m.size() >= 2)) {
+            return null;
+        }
+        java.util.LinkedHashSet<Integer> seen = new java.util.LinkedHashSet<>();
+        for (int i : order) {
+            seen.add(index.get(String.valueOf(g.subgroup(i))));
+        }
+        return new ArrayList<>(seen);
+    }
+
+    private static Stability subgroupCharts(CharacteristicData c, List<Integer> sb, List<Integer> sa, String source,
+            StabilityOptions options, List<String> notes) {
+        List<List<Integer>> mb = subgroupMembers(c.before());
+        List<List<Integer>> ma = subgroupMembers(c.after());
+        double[][] b = subgroupValues(c.before(), mb, sb);
+        double[][] a = subgroupValues(c.after(), ma, sa);
+        ControlChart.Limits limits = ControlChart.subgroupLimits(b);
+        smallBase(b.length, "subgroups", notes);
+        return new Stability(ControlChart.judgeSubgroups(b, limits, options.tests()),
+                ControlChart.judgeSubgroups(a, limits, options.tests()), describeSubgroups(c.before(), mb, sb),
+                describeSubgroups(c.after(), ma, sa), source, options.tests());
+    }
+
+    private static double[][] subgroupValues(GroupData g, List<List<Integer>> members, List<Integer> order) {
+        double[][] r = new double[order.size()][];
+        for (int k = 0; k < r.length; k++) {
+            List<Integer> m = members.get(order.get(k));
+            r[k] = new double[m.size()];
+            for (int j = 0; j < m.size(); j++) {
+                r[k][j] = g.sample().value(m.get(j));
+            }
+        }
+        return r;
+    }
+
+    private static List<String> describeSubgroups(GroupData g, List<List<Integer>> members, List<Integer> order) {
+        List<String> r = new ArrayList<>();
+        for (int k : order) {
+            List<Integer> m = members.get(k);
+            r.add("subgroup " + g.subgroup(m.get(0)) + " (" + m.size() + " value" + (m.size() == 1 ? "" : "s")
+                    + ", first at " + g.origin(m.get(0)).describe() + ")");
+        }
+        return r;
+    }
+
+    private static List<String> describe(GroupData g, Integer[] order) {
+        List<String> r = new ArrayList<>();
+        for (int i : order) {
+            r.add(g.origin(i).describe());
+        }
+        return r;
+    }
+
+    private static List<String> describe(GroupData g, int[] order) {
+        List<String> r = new ArrayList<>();
+        for (int i : order) {
+            r.add(g.origin(i).describe());
+        }
+        return r;
+    }
+
+    private static double[] values(GroupData g, int[] order) {
+        double[] v = new double[order.length];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = g.sample().value(order[i]);
+        }
+        return v;
     }
 
     private static double[] values(GroupData g, Integer[] order) {
@@ -140,13 +308,6 @@ final class CharacteristicChecks {
         return v;
     }
 
-    private static List<org.holdpoint.study.Origin> origins(GroupData g, Integer[] order) {
-        List<org.holdpoint.study.Origin> o = new ArrayList<>();
-        for (Integer i : order) {
-            o.add(g.origin(i));
-        }
-        return o;
-    }
 
     /**
      * The family capability is judged by (docs/methods.md §14): the one set for the characteristic; else the

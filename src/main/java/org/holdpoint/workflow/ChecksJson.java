@@ -4,6 +4,7 @@ import java.util.List;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.holdpoint.stats.ControlChart;
 import org.holdpoint.stats.CapabilityResult;
 import org.holdpoint.stats.FamilySelection;
 import org.holdpoint.stats.PercentileCapabilityResult;
@@ -61,37 +62,51 @@ final class ChecksJson {
         if (c.stability() != null) {
             ObjectNode st = n.putObject("stability");
             st.put("runOrder", c.stability().runOrder());
-            st.set("before", phase(c.stability().before(), c.stability().beforeOrigins(), false));
-            st.set("after", phase(c.stability().after(), c.stability().afterOrigins(), true));
+            var tests = c.stability().tests();
+            st.set("before", phase(c.stability().before(), c.stability().beforeOrigins(), false, tests));
+            st.set("after", phase(c.stability().after(), c.stability().afterOrigins(), true, tests));
         }
     }
 
-    private static ObjectNode phase(org.holdpoint.stats.ControlChart.Phase p, List<org.holdpoint.study.Origin> origins,
-            boolean after) {
+    private static ObjectNode phase(ControlChart.Phase p, List<String> origins, boolean after,
+            java.util.SortedSet<Integer> tests) {
         ObjectNode o = F.objectNode();
         // the limits the phase is judged against: the before phase's own for both phases
         limits(o, after ? p.limits() : p.own());
-        o.put("method", "individuals and moving range (ISO 7870-2), limits from the before phase");
+        o.put("method", p.limits().kind().words() + " (ISO 7870-2), limits from the before phase");
+        o.put("points", p.points());
+        ArrayNode t = o.putArray("tests");
+        tests.forEach(t::add);
         if (after) {
             limits(o.putObject("own"), p.own());
         }
         ArrayNode signals = o.putArray("signals");
-        for (org.holdpoint.stats.ControlChart.Signal sig : p.signals()) {
+        for (ControlChart.Signal sig : p.signals()) {
             ObjectNode x = signals.addObject();
             x.put("test", sig.test());
+            x.put("chart", sig.chart() == ControlChart.Chart.SPREAD ? "sd"
+                    : p.limits().kind() == ControlChart.Kind.MEANS ? "means" : "individuals");
             x.put("index", sig.index());
-            x.put("origin", origins.get(sig.index() - 1).describe());
+            x.put("origin", origins.get(sig.index() - 1));
         }
         return o;
     }
 
-    private static void limits(ObjectNode o, org.holdpoint.stats.ControlChart.Limits l) {
+    private static void limits(ObjectNode o, ControlChart.Limits l) {
         ResultJson.num(o, "center", l.center());
         ResultJson.num(o, "sigma", l.sigma());
         ResultJson.num(o, "lcl", l.lcl());
         ResultJson.num(o, "ucl", l.ucl());
-        ResultJson.num(o, "mrBar", l.mrBar());
-        ResultJson.num(o, "mrUcl", l.mrUcl());
+        if (l.kind() == ControlChart.Kind.MEANS) {
+            // the limits above are those of a subgroup of the most frequent size; other sizes have their own
+            o.put("subgroupSize", l.size());
+            ResultJson.num(o, "sdCenter", l.spreadCenter());
+            ResultJson.num(o, "sdLcl", l.spreadLcl());
+            ResultJson.num(o, "sdUcl", l.spreadUcl());
+        } else {
+            ResultJson.num(o, "mrBar", l.mrBar());
+            ResultJson.num(o, "mrUcl", l.mrUcl());
+        }
     }
 
     private static ObjectNode rankSum(RankSumResult r) {

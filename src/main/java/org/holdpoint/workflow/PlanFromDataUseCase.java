@@ -137,9 +137,8 @@ public final class PlanFromDataUseCase {
         if (marginSpec != null) {
             // the relative margin wins over each characteristic's own, resolved against its own limits
             CharacteristicSettings over = new CharacteristicSettings(null, null, marginSpec, null, null, null);
-            settings = new AnalysisSettings(settings.alpha(), settings.equalVariances(), settings.holm(),
-                    settings.defaults(), settings.perCharacteristic(), settings.overrides() == null ? over
-                    : settings.overrides().overriddenBy(over), settings.exclusions());
+            settings = settings.withCriteria(settings.defaults(), settings.perCharacteristic(),
+                    settings.overrides() == null ? over : settings.overrides().overriddenBy(over));
         }
         return run(imported.data(), settings, margin, plan, difference, sdGrowthLimit, sdRatio);
     }

@@ -165,7 +165,7 @@ public final class StudyAnalyzer {
         LeveneResult levene = null;
         SdGrowthResult growth = null;
         if (db.variance() > 0 && da.variance() > 0) {
-            if (paired && study.currentMethods()) {
+            if (paired && study.since(3)) {
                 // pairs are correlated: the F-test's independence does not hold, the Pitman–Morgan test uses it
                 try {
                     variance = SpreadTests.pitmanMorgan(before, after, alpha);
@@ -204,8 +204,7 @@ public final class StudyAnalyzer {
                     + "geometric means); the rank-based equivalence is not computed for a ratio margin");
         }
         AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin != null && margin.ratio() ? null : margin,
-                alpha, paired, study.equalVariances(),
-                study.currentMethods(), notes);
+                alpha, paired, study, notes);
         String unit = s.unit() != null ? s.unit() : c.unit();
         CharacteristicResult draft = CharacteristicResult.builder(c.name(), unit, s, paired, method).margin(margin)
                 .descriptives(db, da)

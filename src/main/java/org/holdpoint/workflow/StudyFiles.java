@@ -21,6 +21,7 @@ import java.util.Map;
 import org.holdpoint.importer.SettingsReader;
 import org.holdpoint.stats.Sample;
 import org.holdpoint.study.AnalysisSettings;
+import org.holdpoint.study.StabilityOptions;
 import org.holdpoint.study.ChangeDescription;
 import org.holdpoint.study.ChangeKind;
 import org.holdpoint.study.ChangeStudy;
@@ -53,7 +54,7 @@ public final class StudyFiles {
      * distribution) and the paired spread test; a study of schema 1 or 2 was computed with the methods of its
      * time and is read with {@code methods} 2, so that it re-computes as it was (docs/study-file.md).
      */
-    public static final int SCHEMA_VERSION = 3;
+    public static final int SCHEMA_VERSION = 4;
     private static final JsonNodeFactory F = JsonNodeFactory.instance;
     private static final ObjectMapper CANONICAL = new ObjectMapper()
             .enable(com.fasterxml.jackson.core.JsonGenerator.Feature.WRITE_BIGDECIMAL_AS_PLAIN);
@@ -368,8 +369,14 @@ public final class StudyFiles {
         o.put("alpha", s.alpha());
         o.put("equalVariances", s.equalVariances());
         o.put("holm", s.holm());
-        if (!s.currentMethods()) {
+        if (s.methods() != AnalysisSettings.METHODS) {
             o.put("methods", s.methods());
+        }
+        if (!s.stability().equals(StabilityOptions.DEFAULT)) {
+            ObjectNode st = o.putObject("stability");
+            st.put("rowOrderIsRunOrder", s.stability().rowOrderIsRunOrder());
+            ArrayNode t = st.putArray("tests");
+            s.stability().testList().forEach(t::add);
         }
         o.set("defaults", criteria(s.defaults()));
         ObjectNode per = o.putObject("perCharacteristic");
@@ -399,14 +406,32 @@ public final class StudyFiles {
         }
         // a record of schema 1 or 2 was computed with the methods of its time (the normal model for capability, the
         // F-test for a paired design's spread) and is re-computed so; schema 3 names older methods when it keeps them
-        int methods = version < 3 ? 2 : o.path("methods").asInt(AnalysisSettings.METHODS);
+        // schema 3 wrote no generation for its current one (3: individuals charts in the sequence column's order)
+        int methods = version < 3 ? 2 : o.path("methods").asInt(version == 3 ? 3 : AnalysisSettings.METHODS);
         if (methods < 2 || methods > AnalysisSettings.METHODS) {
             throw new StudyFileException("%s: the settings name method generation %d, which this version does not know "
                     + "(2 to %d)", name, methods, AnalysisSettings.METHODS);
         }
         return new AnalysisSettings(o.path("alpha").asDouble(0.05), o.path("equalVariances").asBoolean(false),
                 o.path("holm").asBoolean(false), readCriteria(o.path("defaults"), version, name, "defaults"), per,
-                readCriteria(o.path("overrides"), version, name, "overrides"), ex, methods);
+                readCriteria(o.path("overrides"), version, name, "overrides"), ex, methods, readStability(o, name));
+    }
+
+    private static StabilityOptions readStability(JsonNode o, String name) {
+        JsonNode st = o.path("stability");
+        if (st.isMissingNode() || st.isNull()) {
+            return StabilityOptions.DEFAULT;
+        }
+        List<Integer> tests = new ArrayList<>();
+        for (JsonNode t : st.path("tests")) {
+            tests.add(t.asInt());
+        }
+        try {
+            return new StabilityOptions(st.path("rowOrderIsRunOrder").asBoolean(false),
+                    new java.util.TreeSet<>(tests.isEmpty() ? List.of(1, 2, 3) : tests));
+        } catch (org.holdpoint.stats.StatsException e) {
+            throw new StudyFileException("%s: the control-chart settings are damaged (%s)", name, e.getMessage());
+        }
     }
 
     /** The criteria in a settings file's spelling (one spelling everywhere, docs/settings-file.md). */

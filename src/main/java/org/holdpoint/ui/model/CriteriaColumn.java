@@ -29,7 +29,9 @@ public enum CriteriaColumn {
     PAIRED("Paired", List.of(CriteriaTable.FROM_DATA, "yes", "no")),
     /** The distribution capability is judged by: by the default rule, auto, or one family. */
     DISTRIBUTION("Distribution", List.of(CriteriaTable.BY_RULE, "auto", "normal", "lognormal", "weibull", "gamma",
-            "rayleigh"));
+            "rayleigh")),
+    /** Whether a control-chart signal of the after phase fails the characteristic, or is a finding only. */
+    STABILITY("Stability", List.of(CriteriaTable.FINDING_ONLY, CriteriaTable.REQUIRED));
 
     private final String label;
     private final List<String> choices;

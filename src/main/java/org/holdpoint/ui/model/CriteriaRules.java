@@ -23,7 +23,7 @@ final class CriteriaRules {
             case LSL, NOMINAL -> numberProblem(t, col == CriteriaColumn.NOMINAL ? nominalProblem(r) : null);
             case USL -> numberProblem(t, uslProblem(r));
             case MARGIN -> marginProblem(r);
-            case MARGIN_IN, PAIRED, ANALYSE, DISTRIBUTION -> col.choices().contains(t) ? null : "choose one of " + String.join(", ",
+            case MARGIN_IN, PAIRED, ANALYSE, DISTRIBUTION, STABILITY -> col.choices().contains(t) ? null : "choose one of " + String.join(", ",
                     col.choices());
             case SD_GROWTH -> positive(t, "the sd-growth limit", "1.25");
             case CAPABILITY -> positive(t, "the capability requirement", "1.33");
@@ -195,7 +195,8 @@ final class CriteriaRules {
         String d = r[CriteriaColumn.DISTRIBUTION.ordinal()];
         return new CharacteristicSettings(unit.isEmpty() ? null : unit, spec, m,
                 number(r[CriteriaColumn.SD_GROWTH.ordinal()]), number(r[CriteriaColumn.CAPABILITY.ordinal()]), p,
-                CriteriaTable.BY_RULE.equals(d) ? null : org.holdpoint.study.DistributionSetting.parse(d));
+                CriteriaTable.BY_RULE.equals(d) ? null : org.holdpoint.study.DistributionSetting.parse(d),
+                CriteriaTable.REQUIRED.equals(r[CriteriaColumn.STABILITY.ordinal()]) ? Boolean.TRUE : null);
     }
 
     static String marginText(MarginSpec m) {

@@ -26,6 +26,10 @@ public final class CriteriaTable {
     public static final String IN_RATIO = "ratio";
     /** Choice of {@link CriteriaColumn#PAIRED}: take the design from the data layout. */
     public static final String FROM_DATA = "from data";
+    /** Choice of {@link CriteriaColumn#STABILITY}: a control-chart signal is a finding only. */
+    public static final String FINDING_ONLY = "finding only";
+    /** Choice of {@link CriteriaColumn#STABILITY}: a signal of the after phase fails the characteristic. */
+    public static final String REQUIRED = "required";
     /** Choice of {@link CriteriaColumn#DISTRIBUTION}: the default rule decides (docs/methods.md §14). */
     public static final String BY_RULE = "by rule";
 
@@ -271,6 +275,7 @@ public final class CriteriaTable {
         r[CriteriaColumn.MARGIN_IN.ordinal()] = IN_UNITS;
         r[CriteriaColumn.PAIRED.ordinal()] = FROM_DATA;
         r[CriteriaColumn.DISTRIBUTION.ordinal()] = BY_RULE;
+        r[CriteriaColumn.STABILITY.ordinal()] = FINDING_ONLY;
         r[CriteriaColumn.ANALYSE.ordinal()] = "yes";
         String unit = s != null && s.unit() != null ? s.unit() : dataUnit;
         r[CriteriaColumn.UNIT.ordinal()] = unit == null ? "" : unit;
@@ -292,6 +297,7 @@ public final class CriteriaTable {
         r[CriteriaColumn.CAPABILITY.ordinal()] = CriteriaRules.text(s.capabilityRequirement());
         r[CriteriaColumn.PAIRED.ordinal()] = s.paired() == null ? FROM_DATA : s.paired() ? "yes" : "no";
         r[CriteriaColumn.DISTRIBUTION.ordinal()] = s.distribution() == null ? BY_RULE : s.distribution().key();
+        r[CriteriaColumn.STABILITY.ordinal()] = Boolean.TRUE.equals(s.requireStability()) ? REQUIRED : FINDING_ONLY;
         return r;
     }
 

@@ -41,12 +41,13 @@ public final class StudySession {
     }
 
     /** The study-wide settings, taken on the event thread for a worker. */
-    private record Study(double alpha, boolean equalVariances, boolean holm) {
+    private record Study(double alpha, boolean equalVariances, boolean holm,
+            org.holdpoint.study.StabilityOptions stability) {
     }
 
     private Study wide() {
         double alpha = criteria.alphaProblem() == null ? Double.parseDouble(criteria.alpha()) : 0.05;
-        return new Study(alpha, equalVariances, holm);
+        return new Study(alpha, equalVariances, holm, stability);
     }
 
     /** What the import job hands back to the event thread. */
@@ -70,6 +71,7 @@ public final class StudySession {
     private Path criteriaFile;
     private boolean equalVariances;
     private boolean holm;
+    private org.holdpoint.study.StabilityOptions stability = org.holdpoint.study.StabilityOptions.DEFAULT;
     /** The method generation of the opened study (an older record is re-analysed as it was), else the current. */
     private int methods = AnalysisSettings.METHODS;
     private List<Exclusion> exclusions = List.of();
@@ -227,6 +229,20 @@ public final class StudySession {
             holm = h;
             setDirty(true);
             stale("the Holm setting changed after the analysis");
+        }
+    }
+
+    /** @return the control charts' options: whether the rows are in run order, and the tests */
+    public org.holdpoint.study.StabilityOptions stability() {
+        return stability;
+    }
+
+    /** @param s the control charts' options */
+    public void setStability(org.holdpoint.study.StabilityOptions s) {
+        if (!s.equals(stability)) {
+            stability = s;
+            setDirty(true);
+            stale("the control-chart settings changed after the analysis");
         }
     }
 
@@ -589,6 +605,7 @@ public final class StudySession {
             criteria.load(s.data().characteristics(), resolved, s.settings().alpha());
             equalVariances = s.settings().equalVariances();
             holm = s.settings().holm();
+            stability = s.settings().stability();
             methods = s.settings().methods();
             exclusions = s.settings().exclusions();
             signOff.load(s.signatures());
@@ -683,7 +700,7 @@ public final class StudySession {
             throw new IllegalStateException(ap);
         }
         return new AnalysisSettings(Double.parseDouble(criteria.alpha()), equalVariances, holm, null, per, null,
-                exclusions, methods);
+                exclusions, methods, stability);
     }
 
     /**
@@ -729,7 +746,7 @@ public final class StudySession {
         }
         try {
             r = service.analyze(chosenData, new AnalysisSettings(wide.alpha(), wide.equalVariances(),
-                    wide.holm(), null, per, null, List.of()), p);
+                    wide.holm(), null, per, null, List.of()).withStability(wide.stability()), p);
         } catch (org.holdpoint.workflow.StudyProblem e) {
             problem = UserMessage.of(e);
         }

@@ -8,6 +8,8 @@ import javax.swing.BorderFactory;
 import javax.swing.DefaultCellEditor;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
+import org.holdpoint.stats.ControlChart;
+import org.holdpoint.study.StabilityOptions;
 import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
@@ -48,11 +50,16 @@ final class CriteriaPanel extends JPanel {
     private final JLabel alphaProblem = new JLabel(" ");
     private final JComboBox<String> variance = new JComboBox<>(new String[] {WELCH, POOLED});
     private final JCheckBox holm = new JCheckBox("Holm-adjust difference p-values");
+    private final JCheckBox rowOrder = new JCheckBox("Rows are in run order");
+    private final JComboBox<String> controlTests = new JComboBox<>(new String[] {TESTS_1_3, TESTS_ALL});
     private final JButton fillDown = new JButton("Fill down");
     private final JComboBox<String> copySource = new JComboBox<>();
     private final JButton copy = new JButton("Copy to selected");
     private final JButton analyse = new JButton("Analyse");
     private final JLabel summary = new JLabel(" ");
+
+    private static final String TESTS_1_3 = "tests 1\u20133";
+    private static final String TESTS_ALL = "all tests 1\u20138";
 
     CriteriaPanel(StudySession session) {
         super(new BorderLayout());
@@ -78,7 +85,7 @@ final class CriteriaPanel extends JPanel {
             }
         }
         // shares of the width at 1280 pixels; the whole reason of a problem is above the table and in the tip
-        int[] widths = {175, 38, 38, 62, 68, 62, 100, 95, 82, 82, 78, 80, 55};
+        int[] widths = {165, 36, 36, 58, 62, 58, 92, 88, 76, 76, 70, 76, 52, 70};
         for (int i = 0; i < widths.length; i++) {
             grid.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -95,9 +102,18 @@ final class CriteriaPanel extends JPanel {
         variance.addActionListener(e -> session.setEqualVariances(POOLED.equals(variance.getSelectedItem())));
         holm.setMnemonic('H');
         holm.addActionListener(e -> session.setHolm(holm.isSelected()));
+        rowOrder.setMnemonic('R');
+        rowOrder.setToolTipText("Draw control charts in the order of the file's rows where the data have no sequence "
+                + "or date column; tick only when the rows are in the order the parts were made");
+        rowOrder.addActionListener(e -> applyStability());
+        controlTests.setToolTipText("The ISO 7870-2 tests applied to the control charts");
+        controlTests.addActionListener(e -> applyStability());
         session.addListener(StudySession.Property.DATA, e -> {
             variance.setSelectedItem(session.equalVariances() ? POOLED : WELCH);
             holm.setSelected(session.holm());
+            rowOrder.setSelected(session.stability().rowOrderIsRunOrder());
+            controlTests.setSelectedItem(session.stability().tests().equals(ControlChart.ALL_TESTS) ? TESTS_ALL
+                    : TESTS_1_3);
         });
         fillDown.setMnemonic('F');
         fillDown.setToolTipText("Copy the first selected cell of each selected column into the selected rows below "
@@ -126,6 +142,14 @@ final class CriteriaPanel extends JPanel {
         session.addListener(StudySession.Property.BUSY, e -> analyse.setEnabled(!session.busy()));
     }
 
+    private void applyStability() {
+        // a list other than 1-3 or 1-8 (from the command line or a saved study) is kept until the user picks one
+        java.util.SortedSet<Integer> tests = TESTS_ALL.equals(controlTests.getSelectedItem()) ? ControlChart.ALL_TESTS
+                : session.stability().tests().equals(ControlChart.ALL_TESTS) ? ControlChart.DEFAULT_TESTS
+                : session.stability().tests();
+        session.setStability(new StabilityOptions(rowOrder.isSelected(), tests));
+    }
+
     private void layoutComponents() {
         JPanel top = new JPanel(new BorderLayout());
         top.setBorder(BorderFactory.createEmptyBorder(16, 24, 8, 24));
@@ -141,6 +165,10 @@ final class CriteriaPanel extends JPanel {
         study.add(Bind.label("Difference test", 'T', variance));
         study.add(variance);
         study.add(holm);
+        study.add(javax.swing.Box.createHorizontalStrut(12));
+        study.add(Bind.label("Control charts", 'N', controlTests));
+        study.add(controlTests);
+        study.add(rowOrder);
         top.add(study, BorderLayout.CENTER);
         JPanel tools = new JPanel(new FlowLayout(FlowLayout.LEFT, 8, 0));
         tools.add(fillDown);
