@@ -60,7 +60,7 @@ public final class RunChart {
             CombinedDomainXYPlot both = new CombinedDomainXYPlot(x);
             both.setGap(8);
             both.add(location, 3);
-            both.add(spreadPlot(st, nb, d, theme), 2);
+            both.add(spreadPlot(r, st, nb, d, theme), 2);
             chart = new JFreeChart(r.name(), theme.titleFont(), both, false);
         } else {
             location.setDomainAxis(x);
@@ -128,7 +128,7 @@ public final class RunChart {
         }
         values.addSeries(before);
         values.addSeries(after);
-        NumberAxis y = new NumberAxis(Numbers.axisLabel(r.name(), r.unit()) + (means ? ", subgroup mean" : ""));
+        NumberAxis y = new NumberAxis(means ? Numbers.axisLabel("mean", r.unit()) : Numbers.axisLabel(r.name(), r.unit()));
         y.setAutoRangeIncludesZero(false);
         XYPlot plot = new XYPlot(values, null, y, pointRenderer(theme));
         ControlChart.Limits l = pb.own();
@@ -178,7 +178,7 @@ public final class RunChart {
         return plot;
     }
 
-    private static XYPlot spreadPlot(Stability st, int nb, int d, ChartTheme theme) {
+    private static XYPlot spreadPlot(CharacteristicResult r, Stability st, int nb, int d, ChartTheme theme) {
         ControlChart.Phase pb = st.before();
         ControlChart.Phase pa = st.after();
         XYSeriesCollection values = new XYSeriesCollection();
@@ -196,7 +196,7 @@ public final class RunChart {
         }
         values.addSeries(before);
         values.addSeries(after);
-        NumberAxis y = new NumberAxis("subgroup sd");
+        NumberAxis y = new NumberAxis(Numbers.axisLabel("sd", r.unit()));
         XYLineAndShapeRenderer renderer = pointRenderer(theme);
         renderer.setSeriesVisibleInLegend(0, false);
         renderer.setSeriesVisibleInLegend(1, false);
@@ -209,8 +209,10 @@ public final class RunChart {
         if (l.spreadLcl() > 0) {
             plot.addRangeMarker(line(l.spreadLcl(), "LCL " + Numbers.fixed(l.spreadLcl(), d), theme, true));
         }
-        plot.addDomainMarker(change(nb, theme));
-        y.setRange(0, hi * 1.12);
+        ValueMarker change = change(nb, theme);
+        change.setLabel(null);
+        plot.addDomainMarker(change);
+        y.setRange(0, hi * 1.3);
         plot.setDataset(2, rings(plot, pb, pa, nb, ControlChart.Chart.SPREAD, theme));
         XYLineAndShapeRenderer ring = ringRenderer();
         ring.setSeriesVisibleInLegend(0, false);

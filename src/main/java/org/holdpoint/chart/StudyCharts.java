@@ -144,7 +144,9 @@ public final class StudyCharts {
                                 fits(result)), theme.width(), h)));
         if (result.checks() != null && result.checks().stability() != null) {
             out.add(new NamedChart(stem + ChartKind.RUN_CHART.fileSuffix() + ".png", ChartKind.RUN_CHART, data.name(),
-                    RunChart.create(result, d.resolutionDecimals() + 2, theme), theme.width(), h));
+                    RunChart.create(result, d.resolutionDecimals() + 2, theme), theme.width(),
+                    // the means chart above the sd chart needs more height than one plot
+                    result.checks().stability().kind() == org.holdpoint.stats.ControlChart.Kind.MEANS ? h * 1.3 : h));
         }
         return out;
     }

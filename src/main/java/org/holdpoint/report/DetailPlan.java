@@ -115,7 +115,7 @@ final class DetailPlan {
      */
     private int layout2(int row, int index, String n, CharacteristicResult c, List<NamedImage> charts, int count) {
         if (count > 0) {
-            s.captions.add(new ShownCell(row, c0, caption(charts, 0, n, fittedFamily(c)), Style.LABEL, 0, n + CAPTION));
+            s.captions.add(new ShownCell(row, c0, caption(charts, 0, n, fittedFamily(c), means(c)), Style.LABEL, 0, n + CAPTION));
             if (!charts.isEmpty()) {
                 s.images.add(new SheetContent.PlacedImage(charts.get(0), row + 1, c0, WIDE_CHART_WIDTH_POINTS));
             }
@@ -129,7 +129,7 @@ final class DetailPlan {
         for (int i = 1; i < count; i += 2) {
             for (int j = i; j < Math.min(i + 2, count); j++) {
                 int col = c0 + ((j - 1) % 2 == 0 ? 0 : 3);
-                s.captions.add(new ShownCell(row, col, caption(charts, j, n, fittedFamily(c)), Style.LABEL, 0, n + CAPTION));
+                s.captions.add(new ShownCell(row, col, caption(charts, j, n, fittedFamily(c), means(c)), Style.LABEL, 0, n + CAPTION));
                 if (j < charts.size()) {
                     s.images.add(new SheetContent.PlacedImage(charts.get(j), row + 1, col, CHART_WIDTH_POINTS));
                 }
@@ -142,6 +142,11 @@ final class DetailPlan {
         return row + 1;
     }
 
+    private static boolean means(CharacteristicResult c) {
+        return c.checks() != null && c.checks().stability() != null
+                && c.checks().stability().kind() == org.holdpoint.stats.ControlChart.Kind.MEANS;
+    }
+
     /**
      * A chart's caption in words, from the kind its file name ends with (the names are NNN-name-kind.png).
      *
@@ -151,7 +156,7 @@ final class DetailPlan {
      * @return e.g. "Box plot of Bore diameter: before and after, every value shown"
      */
     static String caption(List<NamedImage> charts, int j, String n) {
-        return caption(charts, j, n, null);
+        return caption(charts, j, n, null, false);
     }
 
     /** The family the charts draw when capability is judged by a fitted distribution, else null (normal). */
@@ -168,9 +173,10 @@ final class DetailPlan {
      * @param j      the chart's position
      * @param n      the characteristic's name
      * @param family the fitted family the histogram and probability plot draw, or null for the normal model
+     * @param means  whether the control chart is of subgroup means and sds
      * @return the caption
      */
-    static String caption(List<NamedImage> charts, int j, String n, String family) {
+    static String caption(List<NamedImage> charts, int j, String n, String family, boolean means) {
         String file = j < charts.size() ? charts.get(j).name() : "";
         String what;
         if (file.endsWith("-box.png")) {
@@ -178,7 +184,8 @@ final class DetailPlan {
         } else if (file.endsWith("-histogram.png")) {
             what = "Histograms on common bins, fitted " + (family == null ? "normal" : family) + " curve";
         } else if (file.endsWith("-control.png")) {
-            what = "Individuals chart of " + n + " in run order, with the limits of the before phase";
+            what = (means ? "Charts of the subgroup means and sds of " : "Individuals chart of ") + n
+                    + " in run order, with the limits of the before phase";
         } else if (file.endsWith("-normal-plot.png")) {
             what = family == null ? "Normal probability plot" : "Probability plot against the fitted " + family
                     + " distribution";

@@ -109,6 +109,18 @@ final class TextBlocks {
                 + "unless named; the normal model is kept within 2 of the lowest AIC): Pp and Ppk from its 0.135 %, "
                 + "50 % and 99.865 % points (ISO 22514-2:2017 percentile method), ppm from its tails, and the lower "
                 + "bound of Ppk by a parametric bootstrap with a recorded seed." : ""));
+        if (set.since(4)) {
+            // generation 4 states its control charts (earlier records keep the text they were signed with)
+            put.accept("Stability", "Control charts in run order (ISO 7870-2:2013) with the limits of the before "
+                    + "phase: individuals and moving ranges (\u03c3\u0302 = mean moving range / d\u2082), or with a "
+                    + "subgroup column the subgroup means and standard deviations (\u03c3\u0302 = mean of s/c\u2084(n), "
+                    + "each subgroup judged against the limits for its own size). Run order from "
+                    + (set.stability().rowOrderIsRunOrder() ? "the sequence or date column, else the file's row order "
+                            + "(the user said the rows are in run order)" : "the sequence or date column")
+                    + "; tests " + set.stability().testWords() + " on the individuals or means chart, test 1 on the sd "
+                    + "chart. A signal is a finding of the verdict; where the criteria require stability, a signal "
+                    + "of the after phase fails the characteristic.");
+        }
         for (CharacteristicResult c : plan.input.result().characteristics()) {
             put.accept("Margin: " + c.name(), marginText(set, c));
         }

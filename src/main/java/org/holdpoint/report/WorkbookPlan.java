@@ -357,6 +357,11 @@ final class WorkbookPlan {
         if (c.capabilityFailed()) {
             failed.add("capability");
         }
+        if (c.stabilityFailed()) {
+            failed.add("stability");
+        } else if (c.stabilityNotShown()) {
+            failed.add("stability not shown");
+        }
         return failed.isEmpty() ? "all criteria met" : String.join("; ", failed);
     }
 

@@ -262,6 +262,20 @@ public record CharacteristicResult(String name, String unit, CharacteristicSetti
         return sdGrowth() != null && !sdGrowth().met();
     }
 
+    /**
+     * @return whether stability is required and the after phase signals against the before limits
+     *         (docs/methods.md §16)
+     */
+    public boolean stabilityFailed() {
+        return Boolean.TRUE.equals(settings().requireStability()) && checks != null && checks.stability() != null
+                && !checks.stability().after().signals().isEmpty();
+    }
+
+    /** @return whether stability is required but no control chart could be drawn, so it is not shown */
+    public boolean stabilityNotShown() {
+        return Boolean.TRUE.equals(settings().requireStability()) && (checks == null || checks.stability() == null);
+    }
+
     /** @return whether the capability requirement was judged and not met */
     public boolean capabilityFailed() {
         return checks != null && Boolean.FALSE.equals(checks.capabilityMet());

@@ -73,4 +73,35 @@ class StudyFileVersionsTest {
         // the fields a later version adds are no difference of the stored results
         assertThat(v.notes()).noneMatch(n -> n.contains("stored results differ") || n.contains("fault of the program"));
     }
+
+    /**
+     * Schema 3, written by the build before subgroup charts existed (commit 083a4c9) for an invented press-transfer
+     * study with a subgroup column and day.month.year time stamps: it is read as method generation 3, so its control
+     * charts stay individuals charts in the sequence column's text order, and its workbook still verifies.
+     */
+    @Test
+    void schemaVersionThreeKeepsItsIndividualsChartsAndItsWorkbookStillVerifies() throws Exception {
+        Path file = resource("study-v3-clip.json");
+        JsonNode stored = StudyFiles.tree(Files.readString(file));
+        assertThat(stored.path("schemaVersion").asInt()).isEqualTo(3);
+        ChangeStudy study = StudyFiles.read(file);
+        assertThat(study.settings().methods()).isEqualTo(3);
+        assertThat(study.data().characteristics().get(0).before().hasSubgroups()).isTrue();
+        StudyResult again = reComputesToItsStoredVerdicts(study, stored);
+        again.characteristics().forEach(r -> {
+            assertThat(r.checks().stability().kind()).as(r.name())
+                    .isEqualTo(org.holdpoint.stats.ControlChart.Kind.INDIVIDUALS);
+            assertThat(r.notes()).noneMatch(n -> n.contains("control limits rest on"));
+        });
+        VerifyResult v = new VerifyUseCase().verify(resource("signoff-v3-clip.xlsx"), null, Progress.NONE);
+        assertThat(v.differences()).isEmpty();
+        assertThat(v.status()).isEqualTo(VerifyResult.Status.INTACT);
+        // the same study with the current methods charts the subgroups
+        var current = new org.holdpoint.study.AnalysisSettings(study.settings().alpha(), false, false,
+                study.settings().defaults(), study.settings().perCharacteristic(), study.settings().overrides(),
+                study.settings().exclusions());
+        StudyResult now = new StudyAnalyzer().analyze(study.data(), current, Progress.NONE);
+        assertThat(now.characteristics().get(0).checks().stability().kind())
+                .isEqualTo(org.holdpoint.stats.ControlChart.Kind.MEANS);
+    }
 }

@@ -119,7 +119,7 @@ class StudyFilesTest {
         ChangeStudy back = StudyFiles.read(file);
         assertThat(back.settings()).isEqualTo(settings);
         com.fasterxml.jackson.databind.JsonNode tree = StudyFiles.tree(Files.readString(file));
-        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(3);
+        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(StudyFiles.SCHEMA_VERSION);
         com.fasterxml.jackson.databind.JsonNode saved = tree.path("settings");
         assertThat(saved.path("perCharacteristic").path("Shaft length").path("margin").asDouble()).isEqualTo(0.25);
         assertThat(saved.path("perCharacteristic").path("Web").path("margin_percent").asDouble()).isEqualTo(10);

@@ -27,7 +27,7 @@ public final class CriteriaTable {
     /** Choice of {@link CriteriaColumn#PAIRED}: take the design from the data layout. */
     public static final String FROM_DATA = "from data";
     /** Choice of {@link CriteriaColumn#STABILITY}: a control-chart signal is a finding only. */
-    public static final String FINDING_ONLY = "finding only";
+    public static final String FINDING_ONLY = "finding";
     /** Choice of {@link CriteriaColumn#STABILITY}: a signal of the after phase fails the characteristic. */
     public static final String REQUIRED = "required";
     /** Choice of {@link CriteriaColumn#DISTRIBUTION}: the default rule decides (docs/methods.md §14). */

@@ -106,6 +106,12 @@ public enum VerdictLook {
                     : org.holdpoint.result.Format.ratio(cap.ppkLower())) + " below "
                     + org.holdpoint.result.Format.num(r.settings().capabilityRequirement()));
         }
+        if (r.stabilityFailed()) {
+            failed.add("stability: " + r.checks().stability().after().signals().size() + " after-phase signal"
+                    + (r.checks().stability().after().signals().size() == 1 ? "" : "s"));
+        } else if (r.stabilityNotShown()) {
+            failed.add("stability: not shown (no control chart)");
+        }
         var eq = r.decidingTost();
         failed.add("mean: " + (eq == null ? "no margin set" : eq.conclusion().words()));
         return String.join("; ", failed);

@@ -85,7 +85,7 @@ final class CriteriaPanel extends JPanel {
             }
         }
         // shares of the width at 1280 pixels; the whole reason of a problem is above the table and in the tip
-        int[] widths = {165, 36, 36, 58, 62, 58, 92, 88, 76, 76, 70, 76, 52, 70};
+        int[] widths = {150, 34, 36, 54, 60, 56, 96, 84, 74, 76, 72, 74, 66, 46};
         for (int i = 0; i < widths.length; i++) {
             grid.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
@@ -165,11 +165,14 @@ final class CriteriaPanel extends JPanel {
         study.add(Bind.label("Difference test", 'T', variance));
         study.add(variance);
         study.add(holm);
-        study.add(javax.swing.Box.createHorizontalStrut(12));
-        study.add(Bind.label("Control charts", 'N', controlTests));
-        study.add(controlTests);
-        study.add(rowOrder);
-        top.add(study, BorderLayout.CENTER);
+        JPanel charts = new JPanel(new FlowLayout(FlowLayout.LEFT, 8, 2));
+        charts.add(Bind.label("Control charts: ISO 7870-2", 'N', controlTests));
+        charts.add(controlTests);
+        charts.add(rowOrder);
+        JPanel options = new JPanel(new BorderLayout());
+        options.add(study, BorderLayout.NORTH);
+        options.add(charts, BorderLayout.SOUTH);
+        top.add(options, BorderLayout.CENTER);
         JPanel tools = new JPanel(new FlowLayout(FlowLayout.LEFT, 8, 0));
         tools.add(fillDown);
         tools.add(Bind.label("Copy from", 'P', copySource));

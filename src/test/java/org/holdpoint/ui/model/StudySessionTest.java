@@ -318,11 +318,11 @@ class StudySessionTest {
                 assertThat(c.checks().after().percentile()).as(c.name()).isNull();
             }
         }
-        // saved again (schema 3), it says which methods it keeps, so that it opens the same way next time
+        // saved again (the current schema), it says which methods it keeps, so that it opens the same way next time
         Path again = dir.resolve("old-methods.holdpoint.json");
         other.save(again, () -> { });
         var tree = org.holdpoint.workflow.StudyFiles.tree(java.nio.file.Files.readString(again));
-        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(3);
+        assertThat(tree.path("schemaVersion").asInt()).isEqualTo(org.holdpoint.workflow.StudyFiles.SCHEMA_VERSION);
         assertThat(tree.path("settings").path("methods").asInt()).isEqualTo(2);
     }
 
