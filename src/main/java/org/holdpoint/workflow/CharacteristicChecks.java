@@ -129,7 +129,8 @@ final class CharacteristicChecks {
             ControlChart.Limits limits = ControlChart.limits(b);
             // the signals are findings of the verdict (Verdicts), not notes
             return new Stability(ControlChart.judge(b, limits), ControlChart.judge(a, limits),
-                    describe(c.before(), ob), describe(c.after(), oa), "the sequence column", ControlChart.DEFAULT_TESTS);
+                    describe(c.before(), unboxed(ob)), describe(c.after(), unboxed(oa)), "the sequence column",
+                    ControlChart.DEFAULT_TESTS);
         } catch (StatsException e) {
             notes.add("no control chart: " + e.getMessage());
             return null;
@@ -276,7 +277,7 @@ final class CharacteristicChecks {
         return r;
     }
 
-    private static List<String> describe(GroupData g, Integer[] order) {
+    private static List<String> describe(GroupData g, int[] order) {
         List<String> r = new ArrayList<>();
         for (int i : order) {
             r.add(g.origin(i).describe());
@@ -284,12 +285,8 @@ final class CharacteristicChecks {
         return r;
     }
 
-    private static List<String> describe(GroupData g, int[] order) {
-        List<String> r = new ArrayList<>();
-        for (int i : order) {
-            r.add(g.origin(i).describe());
-        }
-        return r;
+    private static int[] unboxed(Integer[] order) {
+        return java.util.Arrays.stream(order).mapToInt(Integer::intValue).toArray();
     }
 
     private static double[] values(GroupData g, int[] order) {
