@@ -28,7 +28,8 @@ public final class DistributionFits {
     }
 
     /**
-     * Fits a family, starting a one-dimensional solver from a known shape (the bootstrap refits near it).
+     * Fits a family, starting a one-dimensional solver from a known shape (the bootstrap refits near it); such a
+     * refit carries no log-likelihood (NaN).
      *
      * @param family     the family
      * @param x          the values
@@ -98,6 +99,11 @@ public final class DistributionFits {
                 b = Double.NaN;
             }
             default -> throw new IllegalStateException("unknown family " + family);
+        }
+        if (!Double.isNaN(shapeStart)) {
+            // a bootstrap refit: only its quantiles are used, so its log-likelihood (a logarithm per value, for the
+            // gamma also a log-gamma per value) is not summed
+            return new FittedDistribution(family, a, b, n, Double.NaN);
         }
         CompensatedSum ll = new CompensatedSum();
         for (double v : x) {

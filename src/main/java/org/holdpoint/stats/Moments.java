@@ -57,6 +57,41 @@ final class Moments {
             return decimal ? BigDecimal.valueOf(unscaled, scale) : new BigDecimal(value);
         }
 
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Reference r && r.decimal == decimal && r.scale == scale && r.unscaled == unscaled
+                    && Double.compare(r.value, value) == 0;
+        }
+
+        @Override
+        public int hashCode() {
+            return java.util.Objects.hash(decimal, scale, unscaled, value);
+        }
+
+        /**
+         * The reference of a pair of samples, kept with the first one: every test of a characteristic asks for it
+         * again, and finding it is a pass over both samples.
+         */
+        static Reference common(Sample a, Sample b) {
+            Object[] memo = a.pairMemo();
+            if (memo != null && memo[0] == b) {
+                return (Reference) memo[1];
+            }
+            Reference r = common(new Sample[] {a, b});
+            a.pairMemo(new Object[] {b, r});
+            return r;
+        }
+
+        /** The reference of one sample, kept with it. */
+        static Reference common(Sample a) {
+            Reference r = a.ownReference();
+            if (r == null) {
+                r = common(new Sample[] {a});
+                a.ownReference(r);
+            }
+            return r;
+        }
+
         /** The first value of the first non-empty sample, exact decimal when all samples allow it. */
         static Reference common(Sample... samples) {
             Sample first = null;
@@ -137,6 +172,18 @@ final class Moments {
     }
 
     static Moments of(Sample s, Reference ref) {
+        // kept with the sample: a characteristic's tests ask for the same moments again and again, and each is a
+        // pass over every value (a large part of the analysis of a million values)
+        Object[] memo = s.momentsMemo();
+        if (memo != null && ref.equals(memo[0])) {
+            return (Moments) memo[1];
+        }
+        Moments m = compute(s, ref);
+        s.momentsMemo(new Object[] {ref, m});
+        return m;
+    }
+
+    private static Moments compute(Sample s, Reference ref) {
         double[] r = residuals(s, ref);
         int n = r.length;
         if (n == 0) {

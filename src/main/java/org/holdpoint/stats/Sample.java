@@ -28,6 +28,12 @@ public final class Sample {
     private final int scale;
     /** The values in ascending order, computed once on first use (a benign race: every copy is equal). */
     private volatile double[] sorted;
+    /** {reference, moments}: the last moments computed (Moments.of); replaced whole, so a reader sees a pair. */
+    private volatile Object[] momentsMemo;
+    /** {other sample, reference}: the last pair reference computed with this sample first. */
+    private volatile Object[] pairMemo;
+    /** The reference of this sample alone, once computed. */
+    private volatile Moments.Reference ownReference;
 
     private Sample(double[] values, long[] unscaled, int scale) {
         this.values = values;
@@ -131,6 +137,30 @@ public final class Sample {
             throw new StatsException("value %d is not a finite number (%s)", index + 1, v);
         }
         return v;
+    }
+
+    Object[] momentsMemo() {
+        return momentsMemo;
+    }
+
+    void momentsMemo(Object[] m) {
+        momentsMemo = m;
+    }
+
+    Moments.Reference ownReference() {
+        return ownReference;
+    }
+
+    void ownReference(Moments.Reference r) {
+        ownReference = r;
+    }
+
+    Object[] pairMemo() {
+        return pairMemo;
+    }
+
+    void pairMemo(Object[] m) {
+        pairMemo = m;
     }
 
     /** @return the number of values */

@@ -61,7 +61,49 @@ final class CharacteristicChecks {
      */
     static final int ESD_MAX_OUTLIERS = 10;
 
+    /** From this many values in both groups the rank comparison runs beside the group checks (measured). */
+    static final int PARALLEL_N = 20_000;
+
     private CharacteristicChecks() {
+    }
+
+    /** The distribution-free comparison and its notes. */
+    private record Ranks(RankSumResult rankSum, SignedRankResult signedRank, List<String> notes) {
+    }
+
+    private static Ranks ranks(CharacteristicData c, Margin margin, double alpha, boolean paired) {
+        List<String> notes = new ArrayList<>();
+        try {
+            if (paired) {
+                SignedRankTest t = SignedRankTest.withDefaults().withAlpha(alpha);
+                SignedRankResult r = (margin == null ? t : t.withMargin(margin)).test(c.before().sample(),
+                        c.after().sample());
+                r.notes().forEach(n -> notes.add("signed rank: " + n));
+                return new Ranks(null, r, notes);
+            }
+            RankSumTest t = RankSumTest.withDefaults().withAlpha(alpha);
+            RankSumResult r = (margin == null ? t : t.withMargin(margin)).test(c.before().sample(), c.after().sample());
+            r.notes().forEach(n -> notes.add("rank sum: " + n));
+            return new Ranks(r, null, notes);
+        } catch (StatsException e) {
+            notes.add("distribution-free comparison not computed: " + e.getMessage());
+            return new Ranks(null, null, notes);
+        }
+    }
+
+    /** The background result; an unexpected failure is rethrown as it was (it is a bug, not a finding). */
+    private static Ranks joined(java.util.concurrent.CompletableFuture<Ranks> f) {
+        try {
+            return f.join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            throw e;
+        }
     }
 
     static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Margin margin, double alpha,
@@ -74,23 +116,17 @@ final class CharacteristicChecks {
                 : FamilySelection.given(DistributionFamily.NORMAL, "the record was computed with the methods of "
                         + "its time (normal model)");
         DistributionFamily family = distribution == null ? DistributionFamily.NORMAL : distribution.chosen();
+        // with many values the distribution-free comparison runs beside the group checks (the results and the
+        // order of the notes are those of one after the other)
+        java.util.function.Supplier<Ranks> ranking = () -> ranks(c, margin, alpha, paired);
+        java.util.concurrent.CompletableFuture<Ranks> background = c.before().size() + c.after().size() >= PARALLEL_N
+                ? java.util.concurrent.CompletableFuture.supplyAsync(ranking) : null;
         GroupChecks before = group("before", c.before(), nb, s, family, alpha, notes);
         GroupChecks after = group("after", c.after(), na, s, family, alpha, notes);
-        RankSumResult rankSum = null;
-        SignedRankResult signedRank = null;
-        try {
-            if (paired) {
-                SignedRankTest t = SignedRankTest.withDefaults().withAlpha(alpha);
-                signedRank = (margin == null ? t : t.withMargin(margin)).test(c.before().sample(), c.after().sample());
-                signedRank.notes().forEach(n -> notes.add("signed rank: " + n));
-            } else {
-                RankSumTest t = RankSumTest.withDefaults().withAlpha(alpha);
-                rankSum = (margin == null ? t : t.withMargin(margin)).test(c.before().sample(), c.after().sample());
-                rankSum.notes().forEach(n -> notes.add("rank sum: " + n));
-            }
-        } catch (StatsException e) {
-            notes.add("distribution-free comparison not computed: " + e.getMessage());
-        }
+        Ranks ranks = background == null ? ranking.get() : joined(background);
+        RankSumResult rankSum = ranks.rankSum();
+        SignedRankResult signedRank = ranks.signedRank();
+        notes.addAll(ranks.notes());
         Boolean capabilityMet = null;
         if (s.capabilityRequirement() != null) {
             if (after.ppkLower() == null) {

@@ -34,6 +34,20 @@ import org.holdpoint.result.Format;
  * verdict. Pure computation over the study model; the numbers come from {@code stats}.
  */
 public final class StudyAnalyzer {
+    private final boolean parallel;
+
+    /** An analyser that uses every core. */
+    public StudyAnalyzer() {
+        this(true);
+    }
+
+    /**
+     * @param parallel whether characteristics are analysed side by side (false: one by one, for the test that
+     *                 both give the same result)
+     */
+    public StudyAnalyzer(boolean parallel) {
+        this.parallel = parallel;
+    }
 
     /**
      * Analyses every characteristic.
@@ -48,30 +62,27 @@ public final class StudyAnalyzer {
         if (data.characteristics().isEmpty()) {
             throw new AnalysisException("the data hold no characteristic with values; check the layout and columns");
         }
+        // the characteristics are independent: analysed side by side on the machine's cores, each result in its
+        // place, so that the outcome is the same as one by one (a test compares them); progress and cancelling
+        // go through one lock, since the port is not required to be thread-safe
+        List<CharacteristicData> all = data.characteristics();
+        CharacteristicResult[] done = new CharacteristicResult[all.size()];
+        java.util.concurrent.atomic.AtomicInteger started = new java.util.concurrent.atomic.AtomicInteger();
+        java.util.stream.IntStream range = java.util.stream.IntStream.range(0, all.size());
+        (parallel && all.size() > 1 ? range.parallel() : range).forEach(k -> {
+            CharacteristicData c = all.get(k);
+            synchronized (progress) {
+                progress.checkCancelled();
+                progress.step("analysing " + c.name(), (double) started.getAndIncrement() / all.size());
+            }
+            done[k] = analyzeWithNotes(c, settings, data);
+        });
+        List<CharacteristicResult> results = new ArrayList<>(java.util.Arrays.asList(done));
         List<String> problems = new ArrayList<>();
-        List<CharacteristicResult> results = new ArrayList<>();
-        int i = 0;
-        for (CharacteristicData c : data.characteristics()) {
-            progress.checkCancelled();
-            progress.step("analysing " + c.name(), (double) i++ / data.characteristics().size());
-            CharacteristicResult r;
-            try {
-                r = analyzeOne(c, settings);
-            } catch (StatsException | CharacteristicProblem e) {
-                // reported on this characteristic only; the rest of the study goes on
-                r = notAssessable(c, settings, e.getMessage());
-            }
+        for (CharacteristicResult r : results) {
             if (r.verdict().status() == org.holdpoint.result.Verdict.Status.NOT_ASSESSABLE) {
-                problems.add("characteristic \"" + c.name() + "\": " + String.join("; ", r.verdict().reasons()));
+                problems.add("characteristic \"" + r.name() + "\": " + String.join("; ", r.verdict().reasons()));
             }
-            double unusable = data.report().unusableFraction(c.name());
-            if (unusable > UNUSABLE_LIMIT) {
-                List<String> notes = new ArrayList<>(r.notes());
-                notes.add(String.format(Locale.ROOT, "%.0f %% of this characteristic's cells could not be used "
-                        + "(see the import report); check the data before relying on the result", unusable * 100));
-                r = r.with(r.holmP(), r.verdict(), notes);
-            }
-            results.add(r);
         }
         if (problems.size() == results.size()) {
             throw new AnalysisException(problems);
@@ -80,6 +91,24 @@ public final class StudyAnalyzer {
             results = holm(results);
         }
         return Verdicts.overall(results);
+    }
+
+    private CharacteristicResult analyzeWithNotes(CharacteristicData c, AnalysisSettings settings, Dataset data) {
+        CharacteristicResult r;
+        try {
+            r = analyzeOne(c, settings);
+        } catch (StatsException | CharacteristicProblem e) {
+            // reported on this characteristic only; the rest of the study goes on
+            r = notAssessable(c, settings, e.getMessage());
+        }
+        double unusable = data.report().unusableFraction(c.name());
+        if (unusable > UNUSABLE_LIMIT) {
+            List<String> notes = new ArrayList<>(r.notes());
+            notes.add(String.format(Locale.ROOT, "%.0f %% of this characteristic's cells could not be used "
+                    + "(see the import report); check the data before relying on the result", unusable * 100));
+            r = r.with(r.holmP(), r.verdict(), notes);
+        }
+        return r;
     }
 
     /** Above this share of unusable cells a characteristic is flagged (common practice, no source). */
