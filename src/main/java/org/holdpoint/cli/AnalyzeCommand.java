@@ -240,9 +240,11 @@ final class AnalyzeCommand implements Callable<Integer> {
                         org.holdpoint.workflow.RecordSigning.readPublic(report.signPublicKey));
         ChangeStudy unsigned = new ChangeStudy(changeDescription(), outcome.data(), outcome.settings(), List.of(),
                 new org.holdpoint.study.Provenance(analyst(), runAt, signingKey));
-        // the record is the study without its sign-off entries; an entry names the record it signs
-        String recordSha = org.holdpoint.workflow.StudyFiles.recordSha256(org.holdpoint.workflow.StudyFiles.toJson(
-                unsigned, outcome.result()));
+        // the record is the study without its sign-off entries; an entry names the record it signs. Its hash is
+        // computed only when an output carries the record (for a million values it is a large part of the run)
+        boolean recorded = output.saveStudy != null || report.file != null || sig != null;
+        String recordSha = !recorded ? null : org.holdpoint.workflow.StudyFiles.recordSha256(
+                org.holdpoint.workflow.StudyFiles.toJson(unsigned, outcome.result()));
         ChangeStudy study = new ChangeStudy(unsigned.change(), unsigned.data(), unsigned.settings(),
                 sig == null ? List.of() : List.of(sig.stamped(runAt, recordSha)), unsigned.provenance());
         if (output.saveStudy != null) {
@@ -258,8 +260,11 @@ final class AnalyzeCommand implements Callable<Integer> {
                         output.saveStudy, e.getMessage());
             }
         }
+        // with both the workbook and the chart files, each chart is rendered once for both
+        org.holdpoint.workflow.RenderedCharts rendered = report.file != null && output.charts != null
+                ? ChartsUseCase.render(outcome) : null;
         if (report.file != null) {
-            writeReport(outcome, study);
+            writeReport(outcome, study, rendered);
         }
         if (output.json != null) {
             try {
@@ -271,7 +276,8 @@ final class AnalyzeCommand implements Callable<Integer> {
         }
         if (output.charts != null) {
             try {
-                var files = ChartsUseCase.write(outcome, output.charts);
+                var files = rendered != null ? ChartsUseCase.write(rendered, output.charts)
+                        : ChartsUseCase.write(outcome, output.charts);
                 spec.commandLine().getOut().printf(java.util.Locale.ROOT, "Wrote %d charts to %s%n", files.size(),
                         output.charts);
                 spec.commandLine().getOut().flush();
@@ -283,10 +289,11 @@ final class AnalyzeCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private void writeReport(AnalysisOutcome outcome, ChangeStudy study) {
+    private void writeReport(AnalysisOutcome outcome, ChangeStudy study,
+            org.holdpoint.workflow.RenderedCharts rendered) {
         ReportOptions options = ReportOptions.withDefaults().withTemplate(report.template)
                 .withExisting(report.overwrite ? ReportOptions.ExistingFile.REPLACE : ReportOptions.ExistingFile.REFUSE)
-                .withCharts(new org.holdpoint.workflow.StudyChartSource());
+                .withCharts(rendered != null ? rendered : new org.holdpoint.workflow.StudyChartSource());
         if (report.signKey != null) {
             options = options.withSigningKey(report.signKey, report.signPublicKey);
         }

@@ -47,12 +47,14 @@ final class DemoCommand implements Callable<Integer> {
         new TextOutput(spec.commandLine().getOut()).print(outcome.data(), outcome.settings(), outcome.result());
         Path json = out.resolve("result.json");
         AnalyzeUseCase.writeJson(outcome, json);
-        var charts = org.holdpoint.workflow.ChartsUseCase.write(outcome, out.resolve("charts"));
+        // each chart is rendered once, for the files and the workbook alike
+        var rendered = org.holdpoint.workflow.ChartsUseCase.render(outcome);
+        var charts = org.holdpoint.workflow.ChartsUseCase.write(rendered, out.resolve("charts"));
         ChangeStudy study = new ChangeStudy(DEMO_CHANGE, outcome.data(), outcome.settings(), List.of());
         var written = new org.holdpoint.workflow.ReportUseCase().write(study, outcome.result(),
                 org.holdpoint.workflow.ReportOptions.withDefaults()
                         .withExisting(org.holdpoint.workflow.ReportOptions.ExistingFile.REPLACE)
-                        .withCharts(new org.holdpoint.workflow.StudyChartSource()),
+                        .withCharts(rendered),
                 out.resolve(STUDY + "-signoff.xlsx"));
         Path studyFile = out.resolve(STUDY + ".study.json");
         org.holdpoint.workflow.StudyFiles.write(study, outcome.result(), studyFile);

@@ -18,7 +18,6 @@ import org.holdpoint.result.StudyResult;
  * probability plot, rendered to PNG by {@code chart} (the workbook receives only the bytes).
  */
 public final class StudyChartSource implements ChartSource {
-    private final StudyCharts charts = StudyCharts.withDefaults();
     private final Progress progress;
 
     /** Charts without progress reports. */
@@ -37,23 +36,6 @@ public final class StudyChartSource implements ChartSource {
 
     @Override
     public Map<String, List<NamedImage>> charts(ChangeStudy study, StudyResult result) {
-        Map<String, List<NamedImage>> out = new LinkedHashMap<>();
-        int n = result.characteristics().size();
-        for (int i = 0; i < n; i++) {
-            progress.checkCancelled();
-            CharacteristicResult r = result.characteristics().get(i);
-            progress.step("drawing the charts of " + r.name(), 0.8 * i / n);
-            CharacteristicData data = study.data().characteristics().stream().filter(c -> c.name().equals(r.name()))
-                    .findFirst().orElse(null);
-            if (data == null) {
-                continue;
-            }
-            List<NamedImage> images = new ArrayList<>();
-            for (NamedChart nc : charts.characteristicCharts(i + 1, n, r, data)) {
-                images.add(NamedImage.of(nc.fileName(), nc.png(charts.theme().scale())));
-            }
-            out.put(r.name(), images);
-        }
-        return out;
+        return RenderedCharts.render(result, study.data().characteristics(), true, progress).charts(study, result);
     }
 }
