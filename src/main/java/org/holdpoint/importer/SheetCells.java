@@ -3,8 +3,6 @@ package org.holdpoint.importer;
 import java.util.Arrays;
 import org.apache.poi.ss.usermodel.DateUtil;
 import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
-import org.apache.poi.xssf.model.StylesTable;
-import org.apache.poi.xssf.usermodel.XSSFCellStyle;
 
 /**
  * Turns the cells of a worksheet part (as a parser reports them) into {@link SheetData} cells: shared
@@ -14,7 +12,7 @@ import org.apache.poi.xssf.usermodel.XSSFCellStyle;
 final class SheetCells {
     private final SheetData data;
     private final ReadOnlySharedStringsTable strings;
-    private final StylesTable styles;
+    private final CellStyles styles;
     private final DecimalParser parser = new DecimalParser('.');
     private byte[] dateStyle = new byte[16];
     private byte[] sstKind = new byte[0];
@@ -28,7 +26,7 @@ final class SheetCells {
 
     private final boolean date1904;
 
-    SheetCells(SheetData data, ReadOnlySharedStringsTable strings, StylesTable styles, boolean date1904) {
+    SheetCells(SheetData data, ReadOnlySharedStringsTable strings, CellStyles styles, boolean date1904) {
         this.date1904 = date1904;
         this.data = data;
         this.strings = strings;
@@ -141,12 +139,7 @@ final class SheetCells {
             dateStyle = Arrays.copyOf(dateStyle, Math.max(s + 1, dateStyle.length * 2));
         }
         if (dateStyle[s] == 0) {
-            boolean date = false;
-            if (s < styles.getNumCellStyles()) {
-                XSSFCellStyle cs = styles.getStyleAt(s);
-                date = cs != null && DateUtil.isADateFormat(cs.getDataFormat(), cs.getDataFormatString());
-            }
-            dateStyle[s] = (byte) (date ? 1 : 2);
+            dateStyle[s] = (byte) (styles.isDate(s) ? 1 : 2);
         }
         return dateStyle[s] == 1;
     }

@@ -17,7 +17,6 @@ import org.apache.poi.openxml4j.opc.PackageAccess;
 import org.apache.poi.util.XMLHelper;
 import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
 import org.apache.poi.xssf.eventusermodel.XSSFReader;
-import org.apache.poi.xssf.model.StylesTable;
 import org.xml.sax.InputSource;
 import org.xml.sax.SAXException;
 import org.xml.sax.XMLReader;
@@ -100,10 +99,11 @@ final class XlsxReader {
             List<String> messages) throws IOException, OpenXML4JException, SAXException, ParserConfigurationException {
         XSSFReader reader = new XSSFReader(pkg);
         ReadOnlySharedStringsTable strings = new ReadOnlySharedStringsTable(pkg, false);
-        StylesTable styles;
-        try {
-            styles = reader.getStylesTable();
-        } catch (IOException | InvalidFormatException | POIXMLException e) {
+        CellStyles styles;
+        try (InputStream in = reader.getStylesData()) {
+            styles = CellStyles.read(in);
+        } catch (IOException | InvalidFormatException | POIXMLException | SAXException e) {
+            // a workbook without a readable styles part: no cell is known to hold a date, as before
             styles = null;
         }
         boolean date1904 = date1904(reader);
@@ -158,7 +158,7 @@ final class XlsxReader {
      * encoding, CDATA, a document type), with SAX from a fresh stream of the part.
      */
     /** What every sheet of a workbook shares. */
-    private record Context(ReadOnlySharedStringsTable strings, StylesTable styles, boolean date1904) {
+    private record Context(ReadOnlySharedStringsTable strings, CellStyles styles, boolean date1904) {
     }
 
     /** Whether the workbook counts dates from 1904 (workbookPr date1904, ECMA-376 Part 1 §18.2.28). */

@@ -163,6 +163,40 @@ class WorkbookImportTest {
         assertThat(c.after().subgroup(0)).isEqualTo("2");
     }
 
+    @org.junit.jupiter.api.Test
+    void aWorkbooksOwnDateFormatMarksItsCellsAsDates() throws Exception {
+        // a custom number format (id 164 and up, from the workbook's styles part) that shows a date and time, and
+        // one that shows a plain number: the first column is the run order's time stamp, the second the values
+        Path f = dir.resolve("stamped.xlsx");
+        try (org.apache.poi.xssf.usermodel.XSSFWorkbook wb = new org.apache.poi.xssf.usermodel.XSSFWorkbook()) {
+            var sheet = wb.createSheet("Log");
+            var stamp = wb.createCellStyle();
+            stamp.setDataFormat(wb.createDataFormat().getFormat("dd.mm.yyyy hh:mm"));
+            var plain = wb.createCellStyle();
+            plain.setDataFormat(wb.createDataFormat().getFormat("0.000 \"mm\""));
+            var h = sheet.createRow(0);
+            h.createCell(0).setCellValue("time stamp");
+            h.createCell(1).setCellValue("phase");
+            h.createCell(2).setCellValue("value");
+            for (int i = 0; i < 4; i++) {
+                var r = sheet.createRow(i + 1);
+                var t = r.createCell(0);
+                t.setCellValue(java.time.LocalDateTime.of(2026, 11, 30, 8 + i, 15));
+                t.setCellStyle(stamp);
+                r.createCell(1).setCellValue(i < 2 ? "before" : "after");
+                var v = r.createCell(2);
+                v.setCellValue(12.5 + i * 0.001);
+                v.setCellStyle(plain);
+            }
+            try (var out = java.nio.file.Files.newOutputStream(f)) {
+                wb.write(out);
+            }
+        }
+        CharacteristicData c = only(read(f));
+        assertThat(c.before().sequence(1)).isEqualTo("2026-11-30T09:15");
+        assertThat(values(c.after())).containsExactly(12.502, 12.503);
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"xlsx", "xls"})
     void unitIdsMayBeNumbers(String ext) {
