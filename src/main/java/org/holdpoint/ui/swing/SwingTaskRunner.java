@@ -36,9 +36,12 @@ final class SwingTaskRunner implements TaskRunner {
             @Override
             protected Outcome<T> doInBackground() {
                 progress.attach(Thread.currentThread());
+                // below the event thread, so that a scheduler that honours priorities lets the window paint first
+                Thread.currentThread().setPriority(Thread.MIN_PRIORITY);
                 try {
                     return TaskRunner.outcome(job, progress);
                 } finally {
+                    Thread.currentThread().setPriority(Thread.NORM_PRIORITY);
                     progress.attach(null);
                     Thread.interrupted();
                 }

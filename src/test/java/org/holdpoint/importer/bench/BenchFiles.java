@@ -76,6 +76,53 @@ public final class BenchFiles {
         return file;
     }
 
+    /**
+     * A wide CSV for the full battery: header group, c001 (mm) … ; {@code rows} rows, half before and half after,
+     * values ≈ 10 + c ± 0.05 with 4 decimals (the after half shifted by 0.002).
+     *
+     * @param file            where to write
+     * @param characteristics number of characteristic columns
+     * @param rows            number of data rows
+     * @return the file
+     * @throws IOException on write failure
+     */
+    public static Path wideCsv(Path file, int characteristics, int rows) throws IOException {
+        SplittableRandom rnd = new SplittableRandom(SEED);
+        StringBuilder sb = new StringBuilder("group");
+        for (int c = 0; c < characteristics; c++) {
+            sb.append(String.format(",c%03d (mm)", c + 1));
+        }
+        sb.append('\n');
+        for (int i = 0; i < rows; i++) {
+            boolean before = i < rows / 2;
+            sb.append(before ? "before" : "after");
+            for (int c = 0; c < characteristics; c++) {
+                double v = 10 + c + (before ? 0 : 0.002) + 0.05 * gaussian(rnd);
+                sb.append(',').append(java.math.BigDecimal.valueOf(Math.round(v * 10_000), 4).toPlainString());
+            }
+            sb.append('\n');
+        }
+        Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
+        Files.writeString(tmp, sb);
+        Files.move(tmp, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        return file;
+    }
+
+    /**
+     * Writes the files of the whole-process benchmark (docs/performance.md) into a folder: battery-200.csv (200
+     * characteristics, 500 + 500 rows) and million.xlsx (stacked, 500,000 + 500,000 values).
+     *
+     * @param args the folder
+     * @throws IOException on write failure
+     */
+    public static void main(String[] args) throws IOException {
+        Path dir = Path.of(args.length > 0 ? args[0] : "target/bench");
+        Files.createDirectories(dir);
+        wideCsv(dir.resolve("battery-200.csv"), 200, 1000);
+        stacked(dir.resolve("million.xlsx"), 500_000);
+        System.out.println("wrote " + dir.resolve("battery-200.csv") + " and " + dir.resolve("million.xlsx"));
+    }
+
     private static void write(SXSSFWorkbook wb, Path file) throws IOException {
         Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
         try (OutputStream out = Files.newOutputStream(tmp)) {
