@@ -266,6 +266,9 @@ public final class EquivalenceChart {
         if (r.capabilityFailed()) {
             failed.add("capability");
         }
+        if (r.toleranceFailed()) {
+            failed.add("tolerance interval");
+        }
         if (r.stabilityFailed()) {
             failed.add("stability");
         }

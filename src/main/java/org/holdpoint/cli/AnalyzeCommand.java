@@ -167,6 +167,13 @@ final class AnalyzeCommand implements Callable<Integer> {
                 + "family with the lowest AIC). Default: auto for a characteristic bounded at zero with an upper "
                 + "limit, or one that departs strongly from a normal shape; normal otherwise.")
         String distribution;
+        @Option(names = "--tolerance-coverage", paramLabel = "P", description = "Require the after group's "
+                + "tolerance interval covering this proportion of parts (e.g. 0.99) to lie inside the limits; with "
+                + "--tolerance-confidence.")
+        Double toleranceCoverage;
+        @Option(names = "--tolerance-confidence", paramLabel = "G", description = "The confidence of that tolerance "
+                + "interval (e.g. 0.95); with --tolerance-coverage.")
+        Double toleranceConfidence;
         @Option(names = "--require-stability", description = "Fail a characteristic whose after phase signals on "
                 + "its control chart against the before limits (default: a signal is a finding only).")
         boolean requireStability;
@@ -421,9 +428,24 @@ final class AnalyzeCommand implements Callable<Integer> {
                         + "' is not a distribution; use " + DistributionSetting.words());
             }
         }
+        org.holdpoint.study.ToleranceRequirement tolerance = null;
+        if ((c.toleranceCoverage == null) != (c.toleranceConfidence == null)) {
+            throw new CommandLine.ParameterException(spec.commandLine(), (c.toleranceCoverage == null
+                    ? "--tolerance-confidence needs --tolerance-coverage" : "--tolerance-coverage needs "
+                    + "--tolerance-confidence") + ": give both, e.g. --tolerance-coverage 0.99 --tolerance-confidence 0.95");
+        }
+        if (c.toleranceCoverage != null) {
+            try {
+                tolerance = new org.holdpoint.study.ToleranceRequirement(c.toleranceCoverage, c.toleranceConfidence);
+            } catch (IllegalArgumentException bad) {
+                throw new CommandLine.ParameterException(spec.commandLine(), (c.toleranceCoverage > 0
+                        && c.toleranceCoverage < 1 ? "--tolerance-confidence: " : "--tolerance-coverage: ")
+                        + bad.getMessage());
+            }
+        }
         CharacteristicSettings overrides = new CharacteristicSettings(c.unit, new SpecLimits(c.lsl, c.nominal, c.usl),
                 margin, c.sdGrowthLimit, null, input.paired ? Boolean.TRUE : null, distribution,
-                c.requireStability ? Boolean.TRUE : null);
+                c.requireStability ? Boolean.TRUE : null, tolerance);
         List<Exclusion> exclusions = new ArrayList<>();
         for (String e : method.exclude) {
             try {

@@ -122,6 +122,16 @@ public final class PlanCommand implements Callable<Integer> {
             + "specification limit; for two limits the nearer one, which decides when the process is off centre).")
     Double ppk;
 
+    @Option(names = "--distribution-free", description = "Plan a distribution-free tolerance interval (Wilks): the "
+            + "fewest parts whose smallest and largest values cover --tolerance-coverage of the population with "
+            + "--tolerance-confidence, two-sided and one-sided.")
+    boolean distributionFree;
+    @Option(names = "--tolerance-coverage", paramLabel = "P", description = "With --distribution-free: the proportion "
+            + "of parts to cover, e.g. 0.95.")
+    Double toleranceCoverage;
+    @Option(names = "--tolerance-confidence", paramLabel = "G", description = "With --distribution-free: the "
+            + "confidence, e.g. 0.95.")
+    Double toleranceConfidence;
     @Option(names = "--json", paramLabel = "FILE", description = "Also write the plan as JSON to FILE.")
     Path json;
 
@@ -153,6 +163,8 @@ public final class PlanCommand implements Callable<Integer> {
         try {
             if (from != null || input.before != null || input.after != null) {
                 document = fromData(out);
+            } else if (distributionFree || toleranceCoverage != null || toleranceConfidence != null) {
+                document = toleranceSample(out);
             } else if (successRun) {
                 SuccessRunResult r = successRunPlan().sampleSize();
                 out.print(PlanOutput.text(r));
@@ -464,6 +476,44 @@ public final class PlanCommand implements Callable<Integer> {
                     + "one-sided, non-inferiority or non-superiority, test)");
         }
         return new Margin(marginLower, marginUpper);
+    }
+
+    /** The distribution-free tolerance plan (Wilks 1941; docs/methods.md §17). */
+    private Map<String, Object> toleranceSample(PrintWriter out) {
+        if (!distributionFree) {
+            throw bad("--tolerance-coverage and --tolerance-confidence plan a tolerance interval with "
+                    + "--distribution-free (the normal interval needs no plan of its own: its factor k is computed "
+                    + "for any n)");
+        }
+        if (toleranceCoverage == null || toleranceConfidence == null) {
+            throw bad("--distribution-free needs --tolerance-coverage and --tolerance-confidence, e.g. 0.95 and 0.95");
+        }
+        int two;
+        int one;
+        try {
+            two = org.holdpoint.stats.ToleranceFactors.wilksSampleSize(toleranceCoverage, toleranceConfidence, true);
+            one = org.holdpoint.stats.ToleranceFactors.wilksSampleSize(toleranceCoverage, toleranceConfidence, false);
+        } catch (StatsException e) {
+            throw bad("--tolerance-coverage / --tolerance-confidence: " + e.getMessage());
+        }
+        String cov = org.holdpoint.result.Format.percent(toleranceCoverage);
+        String conf = org.holdpoint.result.Format.percent(toleranceConfidence);
+        out.printf(java.util.Locale.ROOT, "Distribution-free tolerance interval (Wilks 1941), %s coverage with %s "
+                + "confidence:%n  two-sided, between the smallest and the largest value: %d parts (confidence "
+                + "reached %s)%n  one-sided, below the largest or above the smallest value: %d parts (confidence "
+                + "reached %s)%nEvery part counts: a part excluded later lowers the confidence below %s.%n", cov, conf,
+                two, org.holdpoint.result.Format.percent(org.holdpoint.stats.ToleranceFactors.wilksTwoSided(two,
+                        toleranceCoverage)), one, org.holdpoint.result.Format.percent(
+                        org.holdpoint.stats.ToleranceFactors.wilksOneSided(one, toleranceCoverage)), conf);
+        Map<String, Object> plan = new java.util.LinkedHashMap<>();
+        plan.put("coverage", toleranceCoverage);
+        plan.put("confidence", toleranceConfidence);
+        plan.put("method", "distribution-free (Wilks 1941)");
+        plan.put("twoSided", two);
+        plan.put("oneSided", one);
+        Map<String, Object> document = new java.util.LinkedHashMap<>();
+        document.put("toleranceSample", plan);
+        return document;
     }
 
     private SuccessRunPlan successRunPlan() {

@@ -42,7 +42,7 @@ public final class SettingsReader {
     public static final List<String> COLUMNS = List.of("characteristic", "unit", "lsl", "nominal", "usl", "margin",
             "margin_lower", "margin_upper", "margin_percent", "margin_percent_lower", "margin_percent_upper",
             "margin_percent_of_usl", "margin_ratio", "margin_ratio_lower", "margin_ratio_upper",
-            "sd_growth_limit", "capability_min", "paired", "distribution", "require_stability");
+            "sd_growth_limit", "capability_min", "paired", "distribution", "require_stability", "ti_coverage", "ti_confidence");
 
     /** Creates a reader. */
     public SettingsReader() {
@@ -234,6 +234,10 @@ public final class SettingsReader {
         if (s.requireStability() != null) {
             o.put("require_stability", s.requireStability());
         }
+        if (s.tolerance() != null) {
+            o.put("ti_coverage", s.tolerance().coverage());
+            o.put("ti_confidence", s.tolerance().confidence());
+        }
         return o;
     }
 
@@ -335,9 +339,26 @@ public final class SettingsReader {
             }
         }
         Boolean requireStability = bool(v, "require_stability", w);
+        Double tiCoverage = number(v, "ti_coverage", w, dec);
+        Double tiConfidence = number(v, "ti_confidence", w, dec);
+        if ((tiCoverage == null) != (tiConfidence == null)) {
+            String missing = tiCoverage == null ? "ti_coverage" : "ti_confidence";
+            throw new ImportException("settings file %s, %s, column %s: it is empty, but %s is given; give both the "
+                    + "coverage and the confidence of the tolerance interval (e.g. 0.99 and 0.95)", w.file(), w.place(),
+                    missing, tiCoverage == null ? "ti_confidence" : "ti_coverage");
+        }
+        org.holdpoint.study.ToleranceRequirement tolerance = null;
+        if (tiCoverage != null) {
+            try {
+                tolerance = new org.holdpoint.study.ToleranceRequirement(tiCoverage, tiConfidence);
+            } catch (IllegalArgumentException e) {
+                String col = tiCoverage > 0 && tiCoverage < 1 ? "ti_confidence" : "ti_coverage";
+                throw w.bad(col, v.get(col), "is not accepted: " + e.getMessage());
+            }
+        }
         try {
             out.put(name, new CharacteristicSettings(v.get("unit"), new SpecLimits(lsl, nominal, usl), margin, sdGrowth,
-                    capMin, paired, distribution, requireStability));
+                    capMin, paired, distribution, requireStability, tolerance));
         } catch (IllegalArgumentException e) {
             throw new ImportException(e, "settings file %s, %s: %s", w.file(), w.place(), e.getMessage());
         }

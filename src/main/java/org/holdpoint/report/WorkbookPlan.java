@@ -357,6 +357,9 @@ final class WorkbookPlan {
         if (c.capabilityFailed()) {
             failed.add("capability");
         }
+        if (c.toleranceFailed()) {
+            failed.add("tolerance interval");
+        }
         if (c.stabilityFailed()) {
             failed.add("stability");
         } else if (c.stabilityNotShown()) {

@@ -276,6 +276,13 @@ public record CharacteristicResult(String name, String unit, CharacteristicSetti
         return Boolean.TRUE.equals(settings().requireStability()) && (checks == null || checks.stability() == null);
     }
 
+    /** @return whether the tolerance-interval criterion was judged and not met (docs/methods.md §17) */
+    public boolean toleranceFailed() {
+        var ti = settings().tolerance() == null || checks == null ? null : checks.after().tolerance();
+        return ti != null && settings().spec().any() && ti.confident()
+                && !ti.inside(settings().spec().lsl(), settings().spec().usl());
+    }
+
     /** @return whether the capability requirement was judged and not met */
     public boolean capabilityFailed() {
         return checks != null && Boolean.FALSE.equals(checks.capabilityMet());

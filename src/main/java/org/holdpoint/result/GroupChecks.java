@@ -24,10 +24,11 @@ import org.holdpoint.stats.RunsResult;
  * @param percentile capability by the percentile method on the fitted distribution, or null when the normal
  *                   model is used (docs/methods.md §14)
  * @param outliersOn what the outlier tests ran on: the raw values, or the normal scores of the fitted family
+ * @param tolerance  the tolerance interval when the criteria ask for one (docs/methods.md §17), or null
  */
 public record GroupChecks(NormalityResult normality, GrubbsResult grubbs, EsdResult esd, List<FlaggedValue> flagged,
         Lag1Result lag1, RunsResult runs, Integer lots, CapabilityResult capability,
-        PercentileCapabilityResult percentile, String outliersOn) {
+        PercentileCapabilityResult percentile, String outliersOn, org.holdpoint.stats.ToleranceInterval tolerance) {
 
     /** Copies the list. */
     public GroupChecks {

@@ -62,6 +62,9 @@ public final class Verdicts {
                 status = Status.FAILED;
             }
         }
+        if (r.settings().tolerance() != null) {
+            status = tolerance(r, decimals, reasons, status);
+        }
         Stability st = r.checks() == null ? null : r.checks().stability();
         boolean required = Boolean.TRUE.equals(r.settings().requireStability());
         if (st != null) {
@@ -83,6 +86,37 @@ public final class Verdicts {
             status = Status.INCONCLUSIVE;
         }
         return r.with(r.holmP(), new Verdict(status, reasons), r.notes());
+    }
+
+    /**
+     * The tolerance-interval criterion (docs/methods.md §17): the after group's interval must lie inside the limits;
+     * when it cannot be judged (no interval, no limits, too few values for the distribution-free confidence) the
+     * characteristic cannot pass.
+     */
+    private static Status tolerance(CharacteristicResult r, int decimals, List<String> reasons, Status status) {
+        org.holdpoint.study.ToleranceRequirement t = r.settings().tolerance();
+        var ti = r.checks() == null ? null : r.checks().after().tolerance();
+        var spec = r.settings().spec();
+        String what = t.words() + " tolerance interval";
+        String problem = ti == null ? what + " of the after group could not be computed (see the notes)"
+                : !spec.any() ? what + " cannot be judged: no specification limits are set"
+                : !ti.confident() ? String.format(Locale.ROOT, "%s not shown: the distribution-free interval of %d "
+                        + "values has only %s confidence", what, ti.n(), Format.percent(ti.achievedConfidence()))
+                : null;
+        if (problem != null) {
+            reasons.add("tolerance: " + problem);
+            return status == Status.PASSED ? Status.INCONCLUSIVE : status;
+        }
+        String interval = "(" + (ti.lower() == null ? "−∞" : Format.fixed(ti.lower(), decimals)) + ", "
+                + (ti.upper() == null ? "+∞" : Format.fixed(ti.upper(), decimals)) + ")";
+        String limits = "(" + (spec.lsl() == null ? "no LSL" : Format.num(spec.lsl())) + ", "
+                + (spec.usl() == null ? "no USL" : Format.num(spec.usl())) + ")";
+        if (ti.inside(spec.lsl(), spec.usl())) {
+            reasons.add("tolerance: " + what + " " + interval + " inside the limits " + limits);
+            return status;
+        }
+        reasons.add("tolerance: " + what + " " + interval + " is not inside the limits " + limits);
+        return status == Status.PASSED || status == Status.INCONCLUSIVE ? Status.FAILED : status;
     }
 
     private static String describeAgainstMargin(Conclusion c) {

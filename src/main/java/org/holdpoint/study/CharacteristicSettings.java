@@ -15,12 +15,31 @@ import java.util.List;
  * @param distribution          the distribution capability is judged by, or null (the default rule)
  * @param requireStability      whether a control-chart signal in the after phase fails the characteristic, or null
  *                              (no: a finding only)
+ * @param tolerance             the tolerance interval the after group must keep inside the limits, or null
  */
 public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
-        Double capabilityRequirement, Boolean paired, DistributionSetting distribution, Boolean requireStability) {
+        Double capabilityRequirement, Boolean paired, DistributionSetting distribution, Boolean requireStability,
+        ToleranceRequirement tolerance) {
     /** Nothing set. */
     public static final CharacteristicSettings EMPTY = new CharacteristicSettings(null, SpecLimits.NONE, null, null,
-            null, null, null, null);
+            null, null, null, null, null);
+
+    /**
+     * Criteria without a tolerance-interval requirement.
+     *
+     * @param unit                  unit of measure
+     * @param spec                  specification limits
+     * @param margin                the equivalence margin as entered
+     * @param sdGrowthLimit         the largest acceptable σ_after/σ_before, or null
+     * @param capabilityRequirement the minimum acceptable capability index, or null
+     * @param paired                whether the design is paired, or null
+     * @param distribution          the distribution setting, or null
+     * @param requireStability      whether stability is required, or null
+     */
+    public CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
+            Double capabilityRequirement, Boolean paired, DistributionSetting distribution, Boolean requireStability) {
+        this(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, distribution, requireStability, null);
+    }
 
     /**
      * Criteria without a stability requirement.
@@ -35,7 +54,7 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
      */
     public CharacteristicSettings(String unit, SpecLimits spec, MarginSpec margin, Double sdGrowthLimit,
             Double capabilityRequirement, Boolean paired, DistributionSetting distribution) {
-        this(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, distribution, null);
+        this(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, distribution, null, null);
     }
 
     /**
@@ -59,7 +78,7 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
      */
     public CharacteristicSettings withDistribution(DistributionSetting d) {
         return new CharacteristicSettings(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired, d,
-                requireStability);
+                requireStability, tolerance);
     }
 
     /**
@@ -68,7 +87,16 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
      */
     public CharacteristicSettings withRequireStability(Boolean required) {
         return new CharacteristicSettings(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired,
-                distribution, required);
+                distribution, required, tolerance);
+    }
+
+    /**
+     * @param t the tolerance-interval requirement, or null
+     * @return these criteria with it
+     */
+    public CharacteristicSettings withTolerance(ToleranceRequirement t) {
+        return new CharacteristicSettings(unit, spec, margin, sdGrowthLimit, capabilityRequirement, paired,
+                distribution, requireStability, t);
     }
 
     /** Normalises a null spec to {@link SpecLimits#NONE}. */
@@ -96,7 +124,7 @@ public record CharacteristicSettings(String unit, SpecLimits spec, MarginSpec ma
         return new CharacteristicSettings(pick(other.unit, unit), s, pick(other.margin, margin),
                 pick(other.sdGrowthLimit, sdGrowthLimit), pick(other.capabilityRequirement, capabilityRequirement),
                 pick(other.paired, paired), pick(other.distribution, distribution),
-                pick(other.requireStability, requireStability));
+                pick(other.requireStability, requireStability), pick(other.tolerance, tolerance));
     }
 
     private static <T> T pick(T preferred, T fallback) {

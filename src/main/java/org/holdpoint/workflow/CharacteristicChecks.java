@@ -471,7 +471,50 @@ final class CharacteristicChecks {
                 notes.add(label + ": capability not computed: " + e.getMessage());
             }
         }
-        return new GroupChecks(normality, grubbs, esd, flagged, lag1, runs, lots, capability, percentile, outliersOn);
+        return new GroupChecks(normality, grubbs, esd, flagged, lag1, runs, lots, capability, percentile, outliersOn,
+                tolerance(label, g, s, family, notes));
+    }
+
+    /**
+     * The tolerance interval of a group when the criteria ask for one (docs/methods.md §17): on the family capability
+     * is judged by where an exact method exists (normal; lognormal on the logarithms), else distribution-free; two
+     * ends with both limits or none, one end with one limit.
+     */
+    private static org.holdpoint.stats.ToleranceInterval tolerance(String label, GroupData g,
+            CharacteristicSettings s, DistributionFamily family, List<String> notes) {
+        org.holdpoint.study.ToleranceRequirement t = s.tolerance();
+        if (t == null) {
+            return null;
+        }
+        org.holdpoint.stats.ToleranceInterval.Sides sides = s.spec().lsl() != null && s.spec().usl() == null
+                ? org.holdpoint.stats.ToleranceInterval.Sides.LOWER
+                : s.spec().usl() != null && s.spec().lsl() == null ? org.holdpoint.stats.ToleranceInterval.Sides.UPPER
+                : org.holdpoint.stats.ToleranceInterval.Sides.TWO_SIDED;
+        try {
+            org.holdpoint.stats.ToleranceInterval ti = switch (family) {
+                case NORMAL -> org.holdpoint.stats.ToleranceInterval.normal(g.sample(), t.coverage(), t.confidence(),
+                        sides);
+                case LOGNORMAL -> org.holdpoint.stats.ToleranceInterval.lognormal(g.sample(), t.coverage(),
+                        t.confidence(), sides);
+                default -> org.holdpoint.stats.ToleranceInterval.distributionFree(g.sample(), t.coverage(),
+                        t.confidence(), sides);
+            };
+            if (ti.method() == org.holdpoint.stats.ToleranceInterval.Method.DISTRIBUTION_FREE) {
+                notes.add(String.format(Locale.ROOT, "%s: no exact tolerance interval exists for the %s family, so "
+                        + "the distribution-free one is used (the %s), with %s confidence for %s coverage%s",
+                        label, family.key(), sides == org.holdpoint.stats.ToleranceInterval.Sides.TWO_SIDED
+                                ? "smallest and largest values" : sides == org.holdpoint.stats.ToleranceInterval.Sides.UPPER
+                                ? "largest value" : "smallest value", Format.percent(ti.achievedConfidence()),
+                        Format.percent(ti.coverage()), ti.confident() ? ""
+                                : "; " + org.holdpoint.stats.ToleranceFactors.wilksSampleSize(ti.coverage(),
+                                        ti.confidence(), sides == org.holdpoint.stats.ToleranceInterval.Sides.TWO_SIDED)
+                                        + " values would give " + Format.percent(ti.confidence())));
+            }
+            return ti;
+        } catch (StatsException e) {
+            notes.add(label + ": tolerance interval not computed: " + e.getMessage());
+            return null;
+        }
     }
 
 

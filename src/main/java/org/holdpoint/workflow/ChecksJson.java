@@ -59,6 +59,11 @@ final class ChecksJson {
             order.set("after", order(c.after()));
         }
         n.put("recommendation", c.recommendation());
+        if (c.before().tolerance() != null || c.after().tolerance() != null) {
+            ObjectNode ti = n.putObject("toleranceInterval");
+            ti.set("before", tolerance(c.before().tolerance()));
+            ti.set("after", tolerance(c.after().tolerance()));
+        }
         if (c.stability() != null) {
             ObjectNode st = n.putObject("stability");
             st.put("runOrder", c.stability().runOrder());
@@ -89,6 +94,23 @@ final class ChecksJson {
             x.put("index", sig.index());
             x.put("origin", origins.get(sig.index() - 1));
         }
+        return o;
+    }
+
+    private static com.fasterxml.jackson.databind.JsonNode tolerance(org.holdpoint.stats.ToleranceInterval t) {
+        if (t == null) {
+            return F.nullNode();
+        }
+        ObjectNode o = F.objectNode();
+        o.put("coverage", t.coverage());
+        o.put("confidence", t.confidence());
+        o.put("sides", t.sides().key());
+        ResultJson.numOrNull(o, "k", t.k());
+        ResultJson.numOrNull(o, "lower", t.lower());
+        ResultJson.numOrNull(o, "upper", t.upper());
+        o.put("method", t.method().key());
+        ResultJson.num(o, "achievedConfidence", t.achievedConfidence());
+        o.put("n", t.n());
         return o;
     }
 

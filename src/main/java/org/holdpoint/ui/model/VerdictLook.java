@@ -106,6 +106,9 @@ public enum VerdictLook {
                     : org.holdpoint.result.Format.ratio(cap.ppkLower())) + " below "
                     + org.holdpoint.result.Format.num(r.settings().capabilityRequirement()));
         }
+        if (r.toleranceFailed()) {
+            failed.add("tolerance interval outside the limits");
+        }
         if (r.stabilityFailed()) {
             failed.add("stability: " + r.checks().stability().after().signals().size() + " after-phase signal"
                     + (r.checks().stability().after().signals().size() == 1 ? "" : "s"));
