@@ -149,6 +149,25 @@ public final class BoxPlotChart {
             axis.setRange(ChartRanges.padded(new double[] {Math.min(axis.getLowerBound(), lo),
                 Math.max(axis.getUpperBound(), hi)}, 0.0));
         }
+        var checks = result.checks();
+        var tol = result.settings().tolerance();
+        if (tol != null && checks != null) {
+            NumberAxis axis = (NumberAxis) plot.getRangeAxis();
+            double lo = axis.getLowerBound();
+            double hi = axis.getUpperBound();
+            int g = 0;
+            for (var ti : new org.holdpoint.stats.ToleranceInterval[] {checks.before().tolerance(),
+                checks.after().tolerance()}) {
+                if (ti != null && g < plot.getCategories().size()) {
+                    plot.addAnnotation(new ToleranceBracket((Comparable<?>) plot.getCategories().get(g), ti.lower(),
+                            ti.upper(), tol.words().replace(" ", ""), theme.noteFont()));
+                    lo = ti.lower() == null ? lo : Math.min(lo, ti.lower());
+                    hi = ti.upper() == null ? hi : Math.max(hi, ti.upper());
+                }
+                g++;
+            }
+            axis.setRange(ChartRanges.padded(new double[] {lo, hi}, 0.03));
+        }
         List<String> parts = new ArrayList<>();
         var eq = result.decidingTost();
         if (eq != null) {
@@ -159,11 +178,16 @@ public final class BoxPlotChart {
             parts.add("spread: sd ratio bound " + String.format(java.util.Locale.ROOT, "%.3f", g.upperBound())
                     + (g.met() ? " below" : " NOT below") + " the limit " + Numbers.format(g.limit()));
         }
-        var checks = result.checks();
         if (checks != null && checks.capabilityMet() != null && checks.after().ppkLower() != null) {
             parts.add("capability: Ppk bound " + String.format(java.util.Locale.ROOT, "%.3f",
                     checks.after().ppkLower()) + (checks.capabilityMet() ? " meets" : " does NOT meet")
                     + " the required " + Numbers.format(result.settings().capabilityRequirement()));
+        }
+        if (tol != null && checks != null && checks.after().tolerance() != null) {
+            var ti = checks.after().tolerance();
+            parts.add("tolerance: after " + tol.words() + " interval " + (!ti.confident() ? "not shown (too few values)"
+                    : ti.inside(result.settings().spec().lsl(), result.settings().spec().usl()) ? "inside the limits"
+                    : "NOT inside the limits") + " (bracket beside each box)");
         }
         if (!parts.isEmpty()) {
             chart.addSubtitle(1, theme.subtitle(String.join("; ", parts)));

@@ -70,6 +70,9 @@ final class ChecksPlan {
         rank(r + 2, n, k, d, notes);
         row = Math.max(row, r + 15) + 1;
         row = capability(row, n, c, k, d, notes);
+        if (c.settings().tolerance() != null) {
+            row = toleranceInterval(row, n, c, k, d);
+        }
         s.text(row, c0, "Recommendation", Style.HEADER, n + ": recommendation header");
         s.merge(row, row, c0, c0 + 5);
         String rec = k.recommendation() == null ? "none" : k.recommendation();
@@ -199,6 +202,46 @@ final class ChecksPlan {
             notes.add("Rank-based equivalence: the " + el + " level cannot be reached with these sample sizes, "
                     + "so no claim is made.");
         }
+    }
+
+    /**
+     * The tolerance interval block (docs/methods.md §17), only when the criteria ask for one: the sentence that
+     * decides, then the interval of each group, its method, factor and the confidence it reaches.
+     */
+    private int toleranceInterval(int r, String n, CharacteristicResult c, AssumptionChecks k, int d) {
+        var t = c.settings().tolerance();
+        var b = k.before().tolerance();
+        var a = k.after().tolerance();
+        s.text(r, c0, "Tolerance interval, " + t.words(), Style.HEADER, n + ": tolerance interval header");
+        s.text(r, c0 + 1, "Before", Style.HEADER, n + ": tolerance interval before header");
+        s.text(r, c0 + 2, "After", Style.HEADER, n + ": tolerance interval after header");
+        row(r + 1, "Lower end", b == null ? null : b.lower(), a == null ? null : a.lower(), Style.NUMBER, d,
+                n + ": tolerance interval lower");
+        row(r + 2, "Upper end", b == null ? null : b.upper(), a == null ? null : a.upper(), Style.NUMBER, d,
+                n + ": tolerance interval upper");
+        row(r + 3, "Factor k", b == null ? null : b.k(), a == null ? null : a.k(), Style.NUMBER, 4,
+                n + ": tolerance interval k");
+        row(r + 4, "Confidence reached", b == null ? null : b.achievedConfidence(),
+                a == null ? null : a.achievedConfidence(), Style.NUMBER, 4, n + ": tolerance interval confidence");
+        var any = a != null ? a : b;
+        s.text(r + 5, c0, "Method", Style.LABEL, n + ": tolerance interval method label");
+        s.text(r + 5, c0 + 1, any == null ? "not computed (see the notes)" : any.method().words() + ", "
+                + any.sides().key(), Style.CELL_WRAP, n + ": tolerance interval method");
+        s.merge(r + 5, r + 5, c0 + 1, c0 + 2);
+        String decides = c.verdict().reasons().stream().filter(x -> x.startsWith("tolerance: ")).findFirst()
+                .map(x -> x.substring("tolerance: ".length())).orElse("not judged");
+        int col = c0 + 4;
+        s.text(r, col, "Decides", Style.HEADER, n + ": tolerance decides header");
+        s.text(r, col + 1, "", Style.HEADER, n + ": tolerance decides header");
+        s.text(r + 1, col, decides, Style.CELL_WRAP, n + ": tolerance decides");
+        s.merge(r + 1, r + 5, col, col + 1);
+        for (int i = 1; i <= 5; i++) {
+            if (i > 1) {
+                s.text(r + i, col, "", Style.CELL_WRAP, n + ": tolerance decides");
+            }
+            s.text(r + i, col + 1, "", Style.CELL_WRAP, n + ": tolerance decides");
+        }
+        return r + 7;
     }
 
     private int capability(int r, String n, CharacteristicResult c, AssumptionChecks k, int d, List<String> notes) {

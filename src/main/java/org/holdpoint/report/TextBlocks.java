@@ -121,6 +121,15 @@ final class TextBlocks {
                     + "chart. A signal is a finding of the verdict; where the criteria require stability, a signal "
                     + "of the after phase fails the characteristic.");
         }
+        if (plan.input.result().characteristics().stream().anyMatch(c -> c.settings().tolerance() != null)) {
+            // only in a record whose criteria ask for a tolerance interval (earlier records keep their text)
+            put.accept("Tolerance intervals", "Where the criteria ask for one: the interval that covers the stated "
+                    + "proportion of parts with the stated confidence (ISO 16269-6:2014). Normal: x\u0304 \u00b1 k\u00b7s "
+                    + "with the exact factor (one-sided: the noncentral t quantile; two-sided: the Odeh\u2013Owen "
+                    + "integral); lognormal: the normal interval of the logarithms, transformed back; other fitted "
+                    + "families: the smallest and largest values (Wilks 1941) with the confidence they reach. The after "
+                    + "group's interval must lie inside the specification limits; one limit gives a one-sided bound.");
+        }
         for (CharacteristicResult c : plan.input.result().characteristics()) {
             put.accept("Margin: " + c.name(), marginText(set, c));
         }

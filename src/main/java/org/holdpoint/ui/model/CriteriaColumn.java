@@ -30,6 +30,8 @@ public enum CriteriaColumn {
     /** The distribution capability is judged by: by the default rule, auto, or one family. */
     DISTRIBUTION("Distribution", List.of(CriteriaTable.BY_RULE, "auto", "normal", "lognormal", "weibull", "gamma",
             "rayleigh")),
+    /** A tolerance interval the after group must keep inside the limits: "coverage / confidence", e.g. 0.99 / 0.95. */
+    TOLERANCE("Tolerance int.", null),
     /** Whether a control-chart signal of the after phase fails the characteristic, or is a finding only. */
     STABILITY("Stability", List.of(CriteriaTable.FINDING_ONLY, CriteriaTable.REQUIRED));
 

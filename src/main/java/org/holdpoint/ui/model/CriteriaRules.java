@@ -27,7 +27,17 @@ final class CriteriaRules {
                     col.choices());
             case SD_GROWTH -> positive(t, "the sd-growth limit", "1.25");
             case CAPABILITY -> positive(t, "the capability requirement", "1.33");
+            case TOLERANCE -> toleranceProblem(t);
         };
+    }
+
+    private static String toleranceProblem(String t) {
+        try {
+            tolerance(t);
+            return null;
+        } catch (IllegalArgumentException e) {
+            return e.getMessage();
+        }
     }
 
     private static String numberProblem(String t, String relation) {
@@ -196,7 +206,28 @@ final class CriteriaRules {
         return new CharacteristicSettings(unit.isEmpty() ? null : unit, spec, m,
                 number(r[CriteriaColumn.SD_GROWTH.ordinal()]), number(r[CriteriaColumn.CAPABILITY.ordinal()]), p,
                 CriteriaTable.BY_RULE.equals(d) ? null : org.holdpoint.study.DistributionSetting.parse(d),
-                CriteriaTable.REQUIRED.equals(r[CriteriaColumn.STABILITY.ordinal()]) ? Boolean.TRUE : null);
+                CriteriaTable.REQUIRED.equals(r[CriteriaColumn.STABILITY.ordinal()]) ? Boolean.TRUE : null,
+                tolerance(r[CriteriaColumn.TOLERANCE.ordinal()]));
+    }
+
+    /**
+     * Reads "coverage / confidence", e.g. "0.99 / 0.95".
+     *
+     * @param t the cell's text
+     * @return the requirement, or null for an empty cell
+     * @throws IllegalArgumentException when it is not two numbers between 0 and 1
+     */
+    static org.holdpoint.study.ToleranceRequirement tolerance(String t) {
+        if (t == null || t.isBlank()) {
+            return null;
+        }
+        String[] parts = t.split("/");
+        Double cov = parts.length == 2 && isNumber(parts[0].strip()) ? number(parts[0].strip()) : null;
+        Double conf = parts.length == 2 && isNumber(parts[1].strip()) ? number(parts[1].strip()) : null;
+        if (cov == null || conf == null) {
+            throw new IllegalArgumentException("write the coverage and the confidence as two numbers, e.g. 0.99 / 0.95");
+        }
+        return new org.holdpoint.study.ToleranceRequirement(cov, conf);
     }
 
     static String marginText(MarginSpec m) {

@@ -298,6 +298,8 @@ public final class CriteriaTable {
         r[CriteriaColumn.PAIRED.ordinal()] = s.paired() == null ? FROM_DATA : s.paired() ? "yes" : "no";
         r[CriteriaColumn.DISTRIBUTION.ordinal()] = s.distribution() == null ? BY_RULE : s.distribution().key();
         r[CriteriaColumn.STABILITY.ordinal()] = Boolean.TRUE.equals(s.requireStability()) ? REQUIRED : FINDING_ONLY;
+        r[CriteriaColumn.TOLERANCE.ordinal()] = s.tolerance() == null ? "" : CriteriaRules.text(s.tolerance().coverage())
+                + " / " + CriteriaRules.text(s.tolerance().confidence());
         return r;
     }
 

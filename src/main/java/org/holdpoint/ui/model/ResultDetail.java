@@ -77,6 +77,10 @@ public final class ResultDetail {
         if (tolerance != null) {
             s.add(tolerance);
         }
+        Section interval = toleranceInterval(r);
+        if (interval != null) {
+            s.add(interval);
+        }
         if (!r.notes().isEmpty()) {
             s.add(new Section("Notes", r.notes().stream().map(n -> new Line("", n)).toList()));
         }
@@ -124,6 +128,39 @@ public final class ResultDetail {
         l.add(new Line("", "Ppk from the overall sd; expected parts per million below LSL + above USL under the "
                 + "normal model, which a skewed characteristic does not follow (see the shape checks)."));
         return new Section("In the tolerance", l);
+    }
+
+    /** The tolerance interval section (docs/methods.md §17), when the criteria ask for one. */
+    private static Section toleranceInterval(CharacteristicResult r) {
+        var t = r.settings().tolerance();
+        var k = r.checks();
+        if (t == null || k == null) {
+            return null;
+        }
+        var b = k.before().tolerance();
+        var a = k.after().tolerance();
+        List<Line> l = new ArrayList<>();
+        String decision = r.verdict().reasons().stream().filter(x -> x.startsWith("tolerance: ")).findFirst()
+                .map(x -> x.substring("tolerance: ".length())).orElse(t.words() + " tolerance interval: not judged");
+        l.add(new Line("Decides", "after: " + decision));
+        l.add(new Line("Interval", interval(b) + "  →  " + interval(a)));
+        var any = a != null ? a : b;
+        if (any != null) {
+            l.add(new Line("Method", any.method().words() + ", " + any.sides().key() + (any.k() == null ? ""
+                    : ", k = " + Format.num(any.k(), 6) + " (after)")));
+            l.add(new Line("Confidence", (b == null ? "—" : Format.percent(b.achievedConfidence())) + "  →  "
+                    + (a == null ? "—" : Format.percent(a.achievedConfidence())) + " (asked "
+                    + Format.percent(t.confidence()) + ")"));
+        }
+        return new Section("Tolerance interval, " + t.words(), l);
+    }
+
+    private static String interval(org.holdpoint.stats.ToleranceInterval t) {
+        if (t == null) {
+            return "not computed";
+        }
+        return "(" + (t.lower() == null ? "\u2212\u221e" : Format.num(t.lower())) + ", "
+                + (t.upper() == null ? "+\u221e" : Format.num(t.upper())) + ")";
     }
 
     /** The tolerance section when capability is judged by a fitted distribution (percentile method). */
