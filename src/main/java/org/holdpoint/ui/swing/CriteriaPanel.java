@@ -85,7 +85,7 @@ final class CriteriaPanel extends JPanel {
             }
         }
         // shares of the width at 1280 pixels; the whole reason of a problem is above the table and in the tip
-        int[] widths = {145, 32, 34, 50, 56, 52, 92, 80, 70, 72, 66, 72, 74, 62, 44};
+        int[] widths = {135, 30, 34, 48, 54, 50, 90, 72, 68, 70, 58, 70, 96, 62, 40};
         for (int i = 0; i < widths.length; i++) {
             grid.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
         }
