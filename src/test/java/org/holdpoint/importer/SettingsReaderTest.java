@@ -43,6 +43,26 @@ class SettingsReaderTest {
     }
 
     @Test
+    void stabilityAndToleranceColumns() {
+        Path f = write(dir, "t.settings.csv", "characteristic,usl,require_stability,ti_coverage,ti_confidence\n"
+                + "flatness,0.05,yes,0.99,0.95\nbore,10.05,,,\n");
+        Map<String, CharacteristicSettings> m = new SettingsReader().read(f);
+        assertThat(m.get("flatness").requireStability()).isTrue();
+        assertThat(m.get("flatness").tolerance()).isEqualTo(new org.holdpoint.study.ToleranceRequirement(0.99, 0.95));
+        assertThat(m.get("bore").tolerance()).isNull();
+        assertThat(m.get("bore").requireStability()).isNull();
+        // the criteria survive the spelling a study file keeps them in
+        CharacteristicSettings back = SettingsReader.fromJson("t", "flatness", SettingsReader.toJson(m.get("flatness")));
+        assertThat(back).isEqualTo(m.get("flatness"));
+        Path half = write(dir, "h.settings.csv", "characteristic,ti_coverage\nflatness,0.99\n");
+        assertThatThrownBy(() -> new SettingsReader().read(half)).hasMessageContaining("column ti_confidence")
+                .hasMessageContaining("give both");
+        Path bad = write(dir, "b.settings.csv", "characteristic,ti_coverage,ti_confidence\nflatness,99,0.95\n");
+        assertThatThrownBy(() -> new SettingsReader().read(bad)).hasMessageContaining("column ti_coverage")
+                .hasMessageContaining("between 0 and 1");
+    }
+
+    @Test
     void semicolonAndDecimalComma() {
         Path f = write(dir, "s.settings.csv", "characteristic;lsl;usl;margin\nbore;9,95;10,05;0,01\n");
         assertThat(new SettingsReader().read(f).get("bore").spec().usl()).isEqualTo(10.05);
