@@ -270,12 +270,11 @@ final class TextOutput {
         for (var g : new org.holdpoint.result.GroupChecks[] {c.before(), c.after()}) {
             var ti = g.tolerance();
             if (ti != null) {
-                out.printf(Locale.ROOT, "  Tolerance interval %s: %s coverage, %s confidence%s, %s, %s: (%s, %s)%s%n",
+                out.printf(Locale.ROOT, "  Tolerance interval %s: %s coverage, %s confidence%s, %s, %s: %s%s%n",
                         g == c.before() ? "before" : "after ", Format.percent(ti.coverage()),
                         Format.percent(ti.achievedConfidence()), ti.confident() ? "" : " (asked: "
                                 + Format.percent(ti.confidence()) + ")", ti.sides().key(), ti.method().words(),
-                        ti.lower() == null ? "\u2212\u221e" : u(name, ti.lower()),
-                        ti.upper() == null ? "+\u221e" : u(name, ti.upper()),
+                        Format.interval(ti, v -> u(name, v)),
                         ti.k() == null ? "" : String.format(Locale.ROOT, ", k = %s", Format.num(ti.k(), 6)));
             }
         }

@@ -118,6 +118,19 @@ public final class Format {
     }
 
     /**
+     * A tolerance interval as text, a missing end as −∞ or +∞ (docs/methods.md §17).
+     *
+     * @param t   the interval
+     * @param num how to write an end
+     * @return e.g. "(4.15250, 4.22622)" or "(−∞, 0.0318)"
+     */
+    public static String interval(org.holdpoint.stats.ToleranceInterval t,
+            java.util.function.DoubleFunction<String> num) {
+        return "(" + (t.lower() == null ? "\u2212\u221e" : num.apply(t.lower())) + ", "
+                + (t.upper() == null ? "+\u221e" : num.apply(t.upper())) + ")";
+    }
+
+    /**
      * A level such as 0.9 as "90 %".
      *
      * @param level a probability

@@ -107,8 +107,7 @@ public final class Verdicts {
             reasons.add("tolerance: " + problem);
             return status == Status.PASSED ? Status.INCONCLUSIVE : status;
         }
-        String interval = "(" + (ti.lower() == null ? "−∞" : Format.fixed(ti.lower(), decimals)) + ", "
-                + (ti.upper() == null ? "+∞" : Format.fixed(ti.upper(), decimals)) + ")";
+        String interval = Format.interval(ti, v -> Format.fixed(v, decimals));
         String limits = "(" + (spec.lsl() == null ? "no LSL" : Format.num(spec.lsl())) + ", "
                 + (spec.usl() == null ? "no USL" : Format.num(spec.usl())) + ")";
         if (ti.inside(spec.lsl(), spec.usl())) {

@@ -159,8 +159,7 @@ public final class ResultDetail {
         if (t == null) {
             return "not computed";
         }
-        return "(" + (t.lower() == null ? "\u2212\u221e" : Format.num(t.lower())) + ", "
-                + (t.upper() == null ? "+\u221e" : Format.num(t.upper())) + ")";
+        return Format.interval(t, Format::num);
     }
 
     /** The tolerance section when capability is judged by a fitted distribution (percentile method). */
