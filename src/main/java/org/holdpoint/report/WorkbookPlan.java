@@ -219,7 +219,8 @@ final class WorkbookPlan {
         s.number(row, c0 + 13, c.levene() == null ? null : c.levene().p(), Style.P_VALUE, 0,
                 n + ": Brown-Forsythe p");
         s.text(row, c0 + 14, sdGrowth(c), Style.CELL, n + ": sd growth");
-        s.text(row, c0 + 15, capability(c), Style.CELL, n + ": capability");
+        s.text(row, c0 + 15, capability(c), c.settings().tolerance() != null ? Style.CELL_WRAP : Style.CELL,
+                n + ": capability");
         s.text(row, c0 + 16, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
                 n + ": verdict");
     }
@@ -285,11 +286,13 @@ final class WorkbookPlan {
             s.number(row, c0, (double) k++, Style.INTEGER, 0, n + ": verdict table index");
             spanned(s, row, c0, 1, n, Style.CELL_WRAP, n + ": verdict table name");
             spanned(s, row, c0, 2, sdGrowth(c, 2), Style.CELL, n + ": sd growth");
-            spanned(s, row, c0, 3, capability(c), Style.CELL, n + ": capability");
+            // a tolerance-interval criterion adds its words to the capability cell, which then wraps
+            boolean tol = c.settings().tolerance() != null;
+            spanned(s, row, c0, 3, capability(c), tol ? Style.CELL_WRAP : Style.CELL, n + ": capability");
             spanned(s, row, c0, 4, Texts.status(c.verdict().status()), Texts.style(c.verdict().status()),
                     n + ": verdict");
             spanned(s, row, c0, 5, decidedBy(c), Style.CELL_WRAP, n + ": decided by");
-            s.height(row, Math.max(14f, 11.5f * (int) Math.ceil(n.length() / 16.0) + 3f));
+            s.height(row, Math.max(tol ? 4 * 11.5f + 3f : 14f, 11.5f * (int) Math.ceil(n.length() / 16.0) + 3f));
             row++;
         }
         String legend = "Marks: " + Texts.status(Verdict.Status.PASSED) + " \u00b7 " + Texts.status(
@@ -430,6 +433,20 @@ final class WorkbookPlan {
      * @return e.g. "met: 1.520 > 1.33", or "" without specification limits
      */
     static String capability(CharacteristicResult c) {
+        String cap = ppkCell(c);
+        var t = c.settings().tolerance();
+        if (t == null || c.checks() == null) {
+            return cap;
+        }
+        // the tolerance-interval criterion sits with the capability it belongs to (only in records that set one)
+        var ti = c.checks().after().tolerance();
+        String tol = "tolerance interval " + t.words() + ": " + (ti == null || !c.settings().spec().any()
+                ? "not judged" : !ti.confident() ? "not shown" : ti.inside(c.settings().spec().lsl(),
+                        c.settings().spec().usl()) ? "inside the limits" : "NOT inside the limits");
+        return cap.isEmpty() ? tol : cap + "; " + tol;
+    }
+
+    private static String ppkCell(CharacteristicResult c) {
         var k = c.checks();
         if (k == null || k.after() == null || !k.after().hasCapability()) {
             return "";
