@@ -135,6 +135,7 @@ final class WorkbookPlan {
         for (int i = 0; i < headers.length; i++) {
             String h = headers[i];
             h = i == 7 ? String.format(Locale.ROOT, h, ci) : i == 9 ? String.format(Locale.ROOT, h, eq) : h;
+            h = i == 15 && anyTolerance() ? h + "; tolerance interval (after) vs limits" : h;
             s.text(r0, c0 + i, h, Style.HEADER, "summary table header");
             s.width(c0 + i, widths[i]);
         }
@@ -276,9 +277,11 @@ final class WorkbookPlan {
         s.text(row, c0, "Spread, capability and the verdict", Style.LABEL, "summary verdict table title");
         row++;
         for (int i = 0; i < VERDICT_HEADERS.length; i++) {
-            spanned(s, row, c0, i, VERDICT_HEADERS[i], Style.HEADER, "summary verdict header");
+            // with a tolerance-interval criterion in the study its column names it too
+            spanned(s, row, c0, i, i == 3 && anyTolerance() ? "Capability and tolerance interval (after) vs "
+                    + "requirements" : VERDICT_HEADERS[i], Style.HEADER, "summary verdict header");
         }
-        s.height(row, 28f);
+        s.height(row, anyTolerance() ? 42f : 28f);
         row++;
         k = 1;
         for (CharacteristicResult c : all) {
@@ -432,6 +435,11 @@ final class WorkbookPlan {
      * @param c the result
      * @return e.g. "met: 1.520 > 1.33", or "" without specification limits
      */
+    /** @return whether any characteristic's criteria ask for a tolerance interval (docs/methods.md §17) */
+    private boolean anyTolerance() {
+        return input.result().characteristics().stream().anyMatch(c -> c.settings().tolerance() != null);
+    }
+
     static String capability(CharacteristicResult c) {
         String cap = ppkCell(c);
         var t = c.settings().tolerance();
