@@ -18,14 +18,17 @@ import java.util.List;
  * {@link PairwiseSelection}, so 10⁵ × 10⁵ values need no 10¹⁰ array.
  */
 public final class RankSumTest {
-    private static final RankSumTest DEFAULTS = new RankSumTest(0.05, null, RankMethodRule.AUTOMATIC);
+    private static final RankSumTest DEFAULTS = new RankSumTest(0.05, null, RankMethodRule.AUTOMATIC,
+            RankSumTest.PARALLEL_PAIRS);
     static final int EXACT_LIMIT = 50;
 
     private final double alpha;
     private final Margin margin;
     private final RankMethodRule rule;
+    private final long parallelFrom;
 
-    private RankSumTest(double alpha, Margin margin, RankMethodRule rule) {
+    private RankSumTest(double alpha, Margin margin, RankMethodRule rule, long parallelFrom) {
+        this.parallelFrom = parallelFrom;
         this.alpha = alpha;
         this.margin = margin;
         this.rule = rule;
@@ -46,7 +49,7 @@ public final class RankSumTest {
      * @return a test with that α
      */
     public RankSumTest withAlpha(double newAlpha) {
-        return new RankSumTest(Alpha.checkBelowHalf(newAlpha), margin, rule);
+        return new RankSumTest(Alpha.checkBelowHalf(newAlpha), margin, rule, parallelFrom);
     }
 
     /**
@@ -57,7 +60,7 @@ public final class RankSumTest {
         if (newMargin != null && newMargin.ratio()) {
             throw new StatsException("the rank-based equivalence takes a margin in units, not a ratio margin");
         }
-        return new RankSumTest(alpha, newMargin, rule);
+        return new RankSumTest(alpha, newMargin, rule, parallelFrom);
     }
 
     /**
@@ -68,7 +71,7 @@ public final class RankSumTest {
         if (newRule == null) {
             throw new StatsException("a method rule is required");
         }
-        return new RankSumTest(alpha, margin, newRule);
+        return new RankSumTest(alpha, margin, newRule, parallelFrom);
     }
 
     /**
@@ -120,8 +123,20 @@ public final class RankSumTest {
             }
             double sigma0 = Math.sqrt((k / 12.0)
                     * ((nn + 1) - (RankDistributions.tieSum(a) + RankDistributions.tieSum(b)) / (nn * (nn - 1))));
-            ci = normalInterval(sel, k, alpha, sigma0, notes);
-            eq = margin == null ? null : normalInterval(sel, k, 2 * alpha, sigma0, notes);
+            if (margin != null && k >= parallelFrom) {
+                // with many pairs the equivalence interval is selected beside the confidence interval, on a
+                // selection of its own (each selection is deterministic, so the bounds are the same either way)
+                PairwiseSelection other = PairwiseSelection.differences(a, b);
+                List<String> eqNotes = new ArrayList<>();
+                java.util.concurrent.CompletableFuture<RankInterval> f = java.util.concurrent.CompletableFuture
+                        .supplyAsync(() -> normalInterval(other, k, 2 * alpha, sigma0, eqNotes));
+                ci = normalInterval(sel, k, alpha, sigma0, notes);
+                eq = joined(f);
+                notes.addAll(eqNotes);
+            } else {
+                ci = normalInterval(sel, k, alpha, sigma0, notes);
+                eq = margin == null ? null : normalInterval(sel, k, 2 * alpha, sigma0, notes);
+            }
         }
         RankEquivalence equivalence = eq == null ? null : RankEquivalence.judge(margin, alpha, eq);
         if (equivalence != null && !eq.levelReached()) {
@@ -161,6 +176,31 @@ public final class RankSumTest {
             ties += (t * t - 1) * t;
         }
         return new Merge(twiceU, ties);
+    }
+
+    /** From this many pairwise differences the two intervals are selected side by side (measured). */
+    static final long PARALLEL_PAIRS = 100_000_000L;
+
+    /**
+     * @param pairs from how many pairwise differences the two intervals are selected side by side
+     * @return this test with that threshold (for the test that both ways give the same bounds)
+     */
+    RankSumTest withParallelFrom(long pairs) {
+        return new RankSumTest(alpha, margin, rule, pairs);
+    }
+
+    private static RankInterval joined(java.util.concurrent.CompletableFuture<RankInterval> f) {
+        try {
+            return f.join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            throw e;
+        }
     }
 
     private static RankInterval exactInterval(PairwiseSelection sel, double[] cdf, long k, double twoSidedAlpha,
