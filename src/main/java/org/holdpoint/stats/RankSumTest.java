@@ -131,7 +131,7 @@ public final class RankSumTest {
                 java.util.concurrent.CompletableFuture<RankInterval> f = java.util.concurrent.CompletableFuture
                         .supplyAsync(() -> normalInterval(other, k, 2 * alpha, sigma0, eqNotes));
                 ci = normalInterval(sel, k, alpha, sigma0, notes);
-                eq = joined(f);
+                eq = Background.join(f);
                 notes.addAll(eqNotes);
             } else {
                 ci = normalInterval(sel, k, alpha, sigma0, notes);
@@ -187,20 +187,6 @@ public final class RankSumTest {
      */
     RankSumTest withParallelFrom(long pairs) {
         return new RankSumTest(alpha, margin, rule, pairs);
-    }
-
-    private static RankInterval joined(java.util.concurrent.CompletableFuture<RankInterval> f) {
-        try {
-            return f.join();
-        } catch (java.util.concurrent.CompletionException e) {
-            if (e.getCause() instanceof RuntimeException r) {
-                throw r;
-            }
-            if (e.getCause() instanceof Error err) {
-                throw err;
-            }
-            throw e;
-        }
     }
 
     private static RankInterval exactInterval(PairwiseSelection sel, double[] cdf, long k, double twoSidedAlpha,

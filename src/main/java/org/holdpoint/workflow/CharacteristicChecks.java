@@ -91,21 +91,6 @@ final class CharacteristicChecks {
         }
     }
 
-    /** The background result; an unexpected failure is rethrown as it was (it is a bug, not a finding). */
-    private static Ranks joined(java.util.concurrent.CompletableFuture<Ranks> f) {
-        try {
-            return f.join();
-        } catch (java.util.concurrent.CompletionException e) {
-            if (e.getCause() instanceof RuntimeException r) {
-                throw r;
-            }
-            if (e.getCause() instanceof Error err) {
-                throw err;
-            }
-            throw e;
-        }
-    }
-
     static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Margin margin, double alpha,
             boolean paired, AnalysisSettings study, List<String> notes) {
         boolean currentMethods = study.since(3);
@@ -123,7 +108,7 @@ final class CharacteristicChecks {
                 ? java.util.concurrent.CompletableFuture.supplyAsync(ranking) : null;
         GroupChecks before = group("before", c.before(), nb, s, family, alpha, notes);
         GroupChecks after = group("after", c.after(), na, s, family, alpha, notes);
-        Ranks ranks = background == null ? ranking.get() : joined(background);
+        Ranks ranks = background == null ? ranking.get() : org.holdpoint.stats.Background.join(background);
         RankSumResult rankSum = ranks.rankSum();
         SignedRankResult signedRank = ranks.signedRank();
         notes.addAll(ranks.notes());
@@ -341,7 +326,6 @@ final class CharacteristicChecks {
         return v;
     }
 
-
     /**
      * The family capability is judged by (docs/methods.md §14): the one set for the characteristic; else the
      * default rule: {@code auto} when the characteristic is bounded at a natural zero (a USL, no LSL or an LSL of 0,
@@ -516,7 +500,6 @@ final class CharacteristicChecks {
             return null;
         }
     }
-
 
 
     /** The group in the order of its sequence column (numeric when every entry is a number, else as text). */
