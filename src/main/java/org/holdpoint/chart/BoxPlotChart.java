@@ -184,10 +184,8 @@ public final class BoxPlotChart {
                     + " the required " + Numbers.format(result.settings().capabilityRequirement()));
         }
         if (tol != null && checks != null && checks.after().tolerance() != null) {
-            var ti = checks.after().tolerance();
-            parts.add("tolerance: after " + tol.words() + " interval " + (!ti.confident() ? "not shown (too few values)"
-                    : ti.inside(result.settings().spec().lsl(), result.settings().spec().usl()) ? "inside the limits"
-                    : "NOT inside the limits") + " (bracket beside each box)");
+            parts.add("tolerance: after " + tol.words() + " interval " + result.toleranceState().words()
+                    + " (bracket beside each box)");
         }
         if (!parts.isEmpty()) {
             chart.addSubtitle(1, theme.subtitle(String.join("; ", parts)));

@@ -228,8 +228,7 @@ final class ChecksPlan {
         s.text(r + 5, c0 + 1, any == null ? "not computed (see the notes)" : any.method().words() + ", "
                 + any.sides().key(), Style.CELL_WRAP, n + ": tolerance interval method");
         s.merge(r + 5, r + 5, c0 + 1, c0 + 2);
-        String decides = c.verdict().reasons().stream().filter(x -> x.startsWith("tolerance: ")).findFirst()
-                .map(x -> x.substring("tolerance: ".length())).orElse("not judged");
+        String decides = org.holdpoint.result.Verdicts.toleranceFinding(c, v -> org.holdpoint.result.Format.fixed(v, d));
         int col = c0 + 4;
         s.text(r, col, "Decides", Style.HEADER, n + ": tolerance decides header");
         s.text(r, col + 1, "", Style.HEADER, n + ": tolerance decides header");

@@ -447,10 +447,7 @@ final class WorkbookPlan {
             return cap;
         }
         // the tolerance-interval criterion sits with the capability it belongs to (only in records that set one)
-        var ti = c.checks().after().tolerance();
-        String tol = "tolerance interval " + t.words() + ": " + (ti == null || !c.settings().spec().any()
-                ? "not judged" : !ti.confident() ? "not shown" : ti.inside(c.settings().spec().lsl(),
-                        c.settings().spec().usl()) ? "inside the limits" : "NOT inside the limits");
+        String tol = "tolerance interval " + t.words() + ": " + c.toleranceState().words();
         return cap.isEmpty() ? tol : cap + "; " + tol;
     }
 

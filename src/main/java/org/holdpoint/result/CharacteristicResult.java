@@ -276,11 +276,50 @@ public record CharacteristicResult(String name, String unit, CharacteristicSetti
         return Boolean.TRUE.equals(settings().requireStability()) && (checks == null || checks.stability() == null);
     }
 
+    /** Where the tolerance-interval criterion stands (docs/methods.md §17). */
+    public enum ToleranceState {
+        /** The criteria ask for no tolerance interval. */
+        NOT_ASKED("not asked"),
+        /** No interval of the after group, or no specification limits to judge it against. */
+        NOT_JUDGED("not judged"),
+        /** The distribution-free interval does not reach the confidence asked for. */
+        NOT_SHOWN("not shown"),
+        /** The after group's interval lies inside the limits. */
+        INSIDE("inside the limits"),
+        /** The after group's interval reaches beyond a limit. */
+        OUTSIDE("NOT inside the limits");
+
+        private final String words;
+
+        ToleranceState(String words) {
+            this.words = words;
+        }
+
+        /** @return the state in words */
+        public String words() {
+            return words;
+        }
+    }
+
+    /** @return where the tolerance-interval criterion stands */
+    public ToleranceState toleranceState() {
+        if (settings().tolerance() == null) {
+            return ToleranceState.NOT_ASKED;
+        }
+        var ti = checks == null ? null : checks.after().tolerance();
+        if (ti == null || !settings().spec().any()) {
+            return ToleranceState.NOT_JUDGED;
+        }
+        if (!ti.confident()) {
+            return ToleranceState.NOT_SHOWN;
+        }
+        return ti.inside(settings().spec().lsl(), settings().spec().usl()) ? ToleranceState.INSIDE
+                : ToleranceState.OUTSIDE;
+    }
+
     /** @return whether the tolerance-interval criterion was judged and not met (docs/methods.md §17) */
     public boolean toleranceFailed() {
-        var ti = settings().tolerance() == null || checks == null ? null : checks.after().tolerance();
-        return ti != null && settings().spec().any() && ti.confident()
-                && !ti.inside(settings().spec().lsl(), settings().spec().usl());
+        return toleranceState() == ToleranceState.OUTSIDE;
     }
 
     /** @return whether the capability requirement was judged and not met */

@@ -94,28 +94,37 @@ public final class Verdicts {
      * characteristic cannot pass.
      */
     private static Status tolerance(CharacteristicResult r, int decimals, List<String> reasons, Status status) {
-        org.holdpoint.study.ToleranceRequirement t = r.settings().tolerance();
+        reasons.add("tolerance: " + toleranceFinding(r, v -> Format.fixed(v, decimals)));
+        return switch (r.toleranceState()) {
+            case INSIDE, NOT_ASKED -> status;
+            case OUTSIDE -> status == Status.PASSED || status == Status.INCONCLUSIVE ? Status.FAILED : status;
+            case NOT_JUDGED, NOT_SHOWN -> status == Status.PASSED ? Status.INCONCLUSIVE : status;
+        };
+    }
+
+    /**
+     * The tolerance-interval criterion in words, as the verdict states it, e.g. "99 % / 95 % tolerance interval
+     * (4.15250, 4.22622) inside the limits (4.1, 4.26)".
+     *
+     * @param r   a result whose criteria ask for a tolerance interval
+     * @param num how to write the interval's ends
+     * @return the sentence
+     */
+    public static String toleranceFinding(CharacteristicResult r, java.util.function.DoubleFunction<String> num) {
+        String what = r.settings().tolerance().words() + " tolerance interval";
         var ti = r.checks() == null ? null : r.checks().after().tolerance();
         var spec = r.settings().spec();
-        String what = t.words() + " tolerance interval";
-        String problem = ti == null ? what + " of the after group could not be computed (see the notes)"
-                : !spec.any() ? what + " cannot be judged: no specification limits are set"
-                : !ti.confident() ? String.format(Locale.ROOT, "%s not shown: the distribution-free interval of %d "
-                        + "values has only %s confidence", what, ti.n(), Format.percent(ti.achievedConfidence()))
-                : null;
-        if (problem != null) {
-            reasons.add("tolerance: " + problem);
-            return status == Status.PASSED ? Status.INCONCLUSIVE : status;
-        }
-        String interval = Format.interval(ti, v -> Format.fixed(v, decimals));
         String limits = "(" + (spec.lsl() == null ? "no LSL" : Format.num(spec.lsl())) + ", "
                 + (spec.usl() == null ? "no USL" : Format.num(spec.usl())) + ")";
-        if (ti.inside(spec.lsl(), spec.usl())) {
-            reasons.add("tolerance: " + what + " " + interval + " inside the limits " + limits);
-            return status;
-        }
-        reasons.add("tolerance: " + what + " " + interval + " is not inside the limits " + limits);
-        return status == Status.PASSED || status == Status.INCONCLUSIVE ? Status.FAILED : status;
+        return switch (r.toleranceState()) {
+            case NOT_ASKED -> "no tolerance interval asked for";
+            case NOT_JUDGED -> ti == null ? what + " of the after group could not be computed (see the notes)"
+                    : what + " cannot be judged: no specification limits are set";
+            case NOT_SHOWN -> String.format(Locale.ROOT, "%s not shown: the distribution-free interval of %d values "
+                    + "has only %s confidence", what, ti.n(), Format.percent(ti.achievedConfidence()));
+            case INSIDE -> what + " " + Format.interval(ti, num) + " inside the limits " + limits;
+            case OUTSIDE -> what + " " + Format.interval(ti, num) + " is not inside the limits " + limits;
+        };
     }
 
     private static String describeAgainstMargin(Conclusion c) {

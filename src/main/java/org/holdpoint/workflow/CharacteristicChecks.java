@@ -106,8 +106,11 @@ final class CharacteristicChecks {
         java.util.function.Supplier<Ranks> ranking = () -> ranks(c, margin, alpha, paired);
         java.util.concurrent.CompletableFuture<Ranks> background = c.before().size() + c.after().size() >= PARALLEL_N
                 ? java.util.concurrent.CompletableFuture.supplyAsync(ranking) : null;
-        GroupChecks before = group("before", c.before(), nb, s, family, alpha, notes);
-        GroupChecks after = group("after", c.after(), na, s, family, alpha, notes);
+        // generation 4 takes the order checks in the same run order as the control charts (dates read as dates, the
+        // rows when the user says so); earlier records keep the sequence column's order as they had it
+        StabilityOptions order = study.since(4) ? study.stability() : null;
+        GroupChecks before = group("before", c.before(), nb, s, family, alpha, order, notes);
+        GroupChecks after = group("after", c.after(), na, s, family, alpha, order, notes);
         Ranks ranks = background == null ? ranking.get() : org.holdpoint.stats.Background.join(background);
         RankSumResult rankSum = ranks.rankSum();
         SignedRankResult signedRank = ranks.signedRank();
@@ -369,7 +372,7 @@ final class CharacteristicChecks {
     }
 
     private static GroupChecks group(String label, GroupData g, NormalityResult normality, CharacteristicSettings s,
-            DistributionFamily family, double alpha, List<String> notes) {
+            DistributionFamily family, double alpha, StabilityOptions order, List<String> notes) {
         normality.notes().forEach(n -> notes.add(label + ": " + n));
         FittedDistribution fit = null;
         if (family != DistributionFamily.NORMAL && s.spec().any()) {
@@ -408,8 +411,8 @@ final class CharacteristicChecks {
         }
         Lag1Result lag1 = null;
         RunsResult runs = null;
-        if (g.hasSequence()) {
-            GroupData ordered = inSequence(g);
+        GroupData ordered = inRunOrder(g, order);
+        if (ordered != null) {
             try {
                 lag1 = Independence.lag1(ordered.sample());
                 runs = Independence.runs(ordered.sample());
@@ -501,6 +504,23 @@ final class CharacteristicChecks {
         }
     }
 
+
+    /**
+     * The group in run order for the order checks, or null when none is known: with the chart options of method
+     * generation 4 the run order of the control charts; else (an earlier record) the sequence column's order.
+     */
+    private static GroupData inRunOrder(GroupData g, StabilityOptions order) {
+        if (order == null) {
+            return g.hasSequence() ? inSequence(g) : null;
+        }
+        try {
+            RunOrder o = RunOrder.of(g, order.rowOrderIsRunOrder());
+            return o == null ? null : GroupData.typed(org.holdpoint.stats.Sample.of(values(g, o.order())), g.file());
+        } catch (RunOrder.Unknown e) {
+            // the control chart's note says why the order is not known
+            return null;
+        }
+    }
 
     /** The group in the order of its sequence column (numeric when every entry is a number, else as text). */
     private static GroupData inSequence(GroupData g) {

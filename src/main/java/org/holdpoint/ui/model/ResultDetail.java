@@ -140,8 +140,7 @@ public final class ResultDetail {
         var b = k.before().tolerance();
         var a = k.after().tolerance();
         List<Line> l = new ArrayList<>();
-        String decision = r.verdict().reasons().stream().filter(x -> x.startsWith("tolerance: ")).findFirst()
-                .map(x -> x.substring("tolerance: ".length())).orElse(t.words() + " tolerance interval: not judged");
+        String decision = org.holdpoint.result.Verdicts.toleranceFinding(r, Format::num);
         l.add(new Line("Decides", "after: " + decision));
         l.add(new Line("Interval", interval(b) + "  →  " + interval(a)));
         var any = a != null ? a : b;
