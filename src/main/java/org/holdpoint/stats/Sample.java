@@ -205,9 +205,15 @@ public final class Sample {
     double[] sorted() {
         double[] s = sorted;
         if (s == null) {
-            s = values.clone();
-            Arrays.sort(s);
-            sorted = s;
+            // two threads asking at once (the rank comparison runs beside the other methods) sort once
+            synchronized (this) {
+                s = sorted;
+                if (s == null) {
+                    s = values.clone();
+                    Arrays.sort(s);
+                    sorted = s;
+                }
+            }
         }
         return s;
     }

@@ -71,6 +71,42 @@ final class CharacteristicChecks {
     private record Ranks(RankSumResult rankSum, SignedRankResult signedRank, List<String> notes) {
     }
 
+    /**
+     * The distribution-free comparison of a characteristic, started when the characteristic's analysis starts:
+     * with many values it runs beside everything else the characteristic computes (measured in
+     * docs/performance.md), otherwise it is computed when asked for. The result and the place of its notes are
+     * those of one computation after the other.
+     */
+    static final class Ranking {
+        private final java.util.function.Supplier<Ranks> work;
+        private final java.util.concurrent.CompletableFuture<Ranks> background;
+
+        private Ranking(java.util.function.Supplier<Ranks> work, boolean beside) {
+            this.work = work;
+            this.background = beside ? java.util.concurrent.CompletableFuture.supplyAsync(work) : null;
+        }
+
+        Ranks get() {
+            return background == null ? work.get() : org.holdpoint.stats.Background.join(background);
+        }
+    }
+
+    /**
+     * Starts the distribution-free comparison.
+     *
+     * @param c      the characteristic's data
+     * @param margin the equivalence margin in units, or null (none, or a ratio margin)
+     * @param alpha  the significance level
+     * @param paired whether the groups are paired
+     * @param beside whether it may run beside the caller (false: computed when asked for, for the test that both
+     *               give the same result)
+     * @return the comparison, running beside the caller from {@link #PARALLEL_N} values on when allowed
+     */
+    static Ranking startRanking(CharacteristicData c, Margin margin, double alpha, boolean paired, boolean beside) {
+        return new Ranking(() -> ranks(c, margin, alpha, paired),
+                beside && c.before().size() + c.after().size() >= PARALLEL_N);
+    }
+
     private static Ranks ranks(CharacteristicData c, Margin margin, double alpha, boolean paired) {
         List<String> notes = new ArrayList<>();
         try {
@@ -91,7 +127,7 @@ final class CharacteristicChecks {
         }
     }
 
-    static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Margin margin, double alpha,
+    static AssumptionChecks compute(CharacteristicData c, CharacteristicSettings s, Ranking ranking, double alpha,
             boolean paired, AnalysisSettings study, List<String> notes) {
         boolean currentMethods = study.since(3);
         boolean equalVariances = study.equalVariances();
@@ -101,17 +137,12 @@ final class CharacteristicChecks {
                 : FamilySelection.given(DistributionFamily.NORMAL, "the record was computed with the methods of "
                         + "its time (normal model)");
         DistributionFamily family = distribution == null ? DistributionFamily.NORMAL : distribution.chosen();
-        // with many values the distribution-free comparison runs beside the group checks (the results and the
-        // order of the notes are those of one after the other)
-        java.util.function.Supplier<Ranks> ranking = () -> ranks(c, margin, alpha, paired);
-        java.util.concurrent.CompletableFuture<Ranks> background = c.before().size() + c.after().size() >= PARALLEL_N
-                ? java.util.concurrent.CompletableFuture.supplyAsync(ranking) : null;
         // generation 4 takes the order checks in the same run order as the control charts (dates read as dates, the
         // rows when the user says so); earlier records keep the sequence column's order as they had it
         StabilityOptions order = study.since(4) ? study.stability() : null;
         GroupChecks before = group("before", c.before(), nb, s, family, alpha, order, notes);
         GroupChecks after = group("after", c.after(), na, s, family, alpha, order, notes);
-        Ranks ranks = background == null ? ranking.get() : org.holdpoint.stats.Background.join(background);
+        Ranks ranks = ranking.get();
         RankSumResult rankSum = ranks.rankSum();
         SignedRankResult signedRank = ranks.signedRank();
         notes.addAll(ranks.notes());

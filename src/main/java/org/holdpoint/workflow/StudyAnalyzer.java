@@ -42,8 +42,9 @@ public final class StudyAnalyzer {
     }
 
     /**
-     * @param parallel whether characteristics are analysed side by side (false: one by one, for the test that
-     *                 both give the same result)
+     * @param parallel whether characteristics are analysed side by side, and a large characteristic's rank
+     *                 comparison beside its other methods (false: one after the other, for the test that both give
+     *                 the same result)
      */
     public StudyAnalyzer(boolean parallel) {
         this.parallel = parallel;
@@ -158,8 +159,11 @@ public final class StudyAnalyzer {
             return notAssessable(data, study, unassessable);
         }
         checkSizes(before, after);
-        GroupPair pair = GroupPair.of(before, after);
         Margin margin = s.margin() == null ? null : s.margin().resolve(s.spec());
+        // the rank-based equivalence takes a margin in units: with a ratio margin it is left out
+        CharacteristicChecks.Ranking ranking = CharacteristicChecks.startRanking(c,
+                margin != null && margin.ratio() ? null : margin, alpha, paired, parallel);
+        GroupPair pair = GroupPair.of(before, after);
         if (margin == null) {
             notes.add("equivalence was not assessed (no margin set)");
         }
@@ -232,8 +236,7 @@ public final class StudyAnalyzer {
             notes.add("the margin is a ratio after/before: equivalence is tested on the logarithms (the ratio of the "
                     + "geometric means); the rank-based equivalence is not computed for a ratio margin");
         }
-        AssumptionChecks checks = CharacteristicChecks.compute(c, s, margin != null && margin.ratio() ? null : margin,
-                alpha, paired, study, notes);
+        AssumptionChecks checks = CharacteristicChecks.compute(c, s, ranking, alpha, paired, study, notes);
         String unit = s.unit() != null ? s.unit() : c.unit();
         CharacteristicResult draft = CharacteristicResult.builder(c.name(), unit, s, paired, method).margin(margin)
                 .descriptives(db, da)

@@ -24,7 +24,7 @@ class ParallelSameResultsTest {
     }
 
     @Test
-    void theDemoAndASkewedStudyGiveTheSameBytesEitherWay(@TempDir Path dir) throws Exception {
+    void theDemoASkewedAndALargeStudyGiveTheSameBytesEitherWay(@TempDir Path dir) throws Exception {
         // the demo study, and a study of our own whose characteristics need fitted distributions and the bootstrap
         StringBuilder csv = new StringBuilder("phase,Flatness A (mm),Runout B (mm),Bore C (mm)\n");
         java.util.SplittableRandom rnd = new java.util.SplittableRandom(20261204);
@@ -40,7 +40,18 @@ class ParallelSameResultsTest {
         Files.writeString(skew, csv);
         Files.writeString(dir.resolve("skew.settings.csv"), "characteristic,usl,margin_ratio,distribution\n"
                 + "Flatness A,0.06,1.25,gamma\nRunout B,0.05,1.25,weibull\nBore C,,,\n");
-        for (Path file : List.of(Path.of("sample-data/boring-bar-insert.csv"), skew)) {
+        // and a large one (12,000 + 12,000 values, a margin): its rank comparison runs beside its other methods
+        StringBuilder big = new StringBuilder("phase,Shaft D (mm)\n");
+        for (String phase : new String[] {"before", "after"}) {
+            for (int i = 0; i < 12_000; i++) {
+                big.append(phase).append(',').append(String.format(java.util.Locale.ROOT, "%.4f",
+                        12 + 0.01 * rnd.nextGaussian())).append('\n');
+            }
+        }
+        Path large = dir.resolve("large.csv");
+        Files.writeString(large, big);
+        Files.writeString(dir.resolve("large.settings.csv"), "characteristic,margin\nShaft D,0.004\n");
+        for (Path file : List.of(Path.of("sample-data/boring-bar-insert.csv"), skew, large)) {
             AnalysisOutcome in = imported(file);
             StudyResult sequential = new StudyAnalyzer(false).analyze(in.data(), in.settings(), Progress.NONE);
             StudyResult parallel = new StudyAnalyzer(true).analyze(in.data(), in.settings(), Progress.NONE);
