@@ -151,18 +151,44 @@ final class LayoutReader {
      * The group of row r: true before, false after, null when the row is not used (unknown or missing
      * label, recorded as a skip when the row has a value).
      */
+    private static final byte BEFORE_LABEL = 1;
+    private static final byte AFTER_LABEL = 2;
+    private static final byte OTHER_LABEL = 3;
+    /** Per text id of the group column: 0 not yet seen, else which group the label names (one plan at a time). */
+    private byte[] groupOfText = new byte[16];
+
     private Boolean groupOf(Cursor group, int r, int vi, int vc, String name) {
         if (plan.groupCol() < 0) {
             return plan.role() == Plan.Role.BEFORE || plan.role() == Plan.Role.BASELINE;
         }
         int gi = group.at(r);
-        String key = gi < 0 ? null : group.col.kind(gi) == CellKind.NUMBER ? data.display(group.col, gi)
-                : data.key(group.col.payload(gi));
-        if (key != null && plan.role() != Plan.Role.AFTER && key.equals(plan.beforeKey())) {
+        boolean text = gi >= 0 && group.col.kind(gi) != CellKind.NUMBER;
+        int id = text ? (int) group.col.payload(gi) : -1;
+        // a label's group is decided once per distinct text (a million rows share two labels)
+        byte known = text && id < groupOfText.length ? groupOfText[id] : 0;
+        if (known == BEFORE_LABEL) {
             return true;
         }
-        if (key != null && plan.role() != Plan.Role.BEFORE && key.equals(plan.afterKey())) {
+        if (known == AFTER_LABEL) {
             return false;
+        }
+        if (known == 0) {
+            String key = gi < 0 ? null : text ? data.key(id) : data.display(group.col, gi);
+            Boolean decided = null;
+            if (key != null && plan.role() != Plan.Role.AFTER && key.equals(plan.beforeKey())) {
+                decided = true;
+            } else if (key != null && plan.role() != Plan.Role.BEFORE && key.equals(plan.afterKey())) {
+                decided = false;
+            }
+            if (text) {
+                if (id >= groupOfText.length) {
+                    groupOfText = java.util.Arrays.copyOf(groupOfText, Math.max(id + 1, groupOfText.length * 2));
+                }
+                groupOfText[id] = decided == null ? OTHER_LABEL : decided ? BEFORE_LABEL : AFTER_LABEL;
+            }
+            if (decided != null) {
+                return decided;
+            }
         }
         if (vi >= 0) {
             String label = gi < 0 ? "" : data.display(group.col, gi);

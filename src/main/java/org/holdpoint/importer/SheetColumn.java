@@ -51,6 +51,44 @@ final class SheetColumn {
         size++;
     }
 
+    /**
+     * Appends the cells of the same column read from the next block of a sheet, as {@link #add} would one by one
+     * (a repeated row at the seam: the later cell wins).
+     *
+     * @param next    the cells, rows after (or equal to the last of) this column's
+     * @param textIds the id in this column's sheet of each text id of {@code next}'s sheet
+     */
+    void appendAll(SheetColumn next, int[] textIds) {
+        int n = next.size;
+        if (n == 0) {
+            return;
+        }
+        if (size > 0 && rows[size - 1] == next.rows[0]) {
+            size--;
+        }
+        if (size + n > rows.length) {
+            int cap = Math.max(size + n, size + (size >> 1) + 8);
+            rows = Arrays.copyOf(rows, cap);
+            kinds = Arrays.copyOf(kinds, cap);
+            scales = Arrays.copyOf(scales, cap);
+            payloads = Arrays.copyOf(payloads, cap);
+        }
+        System.arraycopy(next.rows, 0, rows, size, n);
+        System.arraycopy(next.kinds, 0, kinds, size, n);
+        System.arraycopy(next.scales, 0, scales, size, n);
+        int number = CellKind.NUMBER.ordinal();
+        for (int i = 0; i < n; i++) {
+            long p = next.payloads[i];
+            payloads[size + i] = next.kinds[i] == number ? p : textIds[(int) p];
+        }
+        size += n;
+    }
+
+    /** Empties the column, keeping its arrays for the next block (ParallelSheetScan). */
+    void clear() {
+        size = 0;
+    }
+
     /** Replaces the kind and payload of the i-th cell (a text re-read as a number). */
     void set(int i, CellKind kind, int scale, long payload) {
         kinds[i] = (byte) kind.ordinal();

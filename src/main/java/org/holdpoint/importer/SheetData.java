@@ -91,6 +91,11 @@ final class SheetData {
     }
 
     /** @return the text of a string id */
+    /** @return how many distinct texts the sheet holds (ids 0 to this − 1) */
+    int textCount() {
+        return texts.size();
+    }
+
     String text(long id) {
         return texts.get((int) id);
     }
@@ -349,6 +354,68 @@ final class SheetData {
     }
 
     /** Puts every column in row order (sources that deliver cells out of order). */
+    /**
+     * Appends the cells of the next block of the same sheet, read into a sheet of their own
+     * ({@link ParallelSheetScan}): afterwards this sheet holds what reading both in one pass would have given —
+     * cells, texts with the same ids, merged ranges, counts and the first cells noted per column.
+     *
+     * @param next the next block's cells; not finished
+     */
+    void append(SheetData next) {
+        int[] ids = new int[next.texts.size()];
+        for (int i = 0; i < ids.length; i++) {
+            ids[i] = id(next.texts.get(i));
+        }
+        for (int c = 0; c < next.columnCount; c++) {
+            SheetColumn from = next.columns[c];
+            if (from == null || from.size() == 0) {
+                continue;
+            }
+            if (c >= columns.length) {
+                columns = Arrays.copyOf(columns, Math.max(c + 1, columns.length * 2));
+            }
+            if (columns[c] == null) {
+                columns[c] = new SheetColumn(capacityHint);
+            }
+            columns[c].appendAll(from, ids);
+        }
+        columnCount = Math.max(columnCount, next.columnCount);
+        lastRow = Math.max(lastRow, next.lastRow);
+        cellCount += next.cellCount;
+        numbersFromText += next.numbersFromText;
+        merged.addAll(next.merged);
+        appendNotes(ownSeparatorRows, next.ownSeparatorRows);
+        appendNotes(otherSeparatorRows, next.otherSeparatorRows);
+    }
+
+    /** Empties a block's sheet after it was appended, keeping its column arrays for the next block. */
+    void clearForReuse() {
+        for (int c = 0; c < columnCount; c++) {
+            if (columns[c] != null) {
+                columns[c].clear();
+            }
+        }
+        columnCount = 0;
+        lastRow = 0;
+        cellCount = 0;
+        textIds.clear();
+        texts.clear();
+        merged.clear();
+        numbersFromText = 0;
+        ownSeparatorRows.clear();
+        otherSeparatorRows.clear();
+        otherSeparatorColumns.clear();
+    }
+
+    private static void appendNotes(Map<Integer, int[]> to, Map<Integer, int[]> from) {
+        for (Map.Entry<Integer, int[]> e : from.entrySet()) {
+            int[] rows = e.getValue();
+            for (int i = 1; i <= rows[0]; i++) {
+                note(to, rows[i], e.getKey());
+            }
+        }
+    }
+
     void finish() {
         for (int i = 0; i < columnCount; i++) {
             if (columns[i] != null) {

@@ -24,9 +24,15 @@ final class SheetXmlScanner {
 
     private final InputStream in;
     private final SheetCells cells;
-    private byte[] buf = new byte[1 << 16];
+    private byte[] buf;
     private int pos;
     private int lim;
+    /** Whether the bytes start the part (a byte-order mark and the encoding are checked there). */
+    private final boolean start;
+    /** Whether the bytes end the part (then the end of the sheet's data must have been seen). */
+    private final boolean end;
+    private boolean rowSeen;
+    private boolean markupAmongRows;
     private final ByteText value = new ByteText();
     private final ByteText formula = new ByteText();
     private final ByteText inline = new ByteText();
@@ -44,6 +50,35 @@ final class SheetXmlScanner {
     SheetXmlScanner(InputStream in, SheetCells cells) {
         this.in = in;
         this.cells = cells;
+        this.buf = new byte[1 << 16];
+        this.start = true;
+        this.end = true;
+    }
+
+    /**
+     * A scanner of one block of a part's bytes, cut before a row's start tag ({@link ParallelSheetScan}).
+     *
+     * @param block  the bytes (not copied, not changed)
+     * @param length how many of them to scan
+     * @param cells  receives the cells
+     * @param start  whether the block starts the part
+     * @param end    whether the block ends the part
+     */
+    SheetXmlScanner(byte[] block, int length, SheetCells cells, boolean start, boolean end) {
+        this.in = null;
+        this.cells = cells;
+        this.buf = block;
+        this.lim = length;
+        this.start = start;
+        this.end = end;
+    }
+
+    /**
+     * @return whether a comment or processing instruction came after the first row: a block of such a part may
+     *         have been cut inside it, so the part is scanned again in one piece
+     */
+    boolean markupAmongRows() {
+        return markupAmongRows;
     }
 
     /**
@@ -53,11 +88,13 @@ final class SheetXmlScanner {
      * @throws Unsupported  for XML the scanner does not take
      */
     void run() throws IOException, Unsupported {
-        fill();
-        if (lim >= 2 && ((buf[0] & 0xff) == 0xFE || (buf[0] & 0xff) == 0xFF || buf[0] == 0 || buf[1] == 0)) {
+        if (in != null) {
+            fill();
+        }
+        if (start && lim >= 2 && ((buf[0] & 0xff) == 0xFE || (buf[0] & 0xff) == 0xFF || buf[0] == 0 || buf[1] == 0)) {
             throw new Unsupported("not UTF-8");
         }
-        if (lim >= 3 && (buf[0] & 0xff) == 0xEF && (buf[1] & 0xff) == 0xBB && (buf[2] & 0xff) == 0xBF) {
+        if (start && lim >= 3 && (buf[0] & 0xff) == 0xEF && (buf[1] & 0xff) == 0xBB && (buf[2] & 0xff) == 0xBF) {
             pos = 3;
         }
         for (;;) {
@@ -74,7 +111,7 @@ final class SheetXmlScanner {
                     break;
                 }
                 if (!fill()) {
-                    if (!sheetDataEnded) {
+                    if (!sheetDataEnded && end) {
                         throw new IOException("the sheet's XML ends before its data is complete (the file is "
                                 + "truncated)");
                     }
@@ -95,6 +132,9 @@ final class SheetXmlScanner {
 
     /** Reads more bytes after compacting; false at the end of the stream. */
     private boolean fill() throws IOException {
+        if (in == null) {
+            return false;
+        }
         if (pos > 0) {
             System.arraycopy(buf, pos, buf, 0, lim - pos);
             lim -= pos;
@@ -123,9 +163,11 @@ final class SheetXmlScanner {
         }
         byte b1 = buf[i];
         if (b1 == '!') {
+            markupAmongRows |= rowSeen;
             return comment();
         }
         if (b1 == '?') {
+            markupAmongRows |= rowSeen;
             return quotedEnd(i);
         }
         boolean close = b1 == '/';
@@ -161,6 +203,7 @@ final class SheetXmlScanner {
             if (len == 1) {
                 startCell(selfClosing);
             } else if (len == 3) {
+                rowSeen = true;
                 cells.startRow(attrR.length() == 0 ? -1 : SheetCells.parsePositive(attrR, -1));
             } else if (first == 'm') {
                 cells.merge(attrR.toString());

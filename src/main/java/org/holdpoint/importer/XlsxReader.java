@@ -175,14 +175,29 @@ final class XlsxReader {
             String sheetName, char decimal, Context ctx) throws IOException, SAXException,
             ParserConfigurationException {
         SheetData data = SheetData.forWorkbook(name, sheetName, decimal);
+        java.util.function.Function<SheetData, SheetCells> cellsFor = d -> new SheetCells(d, ctx.strings(), ctx.styles(),
+                ctx.date1904());
         try {
-            new SheetXmlScanner(in, new SheetCells(data, ctx.strings(), ctx.styles(), ctx.date1904())).run();
+            int workers = ParallelSheetScan.workers();
+            if (workers > 1) {
+                try {
+                    ParallelSheetScan.scan(in, data, () -> SheetData.forWorkbook(name, sheetName, decimal), cellsFor,
+                            workers);
+                } catch (ParallelSheetScan.Again again) {
+                    // the blocks could not settle the part alone: scan it again from its start in one piece
+                    data = SheetData.forWorkbook(name, sheetName, decimal);
+                    try (InputStream whole = part.getInputStream()) {
+                        new SheetXmlScanner(whole, cellsFor.apply(data)).run();
+                    }
+                }
+            } else {
+                new SheetXmlScanner(in, cellsFor.apply(data)).run();
+            }
         } catch (SheetXmlScanner.Unsupported e) {
             data = SheetData.forWorkbook(name, sheetName, decimal);
             try (InputStream again = part.getInputStream()) {
                 XMLReader xr = XMLHelper.newXMLReader();
-                xr.setContentHandler(new SaxSheetHandler(new SheetCells(data, ctx.strings(), ctx.styles(),
-                        ctx.date1904())));
+                xr.setContentHandler(new SaxSheetHandler(cellsFor.apply(data)));
                 xr.parse(new InputSource(again));
             }
         }
