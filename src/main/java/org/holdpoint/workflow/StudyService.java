@@ -241,8 +241,11 @@ public final class StudyService {
     public DataSources extractDemo() {
         try {
             Path dir = Files.createTempDirectory("holdpoint-demo");
+            // the copies serve this session only: removed when the program ends (files first, then the folder)
+            dir.toFile().deleteOnExit();
             Path data = copyResource(DEMO_STUDY + ".csv", dir);
-            copyResource(DEMO_STUDY + ".settings.csv", dir);
+            data.toFile().deleteOnExit();
+            copyResource(DEMO_STUDY + ".settings.csv", dir).toFile().deleteOnExit();
             return DataSources.of(data);
         } catch (IOException e) {
             throw new StudyProblem(StudyProblem.Kind.CANNOT_WRITE, e,
