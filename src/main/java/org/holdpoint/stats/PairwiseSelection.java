@@ -167,15 +167,19 @@ abstract class PairwiseSelection {
                 p1 = pivot();
                 p2 = p1;
             }
-            long lt1 = countWindow(p1, true, ltCol);
-            long le1 = countWindow(p1, false, leCol);
+            countWindows(p1, ltCol, leCol);
+            long lt1 = countLt;
+            long le1 = countLe;
             if (k <= below + lt1) {
                 System.arraycopy(ltCol, 0, hi, 0, rows);
             } else if (k <= below + le1) {
                 return p1;
             } else {
-                long lt2 = p2 == p1 ? lt1 : countWindow(p2, true, lt2Col);
-                long le2 = p2 == p1 ? le1 : countWindow(p2, false, le2Col);
+                if (p2 != p1) {
+                    countWindows(p2, lt2Col, le2Col);
+                }
+                long lt2 = p2 == p1 ? lt1 : countLt;
+                long le2 = p2 == p1 ? le1 : countLe;
                 if (k <= below + lt2) {
                     // strictly between the two pivots
                     System.arraycopy(leCol, 0, lo, 0, rows);
@@ -204,15 +208,49 @@ abstract class PairwiseSelection {
         return live;
     }
 
-    /** Per row the window-clamped column of the first value ≥ p (strict) or &gt; p; returns the live count below. */
-    private long countWindow(double p, boolean strict, int[] out) {
-        sweep(p, strict, out);
-        long c = 0;
+    /** Live counts of the last {@link #countWindows}: values &lt; p and values ≤ p. */
+    private long countLt;
+    private long countLe;
+
+    /**
+     * Per row the window-clamped columns of the first value ≥ p (into lt) and of the first value &gt; p (into le),
+     * in one pass down the rows (the column of the first value ≥ p is never right of that of the first value &gt; p,
+     * and both never move right from row to row); sets {@link #countLt} and {@link #countLe}, the live values below.
+     */
+    private void countWindows(double p, int[] lt, int[] le) {
+        int gle = cols;
+        int glt = cols;
+        long cLt = 0;
+        long cLe = 0;
         for (int i = 0; i < rows; i++) {
-            out[i] = clamp(out[i], lo[i], hi[i]);
-            c += out[i] - lo[i];
+            int first = firstColumn(i);
+            if (gle < first) {
+                gle = first;
+            }
+            if (gle > cols) {
+                gle = cols;
+            }
+            while (gle > first && value(i, gle - 1) > p) {
+                gle--;
+            }
+            if (glt < first) {
+                glt = first;
+            }
+            if (glt > gle) {
+                glt = gle;
+            }
+            while (glt > first && value(i, glt - 1) >= p) {
+                glt--;
+            }
+            int a = clamp(glt, lo[i], hi[i]);
+            int b = clamp(gle, lo[i], hi[i]);
+            lt[i] = a;
+            le[i] = b;
+            cLt += a - lo[i];
+            cLe += b - lo[i];
         }
-        return c;
+        countLt = cLt;
+        countLe = cLe;
     }
 
     /**
