@@ -33,6 +33,18 @@ public final class Holdpoint {
     }
 
     /**
+     * The command line wired to its adapters, built for running {@code args} as {@link #main} runs them (only the
+     * subcommand they name, when they name one).
+     *
+     * @param launcher opens the window for {@code holdpoint gui}
+     * @param args     the arguments to be run
+     * @return the command line
+     */
+    public static CommandLine commandLine(WindowLauncher launcher, String[] args) {
+        return HoldpointCommand.create(launcher, archives(), args);
+    }
+
+    /**
      * Entry point.
      *
      * @param args command-line arguments
@@ -50,7 +62,7 @@ public final class Holdpoint {
         }
         int code;
         try {
-            code = HoldpointCommand.create(launcher, archives).execute(args);
+            code = HoldpointCommand.create(launcher, archives, args).execute(args);
         } catch (OutOfMemoryError e) {
             // one line, exit 3: never a stack trace, never the "edited" code of verify
             System.err.println("holdpoint: out of memory (the Java heap of " + (Runtime.getRuntime().maxMemory() >> 20)

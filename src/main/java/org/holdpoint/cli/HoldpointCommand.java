@@ -1,5 +1,6 @@
 package org.holdpoint.cli;
 
+import java.util.List;
 import org.holdpoint.workflow.ArchiveAccess;
 import org.holdpoint.workflow.Version;
 import org.holdpoint.workflow.WindowLauncher;
@@ -17,8 +18,6 @@ import picocli.CommandLine.Command;
             "",
             "Difference = after - before. A statistical result supports, never replaces, the site's "
                     + "change-control procedures and engineering judgement."},
-        subcommands = {AnalyzeCommand.class, PlanCommand.class, DemoCommand.class, VerifyCommand.class, SignCommand.class,
-            ArchiveCommand.class, KeygenCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit codes: 0 analysed, 1 altered (verify), 2 bad input, 3 internal error.",
             "Run 'holdpoint demo' for a finished example on bundled sample data."})
 public final class HoldpointCommand implements Runnable {
@@ -58,10 +57,44 @@ public final class HoldpointCommand implements Runnable {
      * @return the command line
      */
     public static CommandLine create(WindowLauncher launcher, ArchiveAccess archives) {
+        return create(launcher, archives, null);
+    }
+
+    /** The subcommands in the order the usage lists them, {@code gui} after them. */
+    private static final List<Class<?>> SUBCOMMANDS = List.of(AnalyzeCommand.class, PlanCommand.class,
+            DemoCommand.class, VerifyCommand.class, SignCommand.class, ArchiveCommand.class, KeygenCommand.class,
+            CommandLine.HelpCommand.class);
+
+    /**
+     * As {@link #create(WindowLauncher, ArchiveAccess)}, for running {@code args}: when their first word names a
+     * subcommand other than {@code help}, only that subcommand is built (the model of every subcommand took about
+     * 40 ms of each start; docs/performance.md); otherwise all of them, for the usage, help and suggestions.
+     *
+     * @param launcher opens the window
+     * @param archives opens the change-record archive
+     * @param args     the arguments to be run, or null
+     * @return the command line
+     */
+    public static CommandLine create(WindowLauncher launcher, ArchiveAccess archives, String[] args) {
         HoldpointCommand root = new HoldpointCommand();
         root.archives = java.util.Objects.requireNonNull(archives, "archives");
         CommandLine cl = new CommandLine(root);
-        cl.addSubcommand("gui", new GuiCommand(launcher));
+        String first = args == null || args.length == 0 ? null : args[0];
+        Class<?> only = null;
+        for (Class<?> c : SUBCOMMANDS) {
+            String name = c.getAnnotation(Command.class).name();
+            if (name.equals(first) && !"help".equals(name)) {
+                only = c;
+            }
+        }
+        if (only != null) {
+            cl.addSubcommand(only);
+        } else if (!"gui".equals(first)) {
+            SUBCOMMANDS.forEach(cl::addSubcommand);
+        }
+        if (only == null) {
+            cl.addSubcommand("gui", new GuiCommand(launcher));
+        }
         cl.setExecutionExceptionHandler(new Failures());
         cl.setParameterExceptionHandler(new Failures());
         // every number option is a finite number: 1e400 is refused in the user's words, never "Infinity"

@@ -19,7 +19,7 @@ class AnalyzeCommandTest {
     }
 
     static Run run(String... args) {
-        CommandLine cl = org.holdpoint.Holdpoint.commandLine(org.holdpoint.workflow.WindowLauncher.NONE);
+        CommandLine cl = org.holdpoint.Holdpoint.commandLine(org.holdpoint.workflow.WindowLauncher.NONE, args);
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         cl.setOut(new PrintWriter(out, true));

@@ -39,7 +39,7 @@ class VerifyCommandTest {
     private int run(String... args) {
         out.getBuffer().setLength(0);
         err.getBuffer().setLength(0);
-        CommandLine cl = org.holdpoint.Holdpoint.commandLine(org.holdpoint.workflow.WindowLauncher.NONE);
+        CommandLine cl = org.holdpoint.Holdpoint.commandLine(org.holdpoint.workflow.WindowLauncher.NONE, args);
         cl.setOut(new PrintWriter(out, true));
         cl.setErr(new PrintWriter(err, true));
         return cl.execute(args);

@@ -94,12 +94,13 @@ class HostileStudyFilesTest {
     @MethodSource("edits")
     void isRefusedByTheCommandsWithExitTwo(String name, Consumer<ObjectNode> edit, String message) throws Exception {
         Path f = edited(edit);
-        var cl = org.holdpoint.Holdpoint.commandLine(org.holdpoint.workflow.WindowLauncher.NONE);
+        String url = "jdbc:h2:file:" + dir.resolve("a").toAbsolutePath() + "/db";
+        String[] args = {"archive", "add", f.toString(), "--archive", url};
+        var cl = org.holdpoint.Holdpoint.commandLine(org.holdpoint.workflow.WindowLauncher.NONE, args);
         java.io.StringWriter err = new java.io.StringWriter();
         cl.setErr(new java.io.PrintWriter(err, true));
         cl.setOut(new java.io.PrintWriter(new java.io.StringWriter(), true));
-        String url = "jdbc:h2:file:" + dir.resolve("a").toAbsolutePath() + "/db";
-        int code = cl.execute("archive", "add", f.toString(), "--archive", url);
+        int code = cl.execute(args);
         assertThat(code).as(name + ": " + err).isEqualTo(2);
         assertThat(err.toString()).contains(message);
     }
