@@ -9,6 +9,51 @@ public final class Background {
     }
 
     /**
+     * Starts work on the common pool that {@link Forked#join} runs on the joining thread itself when no pool thread
+     * has taken it yet (so a busy pool never makes the caller wait idle).
+     *
+     * @param <T>  the result type
+     * @param work the work
+     * @return the handle to join
+     */
+    public static <T> Forked<T> fork(java.util.function.Supplier<T> work) {
+        Forked<T> f = new Forked<>(work);
+        java.util.concurrent.ForkJoinPool.commonPool().execute(f.task);
+        return f;
+    }
+
+    /** @param <T> the result type of work started by {@link #fork} */
+    public static final class Forked<T> {
+        private final java.util.concurrent.ForkJoinTask<Object[]> task;
+
+        private Forked(java.util.function.Supplier<T> work) {
+            task = java.util.concurrent.ForkJoinTask.adapt(() -> {
+                try {
+                    return new Object[] {work.get(), null};
+                } catch (RuntimeException | Error e) {
+                    return new Object[] {null, e};
+                }
+            });
+        }
+
+        /**
+         * @return the work's result
+         * @throws RuntimeException the work's own exception, as it was thrown
+         */
+        @SuppressWarnings("unchecked")
+        public T join() {
+            Object[] r = task.join();
+            if (r[1] instanceof RuntimeException e) {
+                throw e;
+            }
+            if (r[1] instanceof Error e) {
+                throw e;
+            }
+            return (T) r[0];
+        }
+    }
+
+    /**
      * @param <T> the result type
      * @param f   work started with {@link CompletableFuture#supplyAsync}
      * @return its result

@@ -145,11 +145,17 @@ abstract class PairwiseSelection {
      * @return that value, exactly one of the computed doubles
      */
     double select(long k) {
-        for (int i = 0; i < rows; i++) {
-            lo[i] = firstColumn(i);
-            hi[i] = cols;
-        }
         long below = 0;
+        if (startLo != null && k >= preparedMin && k <= preparedMax) {
+            System.arraycopy(startLo, 0, lo, 0, rows);
+            System.arraycopy(startHi, 0, hi, 0, rows);
+            below = startBelow;
+        } else {
+            for (int i = 0; i < rows; i++) {
+                lo[i] = firstColumn(i);
+                hi[i] = cols;
+            }
+        }
         long limit = LIVE_FACTOR * ((long) rows + cols);
         lastRounds = 0;
         SplittableRandom rnd = new SplittableRandom(SEED);
@@ -160,7 +166,7 @@ abstract class PairwiseSelection {
             double p1;
             double p2;
             if (sampled) {
-                double[] pivots = samplePivots(rnd, live, k - below);
+                double[] pivots = samplePivots(rnd, live, k - below, k - below);
                 p1 = pivots[0];
                 p2 = pivots[1];
             } else {
@@ -198,6 +204,54 @@ abstract class PairwiseSelection {
             live = next;
         }
         return selectFromLive((int) live, (int) (k - below));
+    }
+
+    /** The window {@link #prepare} left, from which a selection of a rank inside its range starts. */
+    private int[] startLo;
+    private int[] startHi;
+    private long startBelow;
+    private long preparedMin;
+    private long preparedMax;
+
+    /**
+     * Narrows the live windows to values that hold every rank in [kMin, kMax], with sampled pivot pairs
+     * bracketing the range, while a round drops at least a quarter; later {@link #select} calls for ranks in the
+     * range start from there instead of from the whole matrix. The rank-sum comparison selects its estimate and
+     * its interval bounds, whose ranks lie within a small fraction of K of each other, so they share these rounds.
+     * The values selected are the same either way (each is the k-th smallest); only the work changes.
+     *
+     * @param kMin the lowest rank that will be selected (1-based)
+     * @param kMax the highest rank that will be selected
+     */
+    void prepare(long kMin, long kMax) {
+        for (int i = 0; i < rows; i++) {
+            lo[i] = firstColumn(i);
+            hi[i] = cols;
+        }
+        long below = 0;
+        long live = liveCount();
+        long limit = LIVE_FACTOR * ((long) rows + cols);
+        SplittableRandom rnd = new SplittableRandom(SEED);
+        while (live > limit && samplePivots) {
+            double[] pivots = samplePivots(rnd, live, kMin - below, kMax - below);
+            countWindows(pivots[0], ltCol, leCol);
+            long lt1 = countLt;
+            countWindows(pivots[1], lt2Col, le2Col);
+            long le2 = countLe;
+            long next = le2 - lt1;
+            if (kMin <= below + lt1 || kMax > below + le2 || next > live - live / 4) {
+                break; // the pair missed the range, or the range is too wide to shrink the windows much more
+            }
+            System.arraycopy(ltCol, 0, lo, 0, rows);
+            System.arraycopy(le2Col, 0, hi, 0, rows);
+            below += lt1;
+            live = next;
+        }
+        startLo = lo.clone();
+        startHi = hi.clone();
+        startBelow = below;
+        preparedMin = kMin;
+        preparedMax = kMax;
     }
 
     private long liveCount() {
@@ -258,7 +312,7 @@ abstract class PairwiseSelection {
      * of a sorted uniform sample of s live values (Floyd &amp; Rivest 1975, "Expected time bounds for selection",
      * CACM 18:165–172); the kept middle holds about 6/√s of the live values.
      */
-    private double[] samplePivots(SplittableRandom rnd, long live, long r) {
+    private double[] samplePivots(SplittableRandom rnd, long live, long r, long rHigh) {
         prefix[0] = 0;
         for (int i = 0; i < rows; i++) {
             prefix[i + 1] = prefix[i] + (hi[i] - lo[i]);
@@ -272,9 +326,10 @@ abstract class PairwiseSelection {
         }
         java.util.Arrays.sort(sample, 0, size);
         double centre = (double) (r - 1) / live * size;
+        double centreHigh = (double) (rHigh - 1) / live * size;
         int gap = (int) Math.ceil(3 * Math.sqrt(size));
         int i1 = (int) Math.max(0, Math.floor(centre - gap));
-        int i2 = (int) Math.min(size - 1, Math.ceil(centre + gap));
+        int i2 = (int) Math.min(size - 1, Math.ceil(centreHigh + gap));
         return new double[] {sample[i1], sample[i2]};
     }
 

@@ -98,6 +98,21 @@ public final class RankSumTest {
         boolean ties = merged.tieSum() != 0;
         boolean exact = rule == RankMethodRule.AUTOMATIC && m < EXACT_LIMIT && n < EXACT_LIMIT && !ties;
         PairwiseSelection sel = PairwiseSelection.differences(a, b);
+        double nn = (double) m + n;
+        double sigma0 = exact ? Double.NaN : Math.sqrt((k / 12.0)
+                * ((nn + 1) - (RankDistributions.tieSum(a) + RankDistributions.tieSum(b)) / (nn * (nn - 1))));
+        if (!exact && k >= SHARED_ROUNDS_FROM) {
+            // the estimate and the interval bounds are ranks close together: their first rounds are shared
+            long lowest = (k + 1) / 2;
+            long highest = k / 2 + 1;
+            for (double level : margin == null || k >= parallelFrom ? new double[] {alpha}
+                    : new double[] {alpha, 2 * alpha}) {
+                long[] idx = RankDistributions.crossingIndices(k, Normal.upperQuantile(level / 2), sigma0);
+                lowest = Math.min(lowest, Math.max(1, Math.min(k, idx[0])));
+                highest = Math.max(highest, Math.max(1, Math.min(k, idx[1])));
+            }
+            sel.prepare(lowest, highest);
+        }
         double[] mid = sel.middlePair();
         double shift = RankDistributions.midpoint(mid[0], mid[1]);
         Double p;
@@ -111,7 +126,6 @@ public final class RankSumTest {
             ci = exactInterval(sel, cdf, k, alpha, m, n, notes);
             eq = margin == null ? null : exactInterval(sel, cdf, k, 2 * alpha, m, n, notes);
         } else {
-            double nn = (double) m + n;
             double sigma2 = (k / 12.0) * ((nn + 1) - merged.tieSum() / (nn * (nn - 1)));
             double dz = (twiceU - (double) k) / 2;
             if (sigma2 > 0) {
@@ -121,8 +135,6 @@ public final class RankSumTest {
                 p = null;
                 notes.add("all values are equal, so the rank-sum p-value is undefined");
             }
-            double sigma0 = Math.sqrt((k / 12.0)
-                    * ((nn + 1) - (RankDistributions.tieSum(a) + RankDistributions.tieSum(b)) / (nn * (nn - 1))));
             if (margin != null && k >= parallelFrom) {
                 // with many pairs the equivalence interval is selected beside the confidence interval, on a
                 // selection of its own (each selection is deterministic, so the bounds are the same either way)
@@ -180,6 +192,8 @@ public final class RankSumTest {
 
     /** From this many pairwise differences the two intervals are selected side by side (measured). */
     static final long PARALLEL_PAIRS = 100_000_000L;
+    /** From this many pairwise differences the selections share their first rounds (PairwiseSelection.prepare). */
+    static final long SHARED_ROUNDS_FROM = 10_000_000L;
 
     /**
      * @param pairs from how many pairwise differences the two intervals are selected side by side

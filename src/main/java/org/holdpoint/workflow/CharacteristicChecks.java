@@ -89,6 +89,11 @@ final class CharacteristicChecks {
         Ranks get() {
             return background == null ? work.get() : org.holdpoint.stats.Background.join(background);
         }
+
+        /** @return whether the characteristic is large enough to spread its work over threads, and may */
+        boolean beside() {
+            return background != null;
+        }
     }
 
     /**
@@ -131,8 +136,12 @@ final class CharacteristicChecks {
             boolean paired, AnalysisSettings study, List<String> notes) {
         boolean currentMethods = study.since(3);
         boolean equalVariances = study.equalVariances();
+        // a large characteristic computes the after group's checks beside the before group's (the pool thread takes
+        // them when the rank comparison leaves it free, else this thread does); results and notes as one after other
+        boolean beside = ranking.beside();
+        var naBeside = beside ? org.holdpoint.stats.Background.fork(() -> NormalityResult.of(c.after().sample())) : null;
         NormalityResult nb = NormalityResult.of(c.before().sample());
-        NormalityResult na = NormalityResult.of(c.after().sample());
+        NormalityResult na = naBeside != null ? naBeside.join() : NormalityResult.of(c.after().sample());
         FamilySelection distribution = !s.spec().any() ? null : currentMethods ? selectFamily(c, s, nb, na, notes)
                 : FamilySelection.given(DistributionFamily.NORMAL, "the record was computed with the methods of "
                         + "its time (normal model)");
@@ -140,8 +149,15 @@ final class CharacteristicChecks {
         // generation 4 takes the order checks in the same run order as the control charts (dates read as dates, the
         // rows when the user says so); earlier records keep the sequence column's order as they had it
         StabilityOptions order = study.since(4) ? study.stability() : null;
+        List<String> afterNotes = beside ? new ArrayList<>() : notes;
+        var afterBeside = beside ? org.holdpoint.stats.Background.fork(() -> group("after", c.after(), na, s, family,
+                alpha, order, afterNotes)) : null;
         GroupChecks before = group("before", c.before(), nb, s, family, alpha, order, notes);
-        GroupChecks after = group("after", c.after(), na, s, family, alpha, order, notes);
+        GroupChecks after = afterBeside != null ? afterBeside.join() : group("after", c.after(), na, s, family, alpha,
+                order, notes);
+        if (afterBeside != null) {
+            notes.addAll(afterNotes);
+        }
         Ranks ranks = ranking.get();
         RankSumResult rankSum = ranks.rankSum();
         SignedRankResult signedRank = ranks.signedRank();

@@ -133,4 +133,28 @@ class PairwiseSelectionTest {
             assertThat(PairwiseSelection.weightedMedian(v.clone(), w, n, r + 1)).isEqualTo(sorted[r]);
         }
     }
+
+    @Test
+    void selectionsFromAPreparedRangeEqualTheBruteForceOnes() {
+        // the shared first rounds of the rank-sum selections: ranks inside and outside the prepared range
+        SplittableRandom rnd = new SplittableRandom(20261204);
+        for (int kind = 0; kind < 3; kind++) {
+            for (int rep = 0; rep < 4; rep++) {
+                double[] a = draw(rnd, 300 + rnd.nextInt(700), kind);
+                double[] b = draw(rnd, 300 + rnd.nextInt(700), kind);
+                double[] all = bruteDifferences(a, b);
+                long k = all.length;
+                long mid = (k + 1) / 2;
+                long half = Math.max(1, (long) (k * (0.0005 + 0.01 * rep)));
+                PairwiseSelection sel = PairwiseSelection.differences(a, b);
+                sel.prepare(mid - half, mid + half);
+                for (long r : new long[] {mid - half, mid - half / 2, mid, mid + 1, mid + half, 1, k, mid - half - 1,
+                    mid + half + 1}) {
+                    assertThat(sel.select(r)).as("kind %d, rank %d of %d", kind, r, k).isEqualTo(all[(int) r - 1]);
+                }
+                assertThat(sel.middlePair()).containsExactly(all[(int) ((k + 1) / 2) - 1],
+                        all[(int) (k % 2 == 1 ? (k + 1) / 2 : k / 2 + 1) - 1]);
+            }
+        }
+    }
 }
