@@ -323,9 +323,15 @@ public final class DataImporter {
         Plan plan = choosing.choose(LayoutResolver.resolve(data, header, r, role, stem(path)));
         log.message(describePlan(data, plan, r.layout() != null));
         if (!plan.setAside().isEmpty()) {
-            List<String> aside = new ArrayList<>();
+            // columns set aside for the same reason are named together, the reason once (52 columns outside a
+            // settings file's list made one line of 52 repeated reasons)
+            Map<String, List<String>> byReason = new LinkedHashMap<>();
             for (Map.Entry<Integer, String> e : plan.setAside().entrySet()) {
-                aside.add(col(plan.header(), e.getKey()) + ": " + e.getValue());
+                byReason.computeIfAbsent(e.getValue(), k -> new ArrayList<>()).add(col(plan.header(), e.getKey()));
+            }
+            List<String> aside = new ArrayList<>();
+            for (Map.Entry<String, List<String>> e : byReason.entrySet()) {
+                aside.add(String.join(", ", e.getValue()) + ": " + e.getKey());
             }
             log.message(data.where() + ": columns not read as characteristics: " + String.join("; ", aside));
         }

@@ -141,7 +141,10 @@ class ShopFloorExportsTest {
                 "4", "--after-header-row", "6", "--only", "Overall length", "--only", "width");
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("header in row 4", "header in row 6", "Overall length", "Width")
-                .contains("\"Pin hole dia\" (H): not in the criteria, not analysed");
+                .contains("\"Pin hole dia\" (H), \"Weight\" (I), \"Flatness\" (J), \"Wall thickness\" (K), "
+                        + "\"Mould temp\" (L): not in the criteria, not analysed");
+        // the columns left out for the same reason are named together, the reason once per file
+        assertThat(r.out().split("not in the criteria, not analysed", -1)).hasSize(3);
         Run wrong = run("analyze", before.toString(), "--before-header-row", "4");
         assertThat(wrong.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(wrong.err()).contains("--before-header-row is for two-file input");
@@ -171,7 +174,8 @@ class ShopFloorExportsTest {
         assertThat(names(out)).containsExactly("Overall length", "Pin hole dia");
         // the criteria row written in another spelling applies to its characteristic
         assertThat(characteristic(out, "Pin hole dia").path("tost").path("upperMargin").asDouble()).isEqualTo(0.003);
-        assertThat(ok.out()).contains("\"Width\" (G): not in the criteria, not analysed");
+        assertThat(ok.out()).contains("\"Width\" (G), \"Weight\" (I), \"Flatness\" (J), \"Wall thickness\" (K), "
+                + "\"Mould temp\" (L): not in the criteria, not analysed");
     }
 
     @Test
