@@ -68,7 +68,7 @@ public final class HoldpointCommand implements Runnable {
     /**
      * As {@link #create(WindowLauncher, ArchiveAccess)}, for running {@code args}: when their first word names a
      * subcommand other than {@code help}, only that subcommand is built (the model of every subcommand took about
-     * 40 ms of each start; docs/performance.md); otherwise all of them, for the usage, help and suggestions.
+     * 30 ms of each start; docs/performance.md); otherwise all of them, for the usage, help and suggestions.
      *
      * @param launcher opens the window
      * @param archives opens the change-record archive

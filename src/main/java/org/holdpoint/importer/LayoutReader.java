@@ -147,16 +147,16 @@ final class LayoutReader {
         }
     }
 
-    /**
-     * The group of row r: true before, false after, null when the row is not used (unknown or missing
-     * label, recorded as a skip when the row has a value).
-     */
     private static final byte BEFORE_LABEL = 1;
     private static final byte AFTER_LABEL = 2;
     private static final byte OTHER_LABEL = 3;
     /** Per text id of the group column: 0 not yet seen, else which group the label names (one plan at a time). */
     private byte[] groupOfText = new byte[16];
 
+    /**
+     * The group of row r: true before, false after, null when the row is not used (unknown or missing
+     * label, recorded as a skip when the row has a value).
+     */
     private Boolean groupOf(Cursor group, int r, int vi, int vc, String name) {
         if (plan.groupCol() < 0) {
             return plan.role() == Plan.Role.BEFORE || plan.role() == Plan.Role.BASELINE;

@@ -400,6 +400,7 @@ final class SheetData {
         cellCount = 0;
         textIds.clear();
         texts.clear();
+        Arrays.fill(keys, null);
         merged.clear();
         numbersFromText = 0;
         ownSeparatorRows.clear();

@@ -146,7 +146,10 @@ final class WorkbookPlan {
         for (CharacteristicResult c : input.result().characteristics()) {
             summaryRow(s, row++, c0, k++, c);
         }
-        int[] need = widenToContent(s, r0, Integer.MAX_VALUE, c0, widths);
+        int[] need = contentWidths(s, r0, Integer.MAX_VALUE, c0, widths);
+        for (int i = 0; i < need.length; i++) {
+            s.width(c0 + i, need[i]);
+        }
         // a name longer than its column wraps: its row gets the height of its lines (9-point text)
         int r = r0 + 1;
         for (CharacteristicResult c : input.result().characteristics()) {
@@ -169,8 +172,8 @@ final class WorkbookPlan {
     }
 
     /**
-     * Widens the table's columns to their content (a long name, a wide interval, sizes of four digits), so that
-     * nothing is cut or shown as ### when printed; a column never narrows, and grows to at most
+     * The widths a table's columns need for their content (a long name, a wide interval, sizes of four digits), so
+     * that nothing is cut or shown as ### when printed; a column never narrows, and grows to at most
      * {@link #MAX_SUMMARY_WIDTH}.
      *
      * @param s      the sheet
@@ -178,9 +181,9 @@ final class WorkbookPlan {
      * @param rEnd   the row after the table's last
      * @param c0     the table's first column
      * @param widths the columns' widths as laid out
-     * @return the widths set
+     * @return the widths needed
      */
-    private static int[] widenToContent(SheetContent s, int r0, int rEnd, int c0, int[] widths) {
+    private static int[] contentWidths(SheetContent s, int r0, int rEnd, int c0, int[] widths) {
         int[] need = widths.clone();
         for (ShownCell cell : s.cells) {
             int i = cell.column() - c0;
@@ -189,9 +192,6 @@ final class WorkbookPlan {
                         .decimals() + "f", (Double) cell.value()).length();
                 need[i] = Math.max(need[i], Math.min(MAX_SUMMARY_WIDTH, len + 2));
             }
-        }
-        for (int i = 0; i < need.length; i++) {
-            s.width(c0 + i, need[i]);
         }
         return need;
     }
@@ -281,13 +281,9 @@ final class WorkbookPlan {
         }
         // the means table's cells are single-line numbers and sizes (names and intervals wrap): widen the sizes'
         // and numbers' columns to their content, e.g. "1499 / 1500"
-        int[] sized = MEANS_WIDTHS.clone();
-        int[] measured = widenToContent(s, r0, row, c0, MEANS_WIDTHS);
+        int[] measured = contentWidths(s, r0, row, c0, MEANS_WIDTHS);
         for (int i : new int[] {3, 4, 5, 6}) {
-            sized[i] = measured[i];
-        }
-        for (int i = 0; i < sized.length; i++) {
-            s.width(c0 + i, sized[i]);
+            s.width(c0 + i, measured[i]);
         }
         // the second table starts on a page of its own unless both fit under the header block (about 330 pt of
         // rows on a landscape A4 page): a table is never split from its header row by the page end

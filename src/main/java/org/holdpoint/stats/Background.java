@@ -3,7 +3,13 @@ package org.holdpoint.stats;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
 
-/** Work computed beside the caller's thread, joined with its own exception (a failure there is never wrapped). */
+/**
+ * Work computed beside the caller's thread, joined with its own exception (a failure there is never wrapped). Two
+ * kinds: work started with {@link java.util.concurrent.CompletableFuture#supplyAsync} always runs beside the caller
+ * (on two cores the common pool has one thread, and such work then gets a thread of its own), which is what the rank
+ * comparison needs; work started with {@link #fork} runs beside the caller only if a pool thread is free, else the
+ * caller runs it when it joins, which suits work that helps but must never wait in a queue.
+ */
 public final class Background {
     private Background() {
     }

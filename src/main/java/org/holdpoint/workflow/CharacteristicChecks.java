@@ -90,7 +90,7 @@ final class CharacteristicChecks {
             return background == null ? work.get() : org.holdpoint.stats.Background.join(background);
         }
 
-        /** @return whether the characteristic is large enough to spread its work over threads, and may */
+        /** @return whether the comparison runs beside the caller (then the characteristic's other work may too) */
         boolean beside() {
             return background != null;
         }
@@ -136,8 +136,8 @@ final class CharacteristicChecks {
             boolean paired, AnalysisSettings study, List<String> notes) {
         boolean currentMethods = study.since(3);
         boolean equalVariances = study.equalVariances();
-        // a large characteristic computes the after group's checks beside the before group's (the pool thread takes
-        // them when the rank comparison leaves it free, else this thread does); results and notes as one after other
+        // a large characteristic computes the after group's checks beside the before group's (a pool thread takes
+        // them when one is free, else this thread does when it joins); results and notes as one after the other
         boolean beside = ranking.beside();
         var naBeside = beside ? org.holdpoint.stats.Background.fork(() -> NormalityResult.of(c.after().sample())) : null;
         NormalityResult nb = NormalityResult.of(c.before().sample());
