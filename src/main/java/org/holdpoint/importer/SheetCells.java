@@ -2,7 +2,6 @@ package org.holdpoint.importer;
 
 import java.util.Arrays;
 import org.apache.poi.ss.usermodel.DateUtil;
-import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
 
 /**
  * Turns the cells of a worksheet part (as a parser reports them) into {@link SheetData} cells: shared
@@ -11,7 +10,7 @@ import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
  */
 final class SheetCells {
     private final SheetData data;
-    private final ReadOnlySharedStringsTable strings;
+    private final SharedStrings strings;
     private final CellStyles styles;
     private final DecimalParser parser = new DecimalParser('.');
     private byte[] dateStyle = new byte[16];
@@ -26,7 +25,7 @@ final class SheetCells {
 
     private final boolean date1904;
 
-    SheetCells(SheetData data, ReadOnlySharedStringsTable strings, CellStyles styles, boolean date1904) {
+    SheetCells(SheetData data, SharedStrings strings, CellStyles styles, boolean date1904) {
         this.date1904 = date1904;
         this.data = data;
         this.strings = strings;
@@ -104,20 +103,20 @@ final class SheetCells {
 
     private void sharedString(CharSequence value) {
         int idx = parsePositive(value, -1);
-        if (idx < 0 || idx >= strings.getCount()) {
+        if (idx < 0 || idx >= strings.size()) {
             data.addOther(row, col, CellKind.ERROR, "(shared string " + value + " missing)");
             return;
         }
         if (idx >= sstDone.length) {
-            int n = Math.max(idx + 1, Math.min(strings.getCount(), sstDone.length * 2 + 16));
+            int n = Math.max(idx + 1, Math.min(strings.size(), sstDone.length * 2 + 16));
             sstDone = Arrays.copyOf(sstDone, n);
             sstKind = Arrays.copyOf(sstKind, n);
             sstScale = Arrays.copyOf(sstScale, n);
             sstPayload = Arrays.copyOf(sstPayload, n);
         }
         if (!sstDone[idx]) {
-            String text = strings.getItemAt(idx).getString();
-            if (text == null || !data.prepare(text)) {
+            String text = strings.text(idx);
+            if (!data.prepare(text)) {
                 sstKind[idx] = -1;
             } else {
                 sstKind[idx] = (byte) data.preparedKind.ordinal();

@@ -15,7 +15,6 @@ import org.apache.poi.openxml4j.exceptions.OpenXML4JRuntimeException;
 import org.apache.poi.openxml4j.opc.OPCPackage;
 import org.apache.poi.openxml4j.opc.PackageAccess;
 import org.apache.poi.util.XMLHelper;
-import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
 import org.apache.poi.xssf.eventusermodel.XSSFReader;
 import org.xml.sax.InputSource;
 import org.xml.sax.SAXException;
@@ -23,7 +22,7 @@ import org.xml.sax.XMLReader;
 
 /**
  * Reads one sheet of an Office Open XML workbook (.xlsx, .xlsm) with POI's streaming reader
- * ({@link XSSFReader}, the shared-strings table and the styles), parsing the sheet's XML with SAX so
+ * ({@link XSSFReader}) and the workbook's shared strings ({@link SharedStrings}) and styles, scanning the sheet's XML so
  * that a sheet of a million rows never becomes a workbook object model. Numbers are taken from the
  * cell's stored text (exact decimals); formulas give their cached value, and a formula without one,
  * error values, booleans and date-formatted numbers keep their own kinds. POI's zip-bomb guard (the
@@ -98,7 +97,7 @@ final class XlsxReader {
     private static SheetData readPackage(OPCPackage pkg, String name, String wanted, char decimal,
             List<String> messages) throws IOException, OpenXML4JException, SAXException, ParserConfigurationException {
         XSSFReader reader = new XSSFReader(pkg);
-        ReadOnlySharedStringsTable strings = new ReadOnlySharedStringsTable(pkg, false);
+        SharedStrings strings = SharedStrings.read(pkg);
         CellStyles styles;
         try (InputStream in = reader.getStylesData()) {
             styles = CellStyles.read(in);
@@ -158,7 +157,7 @@ final class XlsxReader {
      * encoding, CDATA, a document type), with SAX from a fresh stream of the part.
      */
     /** What every sheet of a workbook shares. */
-    private record Context(ReadOnlySharedStringsTable strings, CellStyles styles, boolean date1904) {
+    private record Context(SharedStrings strings, CellStyles styles, boolean date1904) {
     }
 
     /** Whether the workbook counts dates from 1904 (workbookPr date1904, ECMA-376 Part 1 §18.2.28). */

@@ -18,7 +18,6 @@ import org.apache.poi.openxml4j.opc.OPCPackage;
 import org.apache.poi.openxml4j.opc.PackageAccess;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
-import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
 import org.apache.poi.xssf.eventusermodel.XSSFReader;
 import org.apache.poi.xssf.streaming.SXSSFWorkbook;
 import org.junit.jupiter.api.Test;
@@ -116,22 +115,22 @@ class ParallelSheetScanTest {
         sb.append('>').append(inner).append("</").append(p).append("c>");
     }
 
-    private static ReadOnlySharedStringsTable strings() throws Exception {
-        return new ReadOnlySharedStringsTable(new ByteArrayInputStream(SST.getBytes(StandardCharsets.UTF_8)));
+    private static SharedStrings strings() throws Exception {
+        return SharedStrings.read(new ByteArrayInputStream(SST.getBytes(StandardCharsets.UTF_8)));
     }
 
     private static CellStyles styles() throws Exception {
         return CellStyles.read(new ByteArrayInputStream(STYLES.getBytes(StandardCharsets.UTF_8)));
     }
 
-    private static SheetData oneScan(byte[] xml, ReadOnlySharedStringsTable sst, CellStyles st) throws Exception {
+    private static SheetData oneScan(byte[] xml, SharedStrings sst, CellStyles st) throws Exception {
         SheetData d = SheetData.forWorkbook("gauge.xlsx", "Data", SheetData.PER_COLUMN);
         new SheetXmlScanner(new ByteArrayInputStream(xml), new SheetCells(d, sst, st, false)).run();
         d.finish();
         return d;
     }
 
-    private static SheetData blocks(byte[] xml, ReadOnlySharedStringsTable sst, CellStyles st, int workers, int block)
+    private static SheetData blocks(byte[] xml, SharedStrings sst, CellStyles st, int workers, int block)
             throws Exception {
         SheetData d = SheetData.forWorkbook("gauge.xlsx", "Data", SheetData.PER_COLUMN);
         ParallelSheetScan.scan(new ByteArrayInputStream(xml), d,
@@ -167,7 +166,7 @@ class ParallelSheetScanTest {
 
     @Test
     void blocksCutEveryFewHundredBytesGiveWhatOneScanGives() throws Exception {
-        ReadOnlySharedStringsTable sst = strings();
+        SharedStrings sst = strings();
         CellStyles st = styles();
         int sheets = 0;
         for (String prefix : List.of("", "x:")) {
@@ -264,7 +263,7 @@ class ParallelSheetScanTest {
         SheetData one;
         try (OPCPackage pkg = OPCPackage.open(f.toFile(), PackageAccess.READ)) {
             XSSFReader reader = new XSSFReader(pkg);
-            ReadOnlySharedStringsTable sst = new ReadOnlySharedStringsTable(pkg, false);
+            SharedStrings sst = SharedStrings.read(pkg);
             CellStyles st;
             try (InputStream in = reader.getStylesData()) {
                 st = CellStyles.read(in);
