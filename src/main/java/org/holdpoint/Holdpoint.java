@@ -3,6 +3,7 @@ package org.holdpoint;
 import java.awt.GraphicsEnvironment;
 import org.holdpoint.archive.JdbcArchive;
 import org.holdpoint.cli.HoldpointCommand;
+import org.holdpoint.importer.WorkbookWarmUp;
 import org.holdpoint.ui.swing.MainWindow;
 import org.holdpoint.workflow.ArchiveAccess;
 import org.holdpoint.workflow.WindowLauncher;
@@ -59,6 +60,9 @@ public final class Holdpoint {
         if (args.length == 0 && !GraphicsEnvironment.isHeadless()) {
             launcher.open();
             return;
+        }
+        if (args.length > 0 && args[0].equals("analyze") && WorkbookWarmUp.namesWorkbook(args)) {
+            WorkbookWarmUp.start();
         }
         int code;
         try {

@@ -94,7 +94,7 @@ final class XlsxReader {
                 + "Open it in its program and save a fresh copy, or export it again", name, e.getMessage());
     }
 
-    private static SheetData readPackage(OPCPackage pkg, String name, String wanted, char decimal,
+    static SheetData readPackage(OPCPackage pkg, String name, String wanted, char decimal,
             List<String> messages) throws IOException, OpenXML4JException, SAXException, ParserConfigurationException {
         XSSFReader reader = new XSSFReader(pkg);
         SharedStrings strings = SharedStrings.read(pkg);
