@@ -41,13 +41,41 @@ public final class AndersonDarling {
         for (int i = 0; i < n; i++) {
             z[i] /= d.sd();
         }
+        // ln Φ(z_(i)) in place of z_(i), ln Φ(−z_(i)) beside it: both from the one tail Φ(−|z|), computed once per
+        // value (the sum needs both for every value: the first at i, the second at n + 1 − i)
+        double[] upper = new double[n];
+        for (int j = 0; j < n; j++) {
+            logPhiBoth(z, upper, j);
+        }
         double sum = 0;
         for (int i = 0; i < n; i++) {
-            sum += (2.0 * i + 1) * (logPhi(z[i]) + logPhi(-z[n - 1 - i]));
+            sum += (2.0 * i + 1) * (z[i] + upper[n - 1 - i]);
         }
         double a2 = -n - sum / n;
         double aa = a2 * (1 + 0.75 / n + 2.25 / ((double) n * n));
         return new AndersonDarlingResult(n, a2, aa, pValue(aa));
+    }
+
+    /**
+     * Replaces {@code z[j]} by ln Φ(z[j]) and sets {@code upper[j]} to ln Φ(−z[j]), each exactly as {@link #logPhi}
+     * gives it, with Φ evaluated once: both logarithms are of the one tail Φ(−|z|) (one as ln, the other as log1p of
+     * its negative), except beyond the asymptotic series' bound, where that side is taken from the series.
+     */
+    static void logPhiBoth(double[] z, double[] upper, int j) {
+        double x = z[j];
+        if (x > 0) {
+            double tail = Normal.cdf(-x);
+            z[j] = Math.log1p(-tail);
+            upper[j] = -x > Normal.SERIES_BELOW ? Math.log(tail) : Normal.logCdf(-x);
+        } else if (x > Normal.SERIES_BELOW) {
+            double tail = Normal.cdf(x);
+            z[j] = Math.log(tail);
+            // at x = ±0, −x > 0 is false and ln Φ(−x) is ln Φ(0) = ln(tail)
+            upper[j] = -x > 0 ? Math.log1p(-tail) : Math.log(tail);
+        } else {
+            upper[j] = Math.log1p(-Normal.cdf(x));
+            z[j] = Normal.logCdf(x);
+        }
     }
 
     /** ln Φ(z), as log1p(−Φ(−z)) for z &gt; 0 so that the upper side keeps its digits. */

@@ -13,6 +13,8 @@ import org.apache.commons.math3.special.Erf;
 public final class Normal {
     private static final double SQRT1_2 = Math.sqrt(0.5);
     private static final double LOG_SQRT_2PI = 0.5 * Math.log(2 * Math.PI);
+    /** {@link #logCdf} uses its asymptotic series at and below this z (Φ(z) would underflow soon after). */
+    static final double SERIES_BELOW = -37;
 
     private Normal() {
     }
@@ -109,7 +111,7 @@ public final class Normal {
      * @return ln Φ(z)
      */
     public static double logCdf(double z) {
-        if (z > -37) {
+        if (z > SERIES_BELOW) {
             return Math.log(cdf(z));
         }
         double r = 1 / (z * z);
