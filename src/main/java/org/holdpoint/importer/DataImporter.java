@@ -9,8 +9,10 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
+import org.holdpoint.stats.Background;
 import org.holdpoint.study.CharacteristicData;
 import org.holdpoint.study.Dataset;
+import org.holdpoint.study.GroupData;
 import org.holdpoint.study.InputInfo;
 import org.holdpoint.study.Layout;
 import org.holdpoint.study.Origin;
@@ -514,6 +516,9 @@ public final class DataImporter {
                 + (m.size() > 10 ? " and " + (m.size() - 10) + " more" : "");
     }
 
+    /** Values of one characteristic from which its two groups are built side by side. */
+    private static final int BUILD_BESIDE_FROM = 40_000;
+
     private Dataset finish(ImportRequest r, List<Source> sources, Map<String, LayoutReader.Accum> accums,
             List<InputInfo> inputs, SkipLog log, boolean paired) {
         return finish(r, sources, accums, inputs, log, paired, false);
@@ -579,7 +584,13 @@ public final class DataImporter {
                 b = b.emptyCopy();
                 f = f.emptyCopy();
             }
-            out.add(new CharacteristicData(a.name, a.unit, b.build(), f.build(), paired, unmatched));
+            GroupBuilder after = f;
+            // a large characteristic's two groups are built side by side (each is a few passes over its values)
+            Background.Forked<GroupData> afterBuilt = b.size() + f.size() >= BUILD_BESIDE_FROM
+                    ? Background.fork(after::build) : null;
+            GroupData beforeData = b.build();
+            out.add(new CharacteristicData(a.name, a.unit, beforeData, afterBuilt == null ? f.build()
+                    : afterBuilt.join(), paired, unmatched));
             used.put(a.name, (long) b.size() + f.size());
             total += b.size() + f.size();
         }

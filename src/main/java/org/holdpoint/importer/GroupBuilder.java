@@ -211,7 +211,7 @@ final class GroupBuilder {
                 }
             }
             if (exact) {
-                sample = Sample.ofUnscaled(u, common);
+                sample = Sample.ofUnscaledTaken(u, common);
             }
         }
         if (sample == null) {

@@ -73,10 +73,19 @@ final class ParallelSheetScan {
             Function<SheetData, SheetCells> cellsFor, int workers, int block) throws IOException,
             SheetXmlScanner.Unsupported, Again {
         int maxBlock = 8 * block;
-        byte[] buf = in.readNBytes(block);
-        if (buf.length < block) {
+        // a small part fits the first 64 KB; a larger one is read on into a whole block (readNBytes(int) would
+        // gather a block's bytes in pieces and copy them once more)
+        byte[] head = new byte[Math.min(block, 1 << 16)];
+        int headLen = in.readNBytes(head, 0, head.length);
+        int firstLen = headLen;
+        byte[] buf = head;
+        if (headLen == head.length && head.length < block) {
+            buf = Arrays.copyOf(head, block);
+            firstLen += in.readNBytes(buf, headLen, block - headLen);
+        }
+        if (firstLen < block) {
             // a small part: one block, scanned here, with the one-piece scan's results and messages
-            new SheetXmlScanner(buf, buf.length, cellsFor.apply(first), true, true).run();
+            new SheetXmlScanner(buf, firstLen, cellsFor.apply(first), true, true).run();
             return;
         }
         AtomicInteger threadNo = new AtomicInteger();
@@ -93,7 +102,7 @@ final class ParallelSheetScan {
         Deque<SheetData> spare = new ArrayDeque<>();
         Supplier<SheetData> sheets = () -> spare.isEmpty() ? newSheet.get() : spare.pop();
         try {
-            int len = buf.length;
+            int len = firstLen;
             boolean eof = false;
             boolean start = true;
             while (true) {

@@ -110,10 +110,21 @@ public final class Sample {
      * @return the sample
      */
     public static Sample ofUnscaled(long[] unscaled, int scale) {
+        return ofUnscaledTaken(unscaled.clone(), scale);
+    }
+
+    /**
+     * As {@link #ofUnscaled}, but the sample keeps the given array instead of a copy (an importer that has just
+     * made the array saves a copy of every value); the caller must not change the array afterwards.
+     *
+     * @param units the unscaled integers, taken over by the sample
+     * @param scale the common number of decimal places, 0..18
+     * @return the sample
+     */
+    public static Sample ofUnscaledTaken(long[] units, int scale) {
         if (scale < 0 || scale > 18) {
             throw new StatsException("decimal scale must lie in 0..18, got %d", scale);
         }
-        long[] units = unscaled.clone();
         double[] doubles = new double[units.length];
         for (int i = 0; i < units.length; i++) {
             doubles[i] = toDouble(units[i], scale) + 0.0;
