@@ -2,6 +2,10 @@ package org.holdpoint.stats;
 
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.Supplier;
 
 /**
  * Work computed beside the caller's thread, joined with its own exception (a failure there is never wrapped). Two
@@ -15,47 +19,78 @@ public final class Background {
     }
 
     /**
-     * Starts work on the common pool that {@link Forked#join} runs on the joining thread itself when no pool thread
-     * has taken it yet (so a busy pool never makes the caller wait idle).
+     * Offers work to the common pool; {@link Forked#join} runs it on the joining thread itself when no pool thread
+     * has started it yet (so a busy pool never makes the caller wait idle, and the caller waits only for work
+     * already running).
      *
      * @param <T>  the result type
      * @param work the work
      * @return the handle to join
      */
-    public static <T> Forked<T> fork(java.util.function.Supplier<T> work) {
+    public static <T> Forked<T> fork(Supplier<T> work) {
         Forked<T> f = new Forked<>(work);
-        java.util.concurrent.ForkJoinPool.commonPool().execute(f.task);
+        ForkJoinPool.commonPool().execute(f::runUnlessTaken);
         return f;
     }
 
     /** @param <T> the result type of work started by {@link #fork} */
     public static final class Forked<T> {
-        private final java.util.concurrent.ForkJoinTask<Object[]> task;
+        private final Supplier<T> work;
+        /** Set by whichever thread runs the work: the pool thread that takes it, or the joining thread. */
+        private final AtomicBoolean taken = new AtomicBoolean();
+        private final CountDownLatch done = new CountDownLatch(1);
+        private T result;
+        private Throwable failure;
 
-        private Forked(java.util.function.Supplier<T> work) {
-            task = java.util.concurrent.ForkJoinTask.adapt(() -> {
-                try {
-                    return new Object[] {work.get(), null};
-                } catch (RuntimeException | Error e) {
-                    return new Object[] {null, e};
-                }
-            });
+        private Forked(Supplier<T> work) {
+            this.work = work;
+        }
+
+        private void runUnlessTaken() {
+            if (taken.compareAndSet(false, true)) {
+                run();
+            }
+        }
+
+        private void run() {
+            try {
+                result = work.get();
+            } catch (RuntimeException | Error e) {
+                failure = e;
+            } finally {
+                done.countDown();
+            }
         }
 
         /**
          * @return the work's result
          * @throws RuntimeException the work's own exception, as it was thrown
          */
-        @SuppressWarnings("unchecked")
         public T join() {
-            Object[] r = task.join();
-            if (r[1] instanceof RuntimeException e) {
+            if (taken.compareAndSet(false, true)) {
+                run();
+            } else {
+                boolean interrupted = false;
+                while (true) {
+                    try {
+                        done.await();
+                        break;
+                    } catch (InterruptedException e) {
+                        // the work is running and ends by itself; the interrupt is kept for the caller
+                        interrupted = true;
+                    }
+                }
+                if (interrupted) {
+                    Thread.currentThread().interrupt();
+                }
+            }
+            if (failure instanceof RuntimeException e) {
                 throw e;
             }
-            if (r[1] instanceof Error e) {
+            if (failure instanceof Error e) {
                 throw e;
             }
-            return (T) r[0];
+            return result;
         }
     }
 
