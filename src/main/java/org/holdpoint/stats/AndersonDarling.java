@@ -1,7 +1,5 @@
 package org.holdpoint.stats;
 
-import java.util.Arrays;
-
 /**
  * The Anderson–Darling test of normality with mean and sd estimated from the data (Anderson &amp; Darling
  * 1952, Ann. Math. Stat. 23:193–212; 1954, JASA 49:765–769; Stephens 1974, JASA 69:730–737), for n ≥ 8.
@@ -36,8 +34,7 @@ public final class AndersonDarling {
         if (!(d.sd() > 0)) {
             throw new StatsException("all %d values are equal, so Anderson-Darling A2 is undefined", n);
         }
-        double[] z = Deviations.of(sample);
-        Arrays.sort(z);
+        double[] z = Deviations.ofSorted(sample);
         for (int i = 0; i < n; i++) {
             z[i] /= d.sd();
         }

@@ -150,11 +150,24 @@ final class Moments {
 
     /** The residuals x_i − r of a sample, as doubles. */
     static double[] residuals(Sample s, Reference ref) {
-        int n = s.size();
+        return residuals(s.unscaled(), s.raw(), s.scale(), ref);
+    }
+
+    /**
+     * The residuals of a sample's values in ascending order: the same values as {@link #residuals(Sample,
+     * Reference)} sorted, without sorting them (a residual is a non-decreasing function of the value: an exact
+     * integer difference correctly rounded, or a correctly rounded binary difference).
+     */
+    static double[] sortedResiduals(Sample s, Reference ref) {
+        double[] sorted = s.sorted();
+        return residuals(s.sortedUnscaled(), sorted, s.scale(), ref);
+    }
+
+    private static double[] residuals(long[] u, double[] x, int sampleScale, Reference ref) {
+        int n = x.length;
         double[] d = new double[n];
         if (ref.decimal) {
-            long[] u = s.unscaled();
-            int up = ref.scale - s.scale();
+            int up = ref.scale - sampleScale;
             long factor = 1;
             for (int i = 0; i < up; i++) {
                 factor *= 10;
@@ -163,7 +176,6 @@ final class Moments {
                 d[i] = Sample.toDouble(u[i] * factor - ref.unscaled, ref.scale);
             }
         } else {
-            double[] x = s.raw();
             for (int i = 0; i < n; i++) {
                 d[i] = x[i] - ref.value;
             }

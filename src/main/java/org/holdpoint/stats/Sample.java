@@ -26,8 +26,10 @@ public final class Sample {
     private final double[] values;
     private final long[] unscaled;
     private final int scale;
-    /** The values in ascending order, computed once on first use (a benign race: every copy is equal). */
+    /** The values in ascending order, computed once on first use. */
     private volatile double[] sorted;
+    /** With exact decimals, the unscaled integers in ascending order (written before {@link #sorted}). */
+    private long[] sortedUnscaled;
     /** {reference, moments}: the last moments computed (Moments.of); replaced whole, so a reader sees a pair. */
     private volatile Object[] momentsMemo;
     /** {other sample, reference}: the last pair reference computed with this sample first. */
@@ -220,13 +222,37 @@ public final class Sample {
             synchronized (this) {
                 s = sorted;
                 if (s == null) {
-                    s = values.clone();
-                    Arrays.sort(s);
+                    if (unscaled != null) {
+                        // the integers sorted, their doubles then in the same order (the correctly rounded double
+                        // is a non-decreasing function of the decimal): the same array as the doubles sorted, and
+                        // the sorted decimals come with it
+                        long[] su = unscaled.clone();
+                        Arrays.sort(su);
+                        s = new double[su.length];
+                        for (int i = 0; i < su.length; i++) {
+                            s[i] = toDouble(su[i], scale) + 0.0;
+                        }
+                        sortedUnscaled = su;
+                    } else {
+                        s = values.clone();
+                        Arrays.sort(s);
+                    }
                     sorted = s;
                 }
             }
         }
         return s;
+    }
+
+    /**
+     * The unscaled decimals in ascending order, in the order of {@link #sorted()}; callers in this package must not
+     * modify the array.
+     *
+     * @return the sorted unscaled integers, or null without exact decimals
+     */
+    long[] sortedUnscaled() {
+        sorted();
+        return sortedUnscaled;
     }
 
     /** @return whether exact decimals are known for every value */
