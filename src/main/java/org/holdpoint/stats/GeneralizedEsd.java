@@ -71,16 +71,36 @@ public final class GeneralizedEsd {
         List<EsdResult.Step> steps = new ArrayList<>();
         List<String> notes = new ArrayList<>();
         int count = 0;
+        double sum = 0;
+        for (int j = 0; j < n; j++) {
+            sum += x[j];
+        }
         for (int i = 1; i <= r; i++) {
             int left = n - i + 1;
-            double mean = meanOf(x, gone, left);
+            double mean = meanFrom(sum, x, gone, left);
+            // one pass: the sums of squares, the most extreme value, and the sum the next step starts from (every
+            // value left but the most extreme, added in the same order as a pass of its own would add them: when a
+            // value becomes the most extreme, the sum so far without it is the sum of all before it)
             double ss = 0;
             double sd = 0;
+            int best = -1;
+            double bestDev = -1;
+            double withAll = 0;
+            double withoutBest = 0;
             for (int j = 0; j < n; j++) {
                 if (!gone[j]) {
                     double d = x[j] - mean;
                     ss += d * d;
                     sd += d;
+                    double dev = Math.abs(d);
+                    if (dev > bestDev) {
+                        bestDev = dev;
+                        best = j;
+                        withoutBest = withAll;
+                    } else {
+                        withoutBest += x[j];
+                    }
+                    withAll += x[j];
                 }
             }
             double s = Math.sqrt(Math.max(0, ss - sd * sd / left) / (left - 1));
@@ -89,15 +109,8 @@ public final class GeneralizedEsd {
                         "the %d values left after step %d are all equal; the procedure stops there", left, i - 1));
                 break;
             }
-            int best = -1;
-            double bestDev = -1;
-            for (int j = 0; j < n; j++) {
-                if (!gone[j] && Math.abs(x[j] - mean) > bestDev) {
-                    bestDev = Math.abs(x[j] - mean);
-                    best = j;
-                }
-            }
             gone[best] = true;
+            sum = withoutBest;
             double ri = bestDev / s;
             double lambda = lambda(n, i, alpha);
             steps.add(new EsdResult.Step(i, ri, lambda, best, sample.value(best)));
@@ -108,13 +121,8 @@ public final class GeneralizedEsd {
         return new EsdResult(n, r, alpha, steps, count, notes);
     }
 
-    private static double meanOf(double[] x, boolean[] gone, int left) {
-        double sum = 0;
-        for (int j = 0; j < x.length; j++) {
-            if (!gone[j]) {
-                sum += x[j];
-            }
-        }
+    /** The mean of the values left from their sum, refined by the mean of the residuals from it. */
+    private static double meanFrom(double sum, double[] x, boolean[] gone, int left) {
         double m = sum / left;
         double corr = 0;
         for (int j = 0; j < x.length; j++) {
