@@ -59,6 +59,17 @@ public final class Sample {
     }
 
     /**
+     * As {@link #of(double...)}, keeping the given array instead of a copy (its values are checked and −0.0 made
+     * 0.0 in place); for arrays made by this package and not used otherwise afterwards.
+     */
+    static Sample taking(double[] values) {
+        for (int i = 0; i < values.length; i++) {
+            values[i] = checkFinite(values[i], i) + 0.0;
+        }
+        return new Sample(values, null, 0);
+    }
+
+    /**
      * A sample parsed from decimal texts; the exact decimals are kept when they fit a common scale.
      *
      * @param texts decimal numbers such as {@code "10000000.2"} or {@code "-1.5E-3"}

@@ -191,7 +191,7 @@ public final class SpreadTests {
         long total = 0;
         double[][] z = new double[k][];
         for (int g = 0; g < k; g++) {
-            double[] x = groups[g].values();
+            double[] x = groups[g].raw();
             if (x.length < 2) {
                 throw new StatsException("Brown-Forsythe needs at least 2 values per group, group %d has %d", g + 1,
                         x.length);
@@ -206,7 +206,7 @@ public final class SpreadTests {
         double[] means = new double[k];
         double grand = 0;
         for (int g = 0; g < k; g++) {
-            Moments m = Moments.of(Sample.of(z[g]), Moments.Reference.common(Sample.of(0.0)));
+            Moments m = Moments.of(Sample.taking(z[g]), Moments.Reference.common(Sample.of(0.0)));
             means[g] = m.meanResidual;
             grand += m.meanResidual * z[g].length;
         }
