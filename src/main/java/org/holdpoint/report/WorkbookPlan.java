@@ -305,6 +305,14 @@ final class WorkbookPlan {
         s.height(row, anyTolerance() ? 42f : 28f);
         row++;
         k = 1;
+        // the verdict's cell lies in one column of the means table: wide enough for the longest mark shown (bold,
+        // e.g. "not assessable" with its sign), which the interval column's width did not always give
+        int verdictColumn = c0 + VERDICT_SPANS[4][0];
+        int verdictWidth = MEANS_WIDTHS[VERDICT_SPANS[4][0]];
+        for (CharacteristicResult c : all) {
+            verdictWidth = Math.max(verdictWidth, Texts.status(c.verdict().status()).length() + 3);
+        }
+        s.width(verdictColumn, Math.max(verdictWidth, s.columnWidths.getOrDefault(verdictColumn, 0) / 256));
         for (CharacteristicResult c : all) {
             String n = c.name();
             s.number(row, c0, (double) k++, Style.INTEGER, 0, n + ": verdict table index");

@@ -64,4 +64,47 @@ class SummaryColumnWidthTest {
         }
         assertThat(checked).containsExactly("1499 / 1500", "1500 / 1500");
     }
+
+    /**
+     * The verdict's mark is as wide as its column: "not assessable" with its sign, in bold, was cut in the second
+     * Summary table (its column is one of the means table's). Invented study: a moulded cover whose vent depth the
+     * gauge reads as one value in both phases.
+     */
+    @Test
+    void theLongestVerdictMarkFitsItsColumn(@TempDir Path dir) throws Exception {
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(31);
+        StringBuilder csv = new StringBuilder("phase,Wall (mm),Vent depth (mm)\n");
+        for (String phase : new String[] {"before", "after"}) {
+            for (int i = 0; i < 40; i++) {
+                csv.append(phase).append(',').append(String.format(Locale.ROOT, "%.3f", 2.4 + 0.01 * rnd.nextGaussian()))
+                        .append(",0.05\n");
+            }
+        }
+        Path data = Files.writeString(dir.resolve("cover.csv"), csv, StandardCharsets.UTF_8);
+        Files.writeString(dir.resolve("cover.settings.csv"), "characteristic,lsl,usl,margin\n"
+                + "Wall,2.35,2.45,0.01\nVent depth,0.03,0.07,0.005\n", StandardCharsets.UTF_8);
+        AnalysisOutcome in = new AnalyzeUseCase().importOnly(ImportOptions.file(data),
+                AnalyzeUseCase.settingsBeside(data), AnalysisSettings.defaultSettings());
+        ChangeStudy study = new ChangeStudy(null, in.data(), in.settings(), List.of());
+        Path xlsx = dir.resolve("cover-signoff.xlsx");
+        new ReportUseCase(SignoffWorkbookTest.CLOCK).write(study, new StudyAnalyzer().analyze(study.data(),
+                study.settings(), Progress.NONE), ReportOptions.withDefaults(), xlsx);
+        // the verdict's mark as the workbook shows it: a sign, then the words
+        String mark = "\u2298 not assessable";
+        int found = 0;
+        try (InputStream is = Files.newInputStream(xlsx); XSSFWorkbook wb = new XSSFWorkbook(is)) {
+            Sheet summary = wb.getSheet("Summary");
+            for (Row row : summary) {
+                for (Cell cell : row) {
+                    if (cell.getCellType() == CellType.STRING && cell.getStringCellValue().equals(mark)) {
+                        // bold text: two characters more than its length, in 1/256 of a default character
+                        assertThat(summary.getColumnWidth(cell.getColumnIndex()) / 256.0).as(mark)
+                                .isGreaterThanOrEqualTo(mark.length() + 2);
+                        found++;
+                    }
+                }
+            }
+        }
+        assertThat(found).as("the mark is shown").isPositive();
+    }
 }
