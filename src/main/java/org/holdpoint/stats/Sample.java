@@ -238,7 +238,7 @@ public final class Sample {
                         // is a non-decreasing function of the decimal): the same array as the doubles sorted, and
                         // the sorted decimals come with it
                         long[] su = unscaled.clone();
-                        Arrays.sort(su);
+                        sortIntegers(su);
                         s = new double[su.length];
                         for (int i = 0; i < su.length; i++) {
                             s[i] = toDouble(su[i], scale) + 0.0;
@@ -253,6 +253,49 @@ public final class Sample {
             }
         }
         return s;
+    }
+
+    /** Values from which integers in a narrow range are sorted by counting (below it the library's sort is quick). */
+    private static final int COUNTING_FROM = 1024;
+    /** The widest range (largest − smallest) sorted by counting: a count array of at most 16 MB. */
+    private static final long COUNTING_MAX_RANGE = 1L << 22;
+
+    /**
+     * Sorts integers ascending. Readings at a gauge's resolution lie in a narrow range (a few thousand steps for
+     * half a million values): those are counted per value and written back in order, one pass each way instead of
+     * a comparison sort; a wide range (more than four steps per value, or more than 2²² steps) goes to
+     * {@link Arrays#sort(long[])}. The result is the same array either way.
+     *
+     * @param v the integers, sorted in place
+     */
+    static void sortIntegers(long[] v) {
+        int n = v.length;
+        if (n < COUNTING_FROM) {
+            Arrays.sort(v);
+            return;
+        }
+        long min = v[0];
+        long max = v[0];
+        for (long x : v) {
+            min = Math.min(min, x);
+            max = Math.max(max, x);
+        }
+        long range = max - min;
+        // a negative range is a difference beyond the long range: not narrow
+        if (range < 0 || range >= Math.min(4L * n, COUNTING_MAX_RANGE)) {
+            Arrays.sort(v);
+            return;
+        }
+        int[] count = new int[(int) range + 1];
+        for (long x : v) {
+            count[(int) (x - min)]++;
+        }
+        int k = 0;
+        for (int i = 0; i < count.length; i++) {
+            for (int c = count[i]; c > 0; c--) {
+                v[k++] = min + i;
+            }
+        }
     }
 
     /**

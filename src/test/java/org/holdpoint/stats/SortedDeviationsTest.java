@@ -31,6 +31,7 @@ class SortedDeviationsTest {
     void exactDecimalsOfEveryScaleAndSize() {
         SplittableRandom rnd = new SplittableRandom(20261204);
         for (int scale : new int[] {0, 1, 3, 4, 9, 15, 18}) {
+            // narrow spreads are sorted by counting, wide ones by comparison
             for (long spread : new long[] {10, 1_000, 1L << 40, 1L << 53, 1L << 58}) {
                 long[] u = new long[2_000];
                 long centre = rnd.nextLong(-(1L << 60), 1L << 60) / 4;
@@ -52,6 +53,34 @@ class SortedDeviationsTest {
             d[i] = BigDecimal.valueOf(rnd.nextLong(-50, 50), rnd.nextInt(0, 4));
         }
         check(Sample.ofDecimals(d));
+    }
+
+    @Test
+    void integersInNarrowAndWideRangesSortAsTheLibrarySortsThem() {
+        SplittableRandom rnd = new SplittableRandom(3);
+        for (int n : new int[] {0, 1, 1023, 1024, 5_000, 200_000}) {
+            for (long span : new long[] {1, 2, 50, 4L * Math.max(n, 1) - 1, 4L * Math.max(n, 1), 1L << 22, 1L << 40}) {
+                long[] v = new long[n];
+                long base = rnd.nextLong(-(1L << 61), 1L << 61);
+                for (int i = 0; i < n; i++) {
+                    v[i] = base + rnd.nextLong(span);
+                }
+                long[] expected = v.clone();
+                Arrays.sort(expected);
+                Sample.sortIntegers(v);
+                assertThat(v).as("n %d, span %d", n, span).containsExactly(expected);
+            }
+        }
+        // a range beyond the long range, and the extremes themselves
+        long[] v = {Long.MAX_VALUE, Long.MIN_VALUE, 0, -1, 1, Long.MAX_VALUE - 1};
+        long[] big = new long[2_000];
+        for (int i = 0; i < big.length; i++) {
+            big[i] = v[i % v.length];
+        }
+        long[] expected = big.clone();
+        Arrays.sort(expected);
+        Sample.sortIntegers(big);
+        assertThat(big).containsExactly(expected);
     }
 
     @Test
