@@ -26,6 +26,20 @@ import org.junit.jupiter.api.io.TempDir;
  * die-cast bracket, before and after a supplier change.
  */
 class SummaryColumnWidthTest {
+    /** Imports NAME.csv with its criteria beside it, analyses it and writes NAME-signoff.xlsx. */
+    private static Path signoff(Path dir, String name, CharSequence csv, String criteria) throws Exception {
+        Path data = Files.writeString(dir.resolve(name + ".csv"), csv, StandardCharsets.UTF_8);
+        Files.writeString(dir.resolve(name + ".settings.csv"), "characteristic,lsl,usl,margin\n" + criteria,
+                StandardCharsets.UTF_8);
+        AnalysisOutcome in = new AnalyzeUseCase().importOnly(ImportOptions.file(data),
+                AnalyzeUseCase.settingsBeside(data), AnalysisSettings.defaultSettings());
+        ChangeStudy study = new ChangeStudy(null, in.data(), in.settings(), List.of());
+        Path xlsx = dir.resolve(name + "-signoff.xlsx");
+        new ReportUseCase(SignoffWorkbookTest.CLOCK).write(study, new StudyAnalyzer().analyze(study.data(),
+                study.settings(), Progress.NONE), ReportOptions.withDefaults(), xlsx);
+        return xlsx;
+    }
+
     @Test
     void fourDigitSizesFitTheirColumn(@TempDir Path dir) throws Exception {
         java.util.SplittableRandom rnd = new java.util.SplittableRandom(1500);
@@ -38,15 +52,7 @@ class SummaryColumnWidthTest {
                         250 + 0.02 * rnd.nextGaussian())).append('\n');
             }
         }
-        Path data = Files.writeString(dir.resolve("bracket.csv"), csv, StandardCharsets.UTF_8);
-        Files.writeString(dir.resolve("bracket.settings.csv"), "characteristic,lsl,usl,margin\n"
-                + "Bore A,9.95,10.05,0.01\nBore B,249.9,250.1,0.02\n", StandardCharsets.UTF_8);
-        AnalysisOutcome in = new AnalyzeUseCase().importOnly(ImportOptions.file(data),
-                AnalyzeUseCase.settingsBeside(data), AnalysisSettings.defaultSettings());
-        ChangeStudy study = new ChangeStudy(null, in.data(), in.settings(), List.of());
-        Path xlsx = dir.resolve("bracket-signoff.xlsx");
-        new ReportUseCase(SignoffWorkbookTest.CLOCK).write(study, new StudyAnalyzer().analyze(study.data(),
-                study.settings(), Progress.NONE), ReportOptions.withDefaults(), xlsx);
+        Path xlsx = signoff(dir, "bracket", csv, "Bore A,9.95,10.05,0.01\nBore B,249.9,250.1,0.02\n");
         List<String> checked = new ArrayList<>();
         try (InputStream is = Files.newInputStream(xlsx); XSSFWorkbook wb = new XSSFWorkbook(is)) {
             Sheet summary = wb.getSheet("Summary");
@@ -80,15 +86,7 @@ class SummaryColumnWidthTest {
                         .append(",0.05\n");
             }
         }
-        Path data = Files.writeString(dir.resolve("cover.csv"), csv, StandardCharsets.UTF_8);
-        Files.writeString(dir.resolve("cover.settings.csv"), "characteristic,lsl,usl,margin\n"
-                + "Wall,2.35,2.45,0.01\nVent depth,0.03,0.07,0.005\n", StandardCharsets.UTF_8);
-        AnalysisOutcome in = new AnalyzeUseCase().importOnly(ImportOptions.file(data),
-                AnalyzeUseCase.settingsBeside(data), AnalysisSettings.defaultSettings());
-        ChangeStudy study = new ChangeStudy(null, in.data(), in.settings(), List.of());
-        Path xlsx = dir.resolve("cover-signoff.xlsx");
-        new ReportUseCase(SignoffWorkbookTest.CLOCK).write(study, new StudyAnalyzer().analyze(study.data(),
-                study.settings(), Progress.NONE), ReportOptions.withDefaults(), xlsx);
+        Path xlsx = signoff(dir, "cover", csv, "Wall,2.35,2.45,0.01\nVent depth,0.03,0.07,0.005\n");
         // the verdict's mark as the workbook shows it: a sign, then the words
         String mark = "\u2298 not assessable";
         int found = 0;
