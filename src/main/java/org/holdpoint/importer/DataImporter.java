@@ -27,9 +27,22 @@ import org.holdpoint.study.SkipReason;
  * is stated there. Input files are only read, never written.
  */
 public final class DataImporter {
+    /** Told the number of cells each time a file's cells have been read, before its layout is worked out. */
+    private final java.util.function.LongConsumer whenCellsRead;
 
     /** Creates an importer; it holds no state between reads. */
     public DataImporter() {
+        this(cells -> { });
+    }
+
+    /**
+     * Creates an importer that tells {@code whenCellsRead} the number of cells each time a file's cells have been
+     * read, before its layout is worked out (one core is then often idle: the caller may start work of its own).
+     *
+     * @param whenCellsRead quick to return (longer work goes on a thread of its own)
+     */
+    public DataImporter(java.util.function.LongConsumer whenCellsRead) {
+        this.whenCellsRead = whenCellsRead;
     }
 
     /**
@@ -297,6 +310,7 @@ public final class DataImporter {
             throw new ImportException(e, "file %s could not be read: %s. The file may be damaged; open it in its "
                     + "program, save a fresh copy and try again", name, e.getMessage());
         }
+        whenCellsRead.accept(data.cellCount());
         String sha = hashOf(hashing);
         if (!data.otherSeparatorColumns().isEmpty()) {
             List<String> cols = new ArrayList<>();

@@ -120,8 +120,10 @@ public final class AnalyzeUseCase {
         progress.step("reading the data", 0);
         Dataset data;
         try {
-            data = baseline && effective.file() != null ? new DataImporter().readBaseline(effective)
-                    : new DataImporter().read(effective);
+            // once the cells of a large file are read, the layout takes one core: the analysis' one-time costs are
+            // paid on the other
+            DataImporter importer = new DataImporter(AnalysisWarmUp::startFor);
+            data = baseline && effective.file() != null ? importer.readBaseline(effective) : importer.read(effective);
         } catch (ImportException e) {
             throw new AnalysisException(List.of(e.getMessage()));
         }
