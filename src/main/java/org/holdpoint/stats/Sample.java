@@ -51,18 +51,14 @@ public final class Sample {
      * @throws StatsException if a value is NaN or infinite
      */
     public static Sample of(double... values) {
-        double[] copy = new double[values.length];
-        for (int i = 0; i < values.length; i++) {
-            copy[i] = checkFinite(values[i], i) + 0.0;
-        }
-        return new Sample(copy, null, 0);
+        return ofTaken(values.clone());
     }
 
     /**
      * As {@link #of(double...)}, keeping the given array instead of a copy (its values are checked and −0.0 made
      * 0.0 in place); for arrays made by this package and not used otherwise afterwards.
      */
-    static Sample taking(double[] values) {
+    static Sample ofTaken(double[] values) {
         for (int i = 0; i < values.length; i++) {
             values[i] = checkFinite(values[i], i) + 0.0;
         }

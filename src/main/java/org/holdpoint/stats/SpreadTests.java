@@ -206,7 +206,7 @@ public final class SpreadTests {
         double[] means = new double[k];
         double grand = 0;
         for (int g = 0; g < k; g++) {
-            Moments m = Moments.of(Sample.taking(z[g]), Moments.Reference.common(Sample.of(0.0)));
+            Moments m = Moments.of(Sample.ofTaken(z[g]), Moments.Reference.common(Sample.of(0.0)));
             means[g] = m.meanResidual;
             grand += m.meanResidual * z[g].length;
         }

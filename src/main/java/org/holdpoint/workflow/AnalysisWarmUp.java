@@ -2,6 +2,7 @@ package org.holdpoint.workflow;
 
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.atomic.AtomicBoolean;
 import org.holdpoint.stats.Sample;
 import org.holdpoint.study.AnalysisSettings;
 import org.holdpoint.study.CharacteristicData;
@@ -23,7 +24,7 @@ public final class AnalysisWarmUp {
     private AnalysisWarmUp() {
     }
 
-    private static final java.util.concurrent.atomic.AtomicBoolean STARTED = new java.util.concurrent.atomic.AtomicBoolean();
+    private static final AtomicBoolean STARTED = new AtomicBoolean();
 
     /**
      * Cells read from which the warm-up pays (measured: a million values −50 ms, the battery of 200 characteristics
