@@ -17,6 +17,12 @@ import java.util.SplittableRandom;
  * 7:147–153; the one-sample form is Monahan 1984, ACM TOMS 10:265–270). The split at a pivot is
  * three-way, so heavy ties end the search at once. Once at most m + n values are live, a quickselect
  * finishes. All counts are {@code long}; nothing of size K is allocated.
+ *
+ * <p>Tied values are kept once with their multiplicity ({@link #differences}): a row then stands for as many equal
+ * values of the first sample, a column for as many of the second, and every count is a sum of weights
+ * (row weight × the columns' weight). Readings at a gauge's resolution repeat a few thousand distinct values over
+ * hundreds of thousands of parts, so each round then walks the distinct values instead of every reading. The
+ * k-th smallest value of the multiset is the same either way: only the work changes.
  */
 abstract class PairwiseSelection {
     /**
@@ -30,6 +36,10 @@ abstract class PairwiseSelection {
     private static final long SEED = 0x5DEECE66DL;
     final int rows;
     final int cols;
+    /** Multiplicity of each row's value, or null when every row is one value. */
+    private final long[] rowWeight;
+    /** colCum[j] = the weight of the columns before column j (length cols + 1), or null when every column is one. */
+    private final long[] colCum;
     private final int[] lo;
     private final int[] hi;
     private final int[] ltCol;
@@ -46,8 +56,14 @@ abstract class PairwiseSelection {
     boolean samplePivots = true;
 
     PairwiseSelection(int rows, int cols) {
+        this(rows, cols, null, null);
+    }
+
+    PairwiseSelection(int rows, int cols, long[] rowWeight, long[] colCum) {
         this.rows = rows;
         this.cols = cols;
+        this.rowWeight = rowWeight;
+        this.colCum = colCum;
         this.lo = new int[rows];
         this.hi = new int[rows];
         this.ltCol = new int[rows];
@@ -65,20 +81,77 @@ abstract class PairwiseSelection {
     /** The first column of row i (0 for differences, i for Walsh sums). */
     abstract int firstColumn(int i);
 
+    /** The weight of row i (the number of equal values it stands for). */
+    private long rowW(int i) {
+        return rowWeight == null ? 1 : rowWeight[i];
+    }
+
+    /** The weight of the columns before column j. */
+    private long colAt(int j) {
+        return colCum == null ? j : colCum[j];
+    }
+
+    /** The number of values in row i, columns [from, to). */
+    private long weight(int i, int from, int to) {
+        return rowW(i) * (colAt(to) - colAt(from));
+    }
+
     /** @return the number K of values in the matrix */
     long size() {
         long k = 0;
         for (int i = 0; i < rows; i++) {
-            k += cols - firstColumn(i);
+            k += weight(i, firstColumn(i), cols);
         }
         return k;
     }
 
     /**
-     * The differences fl(a_i − b_j) of two ascending arrays; row i, column j holds a_i − b_{n−1−j}.
+     * The differences fl(a_i − b_j) of two ascending arrays; row i, column j holds a_i − b_{n−1−j}. Equal values
+     * (the same bits) of either array are taken once, with their number as weight.
      */
     static PairwiseSelection differences(double[] sortedA, double[] sortedB) {
-        return new Differences(sortedA, sortedB);
+        Distinct a = Distinct.of(sortedA);
+        Distinct b = Distinct.of(sortedB);
+        if (a.counts == null && b.counts == null) {
+            return new Differences(sortedA, sortedB, null, null);
+        }
+        int nb = b.values.length;
+        long[] colCum = new long[nb + 1];
+        for (int j = 0; j < nb; j++) {
+            colCum[j + 1] = colCum[j] + (b.counts == null ? 1 : b.counts[nb - 1 - j]);
+        }
+        long[] rowWeight = a.counts;
+        if (rowWeight == null) {
+            rowWeight = new long[a.values.length];
+            java.util.Arrays.fill(rowWeight, 1);
+        }
+        return new Differences(a.values, b.values, rowWeight, colCum);
+    }
+
+    /** The distinct values of an ascending array (by bits, so −0.0 and 0.0 stay apart) and their counts. */
+    private record Distinct(double[] values, long[] counts) {
+        /** @return the array itself with null counts when no two neighbours are equal */
+        static Distinct of(double[] sorted) {
+            int distinct = sorted.length == 0 ? 0 : 1;
+            for (int i = 1; i < sorted.length; i++) {
+                if (Double.doubleToRawLongBits(sorted[i]) != Double.doubleToRawLongBits(sorted[i - 1])) {
+                    distinct++;
+                }
+            }
+            if (distinct == sorted.length) {
+                return new Distinct(sorted, null);
+            }
+            double[] values = new double[distinct];
+            long[] counts = new long[distinct];
+            int d = -1;
+            for (int i = 0; i < sorted.length; i++) {
+                if (i == 0 || Double.doubleToRawLongBits(sorted[i]) != Double.doubleToRawLongBits(sorted[i - 1])) {
+                    values[++d] = sorted[i];
+                }
+                counts[d]++;
+            }
+            return new Distinct(values, counts);
+        }
     }
 
     /** The Walsh sums fl(d_i + d_j), i ≤ j, of one ascending array (halve them for the averages). */
@@ -118,7 +191,7 @@ abstract class PairwiseSelection {
         sweep(p, false, leCol);
         long c = 0;
         for (int i = 0; i < rows; i++) {
-            c += leCol[i] - firstColumn(i);
+            c += weight(i, firstColumn(i), leCol[i]);
         }
         return c;
     }
@@ -161,7 +234,7 @@ abstract class PairwiseSelection {
         SplittableRandom rnd = new SplittableRandom(SEED);
         boolean sampled = samplePivots;
         long live = liveCount();
-        while (live > limit) {
+        while (liveCells > limit) {
             lastRounds++;
             double p1;
             double p2;
@@ -203,7 +276,7 @@ abstract class PairwiseSelection {
             sampled = samplePivots && (!sampled || next <= live - live / 4);
             live = next;
         }
-        return selectFromLive((int) live, (int) (k - below));
+        return selectFromLive((int) liveCells, k - below);
     }
 
     /** The window {@link #prepare} left, from which a selection of a rank inside its range starts. */
@@ -232,7 +305,7 @@ abstract class PairwiseSelection {
         long live = liveCount();
         long limit = LIVE_FACTOR * ((long) rows + cols);
         SplittableRandom rnd = new SplittableRandom(SEED);
-        while (live > limit && samplePivots) {
+        while (liveCells > limit && samplePivots) {
             double[] pivots = samplePivots(rnd, live, kMin - below, kMax - below);
             countWindows(pivots[0], ltCol, leCol);
             long lt1 = countLt;
@@ -245,7 +318,7 @@ abstract class PairwiseSelection {
             System.arraycopy(ltCol, 0, lo, 0, rows);
             System.arraycopy(le2Col, 0, hi, 0, rows);
             below += lt1;
-            live = next;
+            live = liveCount();
         }
         startLo = lo.clone();
         startHi = hi.clone();
@@ -254,12 +327,22 @@ abstract class PairwiseSelection {
         preparedMax = kMax;
     }
 
+    /** Live cells (distinct values) after the last {@link #liveCount}. */
+    private long liveCells;
+
+    /** @return the number of live values (sets {@link #liveCells}) */
     private long liveCount() {
         long live = 0;
+        long cells = 0;
+        boolean unit = rowWeight == null && colCum == null;
         for (int i = 0; i < rows; i++) {
-            live += hi[i] - lo[i];
+            cells += hi[i] - lo[i];
+            if (!unit) {
+                live += weight(i, lo[i], hi[i]);
+            }
         }
-        return live;
+        liveCells = cells;
+        return unit ? cells : live;
     }
 
     /** Live counts of the last {@link #countWindows}: values &lt; p and values ≤ p. */
@@ -276,6 +359,8 @@ abstract class PairwiseSelection {
         int glt = cols;
         long cLt = 0;
         long cLe = 0;
+        // without weights a count is a column difference (the loop tests this once per row, always the same way)
+        boolean unit = rowWeight == null && colCum == null;
         for (int i = 0; i < rows; i++) {
             int first = firstColumn(i);
             if (gle < first) {
@@ -300,8 +385,13 @@ abstract class PairwiseSelection {
             int b = clamp(gle, lo[i], hi[i]);
             lt[i] = a;
             le[i] = b;
-            cLt += a - lo[i];
-            cLe += b - lo[i];
+            if (unit) {
+                cLt += a - lo[i];
+                cLe += b - lo[i];
+            } else {
+                cLt += weight(i, lo[i], a);
+                cLe += weight(i, lo[i], b);
+            }
         }
         countLt = cLt;
         countLe = cLe;
@@ -315,14 +405,14 @@ abstract class PairwiseSelection {
     private double[] samplePivots(SplittableRandom rnd, long live, long r, long rHigh) {
         prefix[0] = 0;
         for (int i = 0; i < rows; i++) {
-            prefix[i + 1] = prefix[i] + (hi[i] - lo[i]);
+            prefix[i + 1] = prefix[i] + weight(i, lo[i], hi[i]);
         }
         // s ≈ live^(2/3) as Floyd and Rivest suggest, capped
         int size = (int) Math.min(SAMPLE, Math.max(64, Math.pow(live, 2.0 / 3)));
         for (int t = 0; t < size; t++) {
             long pos = rnd.nextLong(live);
             int row = rowOf(pos);
-            sample[t] = value(row, (int) (lo[row] + (pos - prefix[row])));
+            sample[t] = value(row, columnAt(colAt(lo[row]) + (pos - prefix[row]) / rowW(row), lo[row], hi[row]));
         }
         java.util.Arrays.sort(sample, 0, size);
         double centre = (double) (r - 1) / live * size;
@@ -348,6 +438,24 @@ abstract class PairwiseSelection {
         return a;
     }
 
+    /** The column of [from, to) that holds column weight position target: the last j with colAt(j) ≤ target. */
+    private int columnAt(long target, int from, int to) {
+        if (colCum == null) {
+            return (int) target;
+        }
+        int a = from;
+        int b = to;
+        while (b - a > 1) {
+            int mid = (a + b) >>> 1;
+            if (colCum[mid] <= target) {
+                a = mid;
+            } else {
+                b = mid;
+            }
+        }
+        return a;
+    }
+
     private static int clamp(int v, int min, int max) {
         return v < min ? min : Math.min(v, max);
     }
@@ -357,11 +465,12 @@ abstract class PairwiseSelection {
         int r = 0;
         long total = 0;
         for (int i = 0; i < rows; i++) {
-            int w = hi[i] - lo[i];
-            if (w > 0) {
-                medians[r] = value(i, lo[i] + (w - 1) / 2);
-                weights[r] = w;
-                total += w;
+            if (hi[i] > lo[i]) {
+                // the row window's (weighted) median: at least half its weight lies on either side of it
+                long w = colAt(hi[i]) - colAt(lo[i]);
+                medians[r] = value(i, columnAt(colAt(lo[i]) + (w - 1) / 2, lo[i], hi[i]));
+                weights[r] = rowW(i) * w;
+                total += weights[r];
                 r++;
             }
         }
@@ -419,15 +528,20 @@ abstract class PairwiseSelection {
         w[b] = tw;
     }
 
-    private double selectFromLive(int live, int rank) {
-        double[] buf = new double[live];
+    /** The value of live rank {@code rank} (1-based, in values, not cells) among the {@code cells} live cells. */
+    private double selectFromLive(int cells, long rank) {
+        double[] buf = new double[cells];
+        long[] w = rowWeight == null && colCum == null ? null : new long[cells];
         int c = 0;
         for (int i = 0; i < rows; i++) {
             for (int j = lo[i]; j < hi[i]; j++) {
+                if (w != null) {
+                    w[c] = weight(i, j, j + 1);
+                }
                 buf[c++] = value(i, j);
             }
         }
-        return quickselect(buf, rank - 1);
+        return w == null ? quickselect(buf, (int) (rank - 1)) : weightedMedian(buf, w, cells, rank);
     }
 
     /** The element of rank r (0-based) of v, by Hoare's selection with a three-way split; v is permuted. */
@@ -487,8 +601,8 @@ abstract class PairwiseSelection {
         private final double[] b;
         private final int nb1;
 
-        Differences(double[] a, double[] b) {
-            super(a.length, b.length);
+        Differences(double[] a, double[] b, long[] rowWeight, long[] colCum) {
+            super(a.length, b.length, rowWeight, colCum);
             this.a = a;
             this.b = b;
             this.nb1 = b.length - 1;
