@@ -40,9 +40,19 @@ public final class AndersonDarling {
         }
         // ln Φ(z_(i)) in place of z_(i), ln Φ(−z_(i)) beside it: both from the one tail Φ(−|z|), computed once per
         // value (the sum needs both for every value: the first at i, the second at n + 1 − i)
+        // equal readings (a gauge's resolution: a few thousand distinct values in half a million) have equal z: the
+        // logarithms of the previous value are taken again, the same doubles without evaluating Φ once more
         double[] upper = new double[n];
+        long previous = 0;
         for (int j = 0; j < n; j++) {
-            logPhiBoth(z, upper, j);
+            long bits = Double.doubleToRawLongBits(z[j]);
+            if (j > 0 && bits == previous) {
+                z[j] = z[j - 1];
+                upper[j] = upper[j - 1];
+            } else {
+                previous = bits;
+                logPhiBoth(z, upper, j);
+            }
         }
         double sum = 0;
         for (int i = 0; i < n; i++) {

@@ -42,4 +42,28 @@ class AndersonDarlingTailsTest {
                     .isEqualTo(Double.doubleToRawLongBits(AndersonDarling.logPhi(-z[j])));
         }
     }
+    @Test
+    void tiedReadingsGiveTheStatisticOfEveryValueComputedAlone() {
+        // readings at a 0.001 resolution (many equal values take their logarithms from the previous value): A² bit
+        // for bit as the sum with ln Φ of every value evaluated separately (an identity of the code, as above)
+        SplittableRandom rnd = new SplittableRandom(7301);
+        for (int rep = 0; rep < 6; rep++) {
+            int n = 8 + rnd.nextInt(rep < 3 ? 60 : 20_000);
+            long[] unscaled = new long[n];
+            for (int i = 0; i < n; i++) {
+                unscaled[i] = Math.round((12.5 + (rep % 2 == 0 ? 0.02 : 0.003) * rnd.nextGaussian()) * 1000);
+            }
+            Sample sample = Sample.ofUnscaled(unscaled, 3);
+            double sd = Descriptives.of(sample).sd();
+            double[] z = Deviations.ofSorted(sample);
+            double sum = 0;
+            for (int i = 0; i < n; i++) {
+                double lower = AndersonDarling.logPhi(z[i] / sd);
+                sum += (2.0 * i + 1) * (lower + AndersonDarling.logPhi(-(z[n - 1 - i] / sd)));
+            }
+            double a2 = -n - sum / n;
+            assertThat(Double.doubleToRawLongBits(AndersonDarling.test(sample).a2())).as("n = %d", n)
+                    .isEqualTo(Double.doubleToRawLongBits(a2));
+        }
+    }
 }
