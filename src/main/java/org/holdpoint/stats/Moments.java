@@ -172,9 +172,7 @@ final class Moments {
             for (int i = 0; i < up; i++) {
                 factor *= 10;
             }
-            for (int i = 0; i < n; i++) {
-                d[i] = Sample.toDouble(u[i] * factor - ref.unscaled, ref.scale);
-            }
+            Sample.toDoubles(u, factor, ref.unscaled, ref.scale, d);
         } else {
             for (int i = 0; i < n; i++) {
                 d[i] = x[i] - ref.value;

@@ -135,9 +135,7 @@ public final class Sample {
             throw new StatsException("decimal scale must lie in 0..18, got %d", scale);
         }
         double[] doubles = new double[units.length];
-        for (int i = 0; i < units.length; i++) {
-            doubles[i] = toDouble(units[i], scale) + 0.0;
-        }
+        toDoubles(units, 1, 0, scale, doubles);
         return new Sample(doubles, units, scale);
     }
 
@@ -150,6 +148,27 @@ public final class Sample {
             return scale == 0 ? (double) unscaled : (double) unscaled / POW10[scale];
         }
         return BigDecimal.valueOf(unscaled, scale).doubleValue();
+    }
+
+    /**
+     * out[i] = {@link #toDouble}(units[i]·factor − offset, scale) for every i (the caller keeps the products within
+     * the long range): the same doubles, with the power of ten read once and an integer equal to the one before it
+     * taking that one's double (sorted readings at a gauge's resolution repeat a few thousand values).
+     */
+    static void toDoubles(long[] units, long factor, long offset, int scale, double[] out) {
+        double p = scale < POW10.length ? POW10[scale] : Double.NaN;
+        boolean fast = scale < POW10.length;
+        long previous = 0;
+        for (int i = 0; i < units.length; i++) {
+            long u = units[i] * factor - offset;
+            if (i > 0 && u == previous) {
+                out[i] = out[i - 1];
+            } else {
+                // the fast path of toDouble, inline; at scale 0 the division by 1.0 is exact, as its cast is
+                out[i] = fast && Math.abs(u) < MAX_EXACT ? u / p : toDouble(u, scale);
+                previous = u;
+            }
+        }
     }
 
     private static double checkFinite(double v, int index) {
@@ -236,9 +255,7 @@ public final class Sample {
                         long[] su = unscaled.clone();
                         sortIntegers(su);
                         s = new double[su.length];
-                        for (int i = 0; i < su.length; i++) {
-                            s[i] = toDouble(su[i], scale) + 0.0;
-                        }
+                        toDoubles(su, 1, 0, scale, s);
                         sortedUnscaled = su;
                     } else {
                         s = values.clone();
