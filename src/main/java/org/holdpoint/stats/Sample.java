@@ -152,10 +152,32 @@ public final class Sample {
 
     /**
      * out[i] = {@link #toDouble}(units[i]·factor − offset, scale) for every i (the caller keeps the products within
-     * the long range): the same doubles, with the power of ten read once and an integer equal to the one before it
-     * taking that one's double (sorted readings at a gauge's resolution repeat a few thousand values).
+     * the long range): the same doubles, through a table of each integer's double when many values span a narrow
+     * range, otherwise with the power of ten read once and an integer equal to the one before it taking that one's
+     * double (sorted readings at a gauge's resolution repeat a few thousand values).
      */
     static void toDoubles(long[] units, long factor, long offset, int scale, double[] out) {
+        if (units.length >= TABLE_FROM) {
+            long min = Long.MAX_VALUE;
+            long max = Long.MIN_VALUE;
+            for (long u : units) {
+                min = Math.min(min, u);
+                max = Math.max(max, u);
+            }
+            long range = max - min;
+            if (range >= 0 && range < TABLE_MAX && range < units.length / 4) {
+                // a narrow range (readings at a gauge's resolution): each integer in it converted once, then looked
+                // up (in the values' own order a division per value was most of a pass's time)
+                double[] table = new double[(int) range + 1];
+                for (int k = 0; k < table.length; k++) {
+                    table[k] = toDouble((min + k) * factor - offset, scale);
+                }
+                for (int i = 0; i < units.length; i++) {
+                    out[i] = table[(int) (units[i] - min)];
+                }
+                return;
+            }
+        }
         double p = scale < POW10.length ? POW10[scale] : Double.NaN;
         boolean fast = scale < POW10.length;
         long previous = 0;
@@ -170,6 +192,11 @@ public final class Sample {
             }
         }
     }
+
+    /** From this many values a narrow range of integers is converted through a table ({@link #toDoubles}). */
+    static final int TABLE_FROM = 4096;
+    /** The widest range of integers converted through a table (64 K doubles, 512 KB). */
+    private static final long TABLE_MAX = 1 << 16;
 
     private static double checkFinite(double v, int index) {
         if (Double.isNaN(v) || Double.isInfinite(v)) {
