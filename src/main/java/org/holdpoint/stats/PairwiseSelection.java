@@ -425,29 +425,21 @@ abstract class PairwiseSelection {
 
     /** The row whose window holds live position pos: the last row with prefix[row] ≤ pos and a non-empty window. */
     private int rowOf(long pos) {
-        int a = 0;
-        int b = rows;
-        while (b - a > 1) {
-            int mid = (a + b) >>> 1;
-            if (prefix[mid] <= pos) {
-                a = mid;
-            } else {
-                b = mid;
-            }
-        }
-        return a;
+        return lastAtMost(prefix, pos, 0, rows);
     }
 
     /** The column of [from, to) that holds column weight position target: the last j with colAt(j) ≤ target. */
     private int columnAt(long target, int from, int to) {
-        if (colCum == null) {
-            return (int) target;
-        }
+        return colCum == null ? (int) target : lastAtMost(colCum, target, from, to);
+    }
+
+    /** The last index j of [from, to) with ascending[j] ≤ key, given ascending[from] ≤ key. */
+    private static int lastAtMost(long[] ascending, long key, int from, int to) {
         int a = from;
         int b = to;
         while (b - a > 1) {
             int mid = (a + b) >>> 1;
-            if (colCum[mid] <= target) {
+            if (ascending[mid] <= key) {
                 a = mid;
             } else {
                 b = mid;
