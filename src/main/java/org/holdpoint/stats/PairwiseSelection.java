@@ -15,7 +15,7 @@ import java.util.SplittableRandom;
  * one round uses the weighted median of the row-window medians, which always drops at least a quarter
  * (Johnson &amp; Mizoguchi 1978, "Selecting the Kth element in X+Y and X1+X2+…+Xm", SIAM J. Comput.
  * 7:147–153; the one-sample form is Monahan 1984, ACM TOMS 10:265–270). The split at a pivot is
- * three-way, so heavy ties end the search at once. Once at most m + n values are live, a quickselect
+ * three-way, so heavy ties end the search at once. Once at most m + n cells are live, a quickselect
  * finishes. All counts are {@code long}; nothing of size K is allocated.
  *
  * <p>Tied values are kept once with their multiplicity ({@link #differences}): a row then stands for as many equal
@@ -120,12 +120,7 @@ abstract class PairwiseSelection {
         for (int j = 0; j < nb; j++) {
             colCum[j + 1] = colCum[j] + (b.counts == null ? 1 : b.counts[nb - 1 - j]);
         }
-        long[] rowWeight = a.counts;
-        if (rowWeight == null) {
-            rowWeight = new long[a.values.length];
-            java.util.Arrays.fill(rowWeight, 1);
-        }
-        return new Differences(a.values, b.values, rowWeight, colCum);
+        return new Differences(a.values, b.values, a.counts, colCum);
     }
 
     /** The distinct values of an ascending array (by bits, so −0.0 and 0.0 stay apart) and their counts. */
